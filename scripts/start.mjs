@@ -1,0 +1,66 @@
+// `npm start`: set everything up and run Shoalbook with its demo data on http://127.0.0.1:${PORT:-3000}.
+// Reuses what is already there, so a second run is ready in seconds. Ctrl-C stops everything cleanly.
+import { profile } from './lib/profile.mjs';
+import { stopMariadb } from './lib/mariadb.mjs';
+import { prepareDatabase, seed, startBackend, startFakeSmtp } from './lib/services.mjs';
+import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.mjs';
+import { fail, log } from './lib/run.mjs';
+
+const DEMO_ACCOUNTS = [
+  ['owner@demo.test', 'crew owner'],
+  ['angler@demo.test', 'angler in the crew'],
+  ['viewer@demo.test', "viewer (the crew's coach)"],
+  ['admin@demo.test', 'site admin'],
+  ['rival@demo.test', 'owner of a second, separate crew'],
+];
+
+const started = Date.now();
+const children = [];
+let p;
+let stopping = false;
+
+async function stopAll(code = 0) {
+  if (stopping) return;
+  stopping = true;
+  log('stopping …');
+  for (const c of children.reverse()) {
+    if (c.exitCode === null) {
+      c.kill('SIGTERM');
+      await new Promise((r) => c.once('exit', r));
+    }
+  }
+  if (p) await stopMariadb(p).catch(() => {});
+  log('stopped; your data is kept in .data/demo');
+  process.exit(code);
+}
+process.on('SIGINT', () => stopAll(0));
+process.on('SIGTERM', () => stopAll(0));
+
+try {
+  ensureNpmPackages();
+  ensureSystemPackages();
+  p = profile('demo');
+  buildAll();
+  log('starting MariaDB and running migrations …');
+  await prepareDatabase(p);
+  seed(p);
+  children.push(await startFakeSmtp(p));
+  const server = await startBackend(p);
+  children.push(server);
+  server.once('exit', (code) => {
+    if (!stopping) {
+      log(`the server stopped unexpectedly (code ${code})`);
+      stopAll(1);
+    }
+  });
+  const secs = ((Date.now() - started) / 1000).toFixed(1);
+  log(`Shoalbook is running on http://127.0.0.1:${p.port}  (ready in ${secs} s)`);
+  log(`API docs: http://127.0.0.1:${p.port}/api/docs   e-mail outbox (development only): http://127.0.0.1:${p.port}/dev/outbox`);
+  log('Demo accounts (password: shoalbook-demo):');
+  for (const [email, what] of DEMO_ACCOUNTS) log(`  ${email.padEnd(18)} ${what}`);
+  log('Press Ctrl-C to stop.');
+} catch (e) {
+  process.stderr.write(`\n${e.stack ?? e}\n`);
+  if (children.length || p) await stopAll(1);
+  fail(e.message);
+}
