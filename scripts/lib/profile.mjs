@@ -11,10 +11,14 @@ const DEFAULTS = {
   demo: { dbPort: 3317, port: 3000, smtpPort: 2525, dbName: 'shoalbook' },
   test: { dbPort: 3318, port: 3100, smtpPort: 2526, dbName: 'shoalbook_test' },
   bench: { dbPort: 3319, port: 3200, smtpPort: 2527, dbName: 'shoalbook_bench' },
+  // Extra test profiles, so two engineers can run test suites side by side (SHOALBOOK_TEST_PROFILE=test2).
+  test2: { dbPort: 3320, port: 3101, smtpPort: 2528, dbName: 'shoalbook_test2' },
+  test3: { dbPort: 3321, port: 3102, smtpPort: 2529, dbName: 'shoalbook_test3' },
 };
 
 /** Resolve a profile; the demo profile honours PORT and DB_PORT from the environment. */
-export function profile(name) {
+export function profile(requested) {
+  const name = requested === 'test' ? process.env.SHOALBOOK_TEST_PROFILE || 'test' : requested;
   const d = DEFAULTS[name];
   if (!d) throw new Error(`unknown profile ${name}`);
   const dataDir = join(ROOT, '.data', name);
