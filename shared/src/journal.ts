@@ -1,4 +1,5 @@
 import type { Fate, FindKind, FoundHow, HardnessGrade, Species, VegetationDensity } from './taxonomy.js';
+import type { DepthUnit, LengthUnit, TemperatureUnit, WeightUnit } from './units.js';
 
 /** Storage units: what the API stores and returns. Display conversion happens in the client. */
 export interface LakeView {
@@ -11,6 +12,11 @@ export interface LakeView {
   lon: number;
   areaAcres: number | null;
   notes: string;
+  /**
+   * Optimistic-concurrency version: send it back with a PATCH; a stale one gets 409 "stale_version".
+   * Always set by the API (optional only so fixtures can build views without it).
+   */
+  version?: number;
 }
 
 /** Per-event rules; the defaults (5 fish, 12 in) are common practice, not law. */
@@ -43,6 +49,8 @@ export interface EventView {
   payout: number | null;
   finalPlace: number | null;
   notes: string;
+  /** Always set by the API. */
+  version?: number;
 }
 
 export interface FindView {
@@ -68,6 +76,14 @@ export interface FindView {
   waterTempF: number | null;
   notes: string;
   photoId: string | null;
+  /** 'form' (typed in) or 'gpx' (imported from a waypoint file). */
+  // The fields below are always set by the API; optional only so fixtures can build views without them.
+  source?: FindSource;
+  /** What the angler typed, exactly, with its unit (null when not given). */
+  entered?: { depth: EnteredDepth | null; waterTemp: EnteredTemperature | null };
+  /** Sun and moon at markedAt in the lake's time zone; null when markedAt is unknown. */
+  sky?: SkyContext | null;
+  version?: number;
 }
 
 export interface CatchView {
@@ -91,4 +107,380 @@ export interface CatchView {
   photoId: string | null;
   /** Relative weight looks implausible for the length: flagged for a second look, never changed. */
   weightFlagged: boolean;
+  // The fields below are always set by the API; optional only so fixtures can build views without them.
+  competitionDayId?: string;
+  /** Name of the find in findId (null without one). */
+  findName?: string | null;
+  notes?: string;
+  entered?: { weight: EnteredWeight; length: EnteredLength | null; depth: EnteredDepth | null; waterTemp: EnteredTemperature | null };
+  /** Sun and moon at caughtAt in the lake's time zone. */
+  sky?: SkyContext | null;
+  version?: number;
 }
+
+// ---------------------------------------------------------------------------------------------
+// Entered values: what the angler typed, kept exactly, beside the canonical number (lb, in, ft, °F).
+
+/** A weight as typed. For 'lb-oz', `value` is the whole pounds and `ounces` the ounces (3 lb 4 oz). */
+export interface EnteredWeight {
+  value: number;
+  unit: WeightUnit;
+  ounces?: number;
+}
+export interface EnteredLength {
+  value: number;
+  unit: LengthUnit;
+}
+export interface EnteredDepth {
+  value: number;
+  unit: DepthUnit;
+}
+export interface EnteredTemperature {
+  value: number;
+  unit: TemperatureUnit;
+}
+
+export const FIND_SOURCES = ['form', 'gpx', 'demo'] as const;
+export type FindSource = (typeof FIND_SOURCES)[number];
+
+/** Sun and moon around an instant at a lake (instants ISO-8601 UTC; the day is the lake's local day). */
+export interface SkyContext {
+  /** The lake-local calendar date of the instant (YYYY-MM-DD). */
+  date: string;
+  sunrise: string | null;
+  sunset: string | null;
+  moonrise: string | null;
+  moonset: string | null;
+  /** 0 new, 0.25 first quarter, 0.5 full, 0.75 last quarter (at local noon). */
+  moonPhase: number;
+  /** Illuminated fraction 0–1 (at local noon). */
+  moonIllumination: number;
+  /** The solunar period the instant fell in, if any (GET /sky: null). */
+  period: { kind: 'major' | 'minor'; start: string; end: string } | null;
+}
+
+/** GET /sky?lakeId&date: the day's context and all its solunar periods. */
+export interface SkyDayView extends Omit<SkyContext, 'period'> {
+  timeZone: string;
+  civilDawn: string | null;
+  civilDusk: string | null;
+  periods: { kind: 'major' | 'minor'; start: string; end: string; centre: string }[];
+}
+
+export interface PracticeDayView {
+  id: string;
+  eventId: string;
+  date: string;
+  notes: string;
+  waterTempF: number | null;
+  entered: { waterTemp: EnteredTemperature | null };
+  version: number;
+}
+
+export interface CompetitionDayView {
+  id: string;
+  eventId: string;
+  date: string;
+  /** Local "HH:MM" in the lake's time zone. */
+  startTime: string | null;
+  checkInTime: string | null;
+  weatherNotes: string;
+  waterTempF: number | null;
+  entered: { waterTemp: EnteredTemperature | null };
+  version: number;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Requests. Canonical fields (weightLb …) or entered values ({value, unit}) may be given; not both.
+
+export interface CreateLakeRequest {
+  name: string;
+  region?: string;
+  timeZone: string;
+  lat: number;
+  lon: number;
+  areaAcres?: number | null;
+  notes?: string;
+}
+/** Every PATCH carries the version it was based on. */
+export type UpdateLakeRequest = Partial<CreateLakeRequest> & { version: number };
+
+export interface CreateEventRequest {
+  lakeId: string;
+  name: string;
+  organiser?: string;
+  practiceDates?: string[];
+  competitionDates: string[];
+  rules?: Partial<EventRules>;
+  entryFee?: number | null;
+  payout?: number | null;
+  finalPlace?: number | null;
+  notes?: string;
+}
+/** lakeId cannot change. Dropping a date with finds or catches on it gets 409 "day_in_use". */
+export type UpdateEventRequest = Partial<Omit<CreateEventRequest, 'lakeId'>> & { version: number };
+
+export interface UpdatePracticeDayRequest {
+  notes?: string;
+  waterTempF?: number | null;
+  waterTemp?: EnteredTemperature | null;
+  version: number;
+}
+export interface UpdateCompetitionDayRequest {
+  startTime?: string | null;
+  checkInTime?: string | null;
+  weatherNotes?: string;
+  waterTempF?: number | null;
+  waterTemp?: EnteredTemperature | null;
+  version: number;
+}
+
+export interface AddFindRequest {
+  lakeId: string;
+  eventId?: string | null;
+  /** One of the event's practice dates; derived from markedAt when omitted. */
+  practiceDate?: string | null;
+  name: string;
+  markedAt?: string | null;
+  lat: number;
+  lon: number;
+  depthFt?: number | null;
+  depth?: EnteredDepth | null;
+  kind: FindKind;
+  subKind?: string;
+  hardness?: HardnessGrade | null;
+  vegetationDensity?: VegetationDensity | null;
+  baitSeen?: boolean;
+  fishMarked?: number | null;
+  frequencyKhz?: number | null;
+  foundHow?: FoundHow | null;
+  waterTempF?: number | null;
+  waterTemp?: EnteredTemperature | null;
+  notes?: string;
+  photoId?: string | null;
+}
+export type UpdateFindRequest = Partial<Omit<AddFindRequest, 'lakeId'>> & { version: number };
+
+export interface LogCatchRequest {
+  competitionDayId: string;
+  /** ISO-8601 instant, or "HH:MM" local time on the competition day. */
+  caughtAt: string;
+  findId?: string | null;
+  /** With lat/lon and no findId, the catch is attributed to the nearest find within radiusM. */
+  lat?: number | null;
+  lon?: number | null;
+  /** Attribution radius in metres, default 50. */
+  radiusM?: number;
+  species: string;
+  lengthIn?: number | null;
+  length?: EnteredLength | null;
+  weightLb?: number;
+  weight?: EnteredWeight;
+  lure?: string;
+  technique?: string;
+  depthFt?: number | null;
+  depth?: EnteredDepth | null;
+  waterTempF?: number | null;
+  waterTemp?: EnteredTemperature | null;
+  fate: Fate;
+  notes?: string;
+  photoId?: string | null;
+}
+export type UpdateCatchRequest = Partial<Omit<LogCatchRequest, 'competitionDayId'>> & { version: number };
+
+/** Default radius for attributing a catch to a find by coordinates (m). Our choice. */
+export const DEFAULT_ATTRIBUTION_RADIUS_M = 50;
+/** Imported waypoints within this distance of a find (or of an earlier row) are flagged as duplicates (m). */
+export const DUPLICATE_FIND_RADIUS_M = 15;
+
+// ---------------------------------------------------------------------------------------------
+// Weigh-ins
+
+export interface RecordWeighInRequest {
+  grossLb?: number | null;
+  penaltyLb?: number | null;
+  officialLb?: number | null;
+  dayPlace?: number | null;
+  lateMinutes?: number | null;
+}
+
+export interface OfficialWeighIn {
+  grossLb: number | null;
+  penaltyLb: number | null;
+  officialLb: number | null;
+  dayPlace: number | null;
+  lateMinutes: number | null;
+}
+
+export interface ComputedBag {
+  /** Catch ids counted, heaviest net value first. */
+  counted: string[];
+  /** Every other catch of the day (culled, short, released …). */
+  culled: string[];
+  /** Short fish (under the minimum length): a subset of culled. */
+  short: string[];
+  grossLb: number;
+  /** Dead and short fish penalties, plus the late penalty when the official lateMinutes is known. */
+  penaltyLb: number;
+  netLb: number;
+}
+
+export interface WeighInDayView {
+  competitionDayId: string;
+  date: string;
+  computed: ComputedBag;
+  official: OfficialWeighIn | null;
+  catches: CatchView[];
+}
+
+export interface WeighInsView {
+  days: WeighInDayView[];
+  totals: {
+    computedNetLb: number;
+    /** Sum over days of the official weight where recorded, else the computed net. */
+    officialLb: number;
+    finalPlace: number | null;
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Imports
+
+export interface DuplicateOf {
+  findId: string | null;
+  name: string;
+  distanceM: number;
+  /** True when the match is an earlier row of the same file (findId is then null). */
+  inFile?: boolean;
+  /** Index of that earlier row, when inFile. */
+  rowIndex?: number;
+}
+
+export interface FindImportRow {
+  index: number;
+  name: string;
+  lat: number | null;
+  lon: number | null;
+  markedAt: string | null;
+  depthFt: number | null;
+  error: string | null;
+  duplicateOf: DuplicateOf | null;
+}
+
+export interface FindImportPreview {
+  rows: FindImportRow[];
+  /** Rows without an error (duplicates included: they are skipped on commit unless skipDuplicates=false). */
+  accepted: number;
+  rejected: number;
+  duplicates: number;
+}
+
+export interface ImportRowError {
+  index: number;
+  /** 1-based line in the CSV (header = 1), for CSV imports. */
+  line?: number;
+  field?: string;
+  message: string;
+}
+
+export interface FindImportResult {
+  imported: number;
+  skipped: number;
+  errors: ImportRowError[];
+}
+
+export interface CatchImportRow {
+  index: number;
+  line: number;
+  caughtAt: string | null;
+  species: string | null;
+  weightLb: number | null;
+  lengthIn: number | null;
+  findId: string | null;
+  attributionDistanceM: number | null;
+  weightFlagged: boolean;
+  errors: { field: string; message: string }[];
+}
+
+export interface CatchImportPreview {
+  rows: CatchImportRow[];
+  accepted: number;
+  rejected: number;
+}
+
+export interface CatchImportResult {
+  imported: number;
+  errors: ImportRowError[];
+}
+
+/** Columns of the catch CSV (GET /catches/import/template). Units default to lb, in, ft, F when blank. */
+export const CATCH_CSV_COLUMNS = [
+  'date',
+  'time',
+  'species',
+  'weight',
+  'weight_unit',
+  'weight_oz',
+  'length',
+  'length_unit',
+  'fate',
+  'lure',
+  'technique',
+  'depth',
+  'depth_unit',
+  'water_temp',
+  'water_temp_unit',
+  'find_name',
+  'lat',
+  'lon',
+  'notes',
+] as const;
+
+// ---------------------------------------------------------------------------------------------
+// Photos and exports
+
+export interface PhotoView {
+  id: string;
+  contentType: string;
+  width: number;
+  height: number;
+  byteSize: number;
+}
+
+export interface JournalExport {
+  format: 'shoalbook-journal';
+  version: 1;
+  exportedAt: string;
+  crewId: string;
+  /** Says the file holds exact positions: keep it private. */
+  notice: string;
+  lakes: LakeView[];
+  events: (EventView & { practiceDays: PracticeDayView[]; competitionDays: CompetitionDayView[]; weighIns: (OfficialWeighIn & { competitionDayId: string })[] })[];
+  finds: FindView[];
+  catches: CatchView[];
+}
+
+// ---------------------------------------------------------------------------------------------
+// The append-only journal_event table (read by the read-model projections, in seq order).
+
+export const JOURNAL_EVENT_TYPES = [
+  'LakeCreated',
+  'LakeUpdated',
+  'LakeDeleted',
+  'EventCreated',
+  'EventUpdated',
+  'EventDeleted',
+  'PracticeDayUpdated',
+  'CompetitionDayUpdated',
+  'FindAdded',
+  'FindUpdated',
+  'FindDeleted',
+  'FindsImported',
+  'CatchLogged',
+  'CatchUpdated',
+  'CatchDeleted',
+  'CatchesImported',
+  'WeighInRecorded',
+  'PhotoUploaded',
+] as const;
+export type JournalEventType = (typeof JOURNAL_EVENT_TYPES)[number];
