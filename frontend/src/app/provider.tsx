@@ -1,0 +1,15 @@
+import { BaseStyles } from '@primer/react';
+import { ThemeProvider } from '@primer/react/next';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+
+/** Primer's theme (light, our accents on top), base styles and the query cache, around the whole app. */
+export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
+  return (
+    <ThemeProvider colorMode="light">
+      <BaseStyles className="sb-root">
+        <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
+      </BaseStyles>
+    </ThemeProvider>
+  );
+}

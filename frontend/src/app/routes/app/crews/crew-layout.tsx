@@ -1,0 +1,82 @@
+import type { CrewView } from '@shoalbook/shared';
+import { Banner, Label, LinkButton, UnderlineNav } from '@primer/react';
+import { useQuery } from '@tanstack/react-query';
+import { Link as RouterLink, Outlet, useLocation, useOutletContext, useParams } from 'react-router-dom';
+import { ErrorState, LoadingState } from '../../../../components/feedback/query-states';
+import { paths } from '../../../../config/paths';
+import { crewQuery } from '../../../../features/crews/api/crews-api';
+import { isApiError } from '../../../../lib/api-client';
+import { ROLE_LABELS } from '../../../../lib/authorization';
+import { CREW_SECTIONS } from './crew-sections';
+import styles from './crew.module.css';
+
+/** What every crew section receives from the layout. */
+export interface CrewOutletContext {
+  crew: CrewView;
+}
+
+/** The crew sections read the loaded crew from here. */
+export function useCrew(): CrewView {
+  return useOutletContext<CrewOutletContext>().crew;
+}
+
+/** /crews/:crewId/*: loads the crew (404 for non-members) and shows its name and section tabs. */
+export function Component() {
+  const { crewId = '' } = useParams();
+  const { pathname } = useLocation();
+  const crew = useQuery(crewQuery(crewId));
+
+  if (crew.isPending) return <LoadingState label="Opening the crew…" />;
+  if (crew.isError) {
+    if (isApiError(crew.error, 404)) {
+      return (
+        <Banner
+          variant="warning"
+          title="This crew is not open to you"
+          description="Either it does not exist or you are not one of its members. Crews are private to their members."
+          primaryAction={
+            <LinkButton as={RouterLink} to={paths.home.href()}>
+              Go to your crews
+            </LinkButton>
+          }
+        />
+      );
+    }
+    return <ErrorState error={crew.error} title="The crew could not be loaded" onRetry={() => void crew.refetch()} />;
+  }
+
+  const sections = CREW_SECTIONS.filter((s) => !s.roles || s.roles.includes(crew.data.role));
+  return (
+    <>
+      <div className={styles.crewHeader}>
+        <p className={styles.kicker}>Crew</p>
+        <div className={styles.crewTitleRow}>
+          <h1 className={styles.crewName}>{crew.data.name}</h1>
+          <Label variant={crew.data.role === 'viewer' ? 'secondary' : 'accent'} size="large">
+            You: {ROLE_LABELS[crew.data.role]}
+          </Label>
+        </div>
+      </div>
+      <UnderlineNav aria-label="Crew sections" className={styles.sectionNav}>
+        {sections.map((section) => {
+          const href = section.href(crew.data.id);
+          const current = section.end ? pathname === href : pathname.startsWith(href);
+          return (
+            <UnderlineNav.Item
+              key={section.id}
+              as={RouterLink}
+              to={href}
+              leadingVisual={<section.icon />}
+              aria-current={current ? 'page' : undefined}
+            >
+              {section.label}
+            </UnderlineNav.Item>
+          );
+        })}
+      </UnderlineNav>
+      <div className={styles.sectionBody}>
+        <Outlet context={{ crew: crew.data } satisfies CrewOutletContext} />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,23 @@
+import { BookIcon, GearIcon, type Icon } from '@primer/octicons-react';
+import type { CrewRole } from '@shoalbook/shared';
+import { paths } from '../../../../config/paths';
+
+/**
+ * The sections of a crew, in navigation order. Each is a child route of /crews/:crewId. To add one
+ * (lakes, events, finds, catches, reports): add its route in router.tsx and an entry here.
+ */
+export interface CrewSection {
+  id: string;
+  label: string;
+  icon: Icon;
+  href: (crewId: string) => string;
+  /** Whether the path must match exactly (the journal is the crew's index route). */
+  end: boolean;
+  /** Roles that see the section; all members when omitted. */
+  roles?: readonly CrewRole[];
+}
+
+export const CREW_SECTIONS: readonly CrewSection[] = [
+  { id: 'journal', label: 'Journal', icon: BookIcon, href: paths.crew.href, end: true },
+  { id: 'settings', label: 'Crew & members', icon: GearIcon, href: paths.crewSettings.href, end: false },
+];

@@ -1,0 +1,58 @@
+import { AlertIcon, InfoIcon } from '@primer/octicons-react';
+import { Text } from '@primer/react';
+import type { ReactNode } from 'react';
+import styles from './journal-cautions.module.css';
+
+function Caution({ icon, title, children }: { icon: 'info' | 'alert'; title: string; children: ReactNode }) {
+  const Icon = icon === 'alert' ? AlertIcon : InfoIcon;
+  return (
+    <aside className={icon === 'alert' ? `${styles.caution} ${styles.alert}` : styles.caution} aria-label={title}>
+      <Icon size={16} className={styles.icon} aria-hidden />
+      <Text size="small">
+        <Text weight="semibold">{title}.</Text> {children}
+      </Text>
+    </aside>
+  );
+}
+
+/** Beside event rules: Shoalbook's defaults are only where most events start. */
+export function RulesCaution() {
+  return (
+    <Caution icon="info" title="Rules differ">
+      Five fish and 12 inches are only where most events start. Bag and length limits change from state to
+      state, from one water body to the next and between events: the event&rsquo;s own rules and the state
+      wildlife agency&rsquo;s current regulations decide, not this form.
+    </Caution>
+  );
+}
+
+/** Beside practice finds: much of the searching happens at speed. */
+export function OnPlaneCaution() {
+  return (
+    <Caution icon="alert" title="Searching at speed">
+      Reading the sonar while running on plane means a life jacket on and the engine cut-off link clipped
+      on before the hull comes up. Mark the spot and look at the screen later, keep to local boating law,
+      and head in when lightning is near.
+    </Caution>
+  );
+}
+
+/** Beside catch entry: the fish comes first, the log second. */
+export function FishCareCaution() {
+  return (
+    <Caution icon="info" title="Fish first">
+      Get the fish into an aerated, cool livewell before you type; log it between casts. Released fish go
+      back quickly, with wet hands.
+    </Caution>
+  );
+}
+
+/** Beside exports: a list of positions is what a crew guards most. */
+export function PositionsFileCaution() {
+  return (
+    <Caution icon="alert" title="Positions inside">
+      The file holds the position of every find and catch. Keep it to your crew: a leaked waypoint list
+      cannot be taken back.
+    </Caution>
+  );
+}

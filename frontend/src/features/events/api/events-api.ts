@@ -1,0 +1,89 @@
+import type { EventRules, EventView } from '@shoalbook/shared';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import type { CompetitionDayView, PracticeDayView } from '../../../lib/journal-types';
+
+/** Body of POST /events and PATCH /events/:eventId. Rules in storage units (lb, in). */
+export interface EventInput {
+  lakeId: string;
+  name: string;
+  organiser: string;
+  practiceDates: string[];
+  competitionDates: string[];
+  rules: EventRules;
+  entryFee: number | null;
+  payout: number | null;
+  finalPlace: number | null;
+  notes: string;
+}
+
+const eventPath = (crewId: string, eventId: string, rest = '') => crewApiPath(crewId, `/events/${encodeURIComponent(eventId)}${rest}`);
+
+export const eventsQuery = (crewId: string, lakeId?: string) =>
+  queryOptions({
+    queryKey: journalKeys.events(crewId, lakeId),
+    queryFn: () => api.get<EventView[]>(crewApiPath(crewId, `/events${queryString({ lakeId })}`)),
+  });
+
+export const eventQuery = (crewId: string, eventId: string) =>
+  queryOptions({
+    queryKey: journalKeys.event(crewId, eventId),
+    queryFn: () => api.get<EventView>(eventPath(crewId, eventId)),
+  });
+
+export function useEvents(crewId: string, lakeId?: string) {
+  return useQuery(eventsQuery(crewId, lakeId));
+}
+
+export function useEvent(crewId: string, eventId: string | undefined) {
+  return useQuery({ ...eventQuery(crewId, eventId ?? ''), enabled: Boolean(eventId) });
+}
+
+/** Practice and competition days of an event (created by the server from the event's dates). */
+export function useEventDays(crewId: string, eventId: string) {
+  return useQuery({
+    queryKey: journalKeys.days(crewId, eventId),
+    queryFn: async () => {
+      const [practice, competition] = await Promise.all([
+        api.get<PracticeDayView[]>(eventPath(crewId, eventId, '/practice-days')),
+        api.get<CompetitionDayView[]>(eventPath(crewId, eventId, '/competition-days')),
+      ]);
+      return { practice, competition };
+    },
+  });
+}
+
+export function useSaveEvent(crewId: string, eventId?: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: EventInput) =>
+      eventId ? api.patch<EventView>(eventPath(crewId, eventId), input) : api.post<EventView>(crewApiPath(crewId, '/events'), input),
+    onSuccess: async (event) => {
+      queryClient.setQueryData(journalKeys.event(crewId, event.id), event);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: journalKeys.allEvents(crewId) }),
+        queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, event.id) }),
+        queryClient.invalidateQueries({ queryKey: journalKeys.weighIns(crewId, event.id) }),
+      ]);
+    },
+  });
+}
+
+export function useDeleteEvent(crewId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (eventId: string) => api.delete(eventPath(crewId, eventId)),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.allEvents(crewId) }),
+  });
+}
+
+/** PATCH /competition-days/:dayId: start and check-in clock times, weather, water temperature (°F). */
+export function useUpdateCompetitionDay(crewId: string, eventId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ dayId, ...body }: { dayId: string; startTime?: string | null; checkInTime?: string | null; weatherNotes?: string; waterTempF?: number | null }) =>
+      api.patch<CompetitionDayView>(crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}`), body),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
+  });
+}

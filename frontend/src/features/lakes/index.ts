@@ -1,0 +1,3 @@
+export { LakesList } from './components/lakes-list';
+export { LakeForm } from './components/lake-form';
+export { useLakes, useLake, useDeleteLake, lakesQuery, lakeQuery, type LakeInput } from './api/lakes-api';
