@@ -82,7 +82,7 @@ describe('countedBag', () => {
     fc.assert(
       fc.property(fishArb, rulesArb, (fish, rules) => {
         const bag = countedBag(fish, rules);
-        const byId = new Map(fish.map((f) => [f.id, f]));
+        const byId = new Map<string | number, BagFish>(fish.map((f) => [f.id, f]));
         const counted = bag.counted.map((id) => byId.get(id)!);
         expect(counted.length).toBeLessThanOrEqual(rules.fishPerDay);
         const legal = (f: BagFish) => rules.minLengthIn == null || f.lengthIn == null || f.lengthIn >= rules.minLengthIn;
