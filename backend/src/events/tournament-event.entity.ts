@@ -1,0 +1,68 @@
+import { randomUUID } from 'node:crypto';
+import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
+
+/**
+ * A tournament ("event" in the API) on a lake, with its own rules. Named TournamentEvent in code so it
+ * never shadows Node's global `Event`. The rule defaults are common practice, not law.
+ */
+@Entity({ tableName: 'events' })
+@Index({ name: 'events_crew_lake_index', properties: ['crewId', 'lakeId'] })
+export class TournamentEvent {
+  @PrimaryKey({ type: 'uuid' })
+  id: string = randomUUID();
+
+  @Property({ type: 'uuid' })
+  crewId: string;
+
+  @Property({ type: 'uuid' })
+  lakeId: string;
+
+  @Property({ type: 'string', length: 160 })
+  name: string;
+
+  @Property({ type: 'string', length: 160 })
+  organiser: string = '';
+
+  /** Local calendar dates (YYYY-MM-DD), ascending. */
+  @Property({ type: 'json' })
+  practiceDates: string[] = [];
+
+  @Property({ type: 'json' })
+  competitionDates: string[] = [];
+
+  @Property({ type: 'integer' })
+  fishPerDay: number = 5;
+
+  @Property({ type: 'double', nullable: true })
+  minLengthIn: number | null = 12;
+
+  @Property({ type: 'double' })
+  deadFishPenaltyLb: number = 0.25;
+
+  @Property({ type: 'double' })
+  shortFishPenaltyLb: number = 1;
+
+  @Property({ type: 'double' })
+  latePenaltyLbPerMinute: number = 1;
+
+  @Property({ type: 'double', nullable: true })
+  entryFee: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  payout: number | null = null;
+
+  @Property({ type: 'integer', nullable: true })
+  finalPlace: number | null = null;
+
+  @Property({ type: 'text' })
+  notes: string = '';
+
+  @Property({ type: 'integer', version: true })
+  version: number = 1;
+
+  @Property({ type: 'datetime', length: 3 })
+  createdAt: Date = new Date();
+
+  @Property({ type: 'datetime', length: 3, onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+}
