@@ -9,6 +9,7 @@ export interface LatLon {
 /** Mean Earth radius in metres: R1 = (2a + b)/3 of the WGS 84 ellipsoid, rounded to 0.1 m. */
 export const MEAN_EARTH_RADIUS_M = 6_371_008.8;
 
+/** Checks a position in decimal degrees, throwing a RangeError that names the bad field. */
 export function assertLatLon(name: string, p: LatLon): void {
   assertFinite(`${name}.lat`, p.lat);
   assertFinite(`${name}.lon`, p.lon);

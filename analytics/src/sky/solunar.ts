@@ -24,6 +24,7 @@ export interface SolunarOptions {
 
 const HOUR_MS = 3_600_000;
 
+/** Checks a lake position in decimal degrees, throwing a RangeError that names the bad value. */
 export function assertPosition(lat: number, lon: number): void {
   assertFinite('lat', lat);
   assertFinite('lon', lon);

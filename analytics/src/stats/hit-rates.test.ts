@@ -118,3 +118,11 @@ describe('hitRates', () => {
     );
   });
 });
+
+describe('hitRates edge cases', () => {
+  it('returns no groups for no finds, and zero counts for finds without catches', () => {
+    expect(hitRates([], catches, { by: 'kind' })).toEqual([]);
+    const [only] = hitRates([{ id: 1, kind: 'bait' }], [], { by: 'kind' });
+    expect([only.finds, only.findsFished, only.fish, only.fishWeightLb]).toEqual([1, 0, 0, 0]);
+  });
+});
