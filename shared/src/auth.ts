@@ -47,3 +47,19 @@ export interface PasswordResetConfirm {
   token: string;
   password: string;
 }
+
+/** GET /api/auth/csrf */
+export interface CsrfResponse {
+  csrfToken: string;
+}
+
+export interface ChangePasswordRequest {
+  currentPassword: string;
+  newPassword: string;
+}
+
+export interface UpdateMeRequest {
+  displayName?: string;
+  /** Any subset; the other units stay as they are. */
+  units?: Partial<UnitPreferences>;
+}

@@ -50,3 +50,12 @@ export interface CreateInviteRequest {
 export interface ChangeRoleRequest {
   role: CrewRole;
 }
+
+export interface AcceptInviteRequest {
+  token: string;
+}
+
+/** POST /api/invites/accept */
+export interface AcceptInviteResponse {
+  crewId: string;
+}

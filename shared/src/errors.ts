@@ -12,3 +12,30 @@ export interface ApiError {
   /** Quote this when reporting a problem; the server log has the details. */
   requestId?: string;
 }
+
+/**
+ * The `code` values the API sends. Clients react to these, never to the message text:
+ * csrf_invalid (refetch the token once and retry), token_invalid, last_owner, email_taken, rate_limited…
+ */
+export const API_ERROR_CODES = [
+  'validation_failed',
+  'invalid_json',
+  'csrf_invalid',
+  'unauthenticated',
+  'wrong_credentials',
+  'account_disabled',
+  'forbidden',
+  'not_found',
+  'token_invalid',
+  'email_taken',
+  'last_owner',
+  'already_member',
+  'invite_email_mismatch',
+  'self_lockout',
+  'wrong_password',
+  'rate_limited',
+  'mail_failed',
+  'db_unavailable',
+  'internal_error',
+] as const;
+export type ApiErrorCode = (typeof API_ERROR_CODES)[number];

@@ -5,3 +5,5 @@ export * from './auth.js';
 export * from './crews.js';
 export * from './taxonomy.js';
 export * from './journal.js';
+export * from './admin.js';
+export * from './system.js';

@@ -1,0 +1,129 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
+import { CommandBus } from '@nestjs/cqrs';
+import { ApiAcceptedResponse, ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiForbiddenResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import type { MeResponse } from '@shoalbook/shared';
+import { CsrfService } from '../common/csrf/csrf.service';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import { ApiErrorDto } from '../common/dto/api-error.dto';
+import { AuthThrottle } from '../common/throttling/auth-throttling';
+import { MeResponseDto } from '../users/dto/user-view.dto';
+import { UpdateMeDto } from '../users/dto/update-me.dto';
+import type { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
+import { AuthService } from './auth.service';
+import { SignUpCommand } from './commands/sign-up.command';
+import { ChangePasswordDto, CsrfResponseDto, MessageResponseDto, PasswordResetConfirmDto, PasswordResetRequestDto, SignInDto, SignUpDto } from './dto/auth.dto';
+import { SessionsService } from './sessions.service';
+
+@ApiTags('auth')
+@ApiCookieAuth()
+@ApiBadRequestResponse({ type: ApiErrorDto, description: 'Invalid input; fieldErrors name the fields.' })
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly commands: CommandBus,
+    private readonly auth: AuthService,
+    private readonly users: UsersService,
+    private readonly sessions: SessionsService,
+    private readonly csrf: CsrfService,
+  ) {}
+
+  @Public()
+  @Get('csrf')
+  @ApiOperation({ summary: 'A CSRF token for this browser and session (fetch again after sign-in, sign-up and sign-out)' })
+  @ApiOkResponse({ type: CsrfResponseDto })
+  csrfToken(@Req() req: Request, @Res({ passthrough: true }) res: Response): CsrfResponseDto {
+    return { csrfToken: this.csrf.issueToken(req, res) };
+  }
+
+  @Public()
+  @AuthThrottle()
+  @Post('sign-up')
+  @ApiOperation({ summary: 'Create an account and sign in' })
+  @ApiCreatedResponse({ type: MeResponseDto })
+  @ApiConflictResponse({ type: ApiErrorDto, description: 'The e-mail address has an account (code email_taken).' })
+  async signUp(@Body() dto: SignUpDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<MeResponse> {
+    const user = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName));
+    await this.startSession(user, req, res);
+    return this.users.me(user);
+  }
+
+  @Public()
+  @AuthThrottle()
+  @Post('sign-in')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({ summary: 'Sign in; starts a new session' })
+  @ApiOkResponse({ type: MeResponseDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'E-mail or password is wrong.' })
+  @ApiForbiddenResponse({ type: ApiErrorDto, description: 'The account is disabled.' })
+  async signIn(@Body() dto: SignInDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<MeResponse> {
+    const user = await this.auth.signIn(dto.email, dto.password);
+    await this.startSession(user, req, res);
+    return this.users.me(user);
+  }
+
+  @Public()
+  @Post('sign-out')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({ summary: 'End this session' })
+  @ApiNoContentResponse({ description: 'Signed out (also when there was no session).' })
+  async signOut(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
+    if (req.authSession) await this.sessions.end(req.authSession.tokenHash);
+    this.sessions.clearCookie(res);
+  }
+
+  @Get('me')
+  @ApiOperation({ summary: 'The signed-in account and its crews' })
+  @ApiOkResponse({ type: MeResponseDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto })
+  me(@CurrentUser() user: User): Promise<MeResponse> {
+    return this.users.me(user);
+  }
+
+  @Patch('me')
+  @ApiOperation({ summary: 'Change the display name or unit preferences' })
+  @ApiOkResponse({ type: MeResponseDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto })
+  async updateMe(@CurrentUser() user: User, @Body() dto: UpdateMeDto): Promise<MeResponse> {
+    await this.users.updateProfile(user, dto);
+    return this.users.me(user);
+  }
+
+  @Post('change-password')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({ summary: 'Change the password; ends every other session' })
+  @ApiNoContentResponse()
+  @ApiUnauthorizedResponse({ type: ApiErrorDto })
+  async changePassword(@CurrentUser() user: User, @Req() req: Request, @Body() dto: ChangePasswordDto): Promise<void> {
+    await this.auth.changePassword(user, req.authSession!.tokenHash, dto.currentPassword, dto.newPassword);
+  }
+
+  @Public()
+  @AuthThrottle()
+  @Post('password-reset/request')
+  @HttpCode(HttpStatus.ACCEPTED)
+  @ApiOperation({ summary: 'E-mail a reset link (the same answer whether or not the address has an account)' })
+  @ApiAcceptedResponse({ type: MessageResponseDto })
+  async requestReset(@Body() dto: PasswordResetRequestDto): Promise<MessageResponseDto> {
+    await this.auth.requestPasswordReset(dto.email);
+    return { message: 'If an account uses this address, a link to set a new password is on its way. It works for 30 minutes.' };
+  }
+
+  @Public()
+  @AuthThrottle()
+  @Post('password-reset/confirm')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({ summary: 'Set a new password with the e-mailed token; ends every session of the account' })
+  @ApiNoContentResponse()
+  async confirmReset(@Body() dto: PasswordResetConfirmDto): Promise<void> {
+    await this.auth.confirmPasswordReset(dto.token, dto.password);
+  }
+
+  /** A new session on every sign-in; the previous cookie's session (if any) ends. */
+  private async startSession(user: User, req: Request, res: Response): Promise<void> {
+    if (req.authSession) await this.sessions.end(req.authSession.tokenHash);
+    this.sessions.setCookie(res, await this.sessions.create(user));
+  }
+}

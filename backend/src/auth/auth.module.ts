@@ -1,0 +1,17 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { CsrfService } from '../common/csrf/csrf.service';
+import { UsersModule } from '../users/users.module';
+import { AuthController } from './auth.controller';
+import { AuthService } from './auth.service';
+import { AUTH_COMMAND_HANDLERS } from './commands';
+import { SessionGuard } from './session.guard';
+import { SessionsService } from './sessions.service';
+
+@Module({
+  imports: [UsersModule],
+  controllers: [AuthController],
+  providers: [AuthService, SessionsService, CsrfService, ...AUTH_COMMAND_HANDLERS, { provide: APP_GUARD, useClass: SessionGuard }],
+  exports: [SessionsService, CsrfService],
+})
+export class AuthModule {}

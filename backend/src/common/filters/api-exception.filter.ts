@@ -1,0 +1,76 @@
+import { ConnectionException, DriverException } from '@mikro-orm/core';
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import { STATUS_CODES } from 'node:http';
+import type { Request, Response } from 'express';
+import type { ApiError } from '@shoalbook/shared';
+import { ErrorCode } from '../errors/api-errors';
+
+const DEFAULT_CODES: Record<number, string> = {
+  400: ErrorCode.validation,
+  401: ErrorCode.unauthenticated,
+  403: ErrorCode.forbidden,
+  404: ErrorCode.notFound,
+  429: ErrorCode.rateLimited,
+};
+
+const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ETIMEDOUT', 'EHOSTUNREACH', 'ER_GET_CONNECTION_TIMEOUT', 'ER_CONNECTION_TIMEOUT']);
+
+function isDatabaseUnreachable(e: unknown): boolean {
+  if (e instanceof ConnectionException) return true;
+  return e instanceof DriverException && UNREACHABLE_CODES.has(String(e.code));
+}
+
+/** Turn anything thrown into the one ApiError shape: a readable message, never a stack trace or SQL. */
+export function toApiError(exception: unknown): Omit<ApiError, 'requestId'> {
+  if (exception instanceof HttpException) {
+    const statusCode = exception.getStatus();
+    const body = exception.getResponse();
+    let message = exception.message;
+    let code: string | undefined;
+    let fieldErrors: Record<string, string[]> | undefined;
+    if (typeof body === 'string') message = body;
+    else if (body && typeof body === 'object') {
+      const b = body as { message?: unknown; code?: unknown; fieldErrors?: unknown };
+      if (typeof b.message === 'string') message = b.message;
+      else if (Array.isArray(b.message)) message = b.message.join('; ');
+      if (typeof b.code === 'string') code = b.code;
+      if (b.fieldErrors && typeof b.fieldErrors === 'object') fieldErrors = b.fieldErrors as Record<string, string[]>;
+    }
+    if (statusCode === 429) message = 'Too many attempts. Wait a minute, then try again.';
+    const error: Omit<ApiError, 'requestId'> = { statusCode, error: STATUS_CODES[statusCode] ?? 'Error', message };
+    const finalCode = code ?? DEFAULT_CODES[statusCode];
+    if (finalCode) error.code = finalCode;
+    if (fieldErrors) error.fieldErrors = fieldErrors;
+    return error;
+  }
+  if (isDatabaseUnreachable(exception)) {
+    return { statusCode: 503, error: STATUS_CODES[503]!, message: 'The database is not answering. Try again in a moment.', code: ErrorCode.dbUnavailable };
+  }
+  return {
+    statusCode: HttpStatus.INTERNAL_SERVER_ERROR,
+    error: STATUS_CODES[500]!,
+    message: 'Something went wrong on our side. Quote the request id if you report it.',
+    code: ErrorCode.internal,
+  };
+}
+
+/** The single global filter: every 4xx/5xx answer goes through here. */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('HTTP');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const ctx = host.switchToHttp();
+    const req = ctx.getRequest<Request>();
+    const res = ctx.getResponse<Response>();
+    const error: ApiError = { ...toApiError(exception), requestId: req.id };
+    const where = `${req.method} ${req.originalUrl} → ${error.statusCode} [${req.id}]`;
+    if (error.statusCode >= 500) {
+      this.logger.error(`${where}: ${exception instanceof Error ? exception.message : String(exception)}`, exception instanceof Error ? exception.stack : undefined);
+    } else {
+      this.logger.verbose(`${where}: ${error.message}`);
+    }
+    if (res.headersSent) return;
+    res.status(error.statusCode).json(error);
+  }
+}

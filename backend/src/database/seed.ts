@@ -1,0 +1,27 @@
+// `node dist/database/seed.js`: seed the demo data when the database has no users yet.
+import 'reflect-metadata';
+import { MikroORM } from '@mikro-orm/mariadb';
+import { DatabaseEnv, validateEnvAs } from '../config/env.validation';
+import { User } from '../users/user.entity';
+import { buildOrmConfig } from './mikro-orm.config';
+import { DatabaseSeeder } from './seeders/database.seeder';
+
+async function main(): Promise<void> {
+  const orm = await MikroORM.init({ ...buildOrmConfig(validateEnvAs(DatabaseEnv, process.env)), debug: false });
+  try {
+    const users = await orm.em.fork().count(User, {});
+    if (users > 0) {
+      process.stdout.write('already seeded\n');
+      return;
+    }
+    await orm.getSeeder().seed(DatabaseSeeder);
+    process.stdout.write('seeded the demo accounts and crews\n');
+  } finally {
+    await orm.close(true);
+  }
+}
+
+main().catch((e: unknown) => {
+  process.stderr.write(`seeding failed: ${e instanceof Error ? e.message : String(e)}\n`);
+  process.exit(1);
+});

@@ -1,0 +1,47 @@
+import { MikroORM } from '@mikro-orm/mariadb';
+import { Controller, Get, HttpStatus, Req, Res } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiProperty, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import type { HealthResponse } from '@shoalbook/shared';
+import { Public } from '../common/decorators/public.decorator';
+
+/** How long the database may take to answer before we call it down. */
+const DB_CHECK_TIMEOUT_MS = 1500;
+
+export class HealthResponseDto implements HealthResponse {
+  @ApiProperty({ enum: ['ok', 'error'] }) status: 'ok' | 'error';
+  @ApiProperty({ enum: ['up', 'down'] }) db: 'up' | 'down';
+}
+
+@ApiTags('health')
+@Controller('health')
+export class HealthController {
+  constructor(private readonly orm: MikroORM) {}
+
+  @Public()
+  @Get()
+  @ApiOperation({ summary: 'Liveness with a real database round trip' })
+  @ApiOkResponse({ type: HealthResponseDto })
+  @ApiServiceUnavailableResponse({ type: HealthResponseDto, description: 'The database does not answer.' })
+  async check(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<HealthResponse | (HealthResponse & object)> {
+    if (await this.databaseAnswers()) return { status: 'ok', db: 'up' };
+    res.status(HttpStatus.SERVICE_UNAVAILABLE);
+    // Also carries the ApiError fields, so clients that only know the error shape read it too.
+    return { status: 'error', db: 'down', statusCode: 503, error: 'Service Unavailable', message: 'The database does not answer.', requestId: req.id } as HealthResponse;
+  }
+
+  private async databaseAnswers(): Promise<boolean> {
+    let timer: NodeJS.Timeout | undefined;
+    const timeout = new Promise<false>((resolve) => (timer = setTimeout(() => resolve(false), DB_CHECK_TIMEOUT_MS)));
+    try {
+      const check = this.orm.em
+        .getConnection()
+        .execute('select 1 as ok')
+        .then(() => true)
+        .catch(() => false);
+      return await Promise.race([check, timeout]);
+    } finally {
+      clearTimeout(timer);
+    }
+  }
+}
