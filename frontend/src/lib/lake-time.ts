@@ -47,3 +47,33 @@ export function timeZones(): string[] {
 export function browserTimeZone(): string {
   return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 }
+
+/** Offset of a zone from UTC at an instant, in ms (positive east of Greenwich). */
+function zoneOffsetMs(utcMs: number, timeZone: string): number {
+  const parts = new Intl.DateTimeFormat('en-US', {
+    timeZone,
+    hourCycle: 'h23',
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+    second: '2-digit',
+  }).formatToParts(new Date(utcMs));
+  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
+  const asUtc = Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second'));
+  return asUtc - Math.floor(utcMs / 1000) * 1000;
+}
+
+/**
+ * The UTC instant (ISO) of a wall-clock time on the lake ("2025-04-12", "06:40"). The offset is looked up
+ * twice so a time near a daylight-saving change lands on the right side of it.
+ */
+export function lakeWallTimeToIso(date: string, time: string, timeZone: string): string {
+  const [y, m, d] = date.split('-').map(Number);
+  const [hh, mm] = time.split(':').map(Number);
+  const wall = Date.UTC(y, m - 1, d, hh, mm);
+  let utc = wall - zoneOffsetMs(wall, timeZone);
+  utc = wall - zoneOffsetMs(utc, timeZone);
+  return new Date(utc).toISOString();
+}

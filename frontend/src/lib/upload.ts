@@ -11,6 +11,8 @@ export interface UploadProgress {
 export interface UploadOptions {
   /** Multipart field name; the journal routes use `file`. */
   field?: string;
+  /** Extra multipart text fields sent before the file. */
+  fields?: Record<string, string>;
   onProgress?: (progress: UploadProgress) => void;
   signal?: AbortSignal;
 }
@@ -60,6 +62,7 @@ function send<T>(path: string, file: File, token: string, options: UploadOptions
     xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
     options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
     const form = new FormData();
+    for (const [name, value] of Object.entries(options.fields ?? {})) form.append(name, value);
     form.append(options.field ?? 'file', file, file.name);
     options.onProgress?.({ phase: 'uploading', percent: 0 });
     xhr.send(form);

@@ -75,7 +75,7 @@ export function EventsTable({ crewId, lakeId, lakes, canWrite }: { crewId: strin
       caption="Events"
       getRowId={(e) => e.id}
       initialSorting={[{ id: 'firstDay', desc: true }]}
-      initialHidden={{ lake: !!lakeId }}
+      initialHidden={{ lake: !lakeId }}
       filterPlaceholder="Filter by name or organiser"
       height={400}
     />

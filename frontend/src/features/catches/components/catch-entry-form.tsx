@@ -1,0 +1,379 @@
+import {
+  FATES,
+  FIND_KIND_LABELS,
+  SPECIES,
+  SPECIES_LABELS,
+  type Fate,
+  type FindView,
+  type LakeView,
+  type Species,
+  type UnitPreferences,
+} from '@shoalbook/shared';
+import { Button, Checkbox, FormControl, Label, Select, Text, TextInput } from '@primer/react';
+import { useId, useMemo, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { FishCareCaution } from '../../../components/cautions/journal-cautions';
+import { FormError } from '../../../components/form/form-error';
+import { ApiRequestError } from '../../../lib/api-client';
+import { clockTime, dayLabel, isClockTime } from '../../../lib/lake-time';
+import type { CatchWithSky } from '../../../lib/journal-types';
+import {
+  entryToLb,
+  formatDepth,
+  formatWeight,
+  parseDepth,
+  parseLength,
+  parseOptional,
+  parseTemperature,
+  parseWeight,
+  readNumber,
+  UNIT_SIGNS,
+  weightHint,
+} from '../../../lib/units';
+import { useLogCatch, type CatchInput } from '../api/catches-api';
+import { FATE_LABELS } from './catch-labels';
+import styles from './catch-entry-form.module.css';
+
+const LAST_SPECIES_KEY = 'shoalbook.lastSpecies';
+
+function lastSpecies(): Species {
+  try {
+    const stored = localStorage.getItem(LAST_SPECIES_KEY);
+    if (stored && (SPECIES as readonly string[]).includes(stored)) return stored as Species;
+  } catch {
+    // Storage can be off (private mode); the default is fine.
+  }
+  return 'largemouth';
+}
+
+function rememberSpecies(species: Species) {
+  try {
+    localStorage.setItem(LAST_SPECIES_KEY, species);
+  } catch {
+    // Not remembering is harmless.
+  }
+}
+
+/** One line per find for the type-to-filter list: name, kind and depth, so two "Shell bar"s can be told apart. */
+export function findOptionLabel(find: FindView, prefs: UnitPreferences): string {
+  const depth = find.depthFt !== null ? `, ${formatDepth(find.depthFt, prefs.depth)}` : '';
+  return `${find.name} (${FIND_KIND_LABELS[find.kind]}${depth})`;
+}
+
+interface Values {
+  caughtAt: string;
+  species: Species;
+  weight: string;
+  length: string;
+  find: string;
+  lat: string;
+  lon: string;
+  fate: Fate;
+  lure: string;
+  technique: string;
+  depth: string;
+  waterTemp: string;
+}
+
+/** Server field names that belong to each input (the contract accepts canonical or entered forms). */
+const SERVER_FIELDS: Record<string, string[]> = {
+  caughtAt: ['caughtAt'],
+  species: ['species'],
+  weight: ['weight', 'weight.value', 'weight.ounces', 'weightLb'],
+  length: ['length', 'length.value', 'lengthIn'],
+  find: ['findId', 'competitionDayId'],
+  lat: ['lat'],
+  lon: ['lon'],
+  fate: ['fate'],
+  lure: ['lure'],
+  technique: ['technique'],
+  depth: ['depth', 'depth.value', 'depthFt'],
+  waterTemp: ['waterTemp', 'waterTemp.value', 'waterTempF'],
+};
+
+/**
+ * Logging a catch between casts, by keyboard alone: focus starts on the time (now, on the lake's clock),
+ * Enter logs it from any field, and the form clears for the next fish with focus back on the time.
+ * Species, lure, technique and water temperature stay as they were: they seldom change fish to fish.
+ */
+export function CatchEntryForm({
+  crewId,
+  day,
+  lake,
+  finds,
+  prefs,
+  now = () => new Date(),
+}: {
+  crewId: string;
+  day: { id: string; date: string };
+  lake: LakeView;
+  finds: FindView[];
+  prefs: UnitPreferences;
+  /** The clock (replaceable in tests). */
+  now?: () => Date;
+}) {
+  const fresh = (keep?: Values): Values => ({
+    caughtAt: clockTime(now(), lake.timeZone),
+    species: keep?.species ?? lastSpecies(),
+    weight: '',
+    length: '',
+    find: '',
+    lat: '',
+    lon: '',
+    fate: 'weighed',
+    lure: keep?.lure ?? '',
+    technique: keep?.technique ?? '',
+    depth: '',
+    waterTemp: keep?.waterTemp ?? '',
+  });
+  const [values, setValues] = useState<Values>(() => fresh());
+  const [byCoordinates, setByCoordinates] = useState(false);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [logged, setLogged] = useState<CatchWithSky | null>(null);
+  const log = useLogCatch(crewId);
+  const timeRef = useRef<HTMLInputElement>(null);
+  const listId = useId();
+  const formId = useId();
+
+  const findByLabel = useMemo(() => new Map(finds.map((f) => [findOptionLabel(f, prefs).toLowerCase(), f])), [finds, prefs]);
+  const findName = (id: string | null) => finds.find((f) => f.id === id)?.name ?? 'a find';
+
+  const serverMessages = (field: string) =>
+    log.error instanceof ApiRequestError ? SERVER_FIELDS[field].flatMap((name) => log.error instanceof ApiRequestError ? log.error.messagesFor(name) : []) : [];
+  const messages = (field: string) => [...(errors[field] ? [errors[field]] : []), ...serverMessages(field)];
+
+  const set = (key: keyof Values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
+
+  const build = (): { input?: CatchInput; errors: Record<string, string> } => {
+    const found: Record<string, string> = {};
+    if (!isClockTime(values.caughtAt)) found.caughtAt = 'A 24-hour time on the lake clock, like 07:42.';
+    const weight = parseWeight(values.weight, prefs.weight);
+    if (!weight.ok) found.weight = weight.error;
+    const length = parseOptional(values.length, (t) => parseLength(t, prefs.length));
+    if (!length.ok) found.length = length.error;
+    const depth = parseOptional(values.depth, (t) => parseDepth(t, prefs.depth));
+    if (!depth.ok) found.depth = depth.error;
+    const temp = parseOptional(values.waterTemp, (t) => parseTemperature(t, prefs.temperature));
+    if (!temp.ok) found.waterTemp = temp.error;
+    let where: Pick<CatchInput, 'findId' | 'lat' | 'lon'> = {};
+    if (byCoordinates) {
+      const lat = readNumber(values.lat);
+      const lon = readNumber(values.lon);
+      if (lat === null || lat < -90 || lat > 90) found.lat = 'Latitude in decimal degrees, -90 to 90.';
+      if (lon === null || lon < -180 || lon > 180) found.lon = 'Longitude in decimal degrees, -180 to 180.';
+      if (lat !== null && lon !== null) where = { lat, lon };
+    } else if (values.find.trim()) {
+      const match = findByLabel.get(values.find.trim().toLowerCase()) ?? finds.find((f) => f.name.toLowerCase() === values.find.trim().toLowerCase());
+      if (!match) found.find = 'No find by that name: pick one from the list, or leave the field empty.';
+      else where = { findId: match.id };
+    }
+    if (Object.keys(found).length || !weight.ok || !length.ok || !depth.ok || !temp.ok) return { errors: found };
+    return {
+      errors: found,
+      input: {
+        competitionDayId: day.id,
+        caughtAt: values.caughtAt.trim(),
+        ...where,
+        species: values.species,
+        weight: weight.entry,
+        length: length.entry,
+        lure: values.lure.trim(),
+        technique: values.technique.trim(),
+        depth: depth.entry,
+        waterTemp: temp.entry,
+        fate: values.fate,
+      },
+    };
+  };
+
+  const submit = () => {
+    if (log.isPending) return;
+    const { input, errors: found } = build();
+    setErrors(found);
+    if (!input) return;
+    log.mutate(input, {
+      onSuccess: (saved) => {
+        rememberSpecies(values.species);
+        setLogged(saved);
+        setValues((v) => fresh(v));
+        timeRef.current?.focus();
+      },
+    });
+  };
+
+  // Enter logs the catch from any field, selects and the checkbox included (browsers submit only from text inputs).
+  const onKeyDown = (event: KeyboardEvent<HTMLFormElement>) => {
+    const target = event.target as HTMLElement;
+    if (event.key === 'Enter' && (target.tagName === 'SELECT' || (target as HTMLInputElement).type === 'checkbox')) {
+      event.preventDefault();
+      submit();
+    }
+  };
+
+  const field = (key: keyof Values, label: string, input: ReactNode, caption?: ReactNode) => {
+    const msgs = messages(key);
+    return (
+      <FormControl key={key} id={`${formId}-${key}`}>
+        <FormControl.Label>{label}</FormControl.Label>
+        {input}
+        {caption ? <FormControl.Caption>{caption}</FormControl.Caption> : null}
+        {msgs.length ? <FormControl.Validation variant="error">{msgs.join(' ')}</FormControl.Validation> : null}
+      </FormControl>
+    );
+  };
+  const status = (key: string) => (messages(key).length ? ('error' as const) : undefined);
+  const weightEcho = (() => {
+    const parsed = parseWeight(values.weight, prefs.weight);
+    if (!parsed.ok || prefs.weight === 'lb') return null;
+    return `= ${formatWeight(entryToLb(parsed.entry), 'lb')}`;
+  })();
+
+  return (
+    <form
+      className={styles.form}
+      aria-label={`Log a catch on ${dayLabel(day.date)}`}
+      noValidate
+      onKeyDown={onKeyDown}
+      onSubmit={(e) => {
+        e.preventDefault();
+        submit();
+      }}
+    >
+      <FishCareCaution />
+      <FormError error={log.error} title="That catch was not logged" />
+      <div className={styles.row}>
+        {field(
+          'caughtAt',
+          'Time (lake clock)',
+          <TextInput
+            ref={timeRef}
+            name="caughtAt"
+            value={values.caughtAt}
+            onChange={set('caughtAt')}
+            autoFocus
+            inputMode="numeric"
+            autoComplete="off"
+            placeholder="07:42"
+            className={styles.short}
+            validationStatus={status('caughtAt')}
+          />,
+          lake.timeZone.replace(/_/g, ' '),
+        )}
+        {field(
+          'species',
+          'Species',
+          <Select name="species" value={values.species} onChange={(e) => setValues((v) => ({ ...v, species: e.target.value as Species }))} validationStatus={status('species')}>
+            {SPECIES.map((s) => (
+              <Select.Option key={s} value={s}>
+                {SPECIES_LABELS[s]}
+              </Select.Option>
+            ))}
+          </Select>,
+        )}
+        {field(
+          'weight',
+          `Weight (${prefs.weight === 'lb-oz' ? 'lb-oz' : UNIT_SIGNS[prefs.weight]})`,
+          <TextInput
+            name="weight"
+            value={values.weight}
+            onChange={set('weight')}
+            inputMode="decimal"
+            autoComplete="off"
+            className={styles.short}
+            validationStatus={status('weight')}
+          />,
+          weightEcho ?? weightHint(prefs.weight),
+        )}
+        {field(
+          'length',
+          `Length (${UNIT_SIGNS[prefs.length]})`,
+          <TextInput name="length" value={values.length} onChange={set('length')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('length')} />,
+          'Optional',
+        )}
+      </div>
+      <div className={styles.row}>
+        {byCoordinates ? (
+          <>
+            {field(
+              'lat',
+              'Latitude',
+              <TextInput name="lat" value={values.lat} onChange={set('lat')} inputMode="decimal" autoComplete="off" validationStatus={status('lat')} />,
+            )}
+            {field(
+              'lon',
+              'Longitude',
+              <TextInput name="lon" value={values.lon} onChange={set('lon')} inputMode="decimal" autoComplete="off" validationStatus={status('lon')} />,
+              'Matched to the nearest find within 50 m',
+            )}
+          </>
+        ) : (
+          field(
+            'find',
+            'Find (type to filter)',
+            <TextInput name="find" value={values.find} onChange={set('find')} list={listId} autoComplete="off" block validationStatus={status('find')} />,
+            finds.length ? 'Optional: the practice find it came from' : 'No finds on this lake yet; leave it empty or use coordinates',
+          )
+        )}
+        <FormControl>
+          <Checkbox checked={byCoordinates} onChange={(e) => setByCoordinates(e.target.checked)} />
+          <FormControl.Label>Attribute from coordinates</FormControl.Label>
+        </FormControl>
+        {field(
+          'fate',
+          'Fate',
+          <Select name="fate" value={values.fate} onChange={(e) => setValues((v) => ({ ...v, fate: e.target.value as Fate }))} validationStatus={status('fate')}>
+            {FATES.map((f) => (
+              <Select.Option key={f} value={f}>
+                {FATE_LABELS[f]}
+              </Select.Option>
+            ))}
+          </Select>,
+        )}
+      </div>
+      <div className={styles.row}>
+        {field('lure', 'Lure', <TextInput name="lure" value={values.lure} onChange={set('lure')} autoComplete="off" validationStatus={status('lure')} />)}
+        {field('technique', 'Technique', <TextInput name="technique" value={values.technique} onChange={set('technique')} autoComplete="off" validationStatus={status('technique')} />)}
+        {field(
+          'depth',
+          `Depth (${UNIT_SIGNS[prefs.depth]})`,
+          <TextInput name="depth" value={values.depth} onChange={set('depth')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('depth')} />,
+        )}
+        {field(
+          'waterTemp',
+          `Water (${UNIT_SIGNS[prefs.temperature]})`,
+          <TextInput name="waterTemp" value={values.waterTemp} onChange={set('waterTemp')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('waterTemp')} />,
+        )}
+      </div>
+      <datalist id={listId}>
+        {finds.map((f) => (
+          <option key={f.id} value={findOptionLabel(f, prefs)} />
+        ))}
+      </datalist>
+      <div className={styles.actions}>
+        <Button type="submit" variant="primary" loading={log.isPending}>
+          Log catch
+        </Button>
+        <Text size="small" className={styles.hint}>
+          Enter logs it from any field; the form clears for the next fish. Lure, technique and water stay.
+        </Text>
+      </div>
+      <div role="status" aria-live="polite" className={styles.logged}>
+        {logged ? (
+          <>
+            <Text>
+              Logged {formatWeight(logged.weightLb, prefs.weight)} {SPECIES_LABELS[logged.species].toLowerCase()} at {clockTime(logged.caughtAt, lake.timeZone)}
+              {logged.findId
+                ? logged.attributionDistanceM !== null
+                  ? `, attributed to ${findName(logged.findId)} (${Math.round(logged.attributionDistanceM)} m away)`
+                  : `, from ${findName(logged.findId)}`
+                : byCoordinates || logged.lat !== null
+                  ? ', no find within the radius'
+                  : ''}
+              .
+            </Text>{' '}
+            {logged.weightFlagged ? <Label variant="attention">Check this weight: it does not fit the length</Label> : null}
+          </>
+        ) : null}
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,80 @@
+import type { FindKind, FoundHow, HardnessGrade, VegetationDensity } from '@shoalbook/shared';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import type { FindWithSky } from '../../../lib/journal-types';
+import { uploadFile, type UploadProgress } from '../../../lib/upload';
+import type { DepthEntry, TemperatureEntry } from '../../../lib/units';
+
+/** Body of POST /finds and PATCH /finds/:findId; depth and temperature go as typed, with their unit. */
+export interface FindInput {
+  lakeId: string;
+  eventId: string | null;
+  practiceDate: string | null;
+  name: string;
+  markedAt: string | null;
+  lat: number;
+  lon: number;
+  depth: DepthEntry | null;
+  kind: FindKind;
+  subKind: string;
+  hardness: HardnessGrade | null;
+  vegetationDensity: VegetationDensity | null;
+  baitSeen: boolean;
+  fishMarked: number | null;
+  frequencyKhz: number | null;
+  foundHow: FoundHow | null;
+  waterTemp: TemperatureEntry | null;
+  notes: string;
+  photoId: string | null;
+}
+
+const findPath = (crewId: string, findId: string) => crewApiPath(crewId, `/finds/${encodeURIComponent(findId)}`);
+
+export const findsQuery = (crewId: string, filter: { lakeId?: string; eventId?: string } = {}) =>
+  queryOptions({
+    queryKey: journalKeys.finds(crewId, filter),
+    queryFn: () => api.get<FindWithSky[]>(crewApiPath(crewId, `/finds${queryString(filter)}`)),
+  });
+
+export function useFinds(crewId: string, filter: { lakeId?: string; eventId?: string } = {}) {
+  return useQuery(findsQuery(crewId, filter));
+}
+
+export function useFind(crewId: string, findId: string | undefined) {
+  return useQuery({
+    queryKey: journalKeys.find(crewId, findId ?? ''),
+    queryFn: () => api.get<FindWithSky>(findPath(crewId, findId!)),
+    enabled: Boolean(findId),
+  });
+}
+
+export function useSaveFind(crewId: string, findId?: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: FindInput) =>
+      findId ? api.patch<FindWithSky>(findPath(crewId, findId), input) : api.post<FindWithSky>(crewApiPath(crewId, '/finds'), input),
+    onSuccess: (find) => {
+      queryClient.setQueryData(journalKeys.find(crewId, find.id), find);
+      return queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) });
+    },
+  });
+}
+
+export function useDeleteFind(crewId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (findId: string) => api.delete(findPath(crewId, findId)),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) }),
+  });
+}
+
+/** POST /photos: an image (≤ 8 MB; the server re-encodes it and strips its GPS tags) → its id. */
+export function uploadPhoto(crewId: string, file: File, onProgress?: (p: UploadProgress) => void) {
+  return uploadFile<{ id: string }>(crewApiPath(crewId, '/photos'), file, { onProgress });
+}
+
+/** Where a crew member's browser loads a stored photo (the session cookie goes along; non-members get 404). */
+export function photoUrl(crewId: string, photoId: string): string {
+  return `/api${crewApiPath(crewId, `/photos/${encodeURIComponent(photoId)}`)}`;
+}

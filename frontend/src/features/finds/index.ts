@@ -1,0 +1,4 @@
+export { FindsTable } from './components/finds-table';
+export { FindForm } from './components/find-form';
+export { FindDetail } from './components/find-detail';
+export { useFinds, useFind, useDeleteFind, findsQuery } from './api/finds-api';

@@ -1,0 +1,76 @@
+import type { UnitPreferences } from '@shoalbook/shared';
+import { Label } from '@primer/react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import { DataTable } from '../../../components/data-table/data-table';
+import { clockTime, localDate } from '../../../lib/lake-time';
+import type { GpxPreviewRow } from '../../../lib/journal-types';
+import { formatDepth } from '../../../lib/units';
+
+type RowStatus = 'ready' | 'duplicate' | 'error';
+
+export function rowStatus(row: GpxPreviewRow): RowStatus {
+  if (row.error) return 'error';
+  if (row.duplicateOf) return 'duplicate';
+  return 'ready';
+}
+
+const STATUS_TEXT: Record<RowStatus, string> = { ready: 'Ready', duplicate: 'Near an existing find', error: 'Cannot import' };
+const column = createColumnHelper<GpxPreviewRow>();
+
+/** What the GPX file holds, waypoint by waypoint: ready, within 15 m of an existing find (which, how far), or refused (why). */
+export function GpxPreviewTable({ rows, prefs, timeZone }: { rows: GpxPreviewRow[]; prefs: UnitPreferences; timeZone: string }) {
+  const columns = useMemo(
+    () => [
+      column.accessor((r) => r.index + 1, { id: 'row', header: 'Waypoint', meta: { numeric: true } }),
+      column.accessor('name', { header: 'Name', cell: (info) => info.getValue() || '(no name)' }),
+      column.accessor((r) => rowStatus(r), {
+        id: 'status',
+        header: 'Status',
+        meta: { filterOptions: (['ready', 'duplicate', 'error'] as const).map((s) => ({ value: s, label: STATUS_TEXT[s] })) },
+        cell: (info) => {
+          const status = info.getValue() as RowStatus;
+          return <Label variant={status === 'error' ? 'danger' : status === 'duplicate' ? 'attention' : 'success'}>{STATUS_TEXT[status]}</Label>;
+        },
+      }),
+      column.accessor((r) => r.error ?? (r.duplicateOf ? `${Math.round(r.duplicateOf.distanceM)} m from “${r.duplicateOf.name}”` : ''), {
+        id: 'detail',
+        header: 'Detail',
+        enableSorting: false,
+      }),
+      column.accessor((r) => r.depthFt ?? undefined, {
+        id: 'depth',
+        header: 'Depth',
+        sortUndefined: 'last',
+        meta: { numeric: true },
+        cell: (info) => formatDepth(info.row.original.depthFt, prefs.depth),
+      }),
+      column.accessor((r) => r.markedAt ?? undefined, {
+        id: 'markedAt',
+        header: 'Marked',
+        sortUndefined: 'last',
+        cell: (info) => {
+          const at = info.row.original.markedAt;
+          return at ? `${localDate(at, timeZone)} ${clockTime(at, timeZone)}` : '—';
+        },
+      }),
+      column.accessor((r) => (r.lat !== null && r.lon !== null ? `${r.lat.toFixed(5)}, ${r.lon.toFixed(5)}` : '—'), {
+        id: 'position',
+        header: 'Position',
+        enableSorting: false,
+      }),
+    ],
+    [prefs, timeZone],
+  );
+  return (
+    <DataTable
+      data={rows}
+      columns={columns}
+      caption="Waypoints in the file"
+      getRowId={(r) => String(r.index)}
+      initialSorting={[{ id: 'row', desc: false }]}
+      filterPlaceholder="Filter by name or message"
+      height={440}
+    />
+  );
+}

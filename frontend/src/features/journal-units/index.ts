@@ -1,0 +1,1 @@
+export { UnitsNote } from './components/units-note';

@@ -1,0 +1,22 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { crewApiPath, journalKeys } from '../../../lib/journal-keys';
+import type { OfficialWeighIn, WeighInsView } from '../../../lib/journal-types';
+
+/** GET /events/:eventId/weigh-ins: each day's counted bag (from the catches and the event's rules) and the totals. */
+export function useWeighIns(crewId: string, eventId: string) {
+  return useQuery({
+    queryKey: journalKeys.weighIns(crewId, eventId),
+    queryFn: () => api.get<WeighInsView>(crewApiPath(crewId, `/events/${encodeURIComponent(eventId)}/weigh-ins`)),
+  });
+}
+
+/** PUT /competition-days/:dayId/weigh-in: the official figures, which override the computed ones. Weights in lb. */
+export function useRecordWeighIn(crewId: string, eventId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ dayId, ...body }: { dayId: string } & Partial<OfficialWeighIn>) =>
+      api.request<unknown>('PUT', crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`), { body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.weighIns(crewId, eventId) }),
+  });
+}

@@ -1,0 +1,95 @@
+import type { UnitPreferences } from '@shoalbook/shared';
+import { Button, Text } from '@primer/react';
+import { useState } from 'react';
+import { FormError } from '../../../components/form/form-error';
+import { FormActions, FormStack } from '../../../components/form/form-stack';
+import { TextField } from '../../../components/form/text-field';
+import type { OfficialWeighIn } from '../../../lib/journal-types';
+import { entryToLb, parseOptional, parseWeight, readNumber, weightHint, weightInputValue } from '../../../lib/units';
+import { useRecordWeighIn } from '../api/weigh-ins-api';
+import styles from './weigh-ins.module.css';
+
+/** The scale's own figures for a day; once saved they count instead of Shoalbook's computed bag. */
+export function OfficialWeighInForm({
+  crewId,
+  eventId,
+  dayId,
+  official,
+  prefs,
+}: {
+  crewId: string;
+  eventId: string;
+  dayId: string;
+  official: OfficialWeighIn | null;
+  prefs: UnitPreferences;
+}) {
+  const [v, setV] = useState({
+    grossLb: weightInputValue(official?.grossLb, prefs.weight),
+    penaltyLb: weightInputValue(official?.penaltyLb, prefs.weight),
+    officialLb: weightInputValue(official?.officialLb, prefs.weight),
+    dayPlace: official?.dayPlace != null ? String(official.dayPlace) : '',
+    lateMinutes: official?.lateMinutes != null ? String(official.lateMinutes) : '',
+  });
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [saved, setSaved] = useState(false);
+  const record = useRecordWeighIn(crewId, eventId);
+  const f = (key: keyof typeof v) => ({
+    name: key,
+    value: v[key],
+    onChange: (e: { target: { value: string } }) => {
+      setSaved(false);
+      setV((s) => ({ ...s, [key]: e.target.value }));
+    },
+    serverError: record.error,
+    clientError: errors[key],
+  });
+  const submit = () => {
+    const found: Record<string, string> = {};
+    const weight = (key: 'grossLb' | 'penaltyLb' | 'officialLb') => {
+      const parsed = parseOptional(v[key], (t) => parseWeight(t, prefs.weight));
+      if (!parsed.ok) {
+        found[key] = parsed.error;
+        return null;
+      }
+      return parsed.entry ? entryToLb(parsed.entry) : null;
+    };
+    const whole = (key: 'dayPlace' | 'lateMinutes', min: number) => {
+      if (!v[key].trim()) return null;
+      const n = readNumber(v[key]);
+      if (n === null || !Number.isInteger(n) || n < min) found[key] = `A whole number from ${min}.`;
+      return n;
+    };
+    const body = {
+      grossLb: weight('grossLb'),
+      penaltyLb: weight('penaltyLb'),
+      officialLb: weight('officialLb'),
+      dayPlace: whole('dayPlace', 1),
+      lateMinutes: whole('lateMinutes', 0),
+    };
+    setErrors(found);
+    if (Object.keys(found).length) return;
+    record.mutate({ dayId, ...body }, { onSuccess: () => setSaved(true) });
+  };
+  return (
+    <FormStack onSubmit={submit} label="Official weigh-in">
+      <FormError error={record.error} />
+      <div className={styles.formGrid}>
+        <TextField label="Gross on the scale" caption={weightHint(prefs.weight)} {...f('grossLb')} />
+        <TextField label="Penalties" {...f('penaltyLb')} />
+        <TextField label="Official weight" {...f('officialLb')} />
+        <TextField label="Minutes late" inputMode="numeric" {...f('lateMinutes')} />
+        <TextField label="Day place" inputMode="numeric" {...f('dayPlace')} />
+      </div>
+      <FormActions>
+        <Button type="submit" loading={record.isPending}>
+          Save official figures
+        </Button>
+        {saved ? (
+          <Text size="small" role="status">
+            Saved; the official figures now count.
+          </Text>
+        ) : null}
+      </FormActions>
+    </FormStack>
+  );
+}

@@ -1,0 +1,2 @@
+export { WeighInsPanel } from './components/weigh-ins-panel';
+export { useWeighIns } from './api/weigh-ins-api';
