@@ -79,6 +79,11 @@ export class ApiClient {
     return pending;
   }
 
+  /** Drop the cached token; the next write fetches a new one. */
+  forgetCsrfToken(): void {
+    this.csrfToken = null;
+  }
+
   async request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
     const unsafe = UNSAFE_METHODS.has(method);
     let response = await this.send(method, path, options, unsafe ? await this.currentToken() : null);

@@ -56,15 +56,17 @@ const KINDS: UnitKind[] = ['weight', 'length', 'depth', 'temperature'];
 /** How weights, lengths, depths and temperatures are shown to this person; stored values are never rounded. */
 export function UnitsForm({ units }: { units: UnitPreferences }) {
   const queryClient = useQueryClient();
+  const [saved, setSaved] = useState<UnitPreferences>(units);
   const [choice, setChoice] = useState<UnitPreferences>(units);
   const mutation = useMutation({
     mutationFn: (next: UnitPreferences) => updateAccount({ units: next }),
     onSuccess: (me: MeResponse) => {
       queryClient.setQueryData(meQuery.queryKey, me);
+      setSaved(me.user.units);
       setChoice(me.user.units);
     },
   });
-  const unchanged = KINDS.every((k) => choice[k] === units[k]);
+  const unchanged = KINDS.every((k) => choice[k] === saved[k]);
 
   return (
     <FormStack label="Units" onSubmit={() => mutation.mutate(choice)}>

@@ -1,0 +1,38 @@
+import '@testing-library/jest-dom/vitest';
+import { cleanup } from '@testing-library/react';
+import { afterEach, vi } from 'vitest';
+import { api } from '../lib/api-client';
+
+// jsdom lacks these browser APIs; Primer's overlays and responsive hooks call them.
+if (!window.matchMedia) {
+  Object.defineProperty(window, 'matchMedia', {
+    writable: true,
+    value: (query: string) => ({
+      matches: false,
+      media: query,
+      onchange: null,
+      addListener: () => undefined,
+      removeListener: () => undefined,
+      addEventListener: () => undefined,
+      removeEventListener: () => undefined,
+      dispatchEvent: () => false,
+    }),
+  });
+}
+
+class ResizeObserverStub {
+  observe() {}
+  unobserve() {}
+  disconnect() {}
+}
+if (!('ResizeObserver' in window)) {
+  Object.defineProperty(window, 'ResizeObserver', { writable: true, value: ResizeObserverStub });
+  Object.defineProperty(globalThis, 'ResizeObserver', { writable: true, value: ResizeObserverStub });
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  // Each test brings its own fake server, so no token may carry over from the previous one.
+  api.forgetCsrfToken();
+});
