@@ -26,6 +26,8 @@ export class ApiClient {
   me: MeResponse | undefined;
   email = '';
   password = '';
+  /** `sb_session=…` as last set by the server, to replay it from another client in tests. */
+  sessionCookie = '';
 
   constructor(readonly app: INestApplication) {
     this.agent = request.agent(app.getHttpServer());
@@ -65,6 +67,12 @@ export class ApiClient {
     return this.send('delete', path);
   }
 
+  private captureSession(res: Response): void {
+    const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('sb_session='));
+    if (!cookie) throw new Error('the server set no session cookie');
+    this.sessionCookie = cookie.split(';')[0]!;
+  }
+
   /** Sign up through the API (fails the test on anything but 201). */
   async signUp(email = uniqueEmail(), password = GOOD_PASSWORD, displayName = 'Test Angler'): Promise<this> {
     const res = await this.post('/api/auth/sign-up', { email, password, displayName });
@@ -72,6 +80,7 @@ export class ApiClient {
     this.me = res.body as MeResponse;
     this.email = email;
     this.password = password;
+    this.captureSession(res);
     await this.refreshCsrf();
     return this;
   }
@@ -82,6 +91,7 @@ export class ApiClient {
       this.me = res.body as MeResponse;
       this.email = email;
       this.password = password;
+      this.captureSession(res);
       await this.refreshCsrf();
     }
     return res;

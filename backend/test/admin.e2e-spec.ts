@@ -1,0 +1,62 @@
+import type { INestApplication } from '@nestjs/common';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { User } from '../src/users/user.entity';
+import { ApiClient, crewWithMembers, makeAdmin, newUser } from './utils/api-client';
+import { createTestApp, testEm } from './utils/test-app';
+
+describe('site administration', () => {
+  let app: INestApplication;
+  let admin: ApiClient;
+  beforeAll(async () => {
+    app = await createTestApp();
+    admin = await newUser(app, 'admin');
+    await makeAdmin(app, admin.userId);
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('lists accounts for admins only', async () => {
+    const user = await newUser(app);
+    const res = await admin.get('/api/admin/users');
+    expect(res.status).toBe(200);
+    const row = res.body.find((u: { id: string }) => u.id === user.userId);
+    expect(row).toEqual({ id: user.userId, email: user.email, displayName: 'Test Angler', siteRole: 'user', disabled: false, createdAt: expect.any(String) });
+    expect(Object.keys(row)).not.toContain('passwordHash');
+    expect((await user.get('/api/admin/users')).status).toBe(403);
+    expect((await new ApiClient(app).get('/api/admin/users')).status).toBe(401);
+  });
+
+  it('disables an account: its sessions end and sign-in is refused; enabling lets it back in', async () => {
+    const user = await newUser(app);
+    const res = await admin.patch(`/api/admin/users/${user.userId}`, { disabled: true });
+    expect(res.status).toBe(200);
+    expect(res.body.disabled).toBe(true);
+    expect((await user.get('/api/auth/me')).status).toBe(401);
+    const signIn = await new ApiClient(app).signIn(user.email, user.password);
+    expect(signIn.status).toBe(403);
+    expect(signIn.body.code).toBe('account_disabled');
+    await admin.patch(`/api/admin/users/${user.userId}`, { disabled: false });
+    expect((await new ApiClient(app).signIn(user.email, user.password)).status).toBe(200);
+  });
+
+  it('refuses bad input, unknown accounts, non-admins and self-lockout, changing nothing', async () => {
+    const user = await newUser(app);
+    expect((await admin.patch(`/api/admin/users/${user.userId}`, { disabled: 'yes' })).status).toBe(400);
+    expect((await admin.patch(`/api/admin/users/${user.userId}`, { siteRole: 'owner' })).status).toBe(400);
+    expect((await admin.patch('/api/admin/users/00000000-0000-4000-8000-000000000000', { disabled: true })).status).toBe(404);
+    expect((await user.patch(`/api/admin/users/${user.userId}`, { siteRole: 'admin' })).status).toBe(403);
+    const self = await admin.patch(`/api/admin/users/${admin.userId}`, { disabled: true });
+    expect(self.status).toBe(409);
+    expect(self.body.code).toBe('self_lockout');
+    const rows = await testEm(app).find(User, { id: { $in: [user.userId, admin.userId] } });
+    expect(rows.map((u) => [u.siteRole, u.disabled]).sort()).toEqual([['admin', false], ['user', false]]);
+  });
+
+  it('opens no crew to the site admin', async () => {
+    const crew = await crewWithMembers(app, 'Private Crew');
+    expect((await admin.get(`/api/crews/${crew.crewId}`)).status).toBe(404);
+    expect((await admin.get(`/api/crews/${crew.crewId}/members`)).status).toBe(404);
+    expect((await admin.get('/api/crews')).body).toEqual([]);
+  });
+});
