@@ -7,3 +7,4 @@ export * from './taxonomy.js';
 export * from './journal.js';
 export * from './admin.js';
 export * from './system.js';
+export * from './reports.js';
