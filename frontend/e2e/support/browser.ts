@@ -1,0 +1,95 @@
+import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { BASE_URL } from './stack';
+
+const HERE = dirname(fileURLToPath(import.meta.url));
+const SCREENSHOTS = join(HERE, '..', 'screenshots');
+const AXE_SOURCE = readFileSync(join(HERE, '..', '..', '..', 'node_modules', 'axe-core', 'axe.min.js'), 'utf8');
+
+/** Flags for Debian's chromium on a machine with no outside network (see the handbook's stack notes). */
+const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface Browser {
+  context: BrowserContext;
+  page: Page;
+  close(): Promise<void>;
+}
+
+/** A fresh chromium profile (its own cookies) in a new temporary directory, removed on close. */
+export async function openBrowser(viewport = { width: 1280, height: 900 }): Promise<Browser> {
+  const userDataDir = mkdtempSync(join(tmpdir(), 'shoalbook-e2e-'));
+  const context = await chromium.launchPersistentContext(userDataDir, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport,
+    baseURL: BASE_URL,
+  });
+  context.setDefaultTimeout(15_000);
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    async close() {
+      await context.close();
+      rmSync(userDataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Sign in through the form and wait until the app has moved on from /sign-in. */
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => url.pathname !== '/sign-in');
+}
+
+/** Sign out through the account menu. */
+export async function signOut(page: Page): Promise<void> {
+  await page.getByRole('button', { name: /^Account menu/ }).click();
+  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await page.waitForURL((url) => url.pathname === '/sign-in');
+}
+
+export interface AxeViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: string[] }[];
+}
+
+/**
+ * Run axe-core on the page as it is now; returns the serious and critical violations in a readable form.
+ * The script is evaluated through the DevTools protocol, so the app's strict CSP stays on.
+ */
+export async function seriousAxeViolations(page: Page): Promise<string[]> {
+  await page.evaluate(AXE_SOURCE);
+  const violations = (await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: unknown[] }> } }).axe;
+    const result = await axe.run(document, { resultTypes: ['violations'] });
+    return result.violations;
+  })) as AxeViolation[];
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.impact}: ${v.id} (${v.help}) at ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}
+
+/** Save a full-page screenshot under e2e/screenshots/ (git-ignored). */
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage: true });
+}
