@@ -21,7 +21,11 @@ async function main(): Promise<void> {
   }
 }
 
-main().catch((e: unknown) => {
-  process.stderr.write(`seeding failed: ${e instanceof Error ? e.message : String(e)}\n`);
-  process.exit(1);
-});
+// Exit at once: the driver's idle timers would otherwise keep the process alive for a while.
+main().then(
+  () => process.exit(0),
+  (e: unknown) => {
+    process.stderr.write(`seeding failed: ${e instanceof Error ? e.message : String(e)}\n`);
+    process.exit(1);
+  },
+);

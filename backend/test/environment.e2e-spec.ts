@@ -1,0 +1,99 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { INestApplication } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { AppModule } from '../src/app.module';
+import { APP_OPTIONS, configureApp } from '../src/configure-app';
+import { ApiClient, newUser, uniqueEmail } from './utils/api-client';
+import { createTestApp } from './utils/test-app';
+
+describe('the development outbox', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('lists the fake SMTP server’s messages, newest first', async () => {
+    const user = await newUser(app);
+    await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
+    await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
+    let mine: Array<{ to: string; subject: string; receivedAt: string; text: string }> = [];
+    for (let i = 0; i < 100 && mine.length < 2; i++) {
+      const res = await request(app.getHttpServer()).get('/api/dev/outbox');
+      expect(res.status).toBe(200);
+      mine = res.body.filter((m: { to: string }) => m.to.includes(user.email));
+      if (mine.length < 2) await new Promise((r) => setTimeout(r, 50));
+    }
+    expect(mine).toHaveLength(2);
+    expect(mine[0]!.subject).toBe('Set a new Shoalbook password');
+    expect(mine[0]!.receivedAt >= mine[1]!.receivedAt).toBe(true);
+    expect(mine[0]!.text).toContain('/reset-password?token=');
+  });
+});
+
+describe('production mode', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp({ NODE_ENV: 'production' });
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('has no outbox route (404) while the API works', async () => {
+    expect((await request(app.getHttpServer()).get('/api/dev/outbox')).status).toBe(404);
+    expect((await request(app.getHttpServer()).get('/api/health')).status).toBe(200);
+  });
+});
+
+describe('start-up configuration', () => {
+  it('refuses to start with missing or invalid variables, naming each in one error', async () => {
+    const error = await createTestApp({ SESSION_SECRET: 'short', SMTP_PORT: 'many', APP_URL: '' }).then(
+      () => null,
+      (e: unknown) => e as Error,
+    );
+    expect(error?.message).toMatch(/environment is incomplete/);
+    expect(error?.message).toMatch(/SESSION_SECRET is invalid/);
+    expect(error?.message).toMatch(/SMTP_PORT is invalid/);
+    expect(error?.message).toMatch(/APP_URL is missing/);
+    expect(error?.message).not.toMatch(/DB_PORT/);
+  });
+});
+
+describe('serving the built front end', () => {
+  let app: INestApplication;
+  let dist: string;
+  beforeAll(async () => {
+    dist = mkdtempSync(join(tmpdir(), 'shoalbook-dist-'));
+    writeFileSync(join(dist, 'index.html'), '<!doctype html><title>Shoalbook test shell</title>');
+    writeFileSync(join(dist, 'app.js'), 'console.log(1)');
+    // serve-static only works in a real app (not inside Test.createTestingModule).
+    app = await NestFactory.create(AppModule.forRoot({ FRONTEND_DIST: dist }), { ...APP_OPTIONS, logger: ['error'] });
+    configureApp(app);
+    await app.listen(0, '127.0.0.1');
+  });
+  afterAll(async () => {
+    await app.close();
+    rmSync(dist, { recursive: true, force: true });
+  });
+
+  it('serves files, falls back to index.html for app routes, and keeps /api JSON', async () => {
+    const server = app.getHttpServer();
+    expect((await request(server).get('/app.js')).text).toBe('console.log(1)');
+    const spa = await request(server).get('/crews/some-id/settings');
+    expect(spa.status).toBe(200);
+    expect(spa.text).toContain('Shoalbook test shell');
+    expect(spa.headers['content-security-policy']).toContain("script-src 'self'");
+    const api = await request(server).get('/api/nothing-here');
+    expect(api.status).toBe(404);
+    expect(api.body).toMatchObject({ statusCode: 404 });
+    const signUp = await new ApiClient(app).post('/api/auth/sign-up', { email: uniqueEmail('static'), password: 'a fine long passphrase', displayName: 'Static' });
+    expect(signUp.status).toBe(201);
+  });
+});

@@ -1,0 +1,44 @@
+import type { INestApplication } from '@nestjs/common';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp } from './utils/test-app';
+
+interface OperationObject {
+  requestBody?: { content: Record<string, { schema: { $ref?: string } }> };
+  responses: Record<string, { content?: Record<string, { schema: unknown }> }>;
+  summary?: string;
+}
+
+describe('OpenAPI document and Swagger UI', () => {
+  let app: INestApplication;
+  let doc: { paths: Record<string, Record<string, OperationObject>>; components: { schemas: Record<string, unknown> } };
+  beforeAll(async () => {
+    app = await createTestApp();
+    doc = (await request(app.getHttpServer()).get('/api/docs-json')).body;
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('serves the Swagger UI at /api/docs', async () => {
+    const res = await request(app.getHttpServer()).get('/api/docs/');
+    expect(res.status).toBe(200);
+    expect(res.text).toContain('swagger-ui');
+  });
+
+  it('describes every operation with a summary, a 2xx answer and DTO schemas for bodies', () => {
+    const ops = Object.entries(doc.paths).flatMap(([path, item]) => Object.entries(item).map(([method, op]) => ({ key: `${method.toUpperCase()} ${path}`, op })));
+    expect(ops.length).toBeGreaterThanOrEqual(24);
+    for (const { key, op } of ops) {
+      expect(op.summary, key).toBeTruthy();
+      const success = Object.keys(op.responses).filter((s) => s.startsWith('2'));
+      expect(success.length, `${key} has no 2xx response`).toBeGreaterThan(0);
+      if (op.requestBody) {
+        const ref = op.requestBody.content['application/json']?.schema.$ref;
+        expect(ref, `${key} body has no DTO schema`).toMatch(/^#\/components\/schemas\//);
+      }
+    }
+    expect(doc.components.schemas).toHaveProperty('ApiErrorDto');
+    expect(doc.components.schemas).toHaveProperty('SignUpDto');
+  });
+});
