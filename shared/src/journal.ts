@@ -462,6 +462,7 @@ export interface JournalExport {
 
 // ---------------------------------------------------------------------------------------------
 // The append-only journal_event table (read by the read-model projections, in seq order).
+// Imports write one FindAdded (payload.source = 'gpx') or CatchLogged per imported record.
 
 export const JOURNAL_EVENT_TYPES = [
   'LakeCreated',
@@ -475,11 +476,9 @@ export const JOURNAL_EVENT_TYPES = [
   'FindAdded',
   'FindUpdated',
   'FindDeleted',
-  'FindsImported',
   'CatchLogged',
   'CatchUpdated',
   'CatchDeleted',
-  'CatchesImported',
   'WeighInRecorded',
   'PhotoUploaded',
 ] as const;

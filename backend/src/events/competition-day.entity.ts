@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, PrimaryKey, Property, Unique } from '@mikro-orm/core';
+import { Entity, OptionalProps, PrimaryKey, Property, Unique } from '@mikro-orm/core';
 
 /** One competition day of an event; created from the event's competition dates. */
 @Entity({ tableName: 'competition_days' })
 @Unique({ name: 'competition_days_event_date_unique', properties: ['eventId', 'date'] })
 export class CompetitionDay {
+  [OptionalProps]?: 'startTime' | 'checkInTime' | 'weatherNotes' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'version';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, PrimaryKey, Property, Unique } from '@mikro-orm/core';
+import { Entity, OptionalProps, PrimaryKey, Property, Unique } from '@mikro-orm/core';
 
 /** One practice (pre-fishing) day of an event; created from the event's practice dates. */
 @Entity({ tableName: 'practice_days' })
 @Unique({ name: 'practice_days_event_date_unique', properties: ['eventId', 'date'] })
 export class PracticeDay {
+  [OptionalProps]?: 'notes' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'version';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
+import { Entity, OptionalProps, Index, PrimaryKey, Property } from '@mikro-orm/core';
 
 /**
  * A tournament ("event" in the API) on a lake, with its own rules. Named TournamentEvent in code so it
@@ -8,6 +8,8 @@ import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
 @Entity({ tableName: 'events' })
 @Index({ name: 'events_crew_lake_index', properties: ['crewId', 'lakeId'] })
 export class TournamentEvent {
+  [OptionalProps]?: 'organiser' | 'practiceDates' | 'competitionDates' | 'fishPerDay' | 'minLengthIn' | 'deadFishPenaltyLb' | 'shortFishPenaltyLb' | 'latePenaltyLbPerMinute' | 'entryFee' | 'payout' | 'finalPlace' | 'notes' | 'version' | 'createdAt' | 'updatedAt';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

@@ -1,4 +1,4 @@
-import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
+import { Entity, OptionalProps, Index, PrimaryKey, Property } from '@mikro-orm/core';
 
 /**
  * The append-only journal: one row per change, written in the same transaction as the change itself.
@@ -8,6 +8,8 @@ import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
 @Index({ name: 'journal_event_crew_seq_index', properties: ['crewId', 'seq'] })
 @Index({ name: 'journal_event_aggregate_index', properties: ['aggregateId'] })
 export class JournalEvent {
+  [OptionalProps]?: 'seq' | 'actorId' | 'occurredAt';
+
   @PrimaryKey({ type: 'bigint', autoincrement: true })
   seq: string;
 

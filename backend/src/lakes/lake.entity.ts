@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
+import { Entity, OptionalProps, Index, PrimaryKey, Property } from '@mikro-orm/core';
 
 /** A lake or reservoir a crew fishes; its time zone decides the local days of its events. */
 @Entity({ tableName: 'lakes' })
 @Index({ name: 'lakes_crew_name_index', properties: ['crewId', 'name'] })
 export class Lake {
+  [OptionalProps]?: 'region' | 'areaAcres' | 'notes' | 'version' | 'createdAt' | 'updatedAt';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

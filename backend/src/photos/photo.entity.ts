@@ -1,9 +1,11 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, PrimaryKey, Property } from '@mikro-orm/core';
+import { Entity, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 
 /** A re-encoded photo or sonar screenshot (metadata stripped); the bytes live in the storage service. */
 @Entity({ tableName: 'photos' })
 export class Photo {
+  [OptionalProps]?: 'createdAt';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

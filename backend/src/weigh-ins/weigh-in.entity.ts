@@ -1,9 +1,11 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, PrimaryKey, Property } from '@mikro-orm/core';
+import { Entity, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 
 /** The official figures of one competition day, as the organiser announced them (all optional). */
 @Entity({ tableName: 'weigh_ins' })
 export class WeighIn {
+  [OptionalProps]?: 'grossLb' | 'penaltyLb' | 'officialLb' | 'dayPlace' | 'lateMinutes' | 'version' | 'updatedAt';
+
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 

@@ -1,0 +1,79 @@
+import { EntityManager } from '@mikro-orm/mariadb';
+import { Injectable } from '@nestjs/common';
+import type { CatchView } from '@shoalbook/shared';
+import type { CrewAccess } from '../common/request-context';
+import { CompetitionDay } from '../events/competition-day.entity';
+import { TournamentEvent } from '../events/tournament-event.entity';
+import { Find } from '../finds/find.entity';
+import { recordNotFound, unknownReference } from '../journal/journal-errors';
+import { canSeePositions } from '../journal/positions';
+import { Lake } from '../lakes/lake.entity';
+import { Photo } from '../photos/photo.entity';
+import { SkyService } from '../sky/sky.service';
+import { Catch } from './catch.entity';
+import type { CatchContext } from './catch-input';
+import { catchView } from './catch-view';
+
+/** Reads of a crew's catches (scoped by crew in every query) and the context checks need. */
+@Injectable()
+export class CatchesService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly sky: SkyService,
+  ) {}
+
+  async list(access: CrewAccess, filter: { eventId?: string; competitionDayId?: string; limit?: number; offset?: number }): Promise<{ views: CatchView[]; total: number }> {
+    const where = {
+      crewId: access.crewId,
+      ...(filter.eventId ? { eventId: filter.eventId } : {}),
+      ...(filter.competitionDayId ? { competitionDayId: filter.competitionDayId } : {}),
+    };
+    const [catches, total] = await this.em.findAndCount(Catch, where, { orderBy: { caughtAt: 'asc', id: 'asc' }, limit: filter.limit ?? 10_000, offset: filter.offset ?? 0 });
+    return { views: await this.views(access, catches), total };
+  }
+
+  async get(access: CrewAccess, catchId: string): Promise<CatchView> {
+    const c = await this.em.findOne(Catch, { id: catchId, crewId: access.crewId });
+    if (!c) throw recordNotFound('catch');
+    return (await this.views(access, [c]))[0]!;
+  }
+
+  async views(access: CrewAccess, catches: Catch[], em: EntityManager = this.em): Promise<CatchView[]> {
+    const crewId = access.crewId;
+    const ids = <K extends keyof Catch>(k: K) => [...new Set(catches.map((c) => c[k]).filter((v): v is NonNullable<Catch[K]> => !!v))] as string[];
+    const days = new Map((catches.length ? await em.find(CompetitionDay, { id: { $in: ids('competitionDayId') }, crewId }) : []).map((d) => [d.id, d]));
+    const findIds = ids('findId');
+    const finds = new Map((findIds.length ? await em.find(Find, { id: { $in: findIds }, crewId }, { fields: ['id', 'name'] }) : []).map((f) => [f.id, f.name]));
+    const events = new Map((catches.length ? await em.find(TournamentEvent, { id: { $in: ids('eventId') }, crewId }) : []).map((e) => [e.id, e.lakeId]));
+    const lakeIds = [...new Set(events.values())];
+    const lakes = new Map((lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId }) : []).map((l) => [l.id, l]));
+    const showPositions = canSeePositions(access);
+    return catches.map((c) => {
+      const lake = lakes.get(events.get(c.eventId)!)!;
+      return catchView(c, {
+        showPositions,
+        competitionDate: days.get(c.competitionDayId)!.date,
+        findName: c.findId ? (finds.get(c.findId) ?? null) : null,
+        sky: this.sky.at(lake, c.caughtAt),
+      });
+    });
+  }
+
+  /** The day, its event and lake, and the lake's finds: everything checking a catch on that day needs. */
+  async context(em: EntityManager, crewId: string, dayId: string): Promise<CatchContext & { event: TournamentEvent }> {
+    const day = await em.findOne(CompetitionDay, { id: dayId, crewId });
+    if (!day) throw unknownReference('competitionDayId', 'competition day');
+    const event = await em.findOneOrFail(TournamentEvent, { id: day.eventId, crewId });
+    return { ...(await this.lakeContext(em, crewId, event)), day, event };
+  }
+
+  async lakeContext(em: EntityManager, crewId: string, event: TournamentEvent): Promise<Omit<CatchContext, 'day'>> {
+    const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
+    const finds = await em.find(Find, { crewId, lakeId: lake.id }, { fields: ['id', 'name', 'lat', 'lon'] });
+    return {
+      lake,
+      finds: new Map(finds.map((f) => [f.id, { id: f.id, name: f.name, lat: f.lat, lon: f.lon }])),
+      photoIds: async (id) => (await em.count(Photo, { id, crewId })) > 0,
+    };
+  }
+}

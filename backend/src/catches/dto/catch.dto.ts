@@ -1,0 +1,52 @@
+import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { FATES, SPECIES, type Fate, type LogCatchRequest, type Species } from '@shoalbook/shared';
+import { IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import { EnteredDepthDto, EnteredLengthDto, EnteredTemperatureDto, EnteredWeightDto } from '../../measurements/entered-value.dto';
+import { ListPageDto } from '../../journal/list-query.dto';
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+export class LogCatchDto implements LogCatchRequest {
+  @ApiProperty({ format: 'uuid' }) @IsUUID() competitionDayId: string;
+  @ApiProperty({ description: 'ISO-8601 instant, or "HH:MM" lake-local on the competition day', example: '09:42' })
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(40)
+  caughtAt: string;
+  @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() findId?: string | null;
+  @ApiPropertyOptional({ nullable: true, minimum: -90, maximum: 90 }) @IsOptional() @IsNumber(finite) @Min(-90) @Max(90) lat?: number | null;
+  @ApiPropertyOptional({ nullable: true, minimum: -180, maximum: 180 }) @IsOptional() @IsNumber(finite) @Min(-180) @Max(180) lon?: number | null;
+  @ApiPropertyOptional({ default: 50, description: 'attribution radius, m' }) @IsOptional() @IsNumber(finite) @Min(1) @Max(1000) radiusM?: number;
+  @ApiProperty({ enum: SPECIES }) @IsIn([...SPECIES]) species: Species;
+  @ApiPropertyOptional({ nullable: true, description: 'inches' }) @IsOptional() @IsNumber(finite) lengthIn?: number | null;
+  @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredLengthDto) length?: EnteredLengthDto | null;
+  @ApiPropertyOptional({ description: 'decimal pounds (or give weight)' }) @IsOptional() @IsNumber(finite) weightLb?: number;
+  @ApiPropertyOptional({ type: EnteredWeightDto }) @IsOptional() @ValidateNested() @Type(() => EnteredWeightDto) weight?: EnteredWeightDto;
+  @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) lure?: string;
+  @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) technique?: string;
+  @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => EnteredTemperatureDto)
+  waterTemp?: EnteredTemperatureDto | null;
+  @ApiProperty({ enum: FATES }) @IsIn([...FATES]) fate: Fate;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() photoId?: string | null;
+}
+
+export class UpdateCatchDto extends PartialType(OmitType(LogCatchDto, ['competitionDayId'] as const)) {
+  @ApiProperty() @IsInt() @Min(1) version: number;
+}
+
+export class CatchListQueryDto extends ListPageDto {
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() eventId?: string;
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() competitionDayId?: string;
+}
+
+export class CatchImportQueryDto {
+  @ApiProperty({ format: 'uuid' }) @IsUUID() eventId: string;
+}

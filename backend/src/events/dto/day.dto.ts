@@ -1,0 +1,30 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import type { UpdateCompetitionDayRequest, UpdatePracticeDayRequest } from '@shoalbook/shared';
+import { IsInt, IsNumber, IsOptional, IsString, Matches, MaxLength, Min, ValidateNested } from 'class-validator';
+import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
+
+const finite = { allowNaN: false, allowInfinity: false };
+const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
+
+export class UpdatePracticeDayDto implements UpdatePracticeDayRequest {
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
+  @ApiProperty() @IsInt() @Min(1) version: number;
+}
+
+export class UpdateCompetitionDayDto implements UpdateCompetitionDayRequest {
+  @ApiPropertyOptional({ nullable: true, example: '06:30', description: 'lake-local HH:MM' })
+  @IsOptional()
+  @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
+  startTime?: string | null;
+  @ApiPropertyOptional({ nullable: true, example: '15:00' })
+  @IsOptional()
+  @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
+  checkInTime?: string | null;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) weatherNotes?: string;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
+  @ApiProperty() @IsInt() @Min(1) version: number;
+}

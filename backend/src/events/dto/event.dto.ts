@@ -1,0 +1,78 @@
+import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import type { CreateEventRequest, EventRules } from '@shoalbook/shared';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Max,
+  MaxLength,
+  Min,
+  Validate,
+  ValidateNested,
+  ValidatorConstraint,
+  type ValidatorConstraintInterface,
+} from 'class-validator';
+import { Trim } from '../../common/dto/common-transforms';
+import { isCalendarDate } from '../../journal/local-time';
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+@ValidatorConstraint({ name: 'calendarDates' })
+export class CalendarDatesConstraint implements ValidatorConstraintInterface {
+  validate(value: unknown): boolean {
+    return Array.isArray(value) && value.every((d) => typeof d === 'string' && isCalendarDate(d)) && new Set(value).size === value.length;
+  }
+  defaultMessage(): string {
+    return 'Give distinct calendar dates written YYYY-MM-DD.';
+  }
+}
+
+/** The event's rules; every field optional on input, defaults are common practice (5 fish, 12 in). */
+export class EventRulesDto implements Partial<EventRules> {
+  @ApiPropertyOptional({ default: 5, minimum: 1, maximum: 10 }) @IsOptional() @IsInt() @Min(1) @Max(10) fishPerDay?: number;
+  @ApiPropertyOptional({ default: 12, nullable: true, description: 'inches; null = no minimum' })
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0)
+  @Max(30)
+  minLengthIn?: number | null;
+  @ApiPropertyOptional({ default: 0.25 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) deadFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 1 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) shortFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 1 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) latePenaltyLbPerMinute?: number;
+}
+
+export class CreateEventDto implements CreateEventRequest {
+  @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
+  @ApiProperty({ maxLength: 160 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(160) name: string;
+  @ApiPropertyOptional({ maxLength: 160 }) @IsOptional() @Trim() @IsString() @MaxLength(160) organiser?: string;
+  @ApiPropertyOptional({ type: [String], example: ['2024-04-10', '2024-04-11'] })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(14)
+  @Validate(CalendarDatesConstraint)
+  practiceDates?: string[];
+  @ApiProperty({ type: [String], example: ['2024-04-12', '2024-04-13'] })
+  @IsArray()
+  @ArrayMaxSize(7)
+  @Validate(CalendarDatesConstraint)
+  competitionDates: string[];
+  @ApiPropertyOptional({ type: EventRulesDto }) @IsOptional() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?: number | null;
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?: number | null;
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+}
+
+export class UpdateEventDto extends PartialType(OmitType(CreateEventDto, ['lakeId'] as const)) {
+  @ApiProperty({ description: 'The version the change is based on' }) @IsInt() @Min(1) version: number;
+}
+
+export class EventListQueryDto {
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() lakeId?: string;
+}

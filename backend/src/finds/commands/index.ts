@@ -1,0 +1,4 @@
+import { AddFindHandler, DeleteFindHandler, UpdateFindHandler } from './find.handlers';
+import { ImportFindsHandler } from './import-finds.handler';
+
+export const FIND_COMMAND_HANDLERS = [AddFindHandler, UpdateFindHandler, DeleteFindHandler, ImportFindsHandler];

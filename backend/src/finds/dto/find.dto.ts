@@ -1,0 +1,54 @@
+import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { FIND_KINDS, FOUND_HOW, VEGETATION_DENSITIES, type AddFindRequest, type FindKind, type FoundHow, type HardnessGrade, type VegetationDensity } from '@shoalbook/shared';
+import { IsBoolean, IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import { Trim } from '../../common/dto/common-transforms';
+import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
+import { ListPageDto } from '../../journal/list-query.dto';
+
+const finite = { allowNaN: false, allowInfinity: false };
+const INSTANT = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/;
+const DATE = /^\d{4}-\d{2}-\d{2}$/;
+
+export class AddFindDto implements AddFindRequest {
+  @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
+  @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() eventId?: string | null;
+  @ApiPropertyOptional({ nullable: true, description: "One of the event's practice dates (YYYY-MM-DD)" })
+  @IsOptional()
+  @Matches(DATE, { message: 'Write the date as YYYY-MM-DD.' })
+  practiceDate?: string | null;
+  @ApiProperty({ maxLength: 120 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(120) name: string;
+  @ApiPropertyOptional({ nullable: true, description: 'ISO-8601 instant with a zone' })
+  @IsOptional()
+  @Matches(INSTANT, { message: 'Give an ISO-8601 date-time with a zone, e.g. 2024-04-12T14:03:00Z.' })
+  markedAt?: string | null;
+  @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
+  @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
+  @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
+  @ApiProperty({ enum: FIND_KINDS }) @IsIn([...FIND_KINDS]) kind: FindKind;
+  @ApiPropertyOptional({ description: 'one of the sub-kinds of the kind (FIND_SUB_KINDS), or empty' }) @IsOptional() @IsString() @MaxLength(40) subKind?: string;
+  @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 5 }) @IsOptional() @IsInt() @Min(1) @Max(5) hardness?: HardnessGrade | null;
+  @ApiPropertyOptional({ enum: VEGETATION_DENSITIES, nullable: true }) @IsOptional() @IsIn([...VEGETATION_DENSITIES]) vegetationDensity?: VegetationDensity | null;
+  @ApiPropertyOptional() @IsOptional() @IsBoolean() baitSeen?: boolean;
+  @ApiPropertyOptional({ nullable: true, minimum: 0 }) @IsOptional() @IsInt() @Min(0) @Max(10_000) fishMarked?: number | null;
+  @ApiPropertyOptional({ nullable: true, description: 'kHz' }) @IsOptional() @IsNumber(finite) @Min(10) @Max(3000) frequencyKhz?: number | null;
+  @ApiPropertyOptional({ enum: FOUND_HOW, nullable: true }) @IsOptional() @IsIn([...FOUND_HOW]) foundHow?: FoundHow | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => EnteredTemperatureDto)
+  waterTemp?: EnteredTemperatureDto | null;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() photoId?: string | null;
+}
+
+export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const)) {
+  @ApiProperty() @IsInt() @Min(1) version: number;
+}
+
+export class FindListQueryDto extends ListPageDto {
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() lakeId?: string;
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() eventId?: string;
+}

@@ -1,0 +1,37 @@
+import { Body, Controller, Get, Param, Put } from '@nestjs/common';
+import { CommandBus } from '@nestjs/cqrs';
+import { ApiCookieAuth, ApiOperation, ApiTags } from '@nestjs/swagger';
+import type { OfficialWeighIn, WeighInsView } from '@shoalbook/shared';
+import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import type { CrewAccess } from '../common/request-context';
+import { RecordIdPipe } from '../journal/record-id.pipe';
+import { RecordWeighInCommand } from './commands/record-weigh-in.command';
+import { RecordWeighInDto } from './weigh-in.dto';
+import { WeighInsService } from './weigh-ins.service';
+
+@ApiTags('weigh-ins')
+@ApiCookieAuth()
+@CrewRoute()
+@Controller('crews/:crewId')
+export class WeighInsController {
+  constructor(
+    private readonly commands: CommandBus,
+    private readonly weighIns: WeighInsService,
+  ) {}
+
+  @Get('events/:eventId/weigh-ins')
+  @ApiOperation({ summary: "Each competition day's computed bag (event rules) beside the official figures, and the event totals" })
+  list(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<WeighInsView> {
+    return this.weighIns.forEvent(access, eventId);
+  }
+
+  @Put('competition-days/:dayId/weigh-in')
+  @ApiOperation({ summary: "Record a day's official weigh-in figures (they override the computed ones in the totals)" })
+  record(
+    @CurrentCrew() access: CrewAccess,
+    @Param('dayId', new RecordIdPipe('competition day')) dayId: string,
+    @Body() dto: RecordWeighInDto,
+  ): Promise<OfficialWeighIn & { competitionDayId: string }> {
+    return this.commands.execute(new RecordWeighInCommand(access, dayId, dto));
+  }
+}

@@ -1,0 +1,46 @@
+import { EntityManager } from '@mikro-orm/mariadb';
+import { Injectable } from '@nestjs/common';
+import type { OfficialWeighIn, WeighInsView } from '@shoalbook/shared';
+import { Catch } from '../catches/catch.entity';
+import { CatchesService } from '../catches/catches.service';
+import type { CrewAccess } from '../common/request-context';
+import { CompetitionDay } from '../events/competition-day.entity';
+import { EventsService } from '../events/events.service';
+import { computeDayBag } from './day-bag';
+import { WeighIn } from './weigh-in.entity';
+
+export function officialOf(w: WeighIn | undefined): OfficialWeighIn | null {
+  return w ? { grossLb: w.grossLb, penaltyLb: w.penaltyLb, officialLb: w.officialLb, dayPlace: w.dayPlace, lateMinutes: w.lateMinutes } : null;
+}
+
+const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
+
+/** The event's weigh-ins: per day the computed bag beside the official figures, and the totals. */
+@Injectable()
+export class WeighInsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly events: EventsService,
+    private readonly catches: CatchesService,
+  ) {}
+
+  async forEvent(access: CrewAccess, eventId: string): Promise<WeighInsView> {
+    const event = await this.events.get(access.crewId, eventId);
+    const days = await this.em.find(CompetitionDay, { crewId: access.crewId, eventId }, { orderBy: { date: 'asc' } });
+    const dayIds = days.map((d) => d.id);
+    const catches = dayIds.length ? await this.em.find(Catch, { crewId: access.crewId, competitionDayId: { $in: dayIds } }, { orderBy: { caughtAt: 'asc', id: 'asc' } }) : [];
+    const weighIns = new Map((dayIds.length ? await this.em.find(WeighIn, { crewId: access.crewId, competitionDayId: { $in: dayIds } }) : []).map((w) => [w.competitionDayId, w]));
+    const views = new Map((await this.catches.views(access, catches)).map((v) => [v.id, v]));
+    let computedNetLb = 0;
+    let officialLb = 0;
+    const out = days.map((day) => {
+      const dayCatches = catches.filter((c) => c.competitionDayId === day.id);
+      const official = officialOf(weighIns.get(day.id));
+      const computed = computeDayBag(dayCatches, event, official?.lateMinutes ?? null);
+      computedNetLb += computed.netLb;
+      officialLb += official?.officialLb ?? computed.netLb;
+      return { competitionDayId: day.id, date: day.date, computed, official, catches: dayCatches.map((c) => views.get(c.id)!) };
+    });
+    return { days: out, totals: { computedNetLb: clean(computedNetLb), officialLb: clean(officialLb), finalPlace: event.finalPlace } };
+  }
+}
