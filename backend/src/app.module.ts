@@ -15,6 +15,7 @@ import { CrewsModule } from './crews/crews.module';
 import { buildOrmConfig } from './database/mikro-orm.config';
 import { DevOutboxModule } from './dev-outbox/dev-outbox.module';
 import { HealthModule } from './health/health.module';
+import { JournalModule } from './journal/journal.module';
 import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
 
@@ -46,6 +47,7 @@ export class AppModule {
         AuthModule,
         CrewsModule,
         AdminModule,
+        JournalModule,
         ...(raw.NODE_ENV === 'production' ? [] : [DevOutboxModule]),
         ...(serveFrontend ? [ServeStaticModule.forRoot({ rootPath: frontendDist!, exclude: ['/api/{*path}'] })] : []),
       ],

@@ -3,10 +3,11 @@ import { Session } from '../auth/session.entity';
 import { Crew } from '../crews/crew.entity';
 import { Invite } from '../crews/invite.entity';
 import { Membership } from '../crews/membership.entity';
+import { JOURNAL_ENTITIES } from '../journal/journal-entities';
 import { User } from '../users/user.entity';
 
 /**
  * Every entity, listed once. Features add theirs here (discovery by reflect-metadata needs the classes,
  * not folder globs, so the same list works under tsc, vitest and the CLI).
  */
-export const ENTITIES = [User, Session, AuthToken, Crew, Membership, Invite];
+export const ENTITIES = [User, Session, AuthToken, Crew, Membership, Invite, ...JOURNAL_ENTITIES];
