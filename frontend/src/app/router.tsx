@@ -2,7 +2,9 @@ import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { homeRedirect, redirectIfSignedIn, requireUser } from '../lib/auth';
+import { reportRoutes } from '../features/reports/routes/report-routes';
 import { RootErrorBoundary, RootHydrateFallback, RootLayout } from './routes/root';
+import { journalRoutes } from './routes/app/crews/journal/journal-routes';
 
 /**
  * Route table. Each screen is a lazy module (its own chunk); guards that need the query cache are loaders
@@ -35,6 +37,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, lazy: () => import('./routes/app/crews/crew-home') },
                 { path: paths.crewSettings.path, lazy: () => import('./routes/app/crews/crew-settings') },
+                ...reportRoutes,
+                ...journalRoutes,
               ],
             },
             { path: paths.account.path, lazy: () => import('./routes/app/account') },

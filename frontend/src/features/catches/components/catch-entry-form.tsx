@@ -363,8 +363,8 @@ export function CatchEntryForm({
               Logged {formatWeight(logged.weightLb, prefs.weight)} {SPECIES_LABELS[logged.species].toLowerCase()} at {clockTime(logged.caughtAt, lake.timeZone)}
               {logged.findId
                 ? logged.attributionDistanceM !== null
-                  ? `, attributed to ${findName(logged.findId)} (${Math.round(logged.attributionDistanceM)} m away)`
-                  : `, from ${findName(logged.findId)}`
+                  ? `, attributed to ${logged.findName ?? findName(logged.findId)} (${Math.round(logged.attributionDistanceM)} m away)`
+                  : `, from ${logged.findName ?? findName(logged.findId)}`
                 : byCoordinates || logged.lat !== null
                   ? ', no find within the radius'
                   : ''}

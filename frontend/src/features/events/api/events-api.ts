@@ -3,6 +3,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
 import type { CompetitionDayView, PracticeDayView } from '../../../lib/journal-types';
+import type { TemperatureEntry } from '../../../lib/units';
 
 /** Body of POST /events and PATCH /events/:eventId. Rules in storage units (lb, in). */
 export interface EventInput {
@@ -57,8 +58,12 @@ export function useEventDays(crewId: string, eventId: string) {
 export function useSaveEvent(crewId: string, eventId?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: EventInput) =>
-      eventId ? api.patch<EventView>(eventPath(crewId, eventId), input) : api.post<EventView>(crewApiPath(crewId, '/events'), input),
+    // The lake of an event is fixed once created; a PATCH carries the version it was based on (409 when stale).
+    mutationFn: ({ version, ...input }: EventInput & { version?: number }) => {
+      if (!eventId) return api.post<EventView>(crewApiPath(crewId, '/events'), input);
+      const { lakeId: _fixed, ...changes } = input;
+      return api.patch<EventView>(eventPath(crewId, eventId), { ...changes, version });
+    },
     onSuccess: async (event) => {
       queryClient.setQueryData(journalKeys.event(crewId, event.id), event);
       await Promise.all([
@@ -82,7 +87,7 @@ export function useDeleteEvent(crewId: string) {
 export function useUpdateCompetitionDay(crewId: string, eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ dayId, ...body }: { dayId: string; startTime?: string | null; checkInTime?: string | null; weatherNotes?: string; waterTempF?: number | null }) =>
+    mutationFn: ({ dayId, ...body }: { dayId: string; version: number; startTime?: string | null; checkInTime?: string | null; weatherNotes?: string; waterTemp?: TemperatureEntry | null }) =>
       api.patch<CompetitionDayView>(crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}`), body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
   });

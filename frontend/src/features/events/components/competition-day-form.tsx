@@ -6,7 +6,7 @@ import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField } from '../../../components/form/text-field';
 import { dayLabel, isClockTime } from '../../../lib/lake-time';
 import type { CompetitionDayView } from '../../../lib/journal-types';
-import { entryToF, parseOptional, parseTemperature, temperatureInputValue, UNIT_SIGNS } from '../../../lib/units';
+import { parseOptional, parseTemperature, temperatureInputValue, UNIT_SIGNS } from '../../../lib/units';
 import { useUpdateCompetitionDay } from '../api/events-api';
 import styles from './event-form.module.css';
 
@@ -30,16 +30,17 @@ export function CompetitionDayForm({ crewId, eventId, day, prefs }: { crewId: st
     if (values.startTime && !isClockTime(values.startTime)) found.startTime = 'A 24-hour time like 06:15.';
     if (values.checkInTime && !isClockTime(values.checkInTime)) found.checkInTime = 'A 24-hour time like 15:00.';
     const temp = parseOptional(values.waterTemp, (t) => parseTemperature(t, prefs.temperature));
-    if (!temp.ok) found.waterTempF = temp.error;
+    if (!temp.ok) found.waterTemp = temp.error;
     setErrors(found);
     if (Object.keys(found).length || !temp.ok) return;
     update.mutate(
       {
         dayId: day.id,
+        version: day.version,
         startTime: values.startTime || null,
         checkInTime: values.checkInTime || null,
         weatherNotes: values.weatherNotes,
-        waterTempF: temp.entry ? entryToF(temp.entry) : null,
+        waterTemp: temp.entry,
       },
       { onSuccess: () => setSaved(true) },
     );
@@ -51,7 +52,7 @@ export function CompetitionDayForm({ crewId, eventId, day, prefs }: { crewId: st
       <div className={styles.pair}>
         <TextField label="Start (lake time)" placeholder="06:15" inputMode="numeric" {...f('startTime')} />
         <TextField label="Check-in (lake time)" placeholder="15:00" inputMode="numeric" {...f('checkInTime')} />
-        <TextField label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`} inputMode="decimal" {...f('waterTemp', 'waterTempF')} />
+        <TextField label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`} inputMode="decimal" {...f('waterTemp', 'waterTemp')} />
       </div>
       <TextField label="Weather" placeholder="Wind, sky, front, pressure" {...f('weatherNotes')} />
       <FormActions>

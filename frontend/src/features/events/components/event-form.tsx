@@ -148,7 +148,7 @@ export function EventForm({
   const submit = () => {
     const { input, errors: found } = validateEvent(values, prefs);
     setErrors(found);
-    if (input) save.mutate(input, { onSuccess: onSaved });
+    if (input) save.mutate(event ? { ...input, version: event.version } : input, { onSuccess: onSaved });
   };
   const lakeMessages = [...(errors.lakeId ? [errors.lakeId] : []), ...fieldMessages(save.error, 'lakeId')];
   const wSign = prefs.weight === 'lb-oz' ? 'lb-oz' : UNIT_SIGNS[prefs.weight];

@@ -52,8 +52,12 @@ export function useFind(crewId: string, findId: string | undefined) {
 export function useSaveFind(crewId: string, findId?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: FindInput) =>
-      findId ? api.patch<FindWithSky>(findPath(crewId, findId), input) : api.post<FindWithSky>(crewApiPath(crewId, '/finds'), input),
+    // The lake of a find is fixed once recorded; a PATCH carries the version it was based on (409 when stale).
+    mutationFn: ({ version, ...input }: FindInput & { version?: number }) => {
+      if (!findId) return api.post<FindWithSky>(crewApiPath(crewId, '/finds'), input);
+      const { lakeId: _fixed, ...changes } = input;
+      return api.patch<FindWithSky>(findPath(crewId, findId), { ...changes, version });
+    },
     onSuccess: (find) => {
       queryClient.setQueryData(journalKeys.find(crewId, find.id), find);
       return queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) });

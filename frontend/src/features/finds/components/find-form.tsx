@@ -215,7 +215,7 @@ export function FindForm({
   const submit = () => {
     const { input, errors: found } = validateFind(v, lake, prefs);
     setErrors(found);
-    if (input) save.mutate(input, { onSuccess: onSaved });
+    if (input) save.mutate(find ? { ...input, version: find.version } : input, { onSuccess: onSaved });
   };
 
   return (

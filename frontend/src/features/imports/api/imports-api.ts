@@ -5,8 +5,8 @@ import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys
 import type { CsvPreview, GpxPreview, ImportResult } from '../../../lib/journal-types';
 import { uploadFile, type UploadProgress } from '../../../lib/upload';
 
-/** Largest file the import screens send; the server enforces its own limit too. */
-export const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
+/** Largest files the import screens send (the server's limits: GPX 20 MB, CSV 5 MB); the server checks again. */
+export const MAX_IMPORT_BYTES = { gpx: 20 * 1024 * 1024, csv: 5 * 1024 * 1024 } as const;
 
 export interface GpxTarget {
   lakeId: string;
@@ -62,6 +62,7 @@ export function fileProblem(file: File, kind: 'gpx' | 'csv'): string | null {
   if (kind === 'gpx' && extension !== 'gpx') return 'Choose a GPX file (its name ends in .gpx).';
   if (kind === 'csv' && extension !== 'csv') return 'Choose a CSV file (its name ends in .csv).';
   if (file.size === 0) return 'The file is empty.';
-  if (file.size > MAX_IMPORT_BYTES) return `The file is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${MAX_IMPORT_BYTES / 1024 / 1024} MB.`;
+  const limit = MAX_IMPORT_BYTES[kind];
+  if (file.size > limit) return `The file is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${limit / 1024 / 1024} MB.`;
   return null;
 }

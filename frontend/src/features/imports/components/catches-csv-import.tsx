@@ -1,4 +1,4 @@
-import type { EventView } from '@shoalbook/shared';
+import type { EventView, UnitPreferences } from '@shoalbook/shared';
 import { DownloadIcon } from '@primer/octicons-react';
 import { Banner, Button, FormControl, Label, LinkButton, Select, Text } from '@primer/react';
 import { useId, useState } from 'react';
@@ -7,22 +7,27 @@ import { ErrorState } from '../../../components/feedback/query-states';
 import type { CsvPreview, CsvPreviewRow, ImportResult } from '../../../lib/journal-types';
 import type { UploadProgress } from '../../../lib/upload';
 import { catchesTemplateUrl, commitCatchesCsv, fileProblem, previewCatchesCsv, useAfterImport } from '../api/imports-api';
+import { CsvPreviewTable } from './csv-preview-table';
 import { UploadProgressBar } from './upload-progress';
 import styles from './imports.module.css';
 
-/** The messages of one preview row, whichever way the server groups them. */
+/** The messages of one preview row, each with the column it concerns. */
 export function rowErrors(row: CsvPreviewRow): string[] {
-  const out: string[] = [];
-  if (row.error) out.push(row.error);
-  if (Array.isArray(row.errors)) out.push(...row.errors);
-  else if (row.errors) for (const [field, msgs] of Object.entries(row.errors)) out.push(...msgs.map((m) => `${field}: ${m}`));
-  return out;
+  return row.errors.map((e) => (e.field ? `${e.field}: ${e.message}` : e.message));
 }
 
-const rowNumber = (row: CsvPreviewRow, i: number) => row.row ?? (row.index !== undefined ? row.index + 2 : i + 2);
-
 /** Catches from a spreadsheet: download the template, fill it in, check it row by row, then import it in one go. */
-export function CatchesCsvImport({ crewId, events, defaultEventId }: { crewId: string; events: EventView[]; defaultEventId?: string }) {
+export function CatchesCsvImport({
+  crewId,
+  events,
+  prefs,
+  defaultEventId,
+}: {
+  crewId: string;
+  events: EventView[];
+  prefs: UnitPreferences;
+  defaultEventId?: string;
+}) {
   const [eventId, setEventId] = useState(defaultEventId ?? events[0]?.id ?? '');
   const [file, setFile] = useState<File | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -67,7 +72,6 @@ export function CatchesCsvImport({ crewId, events, defaultEventId }: { crewId: s
   if (events.length === 0) {
     return <Text as="p">Add an event with its competition days first; imported catches belong to one of its days.</Text>;
   }
-  const bad = preview ? preview.rows.filter((r) => rowErrors(r).length) : [];
   return (
     <div className={styles.panel}>
       <FishCareCaution />
@@ -115,32 +119,14 @@ export function CatchesCsvImport({ crewId, events, defaultEventId }: { crewId: s
       </div>
       <UploadProgressBar progress={progress} what={file?.name ?? 'the file'} />
       {failure ? <ErrorState error={failure} title="The file could not be read" /> : null}
-      {result ? <Banner variant="success" title={`${result.imported} catches imported`} description={result.skipped ? `${result.skipped} rows skipped.` : 'Every row is in.'} /> : null}
+      {result ? <Banner variant="success" title={`${result.imported} catches imported`} description="Every row is in, in one go." /> : null}
       {preview ? (
         <>
           <div className={styles.summary} aria-live="polite">
             <Label variant="success">{preview.accepted} rows ready</Label>
             <Label variant="danger">{preview.rejected} rows with errors</Label>
           </div>
-          {bad.length ? (
-            <table>
-              <caption>Rows that need fixing</caption>
-              <thead>
-                <tr>
-                  <th scope="col">Row</th>
-                  <th scope="col">What is wrong</th>
-                </tr>
-              </thead>
-              <tbody>
-                {bad.map((row, i) => (
-                  <tr key={i}>
-                    <td>{rowNumber(row, i)}</td>
-                    <td>{rowErrors(row).join('; ')}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          ) : null}
+          <CsvPreviewTable rows={preview.rows} prefs={prefs} />
           <div className={styles.actions}>
             <Button variant="primary" onClick={commit} disabled={progress !== null || preview.accepted === 0 || preview.rejected > 0}>
               {`Import ${preview.accepted} catches`}

@@ -18,6 +18,15 @@ export function rowStatus(row: GpxPreviewRow): RowStatus {
 const STATUS_TEXT: Record<RowStatus, string> = { ready: 'Ready', duplicate: 'Near an existing find', error: 'Cannot import' };
 const column = createColumnHelper<GpxPreviewRow>();
 
+/** Which find (or which earlier waypoint of the same file) a row sits on top of, and how far away. */
+export function duplicateText(row: GpxPreviewRow): string {
+  const d = row.duplicateOf;
+  if (!d) return '';
+  const metres = `${Math.round(d.distanceM)} m`;
+  if (d.inFile) return `${metres} from waypoint ${d.rowIndex !== undefined ? d.rowIndex + 1 : ''} “${d.name}” earlier in this file`.replace('  ', ' ');
+  return `${metres} from the find “${d.name}”`;
+}
+
 /** What the GPX file holds, waypoint by waypoint: ready, within 15 m of an existing find (which, how far), or refused (why). */
 export function GpxPreviewTable({ rows, prefs, timeZone }: { rows: GpxPreviewRow[]; prefs: UnitPreferences; timeZone: string }) {
   const columns = useMemo(
@@ -33,7 +42,7 @@ export function GpxPreviewTable({ rows, prefs, timeZone }: { rows: GpxPreviewRow
           return <Label variant={status === 'error' ? 'danger' : status === 'duplicate' ? 'attention' : 'success'}>{STATUS_TEXT[status]}</Label>;
         },
       }),
-      column.accessor((r) => r.error ?? (r.duplicateOf ? `${Math.round(r.duplicateOf.distanceM)} m from “${r.duplicateOf.name}”` : ''), {
+      column.accessor((r) => r.error ?? duplicateText(r), {
         id: 'detail',
         header: 'Detail',
         enableSorting: false,

@@ -37,9 +37,10 @@ export function useLake(crewId: string, lakeId: string | undefined) {
 export function useSaveLake(crewId: string, lakeId?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: LakeInput) =>
+    // A PATCH carries the version it was based on: a change made meanwhile elsewhere answers 409 instead of being overwritten.
+    mutationFn: ({ version, ...input }: LakeInput & { version?: number }) =>
       lakeId
-        ? api.patch<LakeView>(crewApiPath(crewId, `/lakes/${encodeURIComponent(lakeId)}`), input)
+        ? api.patch<LakeView>(crewApiPath(crewId, `/lakes/${encodeURIComponent(lakeId)}`), { ...input, version })
         : api.post<LakeView>(crewApiPath(crewId, '/lakes'), input),
     onSuccess: (lake) => {
       queryClient.setQueryData(journalKeys.lake(crewId, lake.id), lake);

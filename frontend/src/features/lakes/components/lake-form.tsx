@@ -54,7 +54,7 @@ export function LakeForm({ crewId, lake, onSaved, onCancel }: { crewId: string; 
   const submit = () => {
     const { input, errors: found } = validateLake(values);
     setErrors(found);
-    if (input) save.mutate(input, { onSuccess: onSaved });
+    if (input) save.mutate(lake ? { ...input, version: lake.version } : input, { onSuccess: onSaved });
   };
 
   const common = (key: keyof LakeInput) => ({ name: key, value: values[key], onChange: set(key), serverError: save.error, clientError: errors[key] });

@@ -1,6 +1,7 @@
-import { BookIcon, GearIcon, type Icon } from '@primer/octicons-react';
+import { BookIcon, GearIcon, GraphIcon, type Icon } from '@primer/octicons-react';
 import type { CrewRole } from '@shoalbook/shared';
 import { paths } from '../../../../config/paths';
+import { JOURNAL_SECTIONS } from './journal/journal-sections';
 
 /**
  * The sections of a crew, in navigation order. Each is a child route of /crews/:crewId. To add one
@@ -19,5 +20,7 @@ export interface CrewSection {
 
 export const CREW_SECTIONS: readonly CrewSection[] = [
   { id: 'journal', label: 'Journal', icon: BookIcon, href: paths.crew.href, end: true },
+  ...JOURNAL_SECTIONS,
+  { id: 'reports', label: 'Reports', icon: GraphIcon, href: (crewId: string) => `${paths.crew.href(crewId)}/reports`, end: false },
   { id: 'settings', label: 'Crew & members', icon: GearIcon, href: paths.crewSettings.href, end: false },
 ];

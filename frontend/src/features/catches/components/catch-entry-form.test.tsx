@@ -1,0 +1,227 @@
+import type { CatchView, FindView, LakeView, UnitPreferences } from '@shoalbook/shared';
+import { screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
+import { renderWithApp } from '../../../testing/render';
+import { CatchEntryForm } from './catch-entry-form';
+
+const lake: LakeView = { id: 'l1', name: 'Test Reservoir', region: 'Test', timeZone: 'America/Chicago', lat: 34.5, lon: -86.2, areaAcres: null, notes: '', version: 1 };
+const find = (id: string, name: string): FindView => ({
+  id,
+  lakeId: 'l1',
+  eventId: null,
+  practiceDate: null,
+  name,
+  markedAt: null,
+  lat: 34.5,
+  lon: -86.2,
+  depthFt: 14,
+  kind: 'hard-bottom',
+  subKind: 'shell',
+  hardness: 4,
+  vegetationDensity: null,
+  baitSeen: false,
+  fishMarked: null,
+  frequencyKhz: null,
+  foundHow: null,
+  waterTempF: null,
+  notes: '',
+  photoId: null,
+});
+const finds = [find('f1', 'North shell bar'), find('f2', 'Rock pile')];
+const prefs: UnitPreferences = { weight: 'lb-oz', length: 'in', depth: 'ft', temperature: 'F' };
+const day = { id: 'd1', date: '2025-04-12' };
+// 12:42 UTC is 07:42 in Chicago (CDT, UTC−5, per the IANA tz database).
+const now = () => new Date('2025-04-12T12:42:00Z');
+const csrf = { status: 200, body: { csrfToken: 'tok' } };
+
+/** The server's answer to a logged catch, built from what was sent (as the real one is). */
+function savedCatch(request: SeenRequest, extra: Partial<CatchView> = {}): CatchView {
+  const body = request.body as { caughtAt: string; species: CatchView['species']; findId?: string; fate: CatchView['fate']; weight: { value: number; ounces?: number } };
+  const [hh, mm] = body.caughtAt.split(':').map(Number);
+  return {
+    id: `c-${hh}${mm}`,
+    eventId: 'e1',
+    competitionDate: day.date,
+    caughtAt: new Date(Date.UTC(2025, 3, 12, hh + 5, mm)).toISOString(),
+    findId: body.findId ?? null,
+    attributionDistanceM: null,
+    lat: null,
+    lon: null,
+    species: body.species,
+    lengthIn: null,
+    weightLb: body.weight.value + (body.weight.ounces ?? 0) / 16,
+    lure: '',
+    technique: '',
+    depthFt: null,
+    waterTempF: null,
+    fate: body.fate,
+    photoId: null,
+    weightFlagged: false,
+    findName: finds.find((f) => f.id === body.findId)?.name ?? null,
+    ...extra,
+  };
+}
+
+function renderForm() {
+  return renderWithApp(<CatchEntryForm crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />);
+}
+
+beforeEach(() => localStorage.clear());
+
+describe('CatchEntryForm (fast keyboard entry)', () => {
+  it('logs catch after catch by keyboard alone: Enter sends, the form clears and focus returns to the time', async () => {
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({ status: 201, body: savedCatch(request) }),
+    }).install();
+    const user = userEvent.setup();
+    renderForm();
+
+    const time = screen.getByRole('textbox', { name: /time/i });
+    expect(time).toHaveFocus();
+    expect(time).toHaveValue('07:42');
+
+    await user.tab(); // species, already largemouth
+    expect(screen.getByRole('combobox', { name: 'Species' })).toHaveFocus();
+    await user.tab();
+    await user.keyboard('3-7');
+    await user.tab();
+    await user.keyboard('16.5');
+    await user.tab();
+    await user.keyboard('North shell bar');
+    await user.keyboard('{Enter}');
+
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
+    expect(net.to('POST /api/crews/c1/catches')[0].body).toEqual({
+      competitionDayId: 'd1',
+      caughtAt: '07:42',
+      findId: 'f1',
+      species: 'largemouth',
+      weight: { value: 3, unit: 'lb-oz', ounces: 7 },
+      length: { value: 16.5, unit: 'in' },
+      lure: '',
+      technique: '',
+      depth: null,
+      waterTemp: null,
+      fate: 'weighed',
+    });
+    expect(await screen.findByText(/Logged 3 lb 7\.0 oz largemouth at 07:42, from North shell bar/)).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: /weight/i })).toHaveValue('');
+    expect(screen.getByRole('combobox', { name: /find/i })).toHaveValue('');
+    expect(time).toHaveFocus();
+
+    // Second fish: a new time typed over the prefilled one, a smallmouth chosen by keyboard, Enter from the fate select.
+    await user.clear(time);
+    await user.keyboard('08:05');
+    await user.tab();
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Species' }), 'smallmouth');
+    await user.tab();
+    await user.keyboard('2-15');
+    await user.tab(); // length
+    await user.tab(); // find
+    await user.tab(); // attribute from coordinates
+    await user.tab(); // fate
+    expect(screen.getByRole('combobox', { name: 'Fate' })).toHaveFocus();
+    await user.keyboard('{Enter}');
+
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(2));
+    expect(net.to('POST /api/crews/c1/catches')[1].body).toMatchObject({
+      caughtAt: '08:05',
+      species: 'smallmouth',
+      weight: { value: 2, unit: 'lb-oz', ounces: 15 },
+      length: null,
+    });
+    expect(await screen.findByText(/Logged 2 lb 15\.0 oz smallmouth at 08:05/)).toBeInTheDocument();
+    expect(time).toHaveFocus();
+    // The species just used stays chosen for the next fish.
+    expect(screen.getByRole('combobox', { name: 'Species' })).toHaveValue('smallmouth');
+  });
+
+  it('shows the server’s field errors beside their fields and keeps what was typed', async () => {
+    fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': {
+        status: 400,
+        body: {
+          statusCode: 400,
+          error: 'Bad Request',
+          message: 'Some fields need attention.',
+          fieldErrors: {
+            caughtAt: ['The catch time falls on 2025-04-13 (lake time), not on the competition day 2025-04-12.'],
+            weight: ['A weight must be more than 0 and at most 25 lb.'],
+          },
+          requestId: 'r1',
+        },
+      },
+    }).install();
+    const user = userEvent.setup();
+    renderForm();
+
+    await user.tab();
+    await user.tab();
+    await user.keyboard('30-2{Enter}');
+
+    const time = screen.getByRole('textbox', { name: /time/i });
+    const weight = screen.getByRole('textbox', { name: /weight/i });
+    await waitFor(() => expect(time).toHaveAccessibleDescription(/not on the competition day 2025-04-12/));
+    expect(weight).toHaveAccessibleDescription(/at most 25 lb/);
+    expect(time).not.toHaveAccessibleDescription(/25 lb/);
+    expect(weight).toHaveValue('30-2');
+    expect(screen.getByText(/That catch was not logged/)).toBeInTheDocument();
+  });
+
+  it('catches a bad entry before sending: ounces over 15 and an unknown find', async () => {
+    const net = fakeNetwork({ 'GET /api/auth/csrf': csrf }).install();
+    const user = userEvent.setup();
+    renderForm();
+
+    await user.tab();
+    await user.tab();
+    await user.keyboard('3-18');
+    await user.tab();
+    await user.tab();
+    await user.keyboard('Nowhere hump{Enter}');
+
+    expect(screen.getByRole('textbox', { name: /weight/i })).toHaveAccessibleDescription(/16 oz make a pound/);
+    expect(screen.getByRole('combobox', { name: /find/i })).toHaveAccessibleDescription(/No find by that name/);
+    expect(net.to('POST /api/crews/c1/catches')).toHaveLength(0);
+  });
+
+  it('attributes from coordinates, says to which find and how far, and flags a weight that does not fit', async () => {
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({
+        status: 201,
+        body: savedCatch(request, { findId: 'f2', findName: 'Rock pile', attributionDistanceM: 23.4, lat: 34.5001, lon: -86.2002, weightFlagged: true }),
+      }),
+    }).install();
+    const user = userEvent.setup();
+    renderForm();
+
+    await user.tab();
+    await user.tab();
+    await user.keyboard('9-0');
+    await user.tab();
+    await user.keyboard('12');
+    await user.tab(); // find
+    await user.tab(); // "attribute from coordinates"
+    await user.keyboard(' ');
+    expect(screen.getByRole('checkbox', { name: /coordinates/i })).toBeChecked();
+    // The coordinate fields take the find field's place, just before the checkbox.
+    await user.tab({ shift: true });
+    await user.tab({ shift: true });
+    expect(screen.getByRole('textbox', { name: 'Latitude' })).toHaveFocus();
+    await user.keyboard('34.5001');
+    await user.tab();
+    await user.keyboard('-86.2002{Enter}');
+
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
+    const body = net.to('POST /api/crews/c1/catches')[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({ lat: 34.5001, lon: -86.2002 });
+    expect(body).not.toHaveProperty('findId');
+    expect(await screen.findByText(/attributed to Rock pile \(23 m away\)/)).toBeInTheDocument();
+    expect(screen.getByText(/Check this weight/)).toBeInTheDocument();
+  });
+});

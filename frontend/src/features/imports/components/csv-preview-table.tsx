@@ -1,0 +1,69 @@
+import type { UnitPreferences } from '@shoalbook/shared';
+import { Label } from '@primer/react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import { DataTable } from '../../../components/data-table/data-table';
+import type { CsvPreviewRow } from '../../../lib/journal-types';
+import { formatLength, formatWeight } from '../../../lib/units';
+
+const column = createColumnHelper<CsvPreviewRow>();
+
+/** Every row of a catch CSV as the server read it: its values in the user's units, or what is wrong with it. */
+export function CsvPreviewTable({ rows, prefs }: { rows: CsvPreviewRow[]; prefs: UnitPreferences }) {
+  const columns = useMemo(
+    () => [
+      column.accessor('line', { header: 'Line', meta: { numeric: true } }),
+      column.accessor((r) => (r.errors.length ? 'error' : 'ready'), {
+        id: 'status',
+        header: 'Status',
+        meta: {
+          filterOptions: [
+            { value: 'ready', label: 'Ready' },
+            { value: 'error', label: 'Needs fixing' },
+          ],
+        },
+        cell: (info) =>
+          info.getValue() === 'error' ? <Label variant="danger">Needs fixing</Label> : <Label variant="success">Ready</Label>,
+      }),
+      column.accessor((r) => r.errors.map((e) => (e.field ? `${e.field}: ${e.message}` : e.message)).join('; '), {
+        id: 'problems',
+        header: 'What is wrong',
+        enableSorting: false,
+      }),
+      column.accessor((r) => r.caughtAt ?? '', { id: 'caughtAt', header: 'Time' }),
+      column.accessor((r) => r.species ?? '', { id: 'species', header: 'Species' }),
+      column.accessor((r) => r.weightLb ?? undefined, {
+        id: 'weight',
+        header: 'Weight',
+        sortUndefined: 'last',
+        meta: { numeric: true },
+        cell: (info) => (
+          <>
+            {formatWeight(info.row.original.weightLb, prefs.weight)}
+            {info.row.original.weightFlagged ? (
+              <>
+                {' '}
+                <Label variant="attention">Check this weight</Label>
+              </>
+            ) : null}
+          </>
+        ),
+      }),
+      column.accessor((r) => r.lengthIn ?? undefined, {
+        id: 'length',
+        header: 'Length',
+        sortUndefined: 'last',
+        meta: { numeric: true },
+        cell: (info) => formatLength(info.row.original.lengthIn, prefs.length),
+      }),
+      column.accessor((r) => (r.attributionDistanceM !== null ? `${Math.round(r.attributionDistanceM)} m to a find` : r.findId ? 'Find by name' : ''), {
+        id: 'find',
+        header: 'Find',
+      }),
+    ],
+    [prefs],
+  );
+  return (
+    <DataTable data={rows} columns={columns} caption="Rows of the CSV file" getRowId={(r) => String(r.index)} initialSorting={[{ id: 'line', desc: false }]} height={400} />
+  );
+}

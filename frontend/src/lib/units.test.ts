@@ -1,0 +1,105 @@
+import { describe, expect, it } from 'vitest';
+import {
+  entryToF,
+  entryToFt,
+  entryToIn,
+  entryToLb,
+  formatDepth,
+  formatLength,
+  formatTemperature,
+  formatWeight,
+  parseLength,
+  parseTemperature,
+  parseWeight,
+  weightInputValue,
+  lengthInputValue,
+  temperatureInputValue,
+} from './units';
+
+// Exact defined factors, NIST SP 811 (2008) Appendix B.8/B.9 and 16 CFR 500.19 (the 1959 international
+// yard and pound): 1 lb = 0.45359237 kg, 1 in = 25.4 mm, 1 ft = 0.3048 m, 1 lb = 16 oz; t/°C = (t/°F − 32)/1.8.
+
+function entry<T>(parsed: { ok: true; entry: T } | { ok: false; error: string }): T {
+  if (!parsed.ok) throw new Error(`expected a parse, got: ${parsed.error}`);
+  return parsed.entry;
+}
+
+describe('weights', () => {
+  it('1 lb is exactly 0.45359237 kg, and that many kilograms are exactly 1 lb back', () => {
+    expect(entryToLb(entry(parseWeight('0.45359237', 'kg')))).toBe(1);
+    expect(formatWeight(1, 'kg')).toBe('0.45 kg');
+    // 1 kg ≈ 2.204 622 6 lb (NIST SP 811 B.9, inverse of the exact factor)
+    expect(entryToLb(entry(parseWeight('1', 'kg')))).toBeCloseTo(2.2046226, 7);
+    expect(formatWeight(1 / 0.45359237, 'kg')).toBe('1.00 kg');
+  });
+
+  it('reads pounds–ounces typed as 3-7, 3 7 or 3lb 7oz as 3 + 7/16 lb exactly', () => {
+    for (const typed of ['3-7', '3 7', '3lb 7oz', '3 lb 7 oz']) {
+      const e = entry(parseWeight(typed, 'lb-oz'));
+      expect(e).toEqual({ value: 3, unit: 'lb-oz', ounces: 7 });
+      expect(entryToLb(e)).toBe(3.4375);
+    }
+    expect(entry(parseWeight('4', 'lb-oz'))).toEqual({ value: 4, unit: 'lb-oz', ounces: 0 });
+    expect(entryToLb(entry(parseWeight('2-8.5', 'lb-oz')))).toBe(2 + 8.5 / 16);
+  });
+
+  it('shows canonical pounds in each unit the user can pick', () => {
+    expect(formatWeight(3.4375, 'lb')).toBe('3.44 lb');
+    expect(formatWeight(3.4375, 'lb-oz')).toBe('3 lb 7.0 oz');
+    // 3.4375 lb × 0.45359237 = 1.559223...kg
+    expect(formatWeight(3.4375, 'kg')).toBe('1.56 kg');
+    expect(formatWeight(null, 'kg')).toBe('—');
+    // 15.99 oz rounds to 16.0 oz at one decimal and carries into the pound
+    expect(formatWeight(2 + 15.99 / 16, 'lb-oz')).toBe('3 lb 0.0 oz');
+  });
+
+  it('refuses ounces of 16 or more, negative weights and words, with a sentence', () => {
+    const sixteen = parseWeight('3-16', 'lb-oz');
+    expect(sixteen.ok).toBe(false);
+    expect(!sixteen.ok && sixteen.error).toMatch(/16 oz make a pound/);
+    expect(parseWeight('-2.1', 'lb').ok).toBe(false);
+    expect(parseWeight('heavy', 'lb').ok).toBe(false);
+    expect(parseWeight('', 'kg').ok).toBe(false);
+    expect(parseWeight('3.5-2', 'lb-oz').ok).toBe(false);
+  });
+
+  it('accepts a comma as the decimal sign', () => {
+    expect(entry(parseWeight('3,45', 'lb'))).toEqual({ value: 3.45, unit: 'lb' });
+  });
+
+  it('prefills edit inputs in the user’s unit so that they read back to the same weight', () => {
+    expect(weightInputValue(3.4375, 'lb-oz')).toBe('3-7');
+    expect(entryToLb(entry(parseWeight(weightInputValue(3.4375, 'lb-oz'), 'lb-oz')))).toBe(3.4375);
+    expect(weightInputValue(1, 'kg')).toBe('0.454');
+    expect(weightInputValue(0.25, 'lb')).toBe('0.25');
+  });
+});
+
+describe('lengths, depths and temperatures', () => {
+  it('converts inches and millimetres with 25.4 exactly', () => {
+    expect(formatLength(12, 'mm')).toBe('305 mm'); // 304.8 mm
+    expect(formatLength(15.25, 'in')).toBe('15.25 in');
+    expect(entryToIn(entry(parseLength('254', 'mm')))).toBe(10);
+    expect(lengthInputValue(12, 'mm')).toBe('304.8');
+  });
+
+  it('converts feet and metres with 0.3048 exactly', () => {
+    expect(formatDepth(20, 'm')).toBe('6.1 m'); // 6.096 m
+    expect(formatDepth(12.5, 'ft')).toBe('12.5 ft');
+    expect(entryToFt({ value: 3.048, unit: 'm' })).toBeCloseTo(10, 12);
+  });
+
+  it('converts °F and °C: 68 °F is 20 °C, −40 is the same on both scales, 32 °F freezes', () => {
+    expect(formatTemperature(68, 'C')).toBe('20 °C');
+    expect(formatTemperature(-40, 'C')).toBe('-40 °C');
+    expect(formatTemperature(32, 'C')).toBe('0 °C');
+    expect(entryToF(entry(parseTemperature('18.5', 'C')))).toBeCloseTo(65.3, 10);
+    expect(entryToF(entry(parseTemperature('-2', 'C')))).toBeCloseTo(28.4, 10);
+    expect(temperatureInputValue(65.3, 'C')).toBe('18.5');
+  });
+
+  it('refuses a negative length but takes a water temperature below zero', () => {
+    expect(parseLength('-3', 'in').ok).toBe(false);
+    expect(parseTemperature('-1', 'C').ok).toBe(true);
+  });
+});
