@@ -18,6 +18,8 @@ import { HealthModule } from './health/health.module';
 import { JournalModule } from './journal/journal.module';
 import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
+import { ProjectionsModule } from './projections/projections.module';
+import { ReportsModule } from './reports/reports.module';
 
 /**
  * The whole server. `overrides` replace environment variables for this instance only (tests start
@@ -48,6 +50,8 @@ export class AppModule {
         CrewsModule,
         AdminModule,
         JournalModule,
+        ProjectionsModule,
+        ReportsModule,
         ...(raw.NODE_ENV === 'production' ? [] : [DevOutboxModule]),
         ...(serveFrontend ? [ServeStaticModule.forRoot({ rootPath: frontendDist!, exclude: ['/api/{*path}'] })] : []),
       ],

@@ -1,0 +1,245 @@
+import type { EventRules, Season } from '@shoalbook/shared';
+import { catchTiming, type CatchTimingCalculator } from './catch-timing';
+import type { JournalRecord } from './journal-record';
+import type { ProjectionState } from './projection-state';
+import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, toMicroLb } from './rows';
+
+type Payload = Record<string, unknown>;
+
+const str = (v: unknown, fallback = ''): string => (typeof v === 'string' ? v : fallback);
+const strOrNull = (v: unknown): string | null => (typeof v === 'string' && v !== '' ? v : null);
+const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : null);
+const dates = (v: unknown): string[] => (Array.isArray(v) ? v.filter((d): d is string => typeof d === 'string').sort() : []);
+
+/** Meteorological season of a lake-local date: Mar–May spring, Jun–Aug summer, Sep–Nov fall, Dec–Feb winter. */
+export function seasonOf(date: string): Season {
+  const month = Number(date.slice(5, 7));
+  if (month >= 3 && month <= 5) return 'spring';
+  if (month >= 6 && month <= 8) return 'summer';
+  if (month >= 9 && month <= 11) return 'fall';
+  return 'winter';
+}
+
+function lakeRow(crewId: string, p: Payload): LakeRow {
+  return { id: str(p.id), crewId, name: str(p.name), timeZone: str(p.timeZone, 'UTC'), lat: num(p.lat) ?? 0, lon: num(p.lon) ?? 0 };
+}
+
+function eventRow(crewId: string, p: Payload): EventRow {
+  const competitionDates = dates(p.competitionDates);
+  const firstDate = competitionDates[0] ?? null;
+  const rules: EventRules = {
+    fishPerDay: num(p.fishPerDay) ?? 5,
+    minLengthIn: num(p.minLengthIn),
+    deadFishPenaltyLb: num(p.deadFishPenaltyLb) ?? 0,
+    shortFishPenaltyLb: num(p.shortFishPenaltyLb) ?? 0,
+    latePenaltyLbPerMinute: num(p.latePenaltyLbPerMinute) ?? 0,
+  };
+  return {
+    id: str(p.id),
+    crewId,
+    lakeId: str(p.lakeId),
+    name: str(p.name),
+    practiceDates: dates(p.practiceDates),
+    competitionDates,
+    firstDate,
+    season: firstDate ? seasonOf(firstDate) : null,
+    year: firstDate ? Number(firstDate.slice(0, 4)) : null,
+    rules,
+    finalPlace: num(p.finalPlace),
+  };
+}
+
+function findRow(crewId: string, p: Payload): FindRow {
+  return {
+    id: str(p.id),
+    crewId,
+    lakeId: str(p.lakeId),
+    eventId: strOrNull(p.eventId),
+    name: str(p.name),
+    kind: str(p.kind, 'other'),
+    subKind: str(p.subKind),
+    depthFt: num(p.depthFt),
+    hardness: num(p.hardness),
+    waterTempF: num(p.waterTempF),
+    lat: num(p.lat) ?? 0,
+    lon: num(p.lon) ?? 0,
+  };
+}
+
+/**
+ * Applies journal events, in seq order, to a ProjectionState. Each event carries its record's full new state (or
+ * its id for a deletion), so applying one sets that record's row outright: applying the same event again, or
+ * replaying the journal from the start, ends in the same rows. Derived rows (outcomes, group statistics) are only
+ * marked dirty here and recomputed afterwards from the rows.
+ */
+export class JournalApplier {
+  constructor(
+    private readonly state: ProjectionState,
+    private readonly timing: CatchTimingCalculator = catchTiming,
+  ) {}
+
+  apply(e: JournalRecord): void {
+    const p = e.payload ?? {};
+    switch (e.type) {
+      case 'LakeCreated':
+      case 'LakeUpdated':
+        return this.putLake(lakeRow(e.crewId, { ...p, id: e.aggregateId }));
+      case 'LakeDeleted':
+        return this.state.lakes.delete(e.aggregateId);
+      case 'EventCreated':
+      case 'EventUpdated':
+        return this.putEvent(e.crewId, { ...p, id: e.aggregateId });
+      case 'EventDeleted':
+        return this.deleteEvent(e.aggregateId);
+      case 'FindAdded':
+      case 'FindUpdated':
+        return this.putFind(findRow(e.crewId, { ...p, id: e.aggregateId }));
+      case 'FindDeleted':
+        return this.deleteFind(e.aggregateId);
+      case 'FindsImported':
+        for (const f of records(p, 'finds')) this.putFind(findRow(e.crewId, f));
+        return;
+      case 'CatchLogged':
+      case 'CatchUpdated':
+        return this.putCatch(e.crewId, { ...p, id: e.aggregateId });
+      case 'CatchDeleted':
+        return this.deleteCatch(e.aggregateId);
+      case 'CatchesImported':
+        for (const c of records(p, 'catches')) this.putCatch(e.crewId, c);
+        return;
+      case 'WeighInRecorded':
+        return this.putWeighIn(p);
+      default:
+        // Practice/competition day notes, photos: nothing the reports show.
+        return;
+    }
+  }
+
+  private putLake(row: LakeRow): void {
+    const before = this.state.lakes.get(row.id);
+    this.state.lakes.put(row.id, row);
+    if (before && (before.timeZone !== row.timeZone || before.lat !== row.lat || before.lon !== row.lon)) {
+      // Timing is computed in the lake's zone at its reference point: recompute its catches.
+      for (const c of [...this.state.catches.rows.values()]) if (c.lakeId === row.id) this.putCatchRow(this.deriveCatch(c, c));
+    }
+  }
+
+  private putEvent(crewId: string, p: Payload): void {
+    const row = eventRow(crewId, p);
+    this.state.events.put(row.id, row);
+    this.state.dirtyEvents.add(row.id);
+    if (!Array.isArray(p.competitionDays)) return;
+    const kept = new Set<string>();
+    for (const raw of p.competitionDays as Payload[]) {
+      const id = str(raw.id);
+      if (!id) continue;
+      kept.add(id);
+      const before = this.state.days.get(id);
+      const day: DayRow = before
+        ? { ...before, date: str(raw.date, before.date) }
+        : { id, crewId, eventId: row.id, date: str(raw.date), hasOfficial: false, officialGrossLb: null, officialPenaltyLb: null, officialLb: null, dayPlace: null, lateMinutes: null };
+      this.state.days.put(id, day);
+    }
+    // Dropped dates lose their day and its weigh-in (the journal refuses to drop a day with catches).
+    for (const d of [...this.state.days.rows.values()]) if (d.eventId === row.id && !kept.has(d.id)) this.state.days.delete(d.id);
+  }
+
+  private deleteEvent(id: string): void {
+    this.state.events.delete(id);
+    for (const d of [...this.state.days.rows.values()]) if (d.eventId === id) this.state.days.delete(d.id);
+    this.state.dirtyEvents.add(id);
+  }
+
+  private putFind(row: FindRow): void {
+    const before = this.state.finds.get(row.id);
+    if (before?.eventId) this.state.dirtyEvents.add(before.eventId);
+    if (row.eventId) this.state.dirtyEvents.add(row.eventId);
+    this.state.finds.put(row.id, row);
+    this.state.dirtyFinds.add(row.id);
+  }
+
+  private deleteFind(id: string): void {
+    const before = this.state.finds.get(id);
+    if (before?.eventId) this.state.dirtyEvents.add(before.eventId);
+    this.state.finds.delete(id);
+    this.state.dirtyFinds.add(id);
+  }
+
+  private putCatch(crewId: string, p: Payload): void {
+    const caughtAtMs = Date.parse(str(p.caughtAt));
+    const weightLb = num(p.weightLb) ?? 0;
+    const base: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'> = {
+      id: str(p.id),
+      crewId,
+      eventId: str(p.eventId),
+      competitionDayId: str(p.competitionDayId),
+      findId: strOrNull(p.findId),
+      caughtAtMs: Number.isFinite(caughtAtMs) ? caughtAtMs : 0,
+      weightLb,
+      weightUlb: toMicroLb(weightLb),
+      lengthIn: num(p.lengthIn),
+      species: str(p.species, 'other'),
+      fate: str(p.fate, 'released'),
+      lure: str(p.lure).slice(0, 120),
+      lat: num(p.lat),
+      lon: num(p.lon),
+    };
+    const before = this.state.catches.get(base.id);
+    this.putCatchRow(this.deriveCatch(base, before));
+  }
+
+  /** The derived fields of a catch: its lake (through the event), its day's date and its timing. */
+  private deriveCatch(c: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'>, before?: CatchRow): CatchRow {
+    const event = this.state.events.get(c.eventId);
+    const lakeId = event?.lakeId ?? before?.lakeId ?? '';
+    const lake = this.state.lakes.get(lakeId);
+    const t = this.timing.timing(c.caughtAtMs, lake ?? { lat: 0, lon: 0, timeZone: 'UTC' });
+    const day = this.state.days.get(c.competitionDayId);
+    return {
+      ...c,
+      lakeId,
+      dayDate: day?.date ?? t.localDate,
+      localMinutes: t.localMinutes,
+      minutesFromSunrise: t.minutesFromSunrise,
+      solunarPeriod: t.solunarPeriod,
+      timeOfDay: t.timeOfDay,
+    };
+  }
+
+  private putCatchRow(row: CatchRow): void {
+    const before = this.state.catches.get(row.id);
+    if (before?.findId) this.state.dirtyFinds.add(before.findId);
+    if (before) this.state.dirtyEvents.add(before.eventId);
+    this.state.catches.put(row.id, row);
+    if (row.findId) this.state.dirtyFinds.add(row.findId);
+    this.state.dirtyEvents.add(row.eventId);
+  }
+
+  private deleteCatch(id: string): void {
+    const before = this.state.catches.get(id);
+    if (before?.findId) this.state.dirtyFinds.add(before.findId);
+    if (before) this.state.dirtyEvents.add(before.eventId);
+    this.state.catches.delete(id);
+  }
+
+  private putWeighIn(p: Payload): void {
+    const dayId = str(p.competitionDayId);
+    const day = this.state.days.get(dayId);
+    if (!day) return;
+    this.state.days.put(dayId, {
+      ...day,
+      hasOfficial: true,
+      officialGrossLb: num(p.grossLb),
+      officialPenaltyLb: num(p.penaltyLb),
+      officialLb: num(p.officialLb),
+      dayPlace: num(p.dayPlace),
+      lateMinutes: num(p.lateMinutes),
+    });
+  }
+}
+
+function records(p: Payload, field: string): Payload[] {
+  const list = p[field];
+  if (Array.isArray(list)) return list.filter((r): r is Payload => typeof r === 'object' && r !== null);
+  return typeof p.id === 'string' ? [p] : [];
+}

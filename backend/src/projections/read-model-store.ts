@@ -1,0 +1,145 @@
+import type { EntityManager } from '@mikro-orm/mariadb';
+import { CATCH_GROUPINGS, type CatchForStats, deriveGroupStats, deriveOutcomes } from './derive';
+import type { JournalRecord } from './journal-record';
+import type { ProjectionState, StateTable } from './projection-state';
+import type { OutcomeRow } from './rows';
+import { fromDb, inList, insertChunks, type TableSpec } from './sql-values';
+import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAKE_TABLE, OUTCOME_TABLE } from './tables';
+
+type Row = Record<string, unknown>;
+
+const str = (v: unknown): string | null => (typeof v === 'string' && v ? v : null);
+
+/** `SELECT * FROM table WHERE …` as projector rows. */
+async function select<R>(tx: EntityManager, spec: TableSpec<R>, where: string): Promise<R[]> {
+  if (where === 'FALSE') return [];
+  const cols = spec.columns.map((c) => `\`${c.column}\``).join(', ');
+  const rows: Row[] = await tx.execute(`SELECT ${cols} FROM \`${spec.table}\` WHERE ${where}`);
+  return rows.map((r) => fromDb(spec, r));
+}
+
+/** Write a state table's changes: delete the removed ids, upsert the rest. */
+async function writeChanges<R extends { id: string }>(tx: EntityManager, spec: TableSpec<R>, table: StateTable<R>): Promise<void> {
+  const { upserts, deletes } = table.changes();
+  if (deletes.length) await tx.execute(`DELETE FROM \`${spec.table}\` WHERE ${inList('id', deletes)}`);
+  for (const sql of insertChunks(spec, upserts, true)) await tx.execute(sql);
+}
+
+/**
+ * Loads, for one incremental batch, the read-model rows the batch's events touch; and writes back what applying
+ * them changed, then recomputes the dirty finds' outcomes from rm_catch_fact and the dirty events' group
+ * statistics from rm_find_outcome and rm_catch_fact, all inside the caller's transaction.
+ */
+export class ReadModelStore {
+  constructor(private readonly tx: EntityManager) {}
+
+  async preload(state: ProjectionState, batch: readonly JournalRecord[]): Promise<void> {
+    const lakeIds = new Set<string>();
+    const retimedLakes = new Set<string>();
+    const eventIds = new Set<string>();
+    const eventsWithDays = new Set<string>();
+    const dayIds = new Set<string>();
+    const findIds = new Set<string>();
+    const catchIds = new Set<string>();
+    for (const e of batch) {
+      const p = e.payload ?? {};
+      if (e.aggregateType === 'lake') {
+        lakeIds.add(e.aggregateId);
+        if (e.type === 'LakeUpdated') retimedLakes.add(e.aggregateId);
+      } else if (e.aggregateType === 'event') {
+        eventIds.add(e.aggregateId);
+        eventsWithDays.add(e.aggregateId);
+      } else if (e.aggregateType === 'find') {
+        findIds.add(e.aggregateId);
+        for (const f of Array.isArray(p.finds) ? (p.finds as Row[]) : [p]) {
+          if (str(f.id)) findIds.add(f.id as string);
+          if (str(f.eventId)) eventIds.add(f.eventId as string);
+        }
+      } else if (e.aggregateType === 'catch') {
+        catchIds.add(e.aggregateId);
+        for (const c of Array.isArray(p.catches) ? (p.catches as Row[]) : [p]) {
+          if (str(c.id)) catchIds.add(c.id as string);
+          if (str(c.eventId)) eventIds.add(c.eventId as string);
+          if (str(c.competitionDayId)) dayIds.add(c.competitionDayId as string);
+        }
+      } else if (e.aggregateType === 'weighIn') {
+        if (str(p.competitionDayId)) dayIds.add(p.competitionDayId as string);
+      }
+    }
+    const tx = this.tx;
+    const catches = [
+      ...(await select(tx, CATCH_TABLE, inList('id', catchIds))),
+      ...(await select(tx, CATCH_TABLE, inList('lake_id', retimedLakes))),
+    ];
+    for (const c of catches) {
+      state.catches.load(c.id, c);
+      eventIds.add(c.eventId);
+    }
+    for (const f of await select(tx, FIND_TABLE, inList('id', findIds))) state.finds.load(f.id, f);
+    const events = await select(tx, EVENT_TABLE, inList('id', eventIds));
+    for (const ev of events) {
+      state.events.load(ev.id, ev);
+      lakeIds.add(ev.lakeId);
+    }
+    const dayWhere = [inList('id', dayIds), inList('event_id', eventsWithDays)].filter((w) => w !== 'FALSE');
+    for (const d of await select(tx, DAY_TABLE, dayWhere.length ? dayWhere.join(' OR ') : 'FALSE')) state.days.load(d.id, d);
+    for (const l of await select(tx, LAKE_TABLE, inList('id', lakeIds))) state.lakes.load(l.id, l);
+  }
+
+  async write(state: ProjectionState): Promise<void> {
+    const tx = this.tx;
+    await writeChanges(tx, LAKE_TABLE, state.lakes);
+    await writeChanges(tx, EVENT_TABLE, state.events);
+    await writeChanges(tx, DAY_TABLE, state.days);
+    await writeChanges(tx, FIND_TABLE, state.finds);
+    await writeChanges(tx, CATCH_TABLE, state.catches);
+
+    const dirtyFinds = [...state.dirtyFinds];
+    const dirtyEvents = new Set(state.dirtyEvents);
+    if (dirtyFinds.length) {
+      const old: Row[] = await tx.execute(`SELECT DISTINCT event_id FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
+      for (const r of old) dirtyEvents.add(String(r.event_id));
+      const missing = dirtyFinds.filter((id) => !state.finds.rows.has(id) && !state.finds.changed.has(id));
+      for (const f of await select(tx, FIND_TABLE, inList('id', missing))) state.finds.load(f.id, f);
+      const byFind = groupBy(await select(tx, CATCH_TABLE, inList('find_id', dirtyFinds)), (c) => c.findId);
+      const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) => deriveOutcomes(state.finds.get(id), byFind.get(id) ?? []));
+      for (const o of outcomes) dirtyEvents.add(o.eventId);
+      await tx.execute(`DELETE FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
+      for (const sql of insertChunks(OUTCOME_TABLE, outcomes)) await tx.execute(sql);
+    }
+
+    const events = [...dirtyEvents];
+    if (events.length) {
+      const missing = events.filter((id) => !state.events.rows.has(id) && !state.events.changed.has(id));
+      for (const ev of await select(tx, EVENT_TABLE, inList('id', missing))) state.events.load(ev.id, ev);
+      const outcomes = await select(tx, OUTCOME_TABLE, inList('event_id', events));
+      const catchCols = ['event_id', 'fate', 'weight_ulb', ...CATCH_GROUPINGS.map((g) => (g === 'solunarPeriod' ? 'solunar_period' : 'time_of_day'))];
+      const catchRows: Row[] = await tx.execute(`SELECT ${catchCols.join(', ')} FROM rm_catch_fact WHERE ${inList('event_id', events)}`);
+      const catches: CatchForStats[] = catchRows.map((r) => ({
+        eventId: String(r.event_id),
+        fate: String(r.fate),
+        weightUlb: Number(r.weight_ulb),
+        solunarPeriod: String(r.solunar_period),
+        timeOfDay: String(r.time_of_day),
+      }));
+      const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
+      const catchesByEvent = groupBy(catches, (c) => c.eventId);
+      const stats = events.flatMap((id) => deriveGroupStats(state.events.get(id), outcomesByEvent.get(id) ?? [], catchesByEvent.get(id) ?? []));
+      await tx.execute(`DELETE FROM rm_group_stats WHERE ${inList('event_id', events)}`);
+      for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);
+    }
+  }
+}
+
+/** Rows grouped by a key, in input order. */
+export function groupBy<T>(rows: Iterable<T>, key: (row: T) => string | null): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const row of rows) {
+    const k = key(row);
+    if (k === null) continue;
+    let list = out.get(k);
+    if (!list) out.set(k, (list = []));
+    list.push(row);
+  }
+  return out;
+}

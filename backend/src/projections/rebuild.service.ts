@@ -1,0 +1,111 @@
+import { MikroORM } from '@mikro-orm/mariadb';
+import type { EntityManager } from '@mikro-orm/mariadb';
+import { Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
+import { READ_MODEL_TABLES } from '../read-models';
+import { type CatchForStats, deriveGroupStats, deriveOutcomes } from './derive';
+import { JournalApplier } from './journal-applier';
+import { GapPolicy, readJournal } from './journal-reader';
+import { JournalProjector } from './journal-projector.service';
+import { ProjectionState } from './projection-state';
+import { JOURNAL_PROJECTION, withProjectionLock, writeCheckpoint } from './projection-lock';
+import { groupBy } from './read-model-store';
+import type { OutcomeRow } from './rows';
+import { insertChunks, type TableSpec } from './sql-values';
+import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAKE_TABLE, OUTCOME_TABLE } from './tables';
+
+const READ_PAGE = 20_000;
+const LOCK_WAIT_SECONDS = 30;
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+export interface RebuildProgress {
+  /** Last seq applied, and the highest seq when the rebuild started. */
+  seq: number;
+  maxSeq: number;
+  events: number;
+  phase: 'replay' | 'write';
+}
+
+export interface RebuildResult {
+  events: number;
+  durationMs: number;
+  lastSeq: number;
+}
+
+/**
+ * Rebuilds every read model from journal_event: replays all events into memory with the same applier and the
+ * same derivations as the incremental projector, then truncates the tables and writes them with multi-row
+ * INSERTs, the rows and the checkpoint in one transaction. A crash midway leaves empty tables and checkpoint 0,
+ * which the next catch-up fills again.
+ */
+export async function rebuildReadModels(em: EntityManager, options: { gapTimeoutMs?: number; onProgress?: (p: RebuildProgress) => void } = {}): Promise<RebuildResult> {
+  const started = Date.now();
+  const result = await em.transactional((tx) =>
+    withProjectionLock(tx, LOCK_WAIT_SECONDS, async () => {
+      const [maxRow] = (await tx.execute('SELECT COALESCE(MAX(seq), 0) AS max_seq FROM journal_event')) as { max_seq: unknown }[];
+      const maxSeq = Number(maxRow?.max_seq ?? 0);
+      const state = new ProjectionState(false);
+      const applier = new JournalApplier(state);
+      const gaps = new GapPolicy(options.gapTimeoutMs ?? 5000);
+      let last = 0;
+      let events = 0;
+      for (;;) {
+        const records = await readJournal(tx, last, READ_PAGE);
+        if (!records.length) break;
+        const { usable, last: reached, waiting } = gaps.contiguous(records, last);
+        for (const r of usable) applier.apply(r);
+        events += usable.length;
+        last = reached;
+        options.onProgress?.({ seq: last, maxSeq, events, phase: 'replay' });
+        if (waiting) {
+          if (last >= maxSeq) break;
+          await sleep(50);
+        }
+      }
+
+      const catchesByFind = groupBy(state.catches.rows.values(), (c) => c.findId);
+      const outcomes: OutcomeRow[] = [];
+      for (const find of state.finds.rows.values()) outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? []));
+      const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
+      const catchesByEvent = groupBy<CatchForStats>(state.catches.rows.values(), (c) => c.eventId);
+      const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchesByEvent.get(ev.id) ?? []));
+
+      options.onProgress?.({ seq: last, maxSeq, events, phase: 'write' });
+      // TRUNCATE commits implicitly; the refill then runs in its own transaction, committed with the checkpoint.
+      for (const table of READ_MODEL_TABLES) await tx.execute(`TRUNCATE TABLE \`${table}\``);
+      await tx.execute(`DELETE FROM projection_checkpoint WHERE name = '${JOURNAL_PROJECTION}'`);
+      await tx.execute('START TRANSACTION');
+      const write = async <R>(spec: TableSpec<R>, rows: Iterable<R>) => {
+        for (const sql of insertChunks(spec, [...rows], false, 2000)) await tx.execute(sql);
+      };
+      await write(LAKE_TABLE, state.lakes.rows.values());
+      await write(EVENT_TABLE, state.events.rows.values());
+      await write(DAY_TABLE, state.days.rows.values());
+      await write(FIND_TABLE, state.finds.rows.values());
+      await write(CATCH_TABLE, state.catches.rows.values());
+      await write(OUTCOME_TABLE, outcomes);
+      await write(GROUP_STATS_TABLE, stats);
+      await writeCheckpoint(tx, last);
+      return { events, lastSeq: last };
+    }),
+  );
+  if (!result) throw new ServiceUnavailableException('Another rebuild or catch-up holds the projections; try again in a minute.');
+  return { ...result, durationMs: Date.now() - started };
+}
+
+/** The rebuild inside the server: serialised with the process's catch-ups, then a catch-up for what came since. */
+@Injectable()
+export class ProjectionRebuildService {
+  private readonly logger = new Logger(ProjectionRebuildService.name);
+
+  constructor(
+    private readonly orm: MikroORM,
+    private readonly projector: JournalProjector,
+  ) {}
+
+  async rebuild(): Promise<RebuildResult> {
+    const result = await this.projector.exclusive(() => rebuildReadModels(this.orm.em.fork(), { gapTimeoutMs: this.projector.gaps.timeoutMs }));
+    this.logger.log(`rebuilt the read models from ${result.events} journal events in ${result.durationMs} ms`);
+    if (this.projector.enabled) void this.projector.requestCatchUp();
+    return result;
+  }
+}

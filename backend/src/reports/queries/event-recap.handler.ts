@@ -1,0 +1,103 @@
+import { EntityManager } from '@mikro-orm/mariadb';
+import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
+import type { EventRecapView, FindKind, RecapDay } from '@shoalbook/shared';
+import { fromMicroLb } from '../../projections/rows';
+import { dayBag } from '../day-bag';
+import { singleRate } from '../rates';
+import { percent, plural } from '../readings';
+import { reportFish, selectCatches } from '../report-catches';
+import { findLake, selectEvents } from '../report-events';
+import { GetEventRecapQuery } from './event-recap.query';
+
+const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
+
+/** The recap from rm_event, rm_competition_day, rm_catch_fact, rm_find_outcome and rm_find. */
+@QueryHandler(GetEventRecapQuery)
+export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, EventRecapView | null> {
+  constructor(private readonly em: EntityManager) {}
+
+  async execute({ crewId, eventId }: GetEventRecapQuery): Promise<EventRecapView | null> {
+    const [event] = await selectEvents(this.em, crewId, { eventId });
+    if (!event) return null;
+    const lake = await findLake(this.em, crewId, event.lakeId);
+    const dayRows: Record<string, unknown>[] = await this.em.execute(
+      'SELECT id, date, has_official, official_gross_lb, official_penalty_lb, official_lb, day_place, late_minutes FROM rm_competition_day WHERE crew_id = ? AND event_id = ? ORDER BY date',
+      [crewId, eventId],
+    );
+    const catches = await selectCatches(this.em, 'c.crew_id = ? AND c.event_id = ?', [crewId, eventId]);
+    const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+
+    const days: RecapDay[] = dayRows.map((d) => {
+      const mine = catches.filter((c) => c.competitionDayId === d.id);
+      const official = Number(d.has_official) === 1 || d.has_official === true
+        ? { grossLb: n(d.official_gross_lb), penaltyLb: n(d.official_penalty_lb), officialLb: n(d.official_lb), dayPlace: n(d.day_place), lateMinutes: n(d.late_minutes) }
+        : null;
+      const bag = dayBag(mine, event.rules, official?.lateMinutes ?? null);
+      const counted = new Set(bag.counted);
+      return {
+        competitionDayId: String(d.id),
+        date: String(d.date),
+        counted: bag.counted.map((id) => reportFish(mine.find((c) => c.catchId === id)!)),
+        culled: mine.filter((c) => !counted.has(c.catchId)).map(reportFish),
+        grossLb: bag.grossLb,
+        penaltyLb: bag.penaltyLb,
+        netLb: bag.netLb,
+        official,
+        dayPlace: official?.dayPlace ?? null,
+      };
+    });
+
+    const timeline: EventRecapView['timeline'] = [];
+    for (const d of dayRows) {
+      const mine = catches.filter((c) => c.competitionDayId === d.id);
+      for (let i = 0; i < mine.length; i++) {
+        const c = mine[i]!;
+        timeline.push({ catchId: c.catchId, caughtAt: c.caughtAt, weightLb: c.weightLb, cumulativeBagLb: dayBag(mine.slice(0, i + 1), event.rules, null).grossLb, day: c.day });
+      }
+    }
+
+    const outcomes: Record<string, unknown>[] = await this.em.execute(
+      `SELECT o.find_id, o.practiced, o.fished, o.fish_count, o.weight_ulb, f.name, f.kind, f.sub_kind
+         FROM rm_find_outcome o JOIN rm_find f ON f.id = o.find_id AND f.crew_id = o.crew_id
+        WHERE o.crew_id = ? AND o.event_id = ?`,
+      [crewId, eventId],
+    );
+    const isTrue = (v: unknown) => v === true || Number(v) === 1;
+    const practiced = outcomes.filter((o) => isTrue(o.practiced));
+    const producingFinds = outcomes
+      .filter((o) => Number(o.fish_count) > 0)
+      .map((o) => ({ findId: String(o.find_id), name: String(o.name), kind: String(o.kind) as FindKind, subKind: String(o.sub_kind), fishCount: Number(o.fish_count), weightLb: fromMicroLb(Number(o.weight_ulb)) }))
+      .sort((a, b) => b.weightLb - a.weightLb || b.fishCount - a.fishCount || a.name.localeCompare(b.name));
+    const share = singleRate(practiced.filter((o) => Number(o.fish_count) > 0).length, practiced.length);
+    const big = catches.reduce<(typeof catches)[number] | null>((best, c) => (!best || c.weightLb > best.weightLb ? c : best), null);
+
+    const netLb = clean(days.reduce((s, d) => s + d.netLb, 0));
+    const officialLb = clean(days.reduce((s, d) => s + (d.official?.officialLb ?? d.netLb), 0));
+    const readings: string[] = [];
+    if (!catches.length) readings.push('No catches logged for this event yet: log the competition-day catches to see the bags and which finds produced.');
+    else {
+      readings.push(`${plural(catches.length, 'fish', 'fish')} caught over ${plural(days.length, 'day')}; ${netLb.toFixed(2)} lb counted after penalties.`);
+      if (practiced.length) readings.push(`${share.successes} of ${plural(practiced.length, 'practice find')} produced a fish (${percent(share.rate)}).`);
+      if (big) readings.push(`Big fish: ${big.weightLb.toFixed(2)} lb${big.findName ? ` from ${big.findName}` : ''} on ${big.day}.`);
+    }
+    return {
+      event: {
+        id: event.id,
+        name: event.name,
+        lake: lake ? { id: lake.id, name: lake.name, timeZone: lake.timeZone } : { id: event.lakeId, name: '', timeZone: 'UTC' },
+        dates: { practice: event.practiceDates, competition: event.competitionDates },
+        rules: event.rules,
+        finalPlace: event.finalPlace,
+      },
+      days,
+      totals: { netLb, officialLb, finalPlace: event.finalPlace },
+      producingFinds,
+      timeline,
+      bigFish: big ? reportFish(big) : null,
+      findsFished: outcomes.filter((o) => isTrue(o.fished)).length,
+      findsPracticed: practiced.length,
+      shareOfPracticePaidOff: share,
+      readings,
+    };
+  }
+}

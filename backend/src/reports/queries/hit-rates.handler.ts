@@ -1,0 +1,122 @@
+import { EntityManager } from '@mikro-orm/mariadb';
+import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
+import { CATCH_UNIT_GROUPINGS, type HitRateGroupView, type HitRatesView } from '@shoalbook/shared';
+import { depthBandLabels, temperatureBandLabels } from '@shoalbook/analytics';
+import { fromMicroLb } from '../../projections/rows';
+import { groupLabel } from '../labels';
+import { groupRates, ranks, singleRate } from '../rates';
+import { catchShareReading, findRateReading, smallSampleReading } from '../readings';
+import { eventWhere } from '../report-events';
+import { GetHitRatesQuery } from './hit-rates.query';
+
+/** Below this many finds fished a group's rank is flagged as resting mostly on the overall rate (our choice). */
+export const SMALL_SAMPLE_FINDS = 10;
+
+interface Sums {
+  key: string;
+  finds: number;
+  findsFished: number;
+  findsProducing: number;
+  findsWeighed: number;
+  fishCount: number;
+  weighedCount: number;
+  weightUlb: number;
+}
+
+/** Sort order of keys: bands shallow→deep / cold→warm, numbers ascending, not recorded last. */
+function keyOrder(by: string): (a: string, b: string) => number {
+  const bands = by === 'depthBand' ? depthBandLabels() : by === 'temperatureBand' ? temperatureBandLabels() : by === 'timeOfDay' ? ['early', 'morning', 'midday', 'afternoon', 'late'] : by === 'solunarPeriod' ? ['major', 'minor', 'none'] : null;
+  return (a, b) => {
+    if (a === b) return 0;
+    if (a === '') return 1;
+    if (b === '') return -1;
+    if (bands) return bands.indexOf(a) - bands.indexOf(b);
+    return a.localeCompare(b, 'en', { numeric: true });
+  };
+}
+
+/** Sums rm_group_stats over the selected events (one SQL GROUP BY on the read model) and adds the statistics. */
+@QueryHandler(GetHitRatesQuery)
+export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRatesView> {
+  constructor(private readonly em: EntityManager) {}
+
+  async execute({ crewId, filters, by }: GetHitRatesQuery): Promise<HitRatesView> {
+    const where = eventWhere(crewId, filters);
+    const rows: Record<string, unknown>[] = await this.em.execute(
+      `SELECT s.grouping, s.group_key, SUM(s.finds) AS finds, SUM(s.finds_fished) AS finds_fished, SUM(s.finds_producing) AS finds_producing,
+              SUM(s.finds_weighed) AS finds_weighed, SUM(s.fish_count) AS fish_count, SUM(s.weighed_count) AS weighed_count,
+              SUM(s.weight_ulb) AS weight_ulb, COUNT(DISTINCT s.event_id) AS events
+         FROM rm_event e JOIN rm_group_stats s ON s.event_id = e.id AND s.crew_id = e.crew_id
+        WHERE ${where.sql} AND s.grouping IN (?, 'kind')
+        GROUP BY s.grouping, s.group_key`,
+      [...where.params, by],
+    );
+    const sums = (grouping: string): Sums[] =>
+      rows
+        .filter((r) => r.grouping === grouping)
+        .map((r) => ({
+          key: String(r.group_key),
+          finds: Number(r.finds),
+          findsFished: Number(r.finds_fished),
+          findsProducing: Number(r.finds_producing),
+          findsWeighed: Number(r.finds_weighed),
+          fishCount: Number(r.fish_count),
+          weighedCount: Number(r.weighed_count),
+          weightUlb: Number(r.weight_ulb),
+        }))
+        .sort((a, b) => keyOrder(by)(a.key, b.key));
+    const groups = sums(by);
+    const kinds = sums('kind');
+    const [countRow] = (await this.em.execute(`SELECT COUNT(*) AS n FROM rm_event e WHERE ${where.sql}`, where.params)) as { n: unknown }[];
+
+    const total = (list: Sums[], f: keyof Omit<Sums, 'key'>) => list.reduce((s, g) => s + g[f], 0);
+    const overall = {
+      finds: total(kinds, 'finds'),
+      findsFished: total(kinds, 'findsFished'),
+      findsProducing: total(kinds, 'findsProducing'),
+      fishCount: total(kinds, 'fishCount'),
+      weightLb: fromMicroLb(total(kinds, 'weightUlb')),
+      producing: singleRate(total(kinds, 'findsProducing'), total(kinds, 'findsFished')),
+    };
+
+    const catchUnit = CATCH_UNIT_GROUPINGS.includes(by);
+    const allFish = total(groups, 'fishCount');
+    const producing = catchUnit
+      ? groupRates(groups.map((g) => ({ successes: g.fishCount, trials: allFish })))
+      : groupRates(groups.map((g) => ({ successes: g.findsProducing, trials: g.findsFished })));
+    const weighed = catchUnit
+      ? groupRates(groups.map((g) => ({ successes: g.weighedCount, trials: g.fishCount })))
+      : groupRates(groups.map((g) => ({ successes: g.findsWeighed, trials: g.findsFished })));
+    const share = groupRates(groups.map((g) => ({ successes: g.fishCount, trials: allFish })));
+    const rank = ranks(producing);
+
+    const views: HitRateGroupView[] = groups.map((g, i) => ({
+      key: g.key === '' ? null : g.key,
+      label: groupLabel(by, g.key === '' ? null : g.key),
+      finds: g.finds,
+      findsFished: g.findsFished,
+      findsProducing: g.findsProducing,
+      findsWeighed: g.findsWeighed,
+      fishCount: g.fishCount,
+      weighedCount: g.weighedCount,
+      weightLb: fromMicroLb(g.weightUlb),
+      producing: producing[i]!,
+      weighed: weighed[i]!,
+      shareOfFish: share[i]!,
+      rank: rank[i]!,
+    }));
+
+    const byRank = [...views].sort((a, b) => a.rank - b.rank);
+    const readings: string[] = [];
+    if (catchUnit) {
+      if (allFish === 0) readings.push('No catches logged for these events yet: log competition-day catches to see when the fish bit.');
+      for (const v of byRank) readings.push(catchShareReading(v.label, v.shareOfFish));
+    } else {
+      if (overall.findsFished === 0) readings.push('No finds fished yet: add practice finds to an event and log the catches to see which kinds paid off.');
+      else readings.push(findRateReading('Overall, the practice', overall.producing));
+      for (const v of byRank.filter((g) => g.findsFished > 0)) readings.push(findRateReading(v.label, v.producing));
+      for (const v of byRank.filter((g) => g.findsFished > 0 && g.findsFished < SMALL_SAMPLE_FINDS)) readings.push(smallSampleReading(v.label, v.findsFished));
+    }
+    return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount: Number(countRow?.n ?? 0) };
+  }
+}

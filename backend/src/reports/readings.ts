@@ -1,0 +1,31 @@
+import type { Rate } from '@shoalbook/shared';
+
+/** 0.3456 → "35 %". */
+export const percent = (x: number | null): string => (x === null ? '–' : `${Math.round(x * 100)} %`);
+
+/** "22–50 %". */
+export const interval = (r: { lower: number; upper: number }): string => `${Math.round(r.lower * 100)}–${Math.round(r.upper * 100)} %`;
+
+export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+
+export function pValueText(p: number): string {
+  if (p < 0.001) return 'p < 0.001';
+  return `p = ${p < 0.01 ? p.toFixed(3) : p.toFixed(2)}`;
+}
+
+/** "Hard bottom produced on 14 of 40 finds fished (35 %, 22–50 %)." */
+export function findRateReading(label: string, r: Rate): string {
+  if (r.trials === 0) return `${label}: no finds fished yet.`;
+  return `${label} produced on ${r.successes} of ${plural(r.trials, 'find')} fished (${percent(r.rate)}, ${interval(r)}).`;
+}
+
+/** "Major period: 63 of 150 fish (42 %, 34–50 %)." */
+export function catchShareReading(label: string, r: Rate): string {
+  if (r.trials === 0) return 'No catches logged yet.';
+  return `${label}: ${r.successes} of ${plural(r.trials, 'fish', 'fish')} (${percent(r.rate)}, ${interval(r)}).`;
+}
+
+/** Said when a group is too small for its rank to mean much. */
+export function smallSampleReading(label: string, trials: number): string {
+  return `${label}: only ${plural(trials, 'find')} fished, too few to rank with confidence; its ranking leans on the crew's overall rate.`;
+}

@@ -1,0 +1,54 @@
+import type { EntityManager } from '@mikro-orm/mariadb';
+import type { Fate, ReportFish, Species } from '@shoalbook/shared';
+
+/** A catch as the recap and timing reports read it from rm_catch_fact (+ the find's name from rm_find). */
+export interface ReportCatch extends ReportFish {
+  competitionDayId: string;
+  eventId: string;
+  caughtAtMs: number;
+  localMinutes: number;
+  minutesFromSunrise: number | null;
+  solunarPeriod: string;
+  lat: number | null;
+  lon: number | null;
+}
+
+const instant = (v: unknown): number => (v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`));
+
+export async function selectCatches(em: EntityManager, where: string, params: unknown[], limit?: number): Promise<ReportCatch[]> {
+  const rows: Record<string, unknown>[] = await em.execute(
+    `SELECT c.id, c.event_id, c.competition_day_id, c.day_date, c.find_id, c.caught_at, c.weight_lb, c.length_in, c.species, c.fate, c.lure,
+            c.lat, c.lon, c.local_minutes, c.minutes_from_sunrise, c.solunar_period, f.name AS find_name
+       FROM rm_catch_fact c LEFT JOIN rm_find f ON f.id = c.find_id AND f.crew_id = c.crew_id
+      WHERE ${where} ORDER BY c.caught_at, c.id${limit ? ` LIMIT ${Math.floor(limit)}` : ''}`,
+    params,
+  );
+  return rows.map((r) => {
+    const ms = instant(r.caught_at);
+    return {
+      catchId: String(r.id),
+      eventId: String(r.event_id),
+      competitionDayId: String(r.competition_day_id),
+      day: String(r.day_date),
+      findId: (r.find_id as string | null) ?? null,
+      findName: (r.find_name as string | null) ?? null,
+      caughtAtMs: ms,
+      caughtAt: new Date(ms).toISOString(),
+      weightLb: Number(r.weight_lb),
+      lengthIn: r.length_in === null ? null : Number(r.length_in),
+      species: String(r.species) as Species,
+      fate: String(r.fate) as Fate,
+      lure: String(r.lure ?? ''),
+      lat: r.lat === null ? null : Number(r.lat),
+      lon: r.lon === null ? null : Number(r.lon),
+      localMinutes: Number(r.local_minutes),
+      minutesFromSunrise: r.minutes_from_sunrise === null ? null : Number(r.minutes_from_sunrise),
+      solunarPeriod: String(r.solunar_period),
+    };
+  });
+}
+
+/** The public part of a catch (no position). */
+export function reportFish(c: ReportCatch): ReportFish {
+  return { catchId: c.catchId, caughtAt: c.caughtAt, weightLb: c.weightLb, lengthIn: c.lengthIn, species: c.species, fate: c.fate, findId: c.findId, findName: c.findName, lure: c.lure, day: c.day };
+}

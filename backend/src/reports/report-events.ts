@@ -1,0 +1,70 @@
+import type { EntityManager } from '@mikro-orm/mariadb';
+import type { ReportEventRef, ReportFilters, Season } from '@shoalbook/shared';
+import type { EventRules } from '@shoalbook/shared';
+
+/** An event as the report queries read it from rm_event. */
+export interface ReportEvent extends ReportEventRef {
+  lakeId: string;
+  practiceDates: string[];
+  competitionDates: string[];
+  rules: EventRules;
+  finalPlace: number | null;
+}
+
+const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T) : (v as T));
+
+/** `WHERE …` on rm_event (alias e) for the crew and the filters, with its parameters. */
+export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
+  const parts = ['e.crew_id = ?'];
+  const params: unknown[] = [crewId];
+  if (f.lakeId) parts.push('e.lake_id = ?'), params.push(f.lakeId);
+  if (f.eventId) parts.push('e.id = ?'), params.push(f.eventId);
+  if (f.season) parts.push('e.season = ?'), params.push(f.season);
+  if (f.year) parts.push('e.year = ?'), params.push(f.year);
+  if (f.from) parts.push('e.first_date >= ?'), params.push(f.from);
+  if (f.to) parts.push('e.first_date <= ?'), params.push(f.to);
+  return { sql: parts.join(' AND '), params };
+}
+
+/** The crew's events matching the filters, oldest first. */
+export async function selectEvents(em: EntityManager, crewId: string, f: ReportFilters, extra: { ids?: string[] } = {}): Promise<ReportEvent[]> {
+  const where = eventWhere(crewId, f);
+  let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place FROM rm_event e WHERE ${where.sql}`;
+  const params = [...where.params];
+  if (extra.ids) {
+    if (!extra.ids.length) return [];
+    sql += ` AND e.id IN (${extra.ids.map(() => '?').join(',')})`;
+    params.push(...extra.ids);
+  }
+  sql += ' ORDER BY e.first_date IS NULL, e.first_date, e.name';
+  const rows: Record<string, unknown>[] = await em.execute(sql, params);
+  return rows.map((r) => ({
+    id: String(r.id),
+    lakeId: String(r.lake_id),
+    name: String(r.name),
+    firstDate: (r.first_date as string | null) ?? null,
+    season: (r.season as Season | null) ?? null,
+    year: r.year === null ? null : Number(r.year),
+    practiceDates: json<string[]>(r.practice_dates),
+    competitionDates: json<string[]>(r.competition_dates),
+    rules: json<EventRules>(r.rules),
+    finalPlace: r.final_place === null ? null : Number(r.final_place),
+  }));
+}
+
+export interface ReportLake {
+  id: string;
+  name: string;
+  timeZone: string;
+  lat: number;
+  lon: number;
+}
+
+export async function findLake(em: EntityManager, crewId: string, lakeId: string): Promise<ReportLake | null> {
+  const rows: Record<string, unknown>[] = await em.execute('SELECT id, name, time_zone, lat, lon FROM rm_lake WHERE crew_id = ? AND id = ?', [crewId, lakeId]);
+  const r = rows[0];
+  return r ? { id: String(r.id), name: String(r.name), timeZone: String(r.time_zone), lat: Number(r.lat), lon: Number(r.lon) } : null;
+}
+
+/** "?,?,?" for an IN list. */
+export const placeholders = (n: number) => new Array(n).fill('?').join(',');
