@@ -1,7 +1,6 @@
 import { FilterRemoveIcon } from '@primer/octicons-react';
 import { Button, FormControl, Select, TextInput } from '@primer/react';
 import type { EventView, LakeView } from '@shoalbook/shared';
-import { useId } from 'react';
 import { SEASONS, SEASON_LABELS, type ReportFilters } from '../api/report-filters';
 import styles from './reports.module.css';
 
@@ -30,7 +29,6 @@ function competitionYears(events: EventView[]): number[] {
 
 /** The filters every report shares: lake, event, season, year and a range of competition dates. */
 export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, onEventChange, currentEventId, show = ALL }: ReportFiltersBarProps) {
-  const uid = useId();
   const lakeEvents = filters.lakeId ? events.filter((e) => e.lakeId === filters.lakeId) : events;
   const years = competitionYears(events);
   const shown = new Set(show);
@@ -41,8 +39,8 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
     <form className={`${styles.filters} sb-no-print`} aria-label="Report filters" role="search" onSubmit={(e) => e.preventDefault()}>
       {shown.has('lakeId') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-lake`}>Lake</FormControl.Label>
-          <Select id={`${uid}-lake`} value={filters.lakeId ?? ''} onChange={(e) => onChange({ lakeId: e.target.value || undefined })}>
+          <FormControl.Label>Lake</FormControl.Label>
+          <Select value={filters.lakeId ?? ''} onChange={(e) => onChange({ lakeId: e.target.value || undefined })}>
             <Select.Option value="">All lakes</Select.Option>
             {lakes.map((lake) => (
               <Select.Option key={lake.id} value={lake.id}>
@@ -54,9 +52,9 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       ) : null}
       {shown.has('eventId') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-event`}>Event</FormControl.Label>
+          <FormControl.Label>Event</FormControl.Label>
           <Select
-            id={`${uid}-event`}
+           
             value={eventValue}
             onChange={(e) => (onEventChange ? onEventChange(e.target.value || undefined) : onChange({ eventId: e.target.value || undefined }))}
           >
@@ -71,8 +69,8 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       ) : null}
       {shown.has('season') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-season`}>Season</FormControl.Label>
-          <Select id={`${uid}-season`} value={filters.season ?? ''} onChange={(e) => onChange({ season: e.target.value || undefined })}>
+          <FormControl.Label>Season</FormControl.Label>
+          <Select value={filters.season ?? ''} onChange={(e) => onChange({ season: e.target.value || undefined })}>
             <Select.Option value="">Any season</Select.Option>
             {SEASONS.map((season) => (
               <Select.Option key={season} value={season}>
@@ -84,8 +82,8 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       ) : null}
       {shown.has('year') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-year`}>Year</FormControl.Label>
-          <Select id={`${uid}-year`} value={filters.year ? String(filters.year) : ''} onChange={(e) => onChange({ year: e.target.value || undefined })}>
+          <FormControl.Label>Year</FormControl.Label>
+          <Select value={filters.year ? String(filters.year) : ''} onChange={(e) => onChange({ year: e.target.value || undefined })}>
             <Select.Option value="">Any year</Select.Option>
             {years.map((year) => (
               <Select.Option key={year} value={String(year)}>
@@ -97,14 +95,14 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       ) : null}
       {shown.has('from') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-from`}>Fished from</FormControl.Label>
-          <TextInput id={`${uid}-from`} type="date" value={filters.from ?? ''} max={filters.to} onChange={(e) => onChange({ from: e.target.value || undefined })} />
+          <FormControl.Label>Fished from</FormControl.Label>
+          <TextInput type="date" value={filters.from ?? ''} max={filters.to} onChange={(e) => onChange({ from: e.target.value || undefined })} />
         </FormControl>
       ) : null}
       {shown.has('to') ? (
         <FormControl>
-          <FormControl.Label htmlFor={`${uid}-to`}>to</FormControl.Label>
-          <TextInput id={`${uid}-to`} type="date" value={filters.to ?? ''} min={filters.from} onChange={(e) => onChange({ to: e.target.value || undefined })} />
+          <FormControl.Label>to</FormControl.Label>
+          <TextInput type="date" value={filters.to ?? ''} min={filters.from} onChange={(e) => onChange({ to: e.target.value || undefined })} />
         </FormControl>
       ) : null}
       <div className={styles.filtersEnd}>

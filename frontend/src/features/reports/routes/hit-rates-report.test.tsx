@@ -1,0 +1,125 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import type { Mock } from 'vitest';
+import { describe, expect, it } from 'vitest';
+import { fakeNetwork } from '../../../testing/fake-network';
+import { events, hitRates, lakes, me, renderReports, useLaidOutElements } from '../testing/report-test-kit';
+
+useLaidOutElements(1200, 700);
+
+const readings = [
+  'Hard bottom produced on 14 of 40 finds fished (35 %, 22–50 %).',
+  'Bait produced on 2 of 3 finds fished (67 %, 21–94 %): too few finds to rank it with confidence.',
+];
+const byKind = hitRates(
+  [
+    ['hard-bottom', 'Hard bottom', 14, 40],
+    ['vegetation', 'Vegetation', 3, 25],
+    ['bait', 'Bait', 2, 3],
+  ],
+  readings,
+);
+const byDepth = hitRates(
+  [
+    ['0-10', '0–10 ft', 4, 30],
+    ['10-20', '10–20 ft', 15, 38],
+  ],
+  [],
+);
+
+function network() {
+  return fakeNetwork({
+    'GET /api/auth/me': { status: 200, body: me },
+    'GET /api/crews/crew-1/lakes': { status: 200, body: lakes },
+    'GET /api/crews/crew-1/events': { status: 200, body: events },
+    'GET /api/crews/crew-1/reports/hit-rates': (request) => ({ status: 200, body: request.path && reportFor(lastUrl(net)) }),
+  }).install();
+}
+let net: ReturnType<typeof fakeNetwork>;
+
+/** The full address of the latest report request (the fake network keeps paths only). */
+function lastUrl(n: ReturnType<typeof fakeNetwork>): URL {
+  const calls = (n.fetch as unknown as Mock).mock.calls.map((c) => new URL(String(c[0]), 'http://shoalbook.test'));
+  return calls.filter((u) => u.pathname.endsWith('/reports/hit-rates')).at(-1)!;
+}
+function reportFor(url: URL) {
+  return url.searchParams.get('by') === 'depthBand' ? byDepth : byKind;
+}
+
+describe('Hit-rate report', () => {
+  it('shows the groups in a table, the chart with a whisker per group, and the readings in plain words', async () => {
+    net = network();
+    const { container } = await renderReports('/crews/crew-1/reports/hit-rates');
+    const table = await screen.findByRole('table');
+    const rows = within(table).getAllByRole('row').slice(1);
+    const hard = rows.find((r) => within(r).getByRole('rowheader').textContent === 'Hard bottom')!;
+    expect(within(hard).getByText('35 %')).toBeInTheDocument();
+    expect(within(hard).getByText('22–50 %')).toBeInTheDocument();
+    // The thin group carries its tag in the table too.
+    const bait = rows.find((r) => within(r).getByRole('rowheader').textContent?.startsWith('Bait'))!;
+    expect(within(bait).getByText('few finds')).toBeInTheDocument();
+    expect(container.querySelectorAll('.sb-whisker')).toHaveLength(3);
+    const list = screen.getByRole('heading', { name: 'In plain words' }).closest('section')!;
+    expect(within(list).getAllByRole('listitem').map((li) => li.textContent)).toEqual(readings);
+  });
+
+  it('lists the groups in the order of the API’s small-sample-aware rank, with the adjusted rate beside the raw one', async () => {
+    net = network();
+    await renderReports('/crews/crew-1/reports/hit-rates');
+    const table = await screen.findByRole('table');
+    const shown = within(table).getAllByRole('rowheader').map((h) => h.textContent?.replace('few finds', ''));
+    const byRank = [...byKind.groups].sort((x, y) => (x.rank ?? 99) - (y.rank ?? 99)).map((g) => g.label);
+    expect(shown).toEqual(byRank);
+    const veg = within(table).getByRole('rowheader', { name: 'Vegetation' }).closest('tr')!;
+    const vegGroup = byKind.groups.find((g) => g.key === 'vegetation')!;
+    expect(within(veg).getByText(`${Math.round(vegGroup.producing.shrunk * 100)} %`)).toBeInTheDocument();
+    expect(within(veg).getAllByRole('cell').at(-1)!.textContent).toBe(String(vegGroup.rank));
+  });
+
+  it('keeps the filters and the grouping in the address and sends them to the API', async () => {
+    net = network();
+    const user = userEvent.setup();
+    const { router } = await renderReports('/crews/crew-1/reports/hit-rates?season=summer');
+    await screen.findByRole('table');
+    expect(screen.getByRole('combobox', { name: 'Season' })).toHaveValue('summer');
+    expect(lastUrl(net).searchParams.get('season')).toBe('summer');
+
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Lake' }), 'lake-a');
+    await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('lakeId')).toBe('lake-a'));
+    await waitFor(() => expect(lastUrl(net).searchParams.get('lakeId')).toBe('lake-a'));
+    expect(lastUrl(net).searchParams.get('season')).toBe('summer');
+    // Only the chosen lake's events are offered.
+    const eventOptions = within(screen.getByRole('combobox', { name: 'Event' })).getAllByRole('option').map((o) => o.getAttribute('value'));
+    expect(eventOptions).toEqual(['', 'ev-1', 'ev-2']);
+
+    await user.click(screen.getByRole('button', { name: 'Depth' }));
+    await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('by')).toBe('depthBand'));
+    await screen.findByRole('rowheader', { name: '10–20 ft' });
+    expect(lastUrl(net).searchParams.get('by')).toBe('depthBand');
+    expect(new URLSearchParams(router.state.location.search).get('lakeId')).toBe('lake-a');
+
+    await user.click(screen.getByRole('button', { name: 'Clear filters' }));
+    await waitFor(() => expect(router.state.location.search).toBe('?by=depthBand'));
+  });
+
+  it('drops malformed filters from the address instead of sending them on', async () => {
+    net = network();
+    await renderReports('/crews/crew-1/reports/hit-rates?season=monsoon&year=24&from=yesterday&lakeId=lake-b');
+    await screen.findByRole('table');
+    const sent = lastUrl(net).searchParams;
+    expect([...sent.keys()].sort()).toEqual(['by', 'lakeId']);
+    expect(sent.get('lakeId')).toBe('lake-b');
+  });
+
+  it('says what to enter when nothing has been fished yet', async () => {
+    fakeNetwork({
+      'GET /api/auth/me': { status: 200, body: me },
+      'GET /api/crews/crew-1/lakes': { status: 200, body: lakes },
+      'GET /api/crews/crew-1/events': { status: 200, body: events },
+      'GET /api/crews/crew-1/reports/hit-rates': { status: 200, body: hitRates([], []) },
+    }).install();
+    await renderReports('/crews/crew-1/reports/hit-rates');
+    expect(await screen.findByText('No finds fished for these filters yet')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Go to the finds' })).toHaveAttribute('href', '/crews/crew-1/finds');
+  });
+});
