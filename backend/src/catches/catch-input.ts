@@ -99,7 +99,7 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
 }
 
 /** Relative weight far from 100 for the length (analytics weightLooksWrong): flag, never change. */
-function flagWeight(c: Catch): boolean {
+export function flagWeight(c: Catch): boolean {
   if (c.species === 'other' || c.lengthIn === null || c.lengthIn === undefined || !(c.weightLb > 0) || !(c.lengthIn > 0)) return false;
   return weightLooksWrong(c.species, units.inToMm(c.lengthIn), units.lbToKg(c.weightLb) * 1000) === true;
 }

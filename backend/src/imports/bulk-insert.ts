@@ -6,7 +6,8 @@ export const BULK_CHUNK = 1000;
 
 /**
  * Insert many new records with multi-row INSERTs (1,000 rows a statement) and queue one journal event
- * per record with its full state; both inside the caller's transaction. The ORM's unit of work is not
+
+ * per record with its full state (unless `change` is null: parts journaled with their aggregate); both inside the caller's transaction. The ORM's unit of work is not
  * involved, so 10,000 rows cost ten statements rather than ten thousand.
  */
 export async function insertRecordsBulk<T extends object>(
@@ -14,7 +15,7 @@ export async function insertRecordsBulk<T extends object>(
   log: JournalRecorder,
   entityName: string,
   records: T[],
-  change: (record: T, state: Record<string, unknown>) => Omit<JournalChange, 'payload'>,
+  change: ((record: T, state: Record<string, unknown>) => Omit<JournalChange, 'payload'>) | null,
 ): Promise<void> {
   const meta = tx.getMetadata().get(entityName);
   for (let i = 0; i < records.length; i += BULK_CHUNK) {
@@ -26,6 +27,7 @@ export async function insertRecordsBulk<T extends object>(
     });
     await tx.insertMany(entityName, rows);
   }
+  if (!change) return;
   for (const r of records) {
     const state = recordState(tx, entityName, r);
     log.record({ ...change(r, state), payload: state });

@@ -25,9 +25,14 @@ export class JournalRecorder {
     private readonly actorId: string | null,
   ) {}
 
-  /** Queue one event; written by the transaction's final flush (or by `flushBulk`). */
+  /** Queue one event; written after the command's work, in the same transaction. */
   record(change: JournalChange): void {
     this.pending.push(change);
+  }
+
+  /** Rewrite the payloads of queued events of one type (e.g. to add an aggregate's parts) before they are written. */
+  replacePayloads(type: JournalChange['type'], rewrite: (aggregateId: string, payload: Record<string, unknown>) => Record<string, unknown>): void {
+    for (const c of this.pending) if (c.type === type) c.payload = rewrite(c.aggregateId, c.payload);
   }
 
   /** Write the queued events with multi-row INSERTs (1,000 rows a statement) inside the transaction. */

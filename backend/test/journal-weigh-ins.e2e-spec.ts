@@ -1,0 +1,76 @@
+import type { INestApplication } from '@nestjs/common';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { WeighInsView } from '@shoalbook/shared';
+import { crewWithMembers, type CrewFixture } from './utils/api-client';
+import { JournalEvent } from '../src/journal-events/journal-event.entity';
+import { createTestApp, testEm } from './utils/test-app';
+import { competitionDays, createEvent, createLake, expectOk, journalOf } from './journal-fixtures';
+
+describe('weigh-ins: the counted bag under the event rules, and the official override', () => {
+  let app: INestApplication;
+  let crew: CrewFixture;
+  beforeAll(async () => {
+    app = await createTestApp();
+    crew = await crewWithMembers(app, 'Weigh-in Crew');
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('counts the five heaviest legal fish of a day with seven catches, a short fish and a dead fish', async () => {
+    const base = `/api/crews/${crew.crewId}`;
+    const lake = await createLake(crew.angler, crew.crewId);
+    // Rules (common practice, stated per event): 5 fish, 12 in minimum, 0.25 lb per dead fish counted, 1 lb per short fish.
+    const event = await createEvent(crew.angler, crew.crewId, lake.id, { rules: { fishPerDay: 5, minLengthIn: 12, deadFishPenaltyLb: 0.25, shortFishPenaltyLb: 1 } });
+    const [day1, day2] = await competitionDays(crew.angler, crew.crewId, event.id);
+    const fish = [
+      { t: '07:00', w: 4.1, l: 19, fate: 'weighed' },
+      { t: '07:40', w: 3.6, l: 18, fate: 'weighed' },
+      { t: '08:20', w: 2.2, l: 15, fate: 'culled' },
+      { t: '09:00', w: 3.0, l: 17, fate: 'dead' },
+      { t: '09:30', w: 2.9, l: 11.5, fate: 'weighed' }, // short: never counted, costs 1 lb
+      { t: '10:15', w: 2.8, l: 16, fate: 'weighed' },
+      { t: '11:00', w: 2.5, l: 15.5, fate: 'weighed' },
+      { t: '12:00', w: 5.0, l: 20, fate: 'released' }, // released at once: never at the scale
+    ];
+    const ids: string[] = [];
+    for (const f of fish) {
+      const res = await crew.angler.post(`${base}/catches`, { competitionDayId: day1!.id, caughtAt: f.t, species: 'largemouth', weightLb: f.w, lengthIn: f.l, fate: f.fate });
+      expectOk(res, 201);
+      ids.push(res.body.id);
+    }
+    const res = await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`);
+    expectOk(res);
+    const view = res.body as WeighInsView;
+    const d1 = view.days[0]!;
+    // Worked by hand: legal candidates 4.1, 3.6, 3.0 dead (2.75 net), 2.8, 2.5, 2.2 → top five by net value:
+    // 4.1, 3.6, 2.8, 3.0 (dead, 2.75), 2.5; gross 16.0; penalties 0.25 (dead) + 1 (short) = 1.25; net 14.75.
+    expect(new Set(d1.computed.counted)).toEqual(new Set([ids[0], ids[1], ids[5], ids[3], ids[6]]));
+    expect(d1.computed.short).toEqual([ids[4]]);
+    expect(d1.computed.culled).toEqual(expect.arrayContaining([ids[2], ids[4], ids[7]]));
+    expect(d1.computed.grossLb).toBeCloseTo(16.0, 6);
+    expect(d1.computed.penaltyLb).toBeCloseTo(1.25, 6);
+    expect(d1.computed.netLb).toBeCloseTo(14.75, 6);
+    expect(d1.official).toBeNull();
+    expect(d1.catches).toHaveLength(8);
+    expect(view.days[1]!.computed).toMatchObject({ counted: [], grossLb: 0, netLb: 0 });
+    expect(view.totals.computedNetLb).toBeCloseTo(14.75, 6);
+    expect(view.totals.officialLb).toBeCloseTo(14.75, 6);
+
+    // The official figures override in the totals; a late check-in adds its penalty to the computed bag.
+    const put = await crew.angler.send('put', `${base}/competition-days/${day1!.id}/weigh-in`, { grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2 });
+    expectOk(put);
+    expect(put.body).toMatchObject({ competitionDayId: day1!.id, officialLb: 12.77, dayPlace: 4 });
+    const bad = await crew.angler.send('put', `${base}/competition-days/${day2!.id}/weigh-in`, { officialLb: -1 });
+    expect(bad.status).toBe(400);
+    const after = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
+    expect(after.days[0]!.official).toEqual({ grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2 });
+    expect(after.days[0]!.computed.penaltyLb).toBeCloseTo(3.25, 6); // 1.25 + 2 min × 1 lb/min
+    expect(after.totals.officialLb).toBeCloseTo(12.77, 6);
+    expect(after.totals.computedNetLb).toBeCloseTo(12.75, 6);
+    const recorded = await testEm(app).find(JournalEvent, { crewId: crew.crewId, type: 'WeighInRecorded' });
+    expect(recorded).toHaveLength(1); // the refused PUT wrote nothing
+    expect(recorded[0]!.payload).toMatchObject({ competitionDayId: day1!.id, eventId: event.id, officialLb: 12.77, lateMinutes: 2, version: 1 });
+    expect((await journalOf(app, ids[0]!)).map((e) => e.type)).toEqual(['CatchLogged']);
+  });
+});
