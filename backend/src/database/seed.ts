@@ -5,6 +5,7 @@ import { DatabaseEnv, validateEnvAs } from '../config/env.validation';
 import { User } from '../users/user.entity';
 import { buildOrmConfig } from './mikro-orm.config';
 import { DatabaseSeeder } from './seeders/database.seeder';
+import { JournalDemoSeeder } from './seeders/journal-demo.seeder';
 
 async function main(): Promise<void> {
   const orm = await MikroORM.init({ ...buildOrmConfig(validateEnvAs(DatabaseEnv, process.env)), debug: false });
@@ -12,6 +13,8 @@ async function main(): Promise<void> {
     const users = await orm.em.fork().count(User, {});
     if (users > 0) {
       process.stdout.write('already seeded\n');
+      // A database seeded before the journal existed still gets the demo journal (the seeder checks).
+      await orm.getSeeder().seed(JournalDemoSeeder);
       return;
     }
     await orm.getSeeder().seed(DatabaseSeeder);

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/core';
 import { Seeder } from '@mikro-orm/seeder';
 import { DemoAccountsSeeder } from './demo-accounts.seeder';
+import { JournalDemoSeeder } from './journal-demo.seeder';
 import type { DemoSeedContext } from './demo-seed-context';
 
 /**
@@ -10,6 +11,6 @@ import type { DemoSeedContext } from './demo-seed-context';
 export class DatabaseSeeder extends Seeder {
   async run(em: EntityManager): Promise<void> {
     const context: DemoSeedContext = { users: {}, crews: {} };
-    await this.call(em, [DemoAccountsSeeder], context);
+    await this.call(em, [DemoAccountsSeeder, JournalDemoSeeder], context);
   }
 }
