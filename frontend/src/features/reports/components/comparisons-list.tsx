@@ -12,7 +12,7 @@ export function ComparisonsList({ comparisons }: { comparisons: EventComparison[
   return (
     <ul className={styles.comparisons} aria-label="Changes between events">
       {ordered.map((c) => (
-        <li key={`${c.key}-${c.a}-${c.b}`} className={styles.comparison}>
+        <li key={`${c.key ?? 'none'}-${c.a}-${c.b}`} className={styles.comparison}>
           {c.moreThanChance ? (
             <Label variant="success" size="large">
               more than chance

@@ -24,9 +24,9 @@ interface HitRateRow {
 const UNCERTAIN_ID = 'sb-hit-rate-uncertain';
 const uncertain = uncertainDef(UNCERTAIN_ID, PRIMARY_BAR);
 
-/** The label on the axis: a group with few finds behind it says so. */
-function axisLabel(row: HitRateRow): string {
-  return row.few ? `${row.group} (few finds)` : row.group;
+/** The label on the axis: a group with few finds (or fish) behind it says so. */
+function axisLabel(row: HitRateRow, unit: 'find' | 'catch'): string {
+  return row.few ? `${row.group} (few ${unit === 'catch' ? 'fish' : 'finds'})` : row.group;
 }
 
 /**
@@ -34,23 +34,29 @@ function axisLabel(row: HitRateRow): string {
  * as a whisker and the sample-size-adjusted rate as a diamond. Groups with fewer than {@link FEW_FINDS}
  * finds fished are hatched and tagged, so a wide whisker on a thin sample reads as uncertain at a glance.
  */
-export function HitRateChart({ groups, title }: { groups: HitRateGroup[]; title: string }) {
+export function HitRateChart({ groups, title, unit = 'find' }: { groups: HitRateGroup[]; title: string; unit?: 'find' | 'catch' }) {
+  // Find groupings chart the share of finds fished that produced; catch groupings the share of all fish.
+  const measureOf = (g: HitRateGroup) => (unit === 'catch' ? g.shareOfFish : g.producing);
+  const trialsWord = unit === 'catch' ? 'fish' : 'finds fished';
   // nivo draws the first row at the bottom of a horizontal chart; reverse so the list reads top-down.
   const rows: HitRateRow[] = groups
-    .map((g) => ({
-      group: g.label,
-      rate: g.producing.rate * 100,
-      lower: g.producing.lower * 100,
-      upper: g.producing.upper * 100,
-      shrunk: g.producing.shrunk * 100,
-      few: g.findsFished < FEW_FINDS ? 1 : 0,
-      trials: g.producing.trials,
-      successes: g.producing.successes,
-    }))
+    .map((g) => {
+      const m = measureOf(g);
+      return {
+        group: g.label,
+        rate: (m.rate ?? 0) * 100,
+        lower: m.lower * 100,
+        upper: m.upper * 100,
+        shrunk: m.shrunk === null ? -1 : m.shrunk * 100,
+        few: (unit === 'catch' ? g.fishCount : g.findsFished) < FEW_FINDS ? 1 : 0,
+        trials: m.trials,
+        successes: m.successes,
+      };
+    })
     .reverse();
   const byLabel = new Map(rows.map((r) => [r.group, r]));
   const height = Math.max(180, 60 + rows.length * 42);
-  const longest = Math.max(...rows.map((r) => axisLabel(r).length), 8);
+  const longest = Math.max(...rows.map((r) => axisLabel(r, unit).length), 8);
 
   const whiskers = whiskerLayer<HitRateRow>(
     (bar: ComputedBarDatum<HitRateRow>) => {
@@ -58,8 +64,11 @@ export function HitRateChart({ groups, title }: { groups: HitRateGroup[]; title:
       return {
         lower: row.lower,
         upper: row.upper,
-        marker: row.shrunk,
-        description: `${row.group}: ${row.successes} of ${row.trials} finds fished produced (${percent(row.rate / 100)}, range ${percentRange(row.lower / 100, row.upper / 100)}); adjusted ${percent(row.shrunk / 100)}`,
+        marker: row.shrunk < 0 ? null : row.shrunk,
+        description:
+          unit === 'catch'
+            ? `${row.group}: ${row.successes} of ${row.trials} fish (${percent(row.rate / 100)}, range ${percentRange(row.lower / 100, row.upper / 100)})`
+            : `${row.group}: ${row.successes} of ${row.trials} finds fished produced (${percent(row.rate / 100)}, range ${percentRange(row.lower / 100, row.upper / 100)}); adjusted ${row.shrunk < 0 ? '—' : percent(row.shrunk / 100)}`,
       };
     },
     'horizontal',
@@ -87,8 +96,8 @@ export function HitRateChart({ groups, title }: { groups: HitRateGroup[]; title:
             enableGridY={false}
             enableGridX
             gridXValues={[0, 25, 50, 75, 100]}
-            axisBottom={{ tickValues: [0, 25, 50, 75, 100], format: (v) => `${v} %`, legend: 'Share of finds fished that produced a fish', legendPosition: 'middle', legendOffset: 36 }}
-            axisLeft={{ format: (v) => axisLabel(byLabel.get(String(v)) ?? ({ group: String(v), few: 0 } as HitRateRow)) }}
+            axisBottom={{ tickValues: [0, 25, 50, 75, 100], format: (v) => `${v} %`, legend: unit === 'catch' ? 'Share of all fish caught' : 'Share of finds fished that produced a fish', legendPosition: 'middle', legendOffset: 36 }}
+            axisLeft={{ format: (v) => axisLabel(byLabel.get(String(v)) ?? ({ group: String(v), few: 0 } as HitRateRow), unit) }}
             label={(d) => percent(Number(d.value) / 100)}
             labelPosition="start"
             labelOffset={6}
@@ -101,7 +110,7 @@ export function HitRateChart({ groups, title }: { groups: HitRateGroup[]; title:
             barAriaLabel={(d) => `${d.indexValue}: ${percent(Number(d.value) / 100)}`}
             tooltip={({ data }) => (
               <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
-                <strong>{data.group}</strong>: {data.successes} of {data.trials} finds fished ({percent(data.rate / 100)}), range{' '}
+                <strong>{data.group}</strong>: {data.successes} of {data.trials} {trialsWord} ({percent(data.rate / 100)}), range{' '}
                 {percentRange(data.lower / 100, data.upper / 100)}
               </div>
             )}
@@ -112,10 +121,10 @@ export function HitRateChart({ groups, title }: { groups: HitRateGroup[]; title:
       <ChartLegend
         label="How to read the hit-rate chart"
         items={[
-          { key: 'bar', sample: <PatternSwatch def={null} colour={PRIMARY_BAR} />, text: 'Share of finds fished that produced' },
+          { key: 'bar', sample: <PatternSwatch def={null} colour={PRIMARY_BAR} />, text: unit === 'catch' ? 'Share of all fish' : 'Share of finds fished that produced' },
           { key: 'whisker', sample: <WhiskerSample />, text: 'Likely range (95 %)' },
           { key: 'marker', sample: <MarkerSample />, text: 'Rate adjusted for how many finds there were' },
-          { key: 'few', sample: <PatternSwatch def={uncertainDef(`${UNCERTAIN_ID}-swatch`, PRIMARY_BAR)} colour={PRIMARY_BAR} />, text: `Hatched: fewer than ${FEW_FINDS} finds fished, read with care` },
+          { key: 'few', sample: <PatternSwatch def={uncertainDef(`${UNCERTAIN_ID}-swatch`, PRIMARY_BAR)} colour={PRIMARY_BAR} />, text: `Hatched: fewer than ${FEW_FINDS} ${trialsWord}, read with care` },
         ]}
       />
     </div>

@@ -11,7 +11,24 @@ const column = createColumnHelper<HitRateGroup>();
 
 /** The numbers behind the hit-rate chart: one row per group, sortable by any column. */
 export function HitRatesTable({ groups, catchBased, units }: { groups: HitRateGroup[]; catchBased: boolean; units: UnitPreferences }) {
-  const columns = [
+  const columns = catchBased ? catchColumns(units) : findColumns();
+  return (
+    <ReportTable
+      data={groups}
+      columns={columns}
+      caption={
+        catchBased
+          ? 'Fish by group. Share of fish: this group’s fish out of all fish, with its likely range; adjusted share pulled toward an even split when few fish stand behind it.'
+          : "Hit rates by group. Adjusted rate: pulled toward the crew's overall rate when few finds stand behind a group; rank follows it."
+      }
+      getRowId={(g) => g.key ?? 'not-recorded'}
+      initialSorting={[{ id: 'rank', desc: false }]}
+    />
+  );
+}
+
+function findColumns() {
+  return [
     column.accessor('label', {
       header: 'Group',
       cell: (info) => (
@@ -41,33 +58,38 @@ export function HitRatesTable({ groups, catchBased, units }: { groups: HitRateGr
       cell: (info) => percent(info.getValue()),
       meta: { numeric: true },
     }),
-    column.accessor((g) => g.rank ?? Number.POSITIVE_INFINITY, {
-      id: 'rank',
-      header: 'Rank',
-      cell: (info) => info.row.original.rank ?? '—',
-      meta: { numeric: true },
-      sortDescFirst: false,
-    }),
-    ...(catchBased
-      ? [
-          column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
-          column.accessor('weightLb', { header: 'Weight', cell: (info) => formatWeight(info.getValue(), units.weight), meta: { numeric: true } }),
-          column.accessor((g) => g.shareOfFish ?? null, {
-            id: 'shareOfFish',
-            header: 'Share of fish',
-            cell: (info) => percent(info.getValue()),
-            meta: { numeric: true },
-          }),
-        ]
-      : []),
+    rankColumn,
   ];
-  return (
-    <ReportTable
-      data={groups}
-      columns={columns}
-      caption="Hit rates by group. Adjusted rate: pulled toward the crew's overall rate when few finds stand behind a group; rank follows it."
-      getRowId={(g) => g.key}
-      initialSorting={[{ id: 'rank', desc: false }]}
-    />
-  );
+}
+
+const rankColumn = column.accessor('rank', { header: 'Rank', meta: { numeric: true }, sortDescFirst: false });
+
+function catchColumns(units: UnitPreferences) {
+  return [
+    column.accessor('label', {
+      header: 'Group',
+      cell: (info) => (
+        <span className={styles.groupCell}>
+          {info.getValue()}
+          {info.row.original.fishCount < FEW_FINDS ? (
+            <Label variant="attention" size="small">
+              few fish
+            </Label>
+          ) : null}
+        </span>
+      ),
+    }),
+    column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
+    column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
+    column.accessor('weightLb', { header: 'Weight', cell: (info) => formatWeight(info.getValue(), units.weight), meta: { numeric: true } }),
+    column.accessor((g) => g.shareOfFish.rate, { id: 'share', header: 'Share of fish', cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor((g) => g.shareOfFish.upper - g.shareOfFish.lower, {
+      id: 'interval',
+      header: 'Likely range',
+      cell: (info) => percentRange(info.row.original.shareOfFish.lower, info.row.original.shareOfFish.upper),
+      meta: { numeric: true },
+    }),
+    column.accessor((g) => g.shareOfFish.shrunk, { id: 'shrunk', header: 'Adjusted share', cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    rankColumn,
+  ];
 }

@@ -13,7 +13,8 @@ const PREFIX = 'sb-lake-comparison';
 
 /** "Corvane Dog Days Classic 2024" — the year tells repeated events apart. */
 export function eventLabel(event: ComparedEvent): string {
-  return event.name.includes(String(event.year)) ? event.name : `${event.name} ${event.year}`;
+  if (event.year === null || event.name.includes(String(event.year))) return event.name;
+  return `${event.name} ${event.year}`;
 }
 
 /**
@@ -22,13 +23,14 @@ export function eventLabel(event: ComparedEvent): string {
  * whose whiskers do not overlap.
  */
 export function LakeComparisonChart({ events, groups, title }: { events: ComparedEvent[]; groups: LakeComparisonGroup[]; title: string }) {
+  // nivo rows hold strings and numbers only, so an unrecorded group key (null) is dropped here.
   const rows: Row[] = groups
     .map((g) => {
       const row: Row = { group: g.label };
       for (const event of events) {
         const rate = g.perEvent[event.id];
         if (!rate) continue;
-        row[event.id] = rate.rate * 100;
+        row[event.id] = (rate.rate ?? 0) * 100;
         row[`${event.id}:lower`] = rate.lower * 100;
         row[`${event.id}:upper`] = rate.upper * 100;
         row[`${event.id}:n`] = rate.findsFished;

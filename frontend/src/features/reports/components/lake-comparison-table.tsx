@@ -29,7 +29,7 @@ export function LakeComparisonTable({ events, groups }: { events: ComparedEvent[
       data={groups}
       columns={columns}
       caption="Hit rate per event: share of finds fished that produced, likely range, and produced of fished."
-      getRowId={(g) => g.key}
+      getRowId={(g) => g.key ?? 'not-recorded'}
     />
   );
 }

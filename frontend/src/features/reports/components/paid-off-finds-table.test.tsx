@@ -9,7 +9,7 @@ import { PaidOffFindsTable } from './paid-off-finds-table';
 useLaidOutElements(1000, 600);
 
 function row(findId: string, name: string, kind: EventFindRow['kind'], outcome: EventFindRow['outcome'], fishCount: number, weightLb: number, depthFt: number | null): EventFindRow {
-  return { findId, name, kind, subKind: null, depthFt, hardness: 3, waterTempF: 84, fished: outcome !== 'not-fished', fishCount, weighedCount: outcome === 'weighed' ? fishCount : 0, weightLb, firstBiteAt: null, outcome };
+  return { findId, name, kind, subKind: '', depthFt, hardness: 3, waterTempF: 84, practiced: true, fished: outcome !== 'not-fished', fishCount, weighedCount: outcome === 'weighed' ? fishCount : 0, weightLb, firstBiteAt: null, outcome };
 }
 
 const finds = [

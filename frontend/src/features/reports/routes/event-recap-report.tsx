@@ -13,6 +13,7 @@ import { filterQuery, useReportFilters } from '../api/report-filters';
 import { useEventRecap } from '../api/reports-api';
 import { BagByDay, ordinalPlace } from '../components/bag-by-day';
 import { ProducingFindsTable } from '../components/producing-finds-table';
+import { ReadingsList } from '../components/readings-list';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
 import { percent, percentRange } from '../components/report-labels';
@@ -44,9 +45,9 @@ export function Component() {
 
   const eventView = events.find((e) => e.id === eventId);
   const lake = lakes.find((l) => l.id === eventView?.lakeId);
-  const lakeFromRecap = recap.data && typeof recap.data.event.lake === 'object' ? recap.data.event.lake : null;
+  const lakeFromRecap = recap.data?.event.lake ?? null;
   const timeZone = lakeFromRecap?.timeZone ?? lake?.timeZone ?? 'UTC';
-  const lakeName = lakeFromRecap?.name ?? (typeof recap.data?.event.lake === 'string' ? recap.data.event.lake : lake?.name) ?? '';
+  const lakeName = lakeFromRecap?.name ?? lake?.name ?? '';
   const query = filterQuery({ ...filters, eventId: undefined });
 
   const filtersBar = (
@@ -86,7 +87,7 @@ export function Component() {
               {data.event.name}
             </Heading>
             <Text as="p" className={styles.muted}>
-              {lakeName} · {data.event.dates.map(dayLabel).join(', ')}
+              {lakeName} · {data.event.dates.competition.map(dayLabel).join(', ')}
             </Text>
           </div>
           <div className={`${styles.toolbar} sb-no-print`}>
@@ -110,7 +111,7 @@ export function Component() {
             <span className={styles.muted}>Event total</span>
             <span className={styles.figure}>{formatWeight(data.totals.officialLb ?? data.totals.netLb, units.weight)}</span>
             <span className={styles.muted}>
-              {data.totals.officialLb !== null && data.totals.officialLb !== undefined ? `official; our count ${formatWeight(data.totals.netLb, units.weight)}` : 'our count (no official figures)'}
+              {data.days.some((d) => d.official?.officialLb !== null && d.official?.officialLb !== undefined) ? `official where recorded; our count ${formatWeight(data.totals.netLb, units.weight)}` : 'our count (no official figures)'}
             </span>
           </div>
           <div className={styles.card}>
@@ -140,6 +141,8 @@ export function Component() {
             </span>
           </div>
         </div>
+
+        <ReadingsList readings={data.readings ?? []} title="The event in plain words" />
 
         <section aria-labelledby="recap-days-heading">
           <Heading as="h4" id="recap-days-heading" variant="medium">

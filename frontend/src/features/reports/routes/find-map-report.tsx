@@ -50,7 +50,7 @@ export function Component() {
       </ReportEmpty>
     );
   else {
-    const hidden = report.data.finds.every((f) => f.xM === null || f.yM === null);
+    const hidden = report.data.positionsHidden || report.data.finds.every((f) => f.xM === null || f.yM === null);
     body = hidden ? (
       <div className={styles.stack}>
         <Banner

@@ -72,7 +72,7 @@ describe('Hit-rate report', () => {
     expect(shown).toEqual(byRank);
     const veg = within(table).getByRole('rowheader', { name: 'Vegetation' }).closest('tr')!;
     const vegGroup = byKind.groups.find((g) => g.key === 'vegetation')!;
-    expect(within(veg).getByText(`${Math.round(vegGroup.producing.shrunk * 100)} %`)).toBeInTheDocument();
+    expect(within(veg).getByText(`${Math.round((vegGroup.producing.shrunk ?? 0) * 100)} %`)).toBeInTheDocument();
     expect(within(veg).getAllByRole('cell').at(-1)!.textContent).toBe(String(vegGroup.rank));
   });
 

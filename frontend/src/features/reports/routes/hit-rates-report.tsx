@@ -3,6 +3,7 @@ import { useSearchParams } from 'react-router-dom';
 import { useDocumentTitle } from '../../../components/layouts/page-header';
 import { ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { useUnitPreferences } from '../../../lib/journal-access';
+import { formatWeight } from '../../../lib/units';
 import { useReportFilters } from '../api/report-filters';
 import { useHitRates } from '../api/reports-api';
 import { GroupingSwitch, readGrouping } from '../components/grouping-switch';
@@ -50,7 +51,7 @@ export function Component() {
         <LoadingState label="Counting finds…" />
       ) : report.isError ? (
         <ErrorState error={report.error} title="The hit rates could not be loaded" onRetry={() => void report.refetch()} />
-      ) : report.data.groups.length === 0 || report.data.overall.findsFished === 0 ? (
+      ) : report.data.groups.length === 0 || (catchBased ? report.data.overall.fishCount === 0 : report.data.overall.findsFished === 0) ? (
         <ReportEmpty title="No finds fished for these filters yet" to={journalHref.finds(crew.id)} action="Go to the finds">
           Hit rates need practice finds and competition catches tied to them. Enter your finds (by hand or from a GPX
           file), log the fish you caught on competition days against the find they came from, then come back. Or widen
@@ -59,16 +60,16 @@ export function Component() {
       ) : (
         <div className={styles.stack}>
           <Text as="p" className={styles.muted}>
-            Overall, {report.data.overall.findsProducing} of {report.data.overall.findsFished} finds fished produced a fish (
-            {percent(report.data.overall.producing.rate)}, likely {percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}).
-            {catchBased ? ' Sun-and-moon periods and times of day are counted by fish: one find’s fish fall in several periods.' : ''}
+            {catchBased
+              ? `${report.data.overall.fishCount} fish, ${formatWeight(report.data.overall.weightLb, units.weight)} in all. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
+              : `Overall, ${report.data.overall.findsProducing} of ${report.data.overall.findsFished} finds fished produced a fish (${percent(report.data.overall.producing.rate)}, likely ${percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}).`}
           </Text>
           <div className={styles.split}>
             <div className={styles.panel}>
               <Heading as="h4" variant="small" className={styles.panelTitle}>
                 By {GROUPING_LABELS[by].toLowerCase()}
               </Heading>
-              <HitRateChart groups={report.data.groups} title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()}, with likely ranges`} />
+              <HitRateChart groups={report.data.groups} unit={catchBased ? 'catch' : 'find'} title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()}, with likely ranges`} />
             </div>
             <div className={styles.panel}>
               <HitRatesTable groups={report.data.groups} catchBased={catchBased} units={units} />

@@ -12,6 +12,7 @@ const hardChange = comparison('hard-bottom', 'Hard bottom', 'ev-1', 'ev-2', 14, 
 
 const report: LakeComparisonReport = {
   lake: { id: 'lake-a', name: 'Test Reservoir' },
+  by: 'kind',
   events: [
     { id: 'ev-1', name: 'Summer Test Open', firstDate: '2023-06-10', season: 'summer', year: 2023 },
     { id: 'ev-2', name: 'Summer Test Open', firstDate: '2024-06-15', season: 'summer', year: 2024 },

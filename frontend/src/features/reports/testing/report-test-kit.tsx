@@ -57,6 +57,7 @@ export function rate(successes: number, trials: number, shrunk?: number): Rate {
 
 /** A hit-rate answer for groups of [key, label, produced, fished], shrunk and ranked with the analytics library. */
 export function hitRates(groups: Array<[string, string, number, number]>, readings: string[]): HitRatesReport {
+  const totalFish = groups.reduce((acc, g) => acc + g[2] * 2, 0);
   const shrunk = shrinkRates(groups.map(([key, , successes, trials]) => ({ key, successes, trials })));
   const order = [...shrunk].sort((a, b) => b.shrunk - a.shrunk).map((s) => s.key);
   const rows: HitRateGroup[] = groups.map(([key, label, successes, trials], i) => ({
@@ -67,14 +68,23 @@ export function hitRates(groups: Array<[string, string, number, number]>, readin
     findsProducing: successes,
     findsWeighed: Math.max(0, successes - 1),
     fishCount: successes * 2,
+    weighedCount: successes,
     weightLb: successes * 6.5,
     producing: rate(successes, trials, shrunk[i].shrunk),
     weighed: rate(Math.max(0, successes - 1), trials),
+    shareOfFish: rate(successes * 2, Math.max(1, totalFish)),
     rank: order.indexOf(key) + 1,
   }));
   const s = groups.reduce((acc, g) => acc + g[2], 0);
   const t = groups.reduce((acc, g) => acc + g[3], 0);
-  return { by: 'kind', groups: rows, overall: { findsFished: t, findsProducing: s, producing: rate(s, t) }, readings };
+  return {
+    by: 'kind',
+    unit: 'find',
+    groups: rows,
+    overall: { finds: t, findsFished: t, findsProducing: s, fishCount: totalFish, weightLb: s * 6.5, producing: rate(s, t) },
+    readings,
+    eventCount: 2,
+  };
 }
 
 /** A comparison between two events as the API builds it, with compareProportions from @shoalbook/analytics. */
