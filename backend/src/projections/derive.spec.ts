@@ -30,7 +30,9 @@ const catchArb = (finds: number) =>
     minute: fc.integer({ min: 0, max: 600 }),
   });
 
-function journal(finds: fc.infer<typeof findArb>[], catches: fc.infer<ReturnType<typeof catchArb>>[]): JournalRecord[] {
+type Of<A> = A extends fc.Arbitrary<infer T> ? T : never;
+
+function journal(finds: Of<typeof findArb>[], catches: Of<ReturnType<typeof catchArb>>[]): JournalRecord[] {
   let seq = 0;
   const r = (type: string, aggregateType: string, payload: Record<string, unknown>): JournalRecord => ({ seq: ++seq, crewId: 'crew', type, aggregateType, aggregateId: String(payload.id), payload });
   return [

@@ -49,6 +49,7 @@ export const OVERRIDES: Record<string, Expectation> = {
   'POST /api/invites/accept': signedIn,
   'GET /api/admin/users': adminOnly,
   'PATCH /api/admin/users/{userId}': adminOnly,
+  'POST /api/admin/projections/rebuild': adminOnly,
   'GET /api/dev/outbox': everyone,
   // Journal exports carry positions: owners and anglers only, even though they are GETs.
   'GET /api/crews/{crewId}/export.json': crewWrite,
