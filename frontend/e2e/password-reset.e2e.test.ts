@@ -63,12 +63,12 @@ describe('password reset by e-mailed link', () => {
     await page.getByRole('heading', { level: 1, name: 'Choose a new password' }).waitFor();
 
     // Two different entries are caught before anything is sent.
-    await page.getByLabel('New password', { exact: true }).fill(newPassword);
-    await page.getByLabel('New password, once more').fill(`${newPassword}!`);
+    await page.locator('input[name="password"]').fill(newPassword);
+    await page.locator('input[name="repeatPassword"]').fill(`${newPassword}!`);
     await page.getByRole('button', { name: 'Save new password' }).click();
     await page.getByText('The two passwords are not the same.').waitFor();
 
-    await page.getByLabel('New password, once more').fill(newPassword);
+    await page.locator('input[name="repeatPassword"]').fill(newPassword);
     await page.getByRole('button', { name: 'Save new password' }).click();
     await page.getByRole('heading', { name: 'Your new password is set' }).waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);
@@ -92,8 +92,8 @@ describe('password reset by e-mailed link', () => {
   it('the reset link works only once', async () => {
     const { page } = browser;
     await page.goto(resetLink);
-    await page.getByLabel('New password', { exact: true }).fill('yet another long password');
-    await page.getByLabel('New password, once more').fill('yet another long password');
+    await page.locator('input[name="password"]').fill('yet another long password');
+    await page.locator('input[name="repeatPassword"]').fill('yet another long password');
     await page.getByRole('button', { name: 'Save new password' }).click();
     await page.getByRole('heading', { name: 'This reset link no longer works' }).waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);

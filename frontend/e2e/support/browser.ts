@@ -51,6 +51,8 @@ export async function openBrowser(viewport = { width: 1280, height: 900 }): Prom
 
 /** Sign in through the form and wait until the app has moved on from /sign-in. */
 export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  // Start from no session, so one failed test cannot leave the next one signed in as someone else.
+  await page.context().clearCookies();
   await page.goto('/sign-in');
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);

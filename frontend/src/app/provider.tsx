@@ -7,7 +7,8 @@ import type { ReactNode } from 'react';
 export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
   return (
     <ThemeProvider colorMode="light">
-      <BaseStyles className="sb-root">
+      {/* Inline links are underlined, so they never rely on colour alone (WCAG 1.4.1). */}
+      <BaseStyles className="sb-root" data-a11y-link-underlines="true">
         <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
       </BaseStyles>
     </ThemeProvider>
