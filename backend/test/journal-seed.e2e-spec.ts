@@ -48,7 +48,8 @@ describe('demo journal seeding', () => {
     const withResults = demo.weighIns[0]!;
     const eventId = events.body.find((e: { name: string }) => e.name === demo.events.find((d) => d.id === withResults.eventId)!.name).id;
     const w = (await crew.angler.get(`/api/crews/${crewId}/events/${eventId}/weigh-ins`)).body as WeighInsView;
-    expect(w.days[0]!.official).toMatchObject({ officialLb: withResults.officialLb, dayPlace: withResults.dayPlace });
-    expect(w.days[0]!.computed.counted.length).toBeGreaterThan(0);
+    const day = w.days.find((d) => d.date === withResults.competitionDate)!;
+    expect(day.official).toMatchObject({ officialLb: withResults.officialLb, dayPlace: withResults.dayPlace, lateMinutes: withResults.lateMinutes });
+    expect(day.computed.counted.length).toBeGreaterThan(0);
   });
 });
