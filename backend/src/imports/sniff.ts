@@ -1,4 +1,4 @@
-import FileType = require('file-type');
+import * as FileType from 'file-type';
 import { ImportFileError } from './import-error';
 
 /**

@@ -1,6 +1,6 @@
 import { type CallHandler, type ExecutionContext, HttpStatus, Injectable, type NestInterceptor, mixin, type Type } from '@nestjs/common';
 import type { Request, Response } from 'express';
-import multer = require('multer');
+import multer from 'multer';
 import type { Observable } from 'rxjs';
 import { ApiException } from '../common/errors/api-errors';
 import { JournalErrorCode } from '../journal/journal-errors';

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { DEPTH_UNITS, LENGTH_UNITS, TEMPERATURE_UNITS, WEIGHT_UNITS, type DepthUnit, type LengthUnit, type TemperatureUnit, type WeightUnit } from '@shoalbook/shared';
-import { IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsNumber, Max, Min, ValidateIf } from 'class-validator';
 
 const finite = { allowNaN: false, allowInfinity: false };
 

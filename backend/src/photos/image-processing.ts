@@ -1,4 +1,4 @@
-import FileType = require('file-type');
+import * as FileType from 'file-type';
 import sharp from 'sharp';
 
 /** Upload limits (our choices): 8 MB, and at most 40 megapixels so a small file cannot decode to gigabytes. */
