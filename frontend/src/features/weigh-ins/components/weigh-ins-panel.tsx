@@ -46,7 +46,11 @@ export function WeighInsPanel({
   if (weighIns.isError) return <ErrorState error={weighIns.error} onRetry={() => weighIns.refetch()} />;
   const { days, totals } = weighIns.data;
   if (days.length === 0) {
-    return <EmptyState title="No competition days">Add competition days to the event; each gets its own weigh-in here.</EmptyState>;
+    return (
+      <EmptyState title="No competition days">
+        Add competition days to the event; each gets its own weigh-in here.
+      </EmptyState>
+    );
   }
   const w = (lb: number | null | undefined) => formatWeight(lb, prefs.weight);
   return (
@@ -75,35 +79,37 @@ export function WeighInsPanel({
           <Heading as="h3" id={`day-${day.competitionDayId}`} className={styles.heading}>
             {dayLabel(day.date)}
           </Heading>
-          <dl className={styles.figures} aria-label={`Bag of ${dayLabel(day.date)}`}>
-            <div>
-              <dt>Counted fish</dt>
-              <dd>
-                {day.computed.counted.length} of {rules.fishPerDay}
-              </dd>
-            </div>
-            <div>
-              <dt>Gross</dt>
-              <dd>{w(day.computed.grossLb)}</dd>
-            </div>
-            <div>
-              <dt>Penalties</dt>
-              <dd>{day.computed.penaltyLb > 0 ? `−${w(day.computed.penaltyLb)}` : w(0)}</dd>
-            </div>
-            <div>
-              <dt>Net</dt>
-              <dd className={styles.net}>{w(day.computed.netLb)}</dd>
-            </div>
-            {day.official ? (
+          <div role="group" aria-label={`Bag of ${dayLabel(day.date)}`}>
+            <dl className={styles.figures}>
               <div>
-                <dt>Official</dt>
-                <dd className={styles.net}>
-                  {w(day.official.officialLb)}
-                  {day.official.dayPlace ? `, place ${day.official.dayPlace}` : ''}
+                <dt>Counted fish</dt>
+                <dd>
+                  {day.computed.counted.length} of {rules.fishPerDay}
                 </dd>
               </div>
-            ) : null}
-          </dl>
+              <div>
+                <dt>Gross</dt>
+                <dd>{w(day.computed.grossLb)}</dd>
+              </div>
+              <div>
+                <dt>Penalties</dt>
+                <dd>{day.computed.penaltyLb > 0 ? `−${w(day.computed.penaltyLb)}` : w(0)}</dd>
+              </div>
+              <div>
+                <dt>Net</dt>
+                <dd className={styles.net}>{w(day.computed.netLb)}</dd>
+              </div>
+              {day.official ? (
+                <div>
+                  <dt>Official</dt>
+                  <dd className={styles.net}>
+                    {w(day.official.officialLb)}
+                    {day.official.dayPlace ? `, place ${day.official.dayPlace}` : ''}
+                  </dd>
+                </div>
+              ) : null}
+            </dl>
+          </div>
           {day.official ? (
             <Text as="p" size="small" className={styles.muted}>
               The official figures override the computed ones in the totals.
@@ -153,7 +159,13 @@ export function WeighInsPanel({
           {canWrite ? (
             <Details className={styles.details}>
               <Details.Summary>Enter the official figures</Details.Summary>
-              <OfficialWeighInForm crewId={crewId} eventId={eventId} dayId={day.competitionDayId} official={day.official} prefs={prefs} />
+              <OfficialWeighInForm
+                crewId={crewId}
+                eventId={eventId}
+                dayId={day.competitionDayId}
+                official={day.official}
+                prefs={prefs}
+              />
             </Details>
           ) : null}
         </section>

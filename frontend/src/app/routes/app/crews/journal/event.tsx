@@ -139,7 +139,7 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
         ))}
       </SegmentedControl>
       {canWrite ? (
-        <Details>
+        <Details className={styles.details}>
           <Details.Summary>Start, check-in, weather and water of this day</Details.Summary>
           <CompetitionDayForm key={day.id} crewId={crewId} eventId={event.id} day={day} prefs={prefs} />
         </Details>
