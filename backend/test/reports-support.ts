@@ -12,19 +12,17 @@ import { testEm } from './utils/test-app';
 /** A fresh SQL EntityManager for raw reads of the read model. */
 export const sqlEm = (app: INestApplication) => testEm(app) as unknown as EntityManager;
 
-/** Wait until the projector has applied every journal event (its checkpoint reaches the last seq). */
+/** Wait until the projector has applied every journal event (its checkpoint reaches the last seq). Usable in hooks. */
 export async function waitForProjection(app: INestApplication, timeout = 15_000): Promise<void> {
-  await expect
-    .poll(
-      async () => {
-        const em = sqlEm(app);
-        const [j] = (await em.execute('SELECT COALESCE(MAX(seq), 0) AS m FROM journal_event')) as { m: unknown }[];
-        const [c] = (await em.execute("SELECT COALESCE(MAX(last_seq), 0) AS m FROM projection_checkpoint WHERE name = 'journal'")) as { m: unknown }[];
-        return Number(c?.m) >= Number(j?.m);
-      },
-      { timeout, interval: 50 },
-    )
-    .toBe(true);
+  const until = Date.now() + timeout;
+  for (;;) {
+    const em = sqlEm(app);
+    const [j] = (await em.execute('SELECT COALESCE(MAX(seq), 0) AS m FROM journal_event')) as { m: unknown }[];
+    const [c] = (await em.execute("SELECT COALESCE(MAX(last_seq), 0) AS m FROM projection_checkpoint WHERE name = 'journal'")) as { m: unknown }[];
+    if (Number(c?.m) >= Number(j?.m)) return;
+    if (Date.now() > until) throw new Error(`the projection did not catch up within ${timeout} ms (checkpoint ${Number(c?.m)}, journal ${Number(j?.m)})`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
 }
 
 const KEYS: Record<string, string> = {
