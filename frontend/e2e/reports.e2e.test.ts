@@ -1,5 +1,5 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
 import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD, waitForMail } from './support/stack';
 
@@ -27,6 +27,12 @@ describe('the reports, as the demo angler', () => {
   afterAll(async () => {
     await browser?.close();
   });
+  beforeEach((context) => {
+    // A picture of the screen as it was when a step failed says more than a timeout.
+    onTestFailed(() =>
+      screenshot(browser.page, `reports-failed-${context.task.name.slice(0, 40).replace(/\W+/g, '-')}`),
+    );
+  });
 
   it('opens the reports from the crew navigation, with the shared filters', async () => {
     const { page } = browser;
@@ -43,7 +49,9 @@ describe('the reports, as the demo angler', () => {
     await openReport(page, 'Hit rates');
     const table = page.getByRole('table');
     await table.waitFor();
-    const groups = (await table.getByRole('rowheader').allTextContents()).map((t) => t.replace(/few (finds|fish)$/, ''));
+    const groups = (await table.getByRole('rowheader').allTextContents()).map((t) =>
+      t.replace(/few (finds|fish)$/, ''),
+    );
     expect(groups).toEqual(expect.arrayContaining(['Hard bottom', 'Vegetation', 'Bait']));
     expect(await page.locator('.sb-whisker').count()).toBe(groups.length);
     const readings = page.getByRole('heading', { name: 'In plain words' }).locator('xpath=..').getByRole('listitem');
@@ -68,7 +76,9 @@ describe('the reports, as the demo angler', () => {
     await legend.waitFor();
     expect(await page.getByRole('combobox', { name: 'Lake' }).inputValue()).not.toBe('');
     const events = await legend.getByRole('listitem').allTextContents();
-    expect(events).toEqual(expect.arrayContaining(['Corvane Early Summer Open 2023', 'Corvane Early Summer Open 2024', RECAP_EVENT]));
+    expect(events).toEqual(
+      expect.arrayContaining(['Corvane Early Summer Open 2023', 'Corvane Early Summer Open 2024', RECAP_EVENT]),
+    );
     const changes = page.getByRole('list', { name: 'Changes between events' }).getByRole('listitem');
     expect(await changes.count()).toBeGreaterThan(0);
     const badges = await changes.allTextContents();
@@ -91,7 +101,9 @@ describe('the reports, as the demo angler', () => {
     expect(await counted.count()).toBe(5);
     expect(await page.getByText('Big fish').count()).toBeGreaterThan(0);
     await page.getByRole('heading', { name: 'How the bag grew' }).waitFor();
-    expect(await page.locator('figure[aria-label="Bag weight through each competition day"] svg path').count()).toBeGreaterThan(0);
+    expect(
+      await page.locator('figure[aria-label="Bag weight through each competition day"] svg path').count(),
+    ).toBeGreaterThan(0);
     await expectNoSeriousAxe(page, 'event recap');
     await screenshot(page, 'reports-recap');
 

@@ -2,7 +2,13 @@ import type { ReactNode } from 'react';
 import styles from './charts.module.css';
 
 /** A legend in HTML (readable, translatable and printable), one entry per mark with its drawn sample. */
-export function ChartLegend({ items, label }: { items: Array<{ key: string; sample: ReactNode; text: ReactNode }>; label: string }) {
+export function ChartLegend({
+  items,
+  label,
+}: {
+  items: Array<{ key: string; sample: ReactNode; text: ReactNode }>;
+  label: string;
+}) {
   return (
     <ul className={styles.legend} aria-label={label}>
       {items.map((item) => (

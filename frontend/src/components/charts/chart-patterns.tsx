@@ -57,7 +57,16 @@ export function PatternSwatch({ def, colour, size = 16 }: { def: Def | null; col
   return (
     <svg width={size} height={size} aria-hidden="true" focusable="false" style={{ flex: 'none' }}>
       {def ? <Defs defs={[def]} /> : null}
-      <rect x={0.5} y={0.5} width={size - 1} height={size - 1} rx={2} fill={def ? `url(#${def.id})` : colour} stroke="#1f2328" strokeWidth={1} />
+      <rect
+        x={0.5}
+        y={0.5}
+        width={size - 1}
+        height={size - 1}
+        rx={2}
+        fill={def ? `url(#${def.id})` : colour}
+        stroke="#1f2328"
+        strokeWidth={1}
+      />
     </svg>
   );
 }

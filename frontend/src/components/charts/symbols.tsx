@@ -62,7 +62,13 @@ export function SymbolMark({
   if (!standalone) return path;
   const box = size + 6;
   return (
-    <svg width={box} height={box} viewBox={`${-box / 2} ${-box / 2} ${box} ${box}`} aria-hidden="true" focusable="false">
+    <svg
+      width={box}
+      height={box}
+      viewBox={`${-box / 2} ${-box / 2} ${box} ${box}`}
+      aria-hidden="true"
+      focusable="false"
+    >
       {path}
     </svg>
   );

@@ -35,7 +35,8 @@ export function whiskerLayer<D extends BarDatum>(
           const centre = layout === 'horizontal' ? bar.y + bar.height / 2 : bar.x + bar.width / 2;
           const from = scale(interval.lower);
           const to = scale(interval.upper);
-          const at = (v: number, across: number) => (layout === 'horizontal' ? { x: v, y: centre + across } : { x: centre + across, y: v });
+          const at = (v: number, across: number) =>
+            layout === 'horizontal' ? { x: v, y: centre + across } : { x: centre + across, y: v };
           const a = at(from, 0);
           const b = at(to, 0);
           const capLine = (v: number) => {
@@ -47,7 +48,12 @@ export function whiskerLayer<D extends BarDatum>(
           const m = marker === null || marker === undefined ? null : at(scale(marker), 0);
           const r = Math.max(4, Math.min(7, thickness * 0.3));
           return (
-            <g key={bar.key} className="sb-whisker" data-bar={String(bar.data.indexValue)} data-series={String(bar.data.id)}>
+            <g
+              key={bar.key}
+              className="sb-whisker"
+              data-bar={String(bar.data.indexValue)}
+              data-series={String(bar.data.id)}
+            >
               <title>{interval.description}</title>
               {/* A white halo keeps the black line visible over dark bars and patterns. */}
               <line x1={a.x} y1={a.y} x2={b.x} y2={b.y} stroke="#ffffff" strokeWidth={5} strokeLinecap="round" />

@@ -8,9 +8,15 @@ const id = encodeURIComponent;
 export const reportPaths = {
   home: { path: 'reports', href: (crewId: string, query = '') => `${crew(crewId)}${query}` },
   hitRates: { path: 'hit-rates', href: (crewId: string, query = '') => `${crew(crewId)}/hit-rates${query}` },
-  lakeComparison: { path: 'lake-comparison', href: (crewId: string, query = '') => `${crew(crewId)}/lake-comparison${query}` },
+  lakeComparison: {
+    path: 'lake-comparison',
+    href: (crewId: string, query = '') => `${crew(crewId)}/lake-comparison${query}`,
+  },
   events: { path: 'events', href: (crewId: string, query = '') => `${crew(crewId)}/events${query}` },
-  recap: { path: 'events/:eventId', href: (crewId: string, eventId: string, query = '') => `${crew(crewId)}/events/${id(eventId)}${query}` },
+  recap: {
+    path: 'events/:eventId',
+    href: (crewId: string, eventId: string, query = '') => `${crew(crewId)}/events/${id(eventId)}${query}`,
+  },
   eventFinds: {
     path: 'events/:eventId/finds',
     href: (crewId: string, eventId: string, query = '') => `${crew(crewId)}/events/${id(eventId)}/finds${query}`,

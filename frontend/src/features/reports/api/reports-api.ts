@@ -16,7 +16,8 @@ import type {
 /** Every report key starts with the crew, so leaving a crew drops its reports with the rest of its data. */
 export const reportKeys = {
   all: (crewId: string) => ['crew', crewId, 'reports'] as const,
-  report: (crewId: string, name: string, params: Record<string, string>) => ['crew', crewId, 'reports', name, params] as const,
+  report: (crewId: string, name: string, params: Record<string, string>) =>
+    ['crew', crewId, 'reports', name, params] as const,
 };
 
 const reportPath = (crewId: string, rest: string) => crewApiPath(crewId, `/reports/${rest}`);
@@ -63,13 +64,17 @@ export function useFindMap(crewId: string, filters: ReportFilters) {
   const params: Record<string, string> = {};
   if (filters.lakeId) params.lakeId = filters.lakeId;
   if (filters.eventId) params.eventId = filters.eventId;
-  return useQuery({ ...reportQuery<FindMapReport>(crewId, 'find-map', 'find-map', params), enabled: Boolean(filters.lakeId) });
+  return useQuery({
+    ...reportQuery<FindMapReport>(crewId, 'find-map', 'find-map', params),
+    enabled: Boolean(filters.lakeId),
+  });
 }
 
 /** POST reports/events/:eventId/recap-email (owners and anglers): 202 { sent }. */
 export function useSendRecap(crewId: string, eventId: string) {
   return useMutation({
-    mutationFn: (userIds: string[]) => api.post<{ sent: number }>(reportPath(crewId, `events/${id(eventId)}/recap-email`), { userIds }),
+    mutationFn: (userIds: string[]) =>
+      api.post<{ sent: number }>(reportPath(crewId, `events/${id(eventId)}/recap-email`), { userIds }),
   });
 }
 

@@ -1,4 +1,5 @@
-import { Heading } from '@primer/react';
+import { Button, Heading } from '@primer/react';
+import { useState } from 'react';
 import type { UnitPreferences } from '@shoalbook/shared';
 import { clockOrDash, dayLabel } from '../../../lib/lake-time';
 import { formatLength, formatWeight } from '../../../lib/units';
@@ -11,13 +12,29 @@ function ordinalPlace(n: number | null | undefined): string {
   return `${n}${teen ? 'th' : n % 10 === 1 ? 'st' : n % 10 === 2 ? 'nd' : n % 10 === 3 ? 'rd' : 'th'}`;
 }
 
-function FishChips({ fish, kind, units, timeZone }: { fish: RecapFish[]; kind: 'counted' | 'culled'; units: UnitPreferences; timeZone: string }) {
-  if (fish.length === 0) return <p className={styles.muted}>{kind === 'counted' ? 'No fish counted.' : 'None culled.'}</p>;
+/** Culled lists can run to thirty fish: the heaviest few show, the rest on request (and always in print). */
+const CULLED_SHOWN = 8;
+
+function FishChips({
+  fish,
+  kind,
+  units,
+  timeZone,
+}: {
+  fish: RecapFish[];
+  kind: 'counted' | 'culled';
+  units: UnitPreferences;
+  timeZone: string;
+}) {
+  const [all, setAll] = useState(false);
+  if (fish.length === 0)
+    return <p className={styles.muted}>{kind === 'counted' ? 'No fish counted.' : 'None culled.'}</p>;
+  const sorted = [...fish].sort((a, b) => b.weightLb - a.weightLb);
+  const hidden = kind === 'culled' && !all ? Math.max(0, sorted.length - CULLED_SHOWN) : 0;
   return (
-    <ul className={styles.fishList} aria-label={kind === 'counted' ? 'Counted fish' : 'Culled fish'}>
-      {[...fish]
-        .sort((a, b) => b.weightLb - a.weightLb)
-        .map((f) => (
+    <>
+      <ul className={styles.fishList} aria-label={kind === 'counted' ? 'Counted fish' : 'Culled fish'}>
+        {sorted.slice(0, sorted.length - hidden).map((f) => (
           <li
             key={f.catchId}
             className={kind === 'counted' ? styles.fishCounted : styles.fishCulled}
@@ -26,7 +43,13 @@ function FishChips({ fish, kind, units, timeZone }: { fish: RecapFish[]; kind: '
             {formatWeight(f.weightLb, units.weight)}
           </li>
         ))}
-    </ul>
+      </ul>
+      {hidden > 0 ? (
+        <Button size="small" variant="invisible" className="sb-no-print" onClick={() => setAll(true)}>
+          Show {hidden} more culled
+        </Button>
+      ) : null}
+    </>
   );
 }
 
@@ -59,7 +82,11 @@ export function BagByDay({ days, units, timeZone }: { days: RecapDay[]; units: U
             <dt>Net, our count</dt>
             <dd>{formatWeight(day.netLb, units.weight)}</dd>
             <dt>Official</dt>
-            <dd>{day.official?.officialLb !== undefined && day.official?.officialLb !== null ? formatWeight(day.official.officialLb, units.weight) : 'not recorded'}</dd>
+            <dd>
+              {day.official?.officialLb !== undefined && day.official?.officialLb !== null
+                ? formatWeight(day.official.officialLb, units.weight)
+                : 'not recorded'}
+            </dd>
             {day.official?.lateMinutes ? (
               <>
                 <dt>Late check-in</dt>

@@ -8,7 +8,9 @@ import styles from './reports.module.css';
  */
 export function ComparisonsList({ comparisons }: { comparisons: EventComparison[] }) {
   if (comparisons.length === 0) return <p className={styles.muted}>One event only: nothing to compare yet.</p>;
-  const ordered = [...comparisons].sort((a, b) => Number(b.moreThanChance) - Number(a.moreThanChance) || a.pValue - b.pValue);
+  const ordered = [...comparisons].sort(
+    (a, b) => Number(b.moreThanChance) - Number(a.moreThanChance) || a.pValue - b.pValue,
+  );
   return (
     <ul className={styles.comparisons} aria-label="Changes between events">
       {ordered.map((c) => (

@@ -11,7 +11,10 @@ import { OUTCOME_LABELS } from './report-labels';
 
 /** Each kind of find gets its own shape and colour, so the map reads in grey print too. */
 export const KIND_MARKS: Record<FindKind, { shape: SymbolShape; colour: string }> = Object.fromEntries(
-  FIND_KINDS.map((kind, i) => [kind, { shape: SYMBOL_SHAPES[i % SYMBOL_SHAPES.length], colour: SERIES_COLOURS[i % SERIES_COLOURS.length] }]),
+  FIND_KINDS.map((kind, i) => [
+    kind,
+    { shape: SYMBOL_SHAPES[i % SYMBOL_SHAPES.length], colour: SERIES_COLOURS[i % SERIES_COLOURS.length] },
+  ]),
 ) as Record<FindKind, { shape: SymbolShape; colour: string }>;
 
 interface MapPoint {
@@ -45,7 +48,12 @@ function MapNode({ node }: ScatterPlotNodeProps<MapPoint>) {
   }
   const mark = KIND_MARKS[node.serieId as FindKind] ?? KIND_MARKS.other;
   return (
-    <g transform={`translate(${node.x}, ${node.y})`} className="sb-map-find" data-kind={String(node.serieId)} data-outcome={point.outcome}>
+    <g
+      transform={`translate(${node.x}, ${node.y})`}
+      className="sb-map-find"
+      data-kind={String(node.serieId)}
+      data-outcome={point.outcome}
+    >
       <SymbolMark shape={mark.shape} size={markSize(point)} colour={mark.colour} hollow={!paidOff(point.outcome)} />
     </g>
   );
@@ -87,10 +95,34 @@ export function FindMapChart({ report, unit }: { report: FindMapReport; unit: We
     id: kind,
     data: placed
       .filter((f) => f.kind === kind)
-      .map((f) => ({ x: f.xM as number, y: f.yM as number, name: f.name, outcome: f.outcome, fishCount: f.fishCount, weightLb: f.weightLb })),
+      .map((f) => ({
+        x: f.xM as number,
+        y: f.yM as number,
+        name: f.name,
+        outcome: f.outcome,
+        fishCount: f.fishCount,
+        weightLb: f.weightLb,
+      })),
   }));
   const catches = report.catches.filter((c) => c.xM !== null && c.yM !== null);
-  const all = [...series, ...(catches.length ? [{ id: 'catches', data: catches.map((c) => ({ x: c.xM as number, y: c.yM as number, name: 'Catch', outcome: 'catch' as const, fishCount: 1, weightLb: c.weightLb })) }] : [])];
+  const all = [
+    ...series,
+    ...(catches.length
+      ? [
+          {
+            id: 'catches',
+            data: catches.map((c) => ({
+              x: c.xM as number,
+              y: c.yM as number,
+              name: 'Catch',
+              outcome: 'catch' as const,
+              fishCount: 1,
+              weightLb: c.weightLb,
+            })),
+          },
+        ]
+      : []),
+  ];
   const height = 560;
   const margin = { top: 16, right: 24, bottom: 54, left: 76 };
 
@@ -115,8 +147,20 @@ export function FindMapChart({ report, unit }: { report: FindMapReport; unit: We
               nodeSize={12}
               nodeComponent={MapNode}
               colors={(s: { serieId: string | number }) => KIND_MARKS[s.serieId as FindKind]?.colour ?? '#1f2328'}
-              axisBottom={{ format: (v) => distanceLabel(Number(v)), legend: 'East of the reference point', legendPosition: 'middle', legendOffset: 40, tickValues: 6 }}
-              axisLeft={{ format: (v) => distanceLabel(Number(v)), legend: 'North of the reference point', legendPosition: 'middle', legendOffset: -62, tickValues: 6 }}
+              axisBottom={{
+                format: (v) => distanceLabel(Number(v)),
+                legend: 'East of the reference point',
+                legendPosition: 'middle',
+                legendOffset: 40,
+                tickValues: 6,
+              }}
+              axisLeft={{
+                format: (v) => distanceLabel(Number(v)),
+                legend: 'North of the reference point',
+                legendPosition: 'middle',
+                legendOffset: -62,
+                tickValues: 6,
+              }}
               markers={[
                 { axis: 'x', value: 0, lineStyle: { stroke: '#8c959f', strokeWidth: 1, strokeDasharray: '2 3' } },
                 { axis: 'y', value: 0, lineStyle: { stroke: '#8c959f', strokeWidth: 1, strokeDasharray: '2 3' } },
@@ -129,8 +173,11 @@ export function FindMapChart({ report, unit }: { report: FindMapReport; unit: We
                     <>Catch: {formatWeight(node.data.weightLb, unit)}</>
                   ) : (
                     <>
-                      <strong>{node.data.name}</strong> ({FIND_KIND_LABELS[node.serieId as FindKind]}): {OUTCOME_LABELS[node.data.outcome as FindOutcome]}
-                      {node.data.fishCount ? `, ${node.data.fishCount} fish, ${formatWeight(node.data.weightLb, unit)}` : ''}
+                      <strong>{node.data.name}</strong> ({FIND_KIND_LABELS[node.serieId as FindKind]}):{' '}
+                      {OUTCOME_LABELS[node.data.outcome as FindOutcome]}
+                      {node.data.fishCount
+                        ? `, ${node.data.fishCount} fish, ${formatWeight(node.data.weightLb, unit)}`
+                        : ''}
                     </>
                   )}
                 </div>
@@ -150,9 +197,21 @@ export function FindMapChart({ report, unit }: { report: FindMapReport; unit: We
       <ChartLegend
         label="What the marks mean"
         items={[
-          { key: 'filled', sample: <SymbolMark shape="circle" size={14} colour="#4a4a4a" standalone />, text: 'Filled: the find gave fish (bigger = more fish)' },
-          { key: 'hollow', sample: <SymbolMark shape="circle" size={14} colour="#4a4a4a" hollow standalone />, text: 'Hollow: fished, no bite' },
-          { key: 'small', sample: <SymbolMark shape="circle" size={9} colour="#4a4a4a" hollow standalone />, text: 'Small and hollow: never fished' },
+          {
+            key: 'filled',
+            sample: <SymbolMark shape="circle" size={14} colour="#4a4a4a" standalone />,
+            text: 'Filled: the find gave fish (bigger = more fish)',
+          },
+          {
+            key: 'hollow',
+            sample: <SymbolMark shape="circle" size={14} colour="#4a4a4a" hollow standalone />,
+            text: 'Hollow: fished, no bite',
+          },
+          {
+            key: 'small',
+            sample: <SymbolMark shape="circle" size={9} colour="#4a4a4a" hollow standalone />,
+            text: 'Small and hollow: never fished',
+          },
           {
             key: 'catch',
             sample: (

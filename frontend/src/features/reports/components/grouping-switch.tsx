@@ -3,7 +3,15 @@ import { HIT_RATE_GROUPINGS, type HitRateGrouping } from '../api/report-types';
 import { GROUPING_LABELS } from './report-labels';
 
 /** Chooses how finds are grouped; the choice lives in the address (?by=…). */
-export function GroupingSwitch({ value, onChange, options = HIT_RATE_GROUPINGS }: { value: HitRateGrouping; onChange: (by: HitRateGrouping) => void; options?: readonly HitRateGrouping[] }) {
+export function GroupingSwitch({
+  value,
+  onChange,
+  options = HIT_RATE_GROUPINGS,
+}: {
+  value: HitRateGrouping;
+  onChange: (by: HitRateGrouping) => void;
+  options?: readonly HitRateGrouping[];
+}) {
   return (
     <SegmentedControl aria-label="Group finds by" onChange={(index) => onChange(options[index])}>
       {options.map((by) => (
@@ -16,7 +24,11 @@ export function GroupingSwitch({ value, onChange, options = HIT_RATE_GROUPINGS }
 }
 
 /** The grouping of the address, or `fallback` when missing or unknown. */
-export function readGrouping(params: URLSearchParams, options: readonly HitRateGrouping[] = HIT_RATE_GROUPINGS, fallback: HitRateGrouping = 'kind'): HitRateGrouping {
+export function readGrouping(
+  params: URLSearchParams,
+  options: readonly HitRateGrouping[] = HIT_RATE_GROUPINGS,
+  fallback: HitRateGrouping = 'kind',
+): HitRateGrouping {
   const by = params.get('by');
   return by && (options as readonly string[]).includes(by) ? (by as HitRateGrouping) : fallback;
 }

@@ -10,7 +10,15 @@ import styles from './reports.module.css';
 const column = createColumnHelper<HitRateGroup>();
 
 /** The numbers behind the hit-rate chart: one row per group, sortable by any column. */
-export function HitRatesTable({ groups, catchBased, units }: { groups: HitRateGroup[]; catchBased: boolean; units: UnitPreferences }) {
+export function HitRatesTable({
+  groups,
+  catchBased,
+  units,
+}: {
+  groups: HitRateGroup[];
+  catchBased: boolean;
+  units: UnitPreferences;
+}) {
   const columns = catchBased ? catchColumns(units) : findColumns();
   return (
     <ReportTable
@@ -42,19 +50,24 @@ function findColumns() {
         </span>
       ),
     }),
-    column.accessor('findsFished', { header: 'Finds fished', meta: { numeric: true } }),
+    column.accessor('findsFished', { header: 'Fished', meta: { numeric: true } }),
     column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
-    column.accessor('findsWeighed', { header: 'Weighed fish', meta: { numeric: true } }),
-    column.accessor((g) => g.producing.rate, { id: 'rate', header: 'Hit rate', cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
+    column.accessor((g) => g.producing.rate, {
+      id: 'rate',
+      header: 'Hit rate',
+      cell: (info) => percent(info.getValue()),
+      meta: { numeric: true },
+    }),
     column.accessor((g) => g.producing.upper - g.producing.lower, {
       id: 'interval',
-      header: 'Likely range',
+      header: 'Range',
       cell: (info) => percentRange(info.row.original.producing.lower, info.row.original.producing.upper),
       meta: { numeric: true },
     }),
     column.accessor((g) => g.producing.shrunk, {
       id: 'shrunk',
-      header: 'Adjusted rate',
+      header: 'Adjusted',
       cell: (info) => percent(info.getValue()),
       meta: { numeric: true },
     }),
@@ -81,15 +94,29 @@ function catchColumns(units: UnitPreferences) {
     }),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
     column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
-    column.accessor('weightLb', { header: 'Weight', cell: (info) => formatWeight(info.getValue(), units.weight), meta: { numeric: true } }),
-    column.accessor((g) => g.shareOfFish.rate, { id: 'share', header: 'Share of fish', cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor('weightLb', {
+      header: 'Weight',
+      cell: (info) => formatWeight(info.getValue(), units.weight),
+      meta: { numeric: true },
+    }),
+    column.accessor((g) => g.shareOfFish.rate, {
+      id: 'share',
+      header: 'Share of fish',
+      cell: (info) => percent(info.getValue()),
+      meta: { numeric: true },
+    }),
     column.accessor((g) => g.shareOfFish.upper - g.shareOfFish.lower, {
       id: 'interval',
       header: 'Likely range',
       cell: (info) => percentRange(info.row.original.shareOfFish.lower, info.row.original.shareOfFish.upper),
       meta: { numeric: true },
     }),
-    column.accessor((g) => g.shareOfFish.shrunk, { id: 'shrunk', header: 'Adjusted share', cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor((g) => g.shareOfFish.shrunk, {
+      id: 'shrunk',
+      header: 'Adjusted share',
+      cell: (info) => percent(info.getValue()),
+      meta: { numeric: true },
+    }),
     rankColumn,
   ];
 }

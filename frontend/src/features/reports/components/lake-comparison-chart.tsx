@@ -22,7 +22,15 @@ export function eventLabel(event: ComparedEvent): string {
  * with its own colour AND fill pattern) with interval whiskers, so a change between events shows as bars
  * whose whiskers do not overlap.
  */
-export function LakeComparisonChart({ events, groups, title }: { events: ComparedEvent[]; groups: LakeComparisonGroup[]; title: string }) {
+export function LakeComparisonChart({
+  events,
+  groups,
+  title,
+}: {
+  events: ComparedEvent[];
+  groups: LakeComparisonGroup[];
+  title: string;
+}) {
   // nivo rows hold strings and numbers only, so an unrecorded group key (null) is dropped here.
   const rows: Row[] = groups
     .map((g) => {
@@ -76,7 +84,11 @@ export function LakeComparisonChart({ events, groups, title }: { events: Compare
             colors={(bar) => seriesColour(indexOf.get(String(bar.id)) ?? 0)}
             defs={seriesDefs(PREFIX, events.length)}
             fill={events
-              .map((e, i) => ({ match: { id: e.id }, id: seriesPatternId(PREFIX, i), solid: seriesPattern(i) === 'solid' }))
+              .map((e, i) => ({
+                match: { id: e.id },
+                id: seriesPatternId(PREFIX, i),
+                solid: seriesPattern(i) === 'solid',
+              }))
               .filter((rule) => !rule.solid)
               .map(({ match, id }) => ({ match, id }))}
             borderColor="#1f2328"
@@ -85,12 +97,17 @@ export function LakeComparisonChart({ events, groups, title }: { events: Compare
             enableGridY={false}
             enableGridX
             gridXValues={[0, 25, 50, 75, 100]}
-            axisBottom={{ tickValues: [0, 25, 50, 75, 100], format: (v) => `${v} %`, legend: 'Share of finds fished that produced a fish', legendPosition: 'middle', legendOffset: 36 }}
+            axisBottom={{
+              tickValues: [0, 25, 50, 75, 100],
+              format: (v) => `${v} %`,
+              legend: 'Share of finds fished that produced a fish',
+              legendPosition: 'middle',
+              legendOffset: 36,
+            }}
             theme={chartTheme}
             animate={false}
             role="img"
             ariaLabel={title}
-            barAriaLabel={(d) => `${d.indexValue}, ${nameOf.get(String(d.id))}: ${percent(Number(d.value) / 100)}`}
             tooltip={({ id, value, indexValue }) => (
               <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
                 <strong>{indexValue}</strong>, {nameOf.get(String(id))}: {percent(Number(value) / 100)}
@@ -103,7 +120,11 @@ export function LakeComparisonChart({ events, groups, title }: { events: Compare
       <ChartLegend
         label="Events in the chart"
         items={[
-          ...events.map((event, i) => ({ key: event.id, sample: <SeriesSwatch index={i} prefix={PREFIX} />, text: eventLabel(event) })),
+          ...events.map((event, i) => ({
+            key: event.id,
+            sample: <SeriesSwatch index={i} prefix={PREFIX} />,
+            text: eventLabel(event),
+          })),
           { key: 'whisker', sample: <WhiskerSample />, text: 'Likely range (95 %)' },
         ]}
       />

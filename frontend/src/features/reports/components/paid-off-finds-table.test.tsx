@@ -8,8 +8,31 @@ import { PaidOffFindsTable } from './paid-off-finds-table';
 
 useLaidOutElements(1000, 600);
 
-function row(findId: string, name: string, kind: EventFindRow['kind'], outcome: EventFindRow['outcome'], fishCount: number, weightLb: number, depthFt: number | null): EventFindRow {
-  return { findId, name, kind, subKind: '', depthFt, hardness: 3, waterTempF: 84, practiced: true, fished: outcome !== 'not-fished', fishCount, weighedCount: outcome === 'weighed' ? fishCount : 0, weightLb, firstBiteAt: null, outcome };
+function row(
+  findId: string,
+  name: string,
+  kind: EventFindRow['kind'],
+  outcome: EventFindRow['outcome'],
+  fishCount: number,
+  weightLb: number,
+  depthFt: number | null,
+): EventFindRow {
+  return {
+    findId,
+    name,
+    kind,
+    subKind: '',
+    depthFt,
+    hardness: 3,
+    waterTempF: 84,
+    practiced: true,
+    fished: outcome !== 'not-fished',
+    fishCount,
+    weighedCount: outcome === 'weighed' ? fishCount : 0,
+    weightLb,
+    firstBiteAt: null,
+    outcome,
+  };
 }
 
 const finds = [
@@ -20,7 +43,11 @@ const finds = [
   row('f5', 'Channel swing', 'contour', 'weighed', 2, 7.1, 16),
 ];
 const units = { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } as const;
-const names = () => within(screen.getByRole('table')).getAllByRole('row').slice(1).map((r) => within(r).getAllByRole('cell')[0].textContent);
+const names = () =>
+  within(screen.getByRole('table'))
+    .getAllByRole('row')
+    .slice(1)
+    .map((r) => within(r).getAllByRole('cell')[0].textContent);
 
 describe('PaidOffFindsTable', () => {
   it('opens with what paid off first and links every find to its journal page', () => {

@@ -19,7 +19,17 @@ const OUTCOME_ORDER: Record<string, number> = { weighed: 0, caught: 1, 'fished-b
  * Every find of an event with what it gave, sortable by any column and filterable by kind, outcome and
  * free text; each name opens the find in the journal.
  */
-export function PaidOffFindsTable({ finds, crewId, units, timeZone }: { finds: EventFindRow[]; crewId: string; units: UnitPreferences; timeZone: string }) {
+export function PaidOffFindsTable({
+  finds,
+  crewId,
+  units,
+  timeZone,
+}: {
+  finds: EventFindRow[];
+  crewId: string;
+  units: UnitPreferences;
+  timeZone: string;
+}) {
   const columns = [
     column.accessor('name', {
       header: 'Find',
@@ -35,7 +45,11 @@ export function PaidOffFindsTable({ finds, crewId, units, timeZone }: { finds: E
       cell: (info) => FIND_KIND_LABELS[info.getValue()] ?? info.getValue(),
       meta: { filterOptions: FIND_KINDS.map((k) => ({ value: k, label: FIND_KIND_LABELS[k] })) },
     }),
-    column.accessor((f) => f.subKind ?? '', { id: 'subKind', header: 'Sub-kind', cell: (info) => info.getValue() || '—' }),
+    column.accessor((f) => f.subKind ?? '', {
+      id: 'subKind',
+      header: 'Sub-kind',
+      cell: (info) => info.getValue() || '—',
+    }),
     column.accessor('outcome', {
       header: 'Outcome',
       cell: (info) => <OutcomeBadge outcome={info.getValue()} />,
@@ -44,10 +58,27 @@ export function PaidOffFindsTable({ finds, crewId, units, timeZone }: { finds: E
     }),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
     column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
-    column.accessor('weightLb', { header: 'Weight', cell: (info) => (info.row.original.fishCount ? formatWeight(info.getValue(), units.weight) : '—'), meta: { numeric: true } }),
-    column.accessor('depthFt', { header: 'Depth', cell: (info) => formatDepth(info.getValue(), units.depth), meta: { numeric: true }, sortUndefined: 'last' }),
-    column.accessor('hardness', { header: 'Hardness', cell: (info) => info.getValue() ?? '—', meta: { numeric: true } }),
-    column.accessor('waterTempF', { header: 'Water', cell: (info) => formatTemperature(info.getValue(), units.temperature), meta: { numeric: true } }),
+    column.accessor('weightLb', {
+      header: 'Weight',
+      cell: (info) => (info.row.original.fishCount ? formatWeight(info.getValue(), units.weight) : '—'),
+      meta: { numeric: true },
+    }),
+    column.accessor('depthFt', {
+      header: 'Depth',
+      cell: (info) => formatDepth(info.getValue(), units.depth),
+      meta: { numeric: true },
+      sortUndefined: 'last',
+    }),
+    column.accessor('hardness', {
+      header: 'Hardness',
+      cell: (info) => info.getValue() ?? '—',
+      meta: { numeric: true },
+    }),
+    column.accessor('waterTempF', {
+      header: 'Water',
+      cell: (info) => formatTemperature(info.getValue(), units.temperature),
+      meta: { numeric: true },
+    }),
     column.accessor('firstBiteAt', { header: 'First bite', cell: (info) => clockOrDash(info.getValue(), timeZone) }),
   ];
   return (

@@ -11,7 +11,15 @@ type ProducingFind = EventRecap['producingFinds'][number];
 const column = createColumnHelper<ProducingFind>();
 
 /** The finds that gave fish during the event, heaviest first, each linking to the find. */
-export function ProducingFindsTable({ finds, crewId, units }: { finds: ProducingFind[]; crewId: string; units: UnitPreferences }) {
+export function ProducingFindsTable({
+  finds,
+  crewId,
+  units,
+}: {
+  finds: ProducingFind[];
+  crewId: string;
+  units: UnitPreferences;
+}) {
   const columns = [
     column.accessor('name', {
       header: 'Find',
@@ -24,7 +32,11 @@ export function ProducingFindsTable({ finds, crewId, units }: { finds: Producing
     column.accessor((f) => FIND_KIND_LABELS[f.kind] ?? f.kind, { id: 'kind', header: 'Kind' }),
     column.accessor((f) => f.subKind ?? '—', { id: 'subKind', header: 'Sub-kind' }),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
-    column.accessor('weightLb', { header: 'Weight', cell: (info) => formatWeight(info.getValue(), units.weight), meta: { numeric: true } }),
+    column.accessor('weightLb', {
+      header: 'Weight',
+      cell: (info) => formatWeight(info.getValue(), units.weight),
+      meta: { numeric: true },
+    }),
   ];
   return (
     <ReportTable

@@ -27,8 +27,23 @@ function competitionYears(events: EventView[]): number[] {
   return [...years].sort((a, b) => b - a);
 }
 
+/** "Spring Open (2024)", or the name alone when it already says its year. */
+function eventOptionLabel(event: EventView): string {
+  const year = event.competitionDates[0]?.slice(0, 4);
+  return !year || event.name.includes(year) ? event.name : `${event.name} (${year})`;
+}
+
 /** The filters every report shares: lake, event, season, year and a range of competition dates. */
-export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, onEventChange, currentEventId, show = ALL }: ReportFiltersBarProps) {
+export function ReportFiltersBar({
+  filters,
+  lakes,
+  events,
+  onChange,
+  onClear,
+  onEventChange,
+  currentEventId,
+  show = ALL,
+}: ReportFiltersBarProps) {
   const lakeEvents = filters.lakeId ? events.filter((e) => e.lakeId === filters.lakeId) : events;
   const years = competitionYears(events);
   const shown = new Set(show);
@@ -36,7 +51,12 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
   const anySet = Object.values(filters).some((v) => v !== undefined);
 
   return (
-    <form className={`${styles.filters} sb-no-print`} aria-label="Report filters" role="search" onSubmit={(e) => e.preventDefault()}>
+    <form
+      className={`${styles.filters} sb-no-print`}
+      aria-label="Report filters"
+      role="search"
+      onSubmit={(e) => e.preventDefault()}
+    >
       {shown.has('lakeId') ? (
         <FormControl>
           <FormControl.Label>Lake</FormControl.Label>
@@ -54,14 +74,17 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
         <FormControl>
           <FormControl.Label>Event</FormControl.Label>
           <Select
-           
             value={eventValue}
-            onChange={(e) => (onEventChange ? onEventChange(e.target.value || undefined) : onChange({ eventId: e.target.value || undefined }))}
+            onChange={(e) =>
+              onEventChange
+                ? onEventChange(e.target.value || undefined)
+                : onChange({ eventId: e.target.value || undefined })
+            }
           >
             <Select.Option value="">{onEventChange ? 'Choose an event' : 'All events'}</Select.Option>
             {lakeEvents.map((event) => (
               <Select.Option key={event.id} value={event.id}>
-                {event.name} ({event.competitionDates[0]?.slice(0, 4) ?? 'no date'})
+                {eventOptionLabel(event)}
               </Select.Option>
             ))}
           </Select>
@@ -83,7 +106,10 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       {shown.has('year') ? (
         <FormControl>
           <FormControl.Label>Year</FormControl.Label>
-          <Select value={filters.year ? String(filters.year) : ''} onChange={(e) => onChange({ year: e.target.value || undefined })}>
+          <Select
+            value={filters.year ? String(filters.year) : ''}
+            onChange={(e) => onChange({ year: e.target.value || undefined })}
+          >
             <Select.Option value="">Any year</Select.Option>
             {years.map((year) => (
               <Select.Option key={year} value={String(year)}>
@@ -96,13 +122,23 @@ export function ReportFiltersBar({ filters, lakes, events, onChange, onClear, on
       {shown.has('from') ? (
         <FormControl>
           <FormControl.Label>Fished from</FormControl.Label>
-          <TextInput type="date" value={filters.from ?? ''} max={filters.to} onChange={(e) => onChange({ from: e.target.value || undefined })} />
+          <TextInput
+            type="date"
+            value={filters.from ?? ''}
+            max={filters.to}
+            onChange={(e) => onChange({ from: e.target.value || undefined })}
+          />
         </FormControl>
       ) : null}
       {shown.has('to') ? (
         <FormControl>
           <FormControl.Label>to</FormControl.Label>
-          <TextInput type="date" value={filters.to ?? ''} min={filters.from} onChange={(e) => onChange({ to: e.target.value || undefined })} />
+          <TextInput
+            type="date"
+            value={filters.to ?? ''}
+            min={filters.from}
+            onChange={(e) => onChange({ to: e.target.value || undefined })}
+          />
         </FormControl>
       ) : null}
       <div className={styles.filtersEnd}>

@@ -12,7 +12,11 @@ export function ReportFilters({
   eventRoute,
 }: {
   show?: ReadonlyArray<keyof ReportFilters>;
-  eventRoute?: { eventId: string; href: (eventId: string, query: string) => string; emptyHref: (query: string) => string };
+  eventRoute?: {
+    eventId: string;
+    href: (eventId: string, query: string) => string;
+    emptyHref: (query: string) => string;
+  };
 }) {
   const { lakes, events } = useReportsContext();
   const { filters, setFilters, clearFilters } = useReportFilters();

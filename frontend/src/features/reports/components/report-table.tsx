@@ -57,9 +57,17 @@ export function ReportTable<T>({
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                   >
                     {header.column.getCanSort() ? (
-                      <button type="button" className={styles.sortButton} onClick={header.column.getToggleSortingHandler()}>
+                      <button
+                        type="button"
+                        className={styles.sortButton}
+                        onClick={header.column.getToggleSortingHandler()}
+                      >
                         {flexRender(header.column.columnDef.header, header.getContext())}
-                        {sorted === 'asc' ? <TriangleUpIcon aria-hidden /> : sorted === 'desc' ? <TriangleDownIcon aria-hidden /> : null}
+                        {sorted === 'asc' ? (
+                          <TriangleUpIcon aria-hidden />
+                        ) : sorted === 'desc' ? (
+                          <TriangleDownIcon aria-hidden />
+                        ) : null}
                       </button>
                     ) : (
                       flexRender(header.column.columnDef.header, header.getContext())

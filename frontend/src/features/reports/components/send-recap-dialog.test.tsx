@@ -6,9 +6,27 @@ import { renderWithApp } from '../../../testing/render';
 import { SendRecapButton } from './send-recap-dialog';
 
 const members = [
-  { userId: 'u-owner', email: 'owner@example.test', displayName: 'Olive Owner', role: 'owner', joinedAt: '2025-01-01T00:00:00Z' },
-  { userId: 'u-angler', email: 'angler@example.test', displayName: 'Andy Angler', role: 'angler', joinedAt: '2025-01-01T00:00:00Z' },
-  { userId: 'u-viewer', email: 'coach@example.test', displayName: 'Cory Coach', role: 'viewer', joinedAt: '2025-01-01T00:00:00Z' },
+  {
+    userId: 'u-owner',
+    email: 'owner@example.test',
+    displayName: 'Olive Owner',
+    role: 'owner',
+    joinedAt: '2025-01-01T00:00:00Z',
+  },
+  {
+    userId: 'u-angler',
+    email: 'angler@example.test',
+    displayName: 'Andy Angler',
+    role: 'angler',
+    joinedAt: '2025-01-01T00:00:00Z',
+  },
+  {
+    userId: 'u-viewer',
+    email: 'coach@example.test',
+    displayName: 'Cory Coach',
+    role: 'viewer',
+    joinedAt: '2025-01-01T00:00:00Z',
+  },
 ];
 
 // jsdom has constructable style sheets but no document.adoptedStyleSheets; Primer's popover polyfill (the

@@ -9,7 +9,17 @@ import styles from './reports.module.css';
  * "Send recap": an owner or angler picks crew members, and the server e-mails them the event's key numbers
  * and a link to this recap. The e-mail never carries positions of finds; the dialog says so.
  */
-export function SendRecapButton({ crewId, eventId, eventName, myUserId }: { crewId: string; eventId: string; eventName: string; myUserId?: string }) {
+export function SendRecapButton({
+  crewId,
+  eventId,
+  eventName,
+  myUserId,
+}: {
+  crewId: string;
+  eventId: string;
+  eventName: string;
+  myUserId?: string;
+}) {
   const [open, setOpen] = useState(false);
   const [chosen, setChosen] = useState<string[]>([]);
   const members = useRecapRecipients(crewId, open);
@@ -20,7 +30,8 @@ export function SendRecapButton({ crewId, eventId, eventName, myUserId }: { crew
     send.reset();
     setChosen([]);
   };
-  const toggle = (userId: string, on: boolean) => setChosen((current) => (on ? [...current, userId] : current.filter((id) => id !== userId)));
+  const toggle = (userId: string, on: boolean) =>
+    setChosen((current) => (on ? [...current, userId] : current.filter((id) => id !== userId)));
 
   return (
     <>
@@ -49,21 +60,33 @@ export function SendRecapButton({ crewId, eventId, eventName, myUserId }: { crew
         >
           <div className={styles.recipients}>
             <Text as="p">
-              The e-mail carries the key numbers (bag by day, total, place, big fish, share of practice that paid off) and a
-              link back to this recap. It contains no positions: no coordinates of any find or catch.
+              The e-mail carries the key numbers (bag by day, total, place, big fish, share of practice that paid off)
+              and a link back to this recap. It contains no positions: no coordinates of any find or catch.
             </Text>
             {send.isSuccess ? (
-              <Banner variant="success" title="Recap sent" description={`Sent to ${send.data.sent} ${send.data.sent === 1 ? 'member' : 'members'}.`} />
+              <Banner
+                variant="success"
+                title="Recap sent"
+                description={`Sent to ${send.data.sent} ${send.data.sent === 1 ? 'member' : 'members'}.`}
+              />
             ) : members.isPending ? (
               <LoadingState label="Loading the crew’s members…" />
             ) : members.isError ? (
-              <ErrorState error={members.error} title="The members could not be loaded" onRetry={() => void members.refetch()} />
+              <ErrorState
+                error={members.error}
+                title="The members could not be loaded"
+                onRetry={() => void members.refetch()}
+              />
             ) : (
               <CheckboxGroup>
                 <CheckboxGroup.Label>Send to</CheckboxGroup.Label>
                 {members.data.map((member) => (
                   <FormControl key={member.userId}>
-                    <Checkbox value={member.userId} checked={chosen.includes(member.userId)} onChange={(e) => toggle(member.userId, e.target.checked)} />
+                    <Checkbox
+                      value={member.userId}
+                      checked={chosen.includes(member.userId)}
+                      onChange={(e) => toggle(member.userId, e.target.checked)}
+                    />
                     <FormControl.Label>
                       {member.displayName}
                       {member.userId === myUserId ? ' (you)' : ''}

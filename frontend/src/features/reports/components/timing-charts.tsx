@@ -21,7 +21,12 @@ interface TimingPoint {
 
 /** How each period is drawn: its own shape, colour and name in our words. */
 export const PERIOD_MARKS: Record<PeriodKey, { label: string; shape: SymbolShape; colour: string; hollow: boolean }> = {
-  major: { label: 'In a major period (moon overhead or underfoot)', shape: 'diamond', colour: '#6a51a3', hollow: false },
+  major: {
+    label: 'In a major period (moon overhead or underfoot)',
+    shape: 'diamond',
+    colour: '#6a51a3',
+    hollow: false,
+  },
   minor: { label: 'In a minor period (moonrise or moonset)', shape: 'triangle', colour: '#0b6e99', hollow: false },
   outside: { label: 'Outside the solunar periods', shape: 'circle', colour: '#4a4a4a', hollow: true },
 };
@@ -33,7 +38,9 @@ function clockOf(minutes: number): string {
 
 /** The middle sunrise (minutes after local midnight) across the catches' days, or null when unknown. */
 export function typicalSunrise(catches: TimingCatch[]): number | null {
-  const sunrises = catches.filter((c) => c.minutesFromSunrise !== null).map((c) => c.localMinutes - (c.minutesFromSunrise as number));
+  const sunrises = catches
+    .filter((c) => c.minutesFromSunrise !== null)
+    .map((c) => c.localMinutes - (c.minutesFromSunrise as number));
   if (sunrises.length === 0) return null;
   sunrises.sort((a, b) => a - b);
   return sunrises[Math.floor(sunrises.length / 2)];
@@ -55,9 +62,16 @@ function PeriodNode({ node }: ScatterPlotNodeProps<TimingPoint>) {
 export function CatchTimingScatter({ catches, unit }: { catches: TimingCatch[]; unit: WeightUnit }) {
   const groups: Record<PeriodKey, TimingPoint[]> = { major: [], minor: [], outside: [] };
   for (const c of catches) {
-    groups[c.solunarPeriod ?? 'outside'].push({ x: c.localMinutes / 60, y: chartWeight(c.weightLb, unit), weightLb: c.weightLb, clock: clockOf(c.localMinutes) });
+    groups[c.solunarPeriod ?? 'outside'].push({
+      x: c.localMinutes / 60,
+      y: chartWeight(c.weightLb, unit),
+      weightLb: c.weightLb,
+      clock: clockOf(c.localMinutes),
+    });
   }
-  const data = (Object.keys(groups) as PeriodKey[]).filter((k) => groups[k].length).map((k) => ({ id: k, data: groups[k] }));
+  const data = (Object.keys(groups) as PeriodKey[])
+    .filter((k) => groups[k].length)
+    .map((k) => ({ id: k, data: groups[k] }));
   const sunrise = typicalSunrise(catches);
   const hours = catches.map((c) => c.localMinutes / 60).concat(sunrise !== null ? [sunrise / 60] : []);
   const minX = Math.max(0, Math.floor(Math.min(...hours)) - 1);
@@ -81,7 +95,13 @@ export function CatchTimingScatter({ catches, unit }: { catches: TimingCatch[]; 
             nodeComponent={PeriodNode}
             colors={(s: { serieId: string | number }) => PERIOD_MARKS[s.serieId as PeriodKey]?.colour ?? '#4a4a4a'}
             gridXValues={ticks}
-            axisBottom={{ tickValues: ticks, format: (v) => `${String(v).padStart(2, '0')}:00`, legend: 'Lake time', legendPosition: 'middle', legendOffset: 38 }}
+            axisBottom={{
+              tickValues: ticks,
+              format: (v) => `${String(v).padStart(2, '0')}:00`,
+              legend: 'Lake time',
+              legendPosition: 'middle',
+              legendOffset: 38,
+            }}
             axisLeft={{ legend: `Fish weight (${sign})`, legendPosition: 'middle', legendOffset: -50 }}
             markers={
               sunrise !== null
@@ -101,7 +121,8 @@ export function CatchTimingScatter({ catches, unit }: { catches: TimingCatch[]; 
             animate={false}
             tooltip={({ node }) => (
               <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
-                {node.data.clock}: {formatWeight(node.data.weightLb, unit)} · {PERIOD_MARKS[node.serieId as PeriodKey]?.label}
+                {node.data.clock}: {formatWeight(node.data.weightLb, unit)} ·{' '}
+                {PERIOD_MARKS[node.serieId as PeriodKey]?.label}
               </div>
             )}
           />
@@ -112,7 +133,15 @@ export function CatchTimingScatter({ catches, unit }: { catches: TimingCatch[]; 
         items={[
           ...(Object.keys(PERIOD_MARKS) as PeriodKey[]).map((k) => ({
             key: k,
-            sample: <SymbolMark shape={PERIOD_MARKS[k].shape} size={12} colour={PERIOD_MARKS[k].colour} hollow={PERIOD_MARKS[k].hollow} standalone />,
+            sample: (
+              <SymbolMark
+                shape={PERIOD_MARKS[k].shape}
+                size={12}
+                colour={PERIOD_MARKS[k].colour}
+                hollow={PERIOD_MARKS[k].hollow}
+                standalone
+              />
+            ),
             text: PERIOD_MARKS[k].label,
           })),
           {
@@ -135,7 +164,12 @@ export function WeightByHourChart({ byHour, unit }: { byHour: TimingReport['byHo
   const rows = byHour
     .filter((h) => h.fishCount > 0)
     .sort((a, b) => a.hour - b.hour)
-    .map((h) => ({ hour: `${String(h.hour).padStart(2, '0')}:00`, weight: Number(chartWeight(h.weightLb, unit).toFixed(2)), fish: h.fishCount, weightLb: h.weightLb }));
+    .map((h) => ({
+      hour: `${String(h.hour).padStart(2, '0')}:00`,
+      weight: Number(chartWeight(h.weightLb, unit).toFixed(2)),
+      fish: h.fishCount,
+      weightLb: h.weightLb,
+    }));
   const fishByHour = new Map(rows.map((r) => [r.hour, r.fish]));
   const sign = chartWeightSign(unit);
   const height = 300;
@@ -164,7 +198,6 @@ export function WeightByHourChart({ byHour, unit }: { byHour: TimingReport['byHo
           animate={false}
           role="img"
           ariaLabel="Weight caught per hour of the day"
-          barAriaLabel={(d) => `${d.indexValue}: ${d.value} ${sign}, ${fishByHour.get(String(d.indexValue))} fish`}
           tooltip={({ indexValue, data }) => (
             <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
               {indexValue}: {data.fish} fish, {formatWeight(Number(data.weightLb), unit)}

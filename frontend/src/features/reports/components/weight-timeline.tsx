@@ -29,7 +29,15 @@ function hoursOf(clock: string): number {
  * stepped line per day (the bag changes only when a fish is boxed or culled), each day with its own
  * colour, dash and point symbol.
  */
-export function WeightTimeline({ timeline, timeZone, unit }: { timeline: EventRecap['timeline']; timeZone: string; unit: WeightUnit }) {
+export function WeightTimeline({
+  timeline,
+  timeZone,
+  unit,
+}: {
+  timeline: EventRecap['timeline'];
+  timeZone: string;
+  unit: WeightUnit;
+}) {
   const days = [...new Set(timeline.map((t) => t.day))].sort();
   const series: Array<LineSeries & { id: string; data: TimelinePoint[] }> = days.map((day) => ({
     id: dayLabel(day),
@@ -46,6 +54,7 @@ export function WeightTimeline({ timeline, timeZone, unit }: { timeline: EventRe
   const maxX = Math.ceil(Math.max(...allX));
   const ticks = Array.from({ length: maxX - minX + 1 }, (_, i) => minX + i);
   const colourOf = new Map(series.map((s, i) => [s.id, seriesColour(i)]));
+  const indexOfSeries = new Map(series.map((s, i) => [s.id, i]));
   const sign = chartWeightSign(unit);
   const height = 320;
 
@@ -68,11 +77,21 @@ export function WeightTimeline({ timeline, timeZone, unit }: { timeline: EventRe
             pointBorderColor="#1f2328"
             pointColor={{ from: 'series.color' }}
             pointSymbol={({ datum, color, size }) => (
-              <SymbolMark shape={symbolShape((datum as { seriesIndex: number }).seriesIndex)} size={size} colour={color} />
+              <SymbolMark
+                shape={symbolShape(indexOfSeries.get(String((datum as { seriesId?: string }).seriesId)) ?? 0)}
+                size={size}
+                colour={color}
+              />
             )}
             enableGridX
             gridXValues={ticks}
-            axisBottom={{ tickValues: ticks, format: (v) => `${String(v).padStart(2, '0')}:00`, legend: 'Lake time', legendPosition: 'middle', legendOffset: 38 }}
+            axisBottom={{
+              tickValues: ticks,
+              format: (v) => `${String(v).padStart(2, '0')}:00`,
+              legend: 'Lake time',
+              legendPosition: 'middle',
+              legendOffset: 38,
+            }}
             axisLeft={{ legend: `Bag (${sign})`, legendPosition: 'middle', legendOffset: -50 }}
             theme={chartTheme}
             animate={false}

@@ -37,11 +37,22 @@ export function Component() {
         <ul className={styles.reportLinks} aria-label="Events">
           {shown.map((event) => (
             <li key={event.id} className={styles.card}>
-              <Link as={RouterLink} to={toFinds ? reportPaths.eventFinds.href(crew.id, event.id, query) : reportPaths.recap.href(crew.id, event.id, query)} className={styles.cardTitle}>
+              <Link
+                as={RouterLink}
+                to={
+                  toFinds
+                    ? reportPaths.eventFinds.href(crew.id, event.id, query)
+                    : reportPaths.recap.href(crew.id, event.id, query)
+                }
+                className={styles.cardTitle}
+              >
                 {event.name}
               </Link>
               <Text as="p" size="small" className={styles.muted}>
-                {lakeName.get(event.lakeId) ?? 'Unknown lake'} · {event.competitionDates.length ? event.competitionDates.map(dayLabel).join(', ') : 'no competition days'}
+                {lakeName.get(event.lakeId) ?? 'Unknown lake'} ·{' '}
+                {event.competitionDates.length
+                  ? event.competitionDates.map(dayLabel).join(', ')
+                  : 'no competition days'}
                 {event.finalPlace ? ` · finished ${ordinal(event.finalPlace)}` : ''}
               </Text>
             </li>

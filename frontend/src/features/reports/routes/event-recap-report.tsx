@@ -53,17 +53,31 @@ export function Component() {
   const filtersBar = (
     <ReportFilters
       show={['lakeId', 'eventId']}
-      eventRoute={{ eventId, href: (id, q) => reportPaths.recap.href(crew.id, id, q), emptyHref: (q) => reportPaths.events.href(crew.id, q) }}
+      eventRoute={{
+        eventId,
+        href: (id, q) => reportPaths.recap.href(crew.id, id, q),
+        emptyHref: (q) => reportPaths.events.href(crew.id, q),
+      }}
     />
   );
 
-  if (recap.isPending) return <>{filtersBar}<LoadingState label="Putting the recap together…" /></>;
+  if (recap.isPending)
+    return (
+      <>
+        {filtersBar}
+        <LoadingState label="Putting the recap together…" />
+      </>
+    );
   if (recap.isError) {
     return (
       <>
         {filtersBar}
         {isApiError(recap.error, 404) ? (
-          <ReportEmpty title="This event is not in the crew’s journal" to={reportPaths.events.href(crew.id)} action="Choose an event">
+          <ReportEmpty
+            title="This event is not in the crew’s journal"
+            to={reportPaths.events.href(crew.id)}
+            action="Choose an event"
+          >
             It may have been deleted, or the link belongs to another crew.
           </ReportEmpty>
         ) : (
@@ -92,7 +106,14 @@ export function Component() {
           </div>
           <div className={`${styles.toolbar} sb-no-print`}>
             <Button onClick={() => window.print()}>Print</Button>
-            {canWriteJournal(crew.role) ? <SendRecapButton crewId={crew.id} eventId={eventId} eventName={data.event.name} myUserId={me.data?.user.id} /> : null}
+            {canWriteJournal(crew.role) ? (
+              <SendRecapButton
+                crewId={crew.id}
+                eventId={eventId}
+                eventName={data.event.name}
+                myUserId={me.data?.user.id}
+              />
+            ) : null}
             <Link as={RouterLink} to={reportPaths.eventFinds.href(crew.id, eventId, query)}>
               Every find of this event
             </Link>
@@ -100,18 +121,26 @@ export function Component() {
         </div>
 
         {noFish ? (
-          <ReportEmpty title="No fish logged for this event yet" to={journalHref.event(crew.id, eventId)} action="Open the event">
-            Log each competition day’s catches (by hand or from a CSV file) and the official weigh-in figures; the recap then
-            shows the bag by day, the standings and the big fish.
+          <ReportEmpty
+            title="No fish logged for this event yet"
+            to={journalHref.event(crew.id, eventId)}
+            action="Open the event"
+          >
+            Log each competition day’s catches (by hand or from a CSV file) and the official weigh-in figures; the recap
+            then shows the bag by day, the standings and the big fish.
           </ReportEmpty>
         ) : null}
 
         <div className={styles.cards}>
           <div className={styles.card}>
             <span className={styles.muted}>Event total</span>
-            <span className={styles.figure}>{formatWeight(data.totals.officialLb ?? data.totals.netLb, units.weight)}</span>
+            <span className={styles.figure}>
+              {formatWeight(data.totals.officialLb ?? data.totals.netLb, units.weight)}
+            </span>
             <span className={styles.muted}>
-              {data.days.some((d) => d.official?.officialLb !== null && d.official?.officialLb !== undefined) ? `official where recorded; our count ${formatWeight(data.totals.netLb, units.weight)}` : 'our count (no official figures)'}
+              {data.days.some((d) => d.official?.officialLb !== null && d.official?.officialLb !== undefined)
+                ? `official where recorded; our count ${formatWeight(data.totals.netLb, units.weight)}`
+                : 'our count (no official figures)'}
             </span>
           </div>
           <div className={styles.card}>
@@ -124,7 +153,12 @@ export function Component() {
               <>
                 <span className={styles.figure}>{formatWeight(data.bigFish.weightLb, units.weight)}</span>
                 <span className={styles.muted}>
-                  {[data.bigFish.lengthIn ? formatLength(data.bigFish.lengthIn, units.length) : null, data.bigFish.species, data.bigFish.findName ? `on ${data.bigFish.findName}` : null, data.bigFish.caughtAt ? dayLabel(data.bigFish.caughtAt.slice(0, 10)) : null]
+                  {[
+                    data.bigFish.lengthIn ? formatLength(data.bigFish.lengthIn, units.length) : null,
+                    data.bigFish.species,
+                    data.bigFish.findName ? `on ${data.bigFish.findName}` : null,
+                    data.bigFish.caughtAt ? dayLabel(data.bigFish.caughtAt.slice(0, 10)) : null,
+                  ]
                     .filter(Boolean)
                     .join(' · ')}
                 </span>
@@ -137,7 +171,8 @@ export function Component() {
             <span className={styles.muted}>Practice that paid off</span>
             <span className={styles.figure}>{percent(paid.rate)}</span>
             <span className={styles.muted}>
-              {paid.successes} of {paid.trials} finds practised gave fish (likely {percentRange(paid.lower, paid.upper)}); {data.findsFished} of {data.findsPracticed} were fished
+              {paid.successes} of {paid.trials} finds practised gave fish (likely {percentRange(paid.lower, paid.upper)}
+              ); {data.findsFished} of {data.findsPracticed} were fished
             </span>
           </div>
         </div>
@@ -168,8 +203,8 @@ export function Component() {
             <ProducingFindsTable finds={data.producingFinds} crewId={crew.id} units={units} />
           ) : (
             <Text as="p" className={styles.muted}>
-              No catch of this event is tied to a find yet. Choose the find when logging a catch, or give its position and
-              Shoalbook ties it to the nearest find.
+              No catch of this event is tied to a find yet. Choose the find when logging a catch, or give its position
+              and Shoalbook ties it to the nearest find.
             </Text>
           )}
         </section>

@@ -41,7 +41,10 @@ export function Component() {
       </ReportEmpty>
     );
   else if (!filters.lakeId || report.isPending) body = <LoadingState label="Plotting the finds…" />;
-  else if (report.isError) body = <ErrorState error={report.error} title="The map could not be loaded" onRetry={() => void report.refetch()} />;
+  else if (report.isError)
+    body = (
+      <ErrorState error={report.error} title="The map could not be loaded" onRetry={() => void report.refetch()} />
+    );
   else if (report.data.finds.length === 0)
     body = (
       <ReportEmpty title="No finds on this lake for these filters" to={journalHref.finds(crew.id)} action="Add finds">
@@ -65,17 +68,24 @@ export function Component() {
           columns={[
             column.accessor('name', { header: 'Find' }),
             column.accessor((f) => FIND_KIND_LABELS[f.kind], { id: 'kind', header: 'Kind' }),
-            column.accessor('outcome', { header: 'Outcome', cell: (info) => <OutcomeBadge outcome={info.getValue()} /> }),
+            column.accessor('outcome', {
+              header: 'Outcome',
+              cell: (info) => <OutcomeBadge outcome={info.getValue()} />,
+            }),
             column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
-            column.accessor('weightLb', { header: 'Weight', cell: (info) => formatWeight(info.getValue(), units.weight), meta: { numeric: true } }),
+            column.accessor('weightLb', {
+              header: 'Weight',
+              cell: (info) => formatWeight(info.getValue(), units.weight),
+              meta: { numeric: true },
+            }),
           ]}
         />
       </div>
     ) : (
       <div className={styles.panel}>
         <Text as="p" className={styles.muted}>
-          {report.data.finds.length} finds and {report.data.catches.length} catches tied to them. Distances are in metres
-          from the lake’s reference point; north is up.
+          {report.data.finds.length} finds and {report.data.catches.length} catches tied to them. Distances are in
+          metres from the lake’s reference point; north is up.
         </Text>
         <FindMapChart report={report.data} unit={units.weight} />
       </div>

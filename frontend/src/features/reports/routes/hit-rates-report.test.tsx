@@ -32,7 +32,10 @@ function network() {
     'GET /api/auth/me': { status: 200, body: me },
     'GET /api/crews/crew-1/lakes': { status: 200, body: lakes },
     'GET /api/crews/crew-1/events': { status: 200, body: events },
-    'GET /api/crews/crew-1/reports/hit-rates': (request) => ({ status: 200, body: request.path && reportFor(lastUrl(net)) }),
+    'GET /api/crews/crew-1/reports/hit-rates': (request) => ({
+      status: 200,
+      body: request.path && reportFor(lastUrl(net)),
+    }),
   }).install();
 }
 let net: ReturnType<typeof fakeNetwork>;
@@ -60,14 +63,20 @@ describe('Hit-rate report', () => {
     expect(within(bait).getByText('few finds')).toBeInTheDocument();
     expect(container.querySelectorAll('.sb-whisker')).toHaveLength(3);
     const list = screen.getByRole('heading', { name: 'In plain words' }).closest('section')!;
-    expect(within(list).getAllByRole('listitem').map((li) => li.textContent)).toEqual(readings);
+    expect(
+      within(list)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual(readings);
   });
 
   it('lists the groups in the order of the API’s small-sample-aware rank, with the adjusted rate beside the raw one', async () => {
     net = network();
     await renderReports('/crews/crew-1/reports/hit-rates');
     const table = await screen.findByRole('table');
-    const shown = within(table).getAllByRole('rowheader').map((h) => h.textContent?.replace('few finds', ''));
+    const shown = within(table)
+      .getAllByRole('rowheader')
+      .map((h) => h.textContent?.replace('few finds', ''));
     const byRank = [...byKind.groups].sort((x, y) => (x.rank ?? 99) - (y.rank ?? 99)).map((g) => g.label);
     expect(shown).toEqual(byRank);
     const veg = within(table).getByRole('rowheader', { name: 'Vegetation' }).closest('tr')!;
@@ -89,7 +98,9 @@ describe('Hit-rate report', () => {
     await waitFor(() => expect(lastUrl(net).searchParams.get('lakeId')).toBe('lake-a'));
     expect(lastUrl(net).searchParams.get('season')).toBe('summer');
     // Only the chosen lake's events are offered.
-    const eventOptions = within(screen.getByRole('combobox', { name: 'Event' })).getAllByRole('option').map((o) => o.getAttribute('value'));
+    const eventOptions = within(screen.getByRole('combobox', { name: 'Event' }))
+      .getAllByRole('option')
+      .map((o) => o.getAttribute('value'));
     expect(eventOptions).toEqual(['', 'ev-1', 'ev-2']);
 
     await user.click(screen.getByRole('button', { name: 'Depth' }));

@@ -50,9 +50,18 @@ export function Component() {
       {report.isPending ? (
         <LoadingState label="Counting finds…" />
       ) : report.isError ? (
-        <ErrorState error={report.error} title="The hit rates could not be loaded" onRetry={() => void report.refetch()} />
-      ) : report.data.groups.length === 0 || (catchBased ? report.data.overall.fishCount === 0 : report.data.overall.findsFished === 0) ? (
-        <ReportEmpty title="No finds fished for these filters yet" to={journalHref.finds(crew.id)} action="Go to the finds">
+        <ErrorState
+          error={report.error}
+          title="The hit rates could not be loaded"
+          onRetry={() => void report.refetch()}
+        />
+      ) : report.data.groups.length === 0 ||
+        (catchBased ? report.data.overall.fishCount === 0 : report.data.overall.findsFished === 0) ? (
+        <ReportEmpty
+          title="No finds fished for these filters yet"
+          to={journalHref.finds(crew.id)}
+          action="Go to the finds"
+        >
           Hit rates need practice finds and competition catches tied to them. Enter your finds (by hand or from a GPX
           file), log the fish you caught on competition days against the find they came from, then come back. Or widen
           the filters above.
@@ -64,16 +73,20 @@ export function Component() {
               ? `${report.data.overall.fishCount} fish, ${formatWeight(report.data.overall.weightLb, units.weight)} in all. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
               : `Overall, ${report.data.overall.findsProducing} of ${report.data.overall.findsFished} finds fished produced a fish (${percent(report.data.overall.producing.rate)}, likely ${percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}).`}
           </Text>
-          <div className={styles.split}>
+          <div className={styles.splitEven}>
             <div className={styles.panel}>
               <Heading as="h4" variant="small" className={styles.panelTitle}>
                 By {GROUPING_LABELS[by].toLowerCase()}
               </Heading>
-              <HitRateChart groups={report.data.groups} unit={catchBased ? 'catch' : 'find'} title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()}, with likely ranges`} />
+              <HitRateChart
+                groups={report.data.groups}
+                unit={catchBased ? 'catch' : 'find'}
+                title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()}, with likely ranges`}
+              />
+              <ReadingsList readings={report.data.readings} />
             </div>
             <div className={styles.panel}>
               <HitRatesTable groups={report.data.groups} catchBased={catchBased} units={units} />
-              <ReadingsList readings={report.data.readings} />
             </div>
           </div>
         </div>

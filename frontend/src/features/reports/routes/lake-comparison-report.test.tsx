@@ -7,8 +7,28 @@ import { comparison, lakes, me, events, rate, renderReports, useLaidOutElements 
 useLaidOutElements(1200, 700);
 
 const withFished = (k: number, n: number) => ({ ...rate(k, n), findsFished: n });
-const vegetationChange = comparison('vegetation', 'Vegetation', 'ev-1', 'ev-2', 3, 25, 14, 31, 'Vegetation did better in Summer 2024 than in Summer 2023: 45 % against 12 % of finds fished; more than chance.');
-const hardChange = comparison('hard-bottom', 'Hard bottom', 'ev-1', 'ev-2', 14, 40, 12, 38, 'Hard bottom did about the same in both events: 35 % and 32 %; could be chance.');
+const vegetationChange = comparison(
+  'vegetation',
+  'Vegetation',
+  'ev-1',
+  'ev-2',
+  3,
+  25,
+  14,
+  31,
+  'Vegetation did better in Summer 2024 than in Summer 2023: 45 % against 12 % of finds fished; more than chance.',
+);
+const hardChange = comparison(
+  'hard-bottom',
+  'Hard bottom',
+  'ev-1',
+  'ev-2',
+  14,
+  40,
+  12,
+  38,
+  'Hard bottom did about the same in both events: 35 % and 32 %; could be chance.',
+);
 
 const report: LakeComparisonReport = {
   lake: { id: 'lake-a', name: 'Test Reservoir' },
@@ -65,7 +85,12 @@ describe('Same-lake comparison', () => {
       'GET /api/crews/crew-1/events': { status: 200, body: events },
       'GET /api/crews/crew-1/reports/lake-comparison': {
         status: 200,
-        body: { ...report, lake: { id: 'lake-b', name: 'Second Test Lake' }, events: [report.events[0]], comparisons: [] },
+        body: {
+          ...report,
+          lake: { id: 'lake-b', name: 'Second Test Lake' },
+          events: [report.events[0]],
+          comparisons: [],
+        },
       },
     }).install();
     await renderReports('/crews/crew-1/reports/lake-comparison?lakeId=lake-b');

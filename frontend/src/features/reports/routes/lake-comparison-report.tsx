@@ -30,7 +30,9 @@ export function Component() {
   useDocumentTitle(`Same lake, across events · ${crew.name}`);
 
   // With no lake chosen, open the lake with the most events: that is where a comparison says most.
-  const busiestLake = [...lakes].sort((a, b) => events.filter((e) => e.lakeId === b.id).length - events.filter((e) => e.lakeId === a.id).length)[0];
+  const busiestLake = [...lakes].sort(
+    (a, b) => events.filter((e) => e.lakeId === b.id).length - events.filter((e) => e.lakeId === a.id).length,
+  )[0];
   useEffect(() => {
     if (!filters.lakeId && busiestLake) setFilters({ lakeId: busiestLake.id });
   }, [filters.lakeId, busiestLake, setFilters]);
@@ -58,10 +60,20 @@ export function Component() {
   } else if (report.isPending) {
     body = <LoadingState label="Comparing events…" />;
   } else if (report.isError) {
-    body = <ErrorState error={report.error} title="The comparison could not be loaded" onRetry={() => void report.refetch()} />;
+    body = (
+      <ErrorState
+        error={report.error}
+        title="The comparison could not be loaded"
+        onRetry={() => void report.refetch()}
+      />
+    );
   } else if (report.data.events.length < 2) {
     body = (
-      <ReportEmpty title={`${report.data.lake.name} has ${report.data.events.length === 1 ? 'one event' : 'no events'} for these filters`} to={journalHref.events(crew.id)} action="Go to the events">
+      <ReportEmpty
+        title={`${report.data.lake.name} has ${report.data.events.length === 1 ? 'one event' : 'no events'} for these filters`}
+        to={journalHref.events(crew.id)}
+        action="Go to the events"
+      >
         A comparison needs two or more events on the same lake with finds fished. Enter another event on this lake (its
         finds and catches), or widen the season and date filters above.
       </ReportEmpty>
@@ -75,7 +87,11 @@ export function Component() {
             <Heading as="h4" variant="small" className={styles.panelTitle}>
               {GROUPING_LABELS[by]} on {report.data.lake.name}, event by event
             </Heading>
-            <LakeComparisonChart events={compared} groups={groups} title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()} for each event on ${report.data.lake.name}`} />
+            <LakeComparisonChart
+              events={compared}
+              groups={groups}
+              title={`Hit rate by ${GROUPING_LABELS[by].toLowerCase()} for each event on ${report.data.lake.name}`}
+            />
           </div>
           <div className={styles.panel}>
             <Heading as="h4" variant="small" className={styles.panelTitle}>

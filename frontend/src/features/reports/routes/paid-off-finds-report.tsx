@@ -30,7 +30,11 @@ export function Component() {
   if (report.isPending) body = <LoadingState label="Looking up the finds…" />;
   else if (report.isError)
     body = isApiError(report.error, 404) ? (
-      <ReportEmpty title="This event is not in the crew’s journal" to={reportPaths.events.href(crew.id, '?next=finds')} action="Choose an event">
+      <ReportEmpty
+        title="This event is not in the crew’s journal"
+        to={reportPaths.events.href(crew.id, '?next=finds')}
+        action="Choose an event"
+      >
         It may have been deleted, or the link belongs to another crew.
       </ReportEmpty>
     ) : (
@@ -51,7 +55,8 @@ export function Component() {
           {percent(paid.rate)} of practice paid off
         </Text>
         <Text as="p" className={styles.muted}>
-          {paid.successes} of {paid.trials} finds gave fish on competition days (likely between {percentRange(paid.lower, paid.upper)}).
+          {paid.successes} of {paid.trials} finds gave fish on competition days (likely between{' '}
+          {percentRange(paid.lower, paid.upper)}).
         </Text>
         <PaidOffFindsTable finds={report.data.finds} crewId={crew.id} units={units} timeZone={timeZone} />
       </div>
@@ -70,7 +75,11 @@ export function Component() {
       </div>
       <ReportFilters
         show={['lakeId', 'eventId']}
-        eventRoute={{ eventId, href: (id, q) => reportPaths.eventFinds.href(crew.id, id, q), emptyHref: (q) => reportPaths.events.href(crew.id, `${q}${q ? '&' : '?'}next=finds`) }}
+        eventRoute={{
+          eventId,
+          href: (id, q) => reportPaths.eventFinds.href(crew.id, id, q),
+          emptyHref: (q) => reportPaths.events.href(crew.id, `${q}${q ? '&' : '?'}next=finds`),
+        }}
       />
       {body}
     </section>

@@ -18,20 +18,42 @@ export function Component() {
   const chosenEvent = filters.eventId ? events.find((e) => e.id === filters.eventId) : undefined;
 
   const reports = [
-    { title: 'Hit rates', text: 'Which kinds of finds produced fish: by kind, depth, hardness, water temperature, sun and moon.', href: reportPaths.hitRates.href(crew.id, query) },
-    { title: 'Same lake, across events', text: 'How a lake’s pattern changed from one event to the next, and whether the change is more than chance.', href: reportPaths.lakeComparison.href(crew.id, query) },
+    {
+      title: 'Hit rates',
+      text: 'Which kinds of finds produced fish: by kind, depth, hardness, water temperature, sun and moon.',
+      href: reportPaths.hitRates.href(crew.id, query),
+    },
+    {
+      title: 'Same lake, across events',
+      text: 'How a lake’s pattern changed from one event to the next, and whether the change is more than chance.',
+      href: reportPaths.lakeComparison.href(crew.id, query),
+    },
     {
       title: 'Event recap',
-      text: chosenEvent ? `Bag by day, standings, big fish and the finds that produced at ${chosenEvent.name}.` : 'Bag by day, standings, big fish and the finds that produced, ready to print or send.',
-      href: chosenEvent ? reportPaths.recap.href(crew.id, chosenEvent.id, eventQuery) : reportPaths.events.href(crew.id, query),
+      text: chosenEvent
+        ? `Bag by day, standings, big fish and the finds that produced at ${chosenEvent.name}.`
+        : 'Bag by day, standings, big fish and the finds that produced, ready to print or send.',
+      href: chosenEvent
+        ? reportPaths.recap.href(crew.id, chosenEvent.id, eventQuery)
+        : reportPaths.events.href(crew.id, query),
     },
     {
       title: 'Paid-off finds',
       text: 'Every find of an event with what it gave: weighed fish, fish, a blank, or never fished.',
-      href: chosenEvent ? reportPaths.eventFinds.href(crew.id, chosenEvent.id, eventQuery) : reportPaths.events.href(crew.id, `${query}${query ? '&' : '?'}next=finds`),
+      href: chosenEvent
+        ? reportPaths.eventFinds.href(crew.id, chosenEvent.id, eventQuery)
+        : reportPaths.events.href(crew.id, `${query}${query ? '&' : '?'}next=finds`),
     },
-    { title: 'Timing', text: 'When the fish bit: catches against the time of day, sunrise and the solunar periods.', href: reportPaths.timing.href(crew.id, query) },
-    { title: 'Find map', text: 'Finds plotted around the lake’s reference point, marked by kind and by what they gave.', href: reportPaths.map.href(crew.id, query) },
+    {
+      title: 'Timing',
+      text: 'When the fish bit: catches against the time of day, sunrise and the solunar periods.',
+      href: reportPaths.timing.href(crew.id, query),
+    },
+    {
+      title: 'Find map',
+      text: 'Finds plotted around the lake’s reference point, marked by kind and by what they gave.',
+      href: reportPaths.map.href(crew.id, query),
+    },
   ];
 
   return (

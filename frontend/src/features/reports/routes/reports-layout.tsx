@@ -37,8 +37,18 @@ export function Component() {
   const eventMatch = /\/reports\/events\/([^/]+)/.exec(pathname);
   const eventId = eventMatch ? decodeURIComponent(eventMatch[1]) : filters.eventId;
   const tabs = [
-    { id: 'home', label: 'Overview', href: reportPaths.home.href(crew.id, query), current: pathname.endsWith('/reports') },
-    { id: 'hit-rates', label: 'Hit rates', href: reportPaths.hitRates.href(crew.id, query), current: pathname.endsWith('/hit-rates') },
+    {
+      id: 'home',
+      label: 'Overview',
+      href: reportPaths.home.href(crew.id, query),
+      current: pathname.endsWith('/reports'),
+    },
+    {
+      id: 'hit-rates',
+      label: 'Hit rates',
+      href: reportPaths.hitRates.href(crew.id, query),
+      current: pathname.endsWith('/hit-rates'),
+    },
     {
       id: 'lake',
       label: 'Same lake, across events',
@@ -54,10 +64,17 @@ export function Component() {
     {
       id: 'finds',
       label: 'Paid-off finds',
-      href: eventId ? reportPaths.eventFinds.href(crew.id, eventId, eventQuery) : reportPaths.events.href(crew.id, `${query}${query ? '&' : '?'}next=finds`),
+      href: eventId
+        ? reportPaths.eventFinds.href(crew.id, eventId, eventQuery)
+        : reportPaths.events.href(crew.id, `${query}${query ? '&' : '?'}next=finds`),
       current: /\/reports\/events\/[^/]+\/finds$/.test(pathname),
     },
-    { id: 'timing', label: 'Timing', href: reportPaths.timing.href(crew.id, query), current: pathname.endsWith('/timing') },
+    {
+      id: 'timing',
+      label: 'Timing',
+      href: reportPaths.timing.href(crew.id, query),
+      current: pathname.endsWith('/timing'),
+    },
     { id: 'map', label: 'Find map', href: reportPaths.map.href(crew.id, query), current: pathname.endsWith('/map') },
   ];
 

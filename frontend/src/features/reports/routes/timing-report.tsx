@@ -21,7 +21,14 @@ export function Component() {
 
   let body;
   if (report.isPending) body = <LoadingState label="Sorting catches by the clock…" />;
-  else if (report.isError) body = <ErrorState error={report.error} title="The timing report could not be loaded" onRetry={() => void report.refetch()} />;
+  else if (report.isError)
+    body = (
+      <ErrorState
+        error={report.error}
+        title="The timing report could not be loaded"
+        onRetry={() => void report.refetch()}
+      />
+    );
   else if (report.data.catches.length === 0)
     body = (
       <ReportEmpty title="No catches for these filters" to={journalHref.catches(crew.id)} action="Go to the catches">
@@ -35,7 +42,8 @@ export function Component() {
     body = (
       <div className={styles.stack}>
         <Text as="p" className={styles.muted}>
-          {catches.length} fish; {inPeriods} of them ({Math.round((inPeriods / catches.length) * 100)} %) came during a solunar period.
+          {catches.length} fish; {inPeriods} of them ({Math.round((inPeriods / catches.length) * 100)} %) came during a
+          solunar period.
         </Text>
         <div className={styles.panel}>
           <Heading as="h4" variant="small" className={styles.panelTitle}>

@@ -33,26 +33,99 @@ export function useLaidOutElements(width = 1000, height = 600) {
 export const crew: CrewView = { id: 'crew-1', name: 'Test Crew', role: 'angler', viewersSeePositions: false };
 
 export const me: MeResponse = {
-  user: { id: 'user-1', email: 'angler@example.test', displayName: 'Test Angler', siteRole: 'user', units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } },
+  user: {
+    id: 'user-1',
+    email: 'angler@example.test',
+    displayName: 'Test Angler',
+    siteRole: 'user',
+    units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' },
+  },
   crews: [{ crewId: crew.id, crewName: crew.name, role: 'angler' }],
 };
 
 export const lakes: LakeView[] = [
-  { id: 'lake-a', name: 'Test Reservoir', region: 'Test', timeZone: 'America/Chicago', lat: 31.5, lon: -94.3, areaAcres: null, notes: '' },
-  { id: 'lake-b', name: 'Second Test Lake', region: 'Test', timeZone: 'America/New_York', lat: 34.4, lon: -82.1, areaAcres: null, notes: '' },
+  {
+    id: 'lake-a',
+    name: 'Test Reservoir',
+    region: 'Test',
+    timeZone: 'America/Chicago',
+    lat: 31.5,
+    lon: -94.3,
+    areaAcres: null,
+    notes: '',
+  },
+  {
+    id: 'lake-b',
+    name: 'Second Test Lake',
+    region: 'Test',
+    timeZone: 'America/New_York',
+    lat: 34.4,
+    lon: -82.1,
+    areaAcres: null,
+    notes: '',
+  },
 ];
 
-const rules = { fishPerDay: 5, minLengthIn: 12, deadFishPenaltyLb: 0.25, shortFishPenaltyLb: 1, latePenaltyLbPerMinute: 1 };
+const rules = {
+  fishPerDay: 5,
+  minLengthIn: 12,
+  deadFishPenaltyLb: 0.25,
+  shortFishPenaltyLb: 1,
+  latePenaltyLbPerMinute: 1,
+};
 export const events: EventView[] = [
-  { id: 'ev-1', lakeId: 'lake-a', name: 'Summer Test Open', organiser: '', practiceDates: ['2023-06-07'], competitionDates: ['2023-06-10'], rules, entryFee: null, payout: null, finalPlace: 4, notes: '' },
-  { id: 'ev-2', lakeId: 'lake-a', name: 'Summer Test Open', organiser: '', practiceDates: ['2024-06-12'], competitionDates: ['2024-06-15'], rules, entryFee: null, payout: null, finalPlace: 2, notes: '' },
-  { id: 'ev-3', lakeId: 'lake-b', name: 'Fall Test Shootout', organiser: '', practiceDates: ['2023-10-11'], competitionDates: ['2023-10-14'], rules, entryFee: null, payout: null, finalPlace: 6, notes: '' },
+  {
+    id: 'ev-1',
+    lakeId: 'lake-a',
+    name: 'Summer Test Open',
+    organiser: '',
+    practiceDates: ['2023-06-07'],
+    competitionDates: ['2023-06-10'],
+    rules,
+    entryFee: null,
+    payout: null,
+    finalPlace: 4,
+    notes: '',
+  },
+  {
+    id: 'ev-2',
+    lakeId: 'lake-a',
+    name: 'Summer Test Open',
+    organiser: '',
+    practiceDates: ['2024-06-12'],
+    competitionDates: ['2024-06-15'],
+    rules,
+    entryFee: null,
+    payout: null,
+    finalPlace: 2,
+    notes: '',
+  },
+  {
+    id: 'ev-3',
+    lakeId: 'lake-b',
+    name: 'Fall Test Shootout',
+    organiser: '',
+    practiceDates: ['2023-10-11'],
+    competitionDates: ['2023-10-14'],
+    rules,
+    entryFee: null,
+    payout: null,
+    finalPlace: 6,
+    notes: '',
+  },
 ];
 
 /** A rate object as the API builds it: Wilson 95 % interval from @shoalbook/analytics. */
 export function rate(successes: number, trials: number, shrunk?: number): Rate {
   const w = wilsonInterval(successes, trials);
-  return { successes, trials, rate: trials ? successes / trials : 0, lower: w.lower, upper: w.upper, shrunk: shrunk ?? (trials ? successes / trials : 0) };
+  return {
+    successes,
+    trials,
+    rate: trials ? successes / trials : 0,
+    lower: w.lower,
+    upper: w.upper,
+    shrunk: shrunk ?? (trials ? successes / trials : 0),
+  };
 }
 
 /** A hit-rate answer for groups of [key, label, produced, fished], shrunk and ranked with the analytics library. */
@@ -81,22 +154,53 @@ export function hitRates(groups: Array<[string, string, number, number]>, readin
     by: 'kind',
     unit: 'find',
     groups: rows,
-    overall: { finds: t, findsFished: t, findsProducing: s, fishCount: totalFish, weightLb: s * 6.5, producing: rate(s, t) },
+    overall: {
+      finds: t,
+      findsFished: t,
+      findsProducing: s,
+      fishCount: totalFish,
+      weightLb: s * 6.5,
+      producing: rate(s, t),
+    },
     readings,
     eventCount: 2,
   };
 }
 
 /** A comparison between two events as the API builds it, with compareProportions from @shoalbook/analytics. */
-export function comparison(key: string, label: string, a: string, b: string, ka: number, na: number, kb: number, nb: number, reading: string) {
+export function comparison(
+  key: string,
+  label: string,
+  a: string,
+  b: string,
+  ka: number,
+  na: number,
+  kb: number,
+  nb: number,
+  reading: string,
+) {
   const c = compareProportions({ successes: ka, trials: na }, { successes: kb, trials: nb });
-  return { key, label, a, b, difference: c.difference, lower: c.lower, upper: c.upper, pValue: c.pValue, moreThanChance: c.pValue < 0.05, reading };
+  return {
+    key,
+    label,
+    a,
+    b,
+    difference: c.difference,
+    lower: c.lower,
+    upper: c.upper,
+    pValue: c.pValue,
+    moreThanChance: c.pValue < 0.05,
+    reading,
+  };
 }
 
 /** Render the report routes at `url` inside a crew route that hands them the crew, as the app's crew layout does. */
 export async function renderReports(url: string) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter([{ path: '/crews/:crewId', element: <Outlet context={{ crew }} />, children: reportRoutes }], { initialEntries: [url] });
+  const router = createMemoryRouter(
+    [{ path: '/crews/:crewId', element: <Outlet context={{ crew }} />, children: reportRoutes }],
+    { initialEntries: [url] },
+  );
   let result!: ReturnType<typeof render>;
   await act(async () => {
     result = render(
