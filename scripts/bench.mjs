@@ -187,7 +187,7 @@ function report(r) {
 main().then(
   () => process.exit(0),
   (e) => {
-    process.stderr.write(`bench failed: ${e instanceof Error ? e.stack : String(e)}\n`);
+    process.stderr.write(`bench failed: ${e instanceof Error ? `${e.stack}${e.cause ? `\ncause: ${e.cause.stack ?? e.cause}` : ''}` : String(e)}\n`);
     process.exit(1);
   },
 );

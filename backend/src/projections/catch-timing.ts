@@ -49,6 +49,8 @@ export function timeOfDayBand(localMinutes: number): TimeOfDayBand {
 export class CatchTimingCalculator {
   private readonly offsets = new Map<string, number>();
   private readonly days = new Map<string, SkyDay>();
+  /** The day before, the day and the day after, per place and date: what one instant's period search reads. */
+  private readonly triples = new Map<string, [SkyDay, SkyDay, SkyDay]>();
 
   /** Offset of the zone from UTC in minutes at the instant. */
   offsetMinutes(ms: number, timeZone: string): number {
@@ -82,10 +84,16 @@ export class CatchTimingCalculator {
     const localMs = ms + this.offsetMinutes(ms, place.timeZone) * 60_000;
     const localDate = new Date(localMs).toISOString().slice(0, 10);
     const localMinutes = Math.floor((((localMs % DAY_MS) + DAY_MS) % DAY_MS) / 60_000);
-    const today = this.skyDay(place, localDate);
+    const key = `${place.lat}|${place.lon}|${place.timeZone}|${localDate}`;
+    let triple = this.triples.get(key);
+    if (!triple) {
+      triple = [this.skyDay(place, shiftDate(localDate, -1)), this.skyDay(place, localDate), this.skyDay(place, shiftDate(localDate, 1))];
+      if (this.triples.size >= MAX_CACHED) this.triples.clear();
+      this.triples.set(key, triple);
+    }
+    const today = triple[1];
     let best: SkyDay['periods'][number] | null = null;
-    for (const offset of [-1, 0, 1]) {
-      const day = offset === 0 ? today : this.skyDay(place, shiftDate(localDate, offset));
+    for (const day of triple) {
       for (const p of day.periods) {
         if (p.startMs > ms || ms >= p.endMs) continue;
         if (!best || better(p, best, ms)) best = p;

@@ -6,6 +6,8 @@ import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, 
 
 type Payload = Record<string, unknown>;
 
+const UTC_PLACE = { lat: 0, lon: 0, timeZone: 'UTC' };
+
 const str = (v: unknown, fallback = ''): string => (typeof v === 'string' ? v : fallback);
 const strOrNull = (v: unknown): string | null => (typeof v === 'string' && v !== '' ? v : null);
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : null);
@@ -193,12 +195,26 @@ export class JournalApplier {
     const event = this.state.events.get(c.eventId);
     const lakeId = event?.lakeId ?? before?.lakeId ?? '';
     const lake = this.state.lakes.get(lakeId);
-    const t = this.timing.timing(c.caughtAtMs, lake ?? { lat: 0, lon: 0, timeZone: 'UTC' });
+    const t = this.timing.timing(c.caughtAtMs, lake ?? UTC_PLACE);
     const day = this.state.days.get(c.competitionDayId);
+    // Built field by field (not spread): a rebuild derives a million of these.
     return {
-      ...c,
+      id: c.id,
+      crewId: c.crewId,
       lakeId,
+      eventId: c.eventId,
+      competitionDayId: c.competitionDayId,
       dayDate: day?.date ?? t.localDate,
+      findId: c.findId,
+      caughtAtMs: c.caughtAtMs,
+      weightLb: c.weightLb,
+      weightUlb: c.weightUlb,
+      lengthIn: c.lengthIn,
+      species: c.species,
+      fate: c.fate,
+      lure: c.lure,
+      lat: c.lat,
+      lon: c.lon,
       localMinutes: t.localMinutes,
       minutesFromSunrise: t.minutesFromSunrise,
       solunarPeriod: t.solunarPeriod,

@@ -10,10 +10,11 @@ import { ProjectionState } from './projection-state';
 import { JOURNAL_PROJECTION, withProjectionLock, writeCheckpoint } from './projection-lock';
 import { groupBy } from './read-model-store';
 import type { OutcomeRow } from './rows';
-import { insertChunks, type TableSpec } from './sql-values';
+import { insertSql, type TableSpec } from './sql-values';
 import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAKE_TABLE, OUTCOME_TABLE } from './tables';
 
-const READ_PAGE = 20_000;
+const READ_PAGE = 50_000;
+const WRITE_CHUNK = 2000;
 const LOCK_WAIT_SECONDS = 30;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -48,18 +49,18 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       const gaps = new GapPolicy(options.gapTimeoutMs ?? 5000);
       let last = 0;
       let events = 0;
+      // The next page is fetched while this one is applied (MariaDB and the applier work side by side).
+      let next = readJournal(tx, 0, READ_PAGE);
       for (;;) {
-        const records = await readJournal(tx, last, READ_PAGE);
+        const records = await next;
         if (!records.length) break;
         const { usable, last: reached, waiting } = gaps.contiguous(records, last);
+        last = reached;
+        if (waiting && last < maxSeq) await sleep(50);
+        next = waiting && last >= maxSeq ? Promise.resolve([]) : readJournal(tx, last, READ_PAGE);
         for (const r of usable) applier.apply(r);
         events += usable.length;
-        last = reached;
         options.onProgress?.({ seq: last, maxSeq, events, phase: 'replay' });
-        if (waiting) {
-          if (last >= maxSeq) break;
-          await sleep(50);
-        }
       }
 
       const catchesByFind = groupBy(state.catches.rows.values(), (c) => c.findId);
@@ -74,8 +75,17 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       for (const table of READ_MODEL_TABLES) await tx.execute(`TRUNCATE TABLE \`${table}\``);
       await tx.execute(`DELETE FROM projection_checkpoint WHERE name = '${JOURNAL_PROJECTION}'`);
       await tx.execute('START TRANSACTION');
+      // Each statement is built while the previous one runs.
+      let pending: Promise<unknown> = Promise.resolve();
       const write = async <R>(spec: TableSpec<R>, rows: Iterable<R>) => {
-        for (const sql of insertChunks(spec, [...rows], false, 2000)) await tx.execute(sql);
+        const all = [...rows];
+        for (let i = 0; i < all.length; i += WRITE_CHUNK) {
+          const sql = insertSql(spec, all.slice(i, i + WRITE_CHUNK));
+          await pending;
+          pending = tx.execute(sql);
+          // Awaited before the next statement; this only keeps a failure from counting as unhandled meanwhile.
+          pending.catch(() => undefined);
+        }
       };
       await write(LAKE_TABLE, state.lakes.rows.values());
       await write(EVENT_TABLE, state.events.rows.values());
@@ -84,6 +94,7 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       await write(CATCH_TABLE, state.catches.rows.values());
       await write(OUTCOME_TABLE, outcomes);
       await write(GROUP_STATS_TABLE, stats);
+      await pending;
       await writeCheckpoint(tx, last);
       return { events, lastSeq: last };
     }),
