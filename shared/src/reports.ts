@@ -78,7 +78,8 @@ export interface Rate {
  *
  * For the catch groupings (solunarPeriod, timeOfDay) the unit is the catch, since one find's catches fall in
  * different periods: `fishCount`, `weightLb` and `shareOfFish` (this group's fish / all fish, as a Rate) are set;
- * the find counts are 0 and `producing`/`weighed` count weighed fish among the group's fish.
+ * the find counts are 0, `producing` equals `shareOfFish` (so ranks and charts read the same field for both units)
+ * and `weighed` = weighed fish / the group's fish.
  */
 export interface HitRateGroupView {
   /** null = not recorded (no depth, no hardness grade …). */
