@@ -93,6 +93,15 @@ describe('serving the built front end', () => {
     const api = await request(server).get('/api/nothing-here');
     expect(api.status).toBe(404);
     expect(api.body).toMatchObject({ statusCode: 404 });
+    // Middleware errors keep their status with the front end served (serve-static would make them 404s).
+    const noToken = await request(server).post('/api/auth/sign-in').send({ email: 'a@example.test', password: 'x' });
+    expect(noToken.status).toBe(403);
+    expect(noToken.body.code).toBe('csrf_invalid');
+    const client = new ApiClient(app);
+    const token = await client.refreshCsrf();
+    const malformed = await client.agent.post('/api/auth/sign-in').set('x-csrf-token', token).set('Content-Type', 'application/json').send('{"email":');
+    expect(malformed.status).toBe(400);
+    expect(malformed.body.code).toBe('invalid_json');
     const signUp = await new ApiClient(app).post('/api/auth/sign-up', { email: uniqueEmail('static'), password: 'a fine long passphrase', displayName: 'Static' });
     expect(signUp.status).toBe(201);
   });

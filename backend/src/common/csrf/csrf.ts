@@ -4,6 +4,7 @@ import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { CSRF_HEADER } from '@shoalbook/shared';
 import { SESSION_COOKIE } from '../../auth/session-cookie';
 import { ErrorCode } from '../errors/api-errors';
+import { sendApiError } from '../filters/api-exception.filter';
 
 export const CSRF_COOKIE = 'sb_csrf';
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
@@ -30,9 +31,9 @@ export function createCsrfProtection(secret: string, secureCookies: boolean): Cs
   });
   return {
     issueToken: (req, res) => generateCsrfToken(req, res),
-    middleware: (req: Request, _res: Response, next: NextFunction) => {
+    middleware: (req: Request, res: Response, next: NextFunction) => {
       if (SAFE_METHODS.has(req.method) || validateRequest(req)) return next();
-      next(new ForbiddenException({ message: 'The security token is missing or out of date. Reload the page and try again.', code: ErrorCode.csrfInvalid }));
+      sendApiError(req, res, new ForbiddenException({ message: 'The security token is missing or out of date. Reload the page and try again.', code: ErrorCode.csrfInvalid }));
     },
   };
 }

@@ -54,23 +54,30 @@ export function toApiError(exception: unknown): Omit<ApiError, 'requestId'> {
   };
 }
 
-/** The single global filter: every 4xx/5xx answer goes through here. */
+const logger = new Logger('HTTP');
+
+/** Log `exception` (details only in the log) and answer with the ApiError shape. */
+export function sendApiError(req: Request, res: Response, exception: unknown): void {
+  const error: ApiError = { ...toApiError(exception), requestId: req.id };
+  const where = `${req.method} ${req.originalUrl} → ${error.statusCode} [${req.id}]`;
+  if (error.statusCode >= 500) {
+    logger.error(`${where}: ${exception instanceof Error ? exception.message : String(exception)}`, exception instanceof Error ? exception.stack : undefined);
+  } else {
+    logger.verbose(`${where}: ${error.message}`);
+  }
+  if (res.headersSent) return;
+  res.status(error.statusCode).json(error);
+}
+
+/**
+ * The single global filter: every 4xx/5xx answer of a route goes through here. Plain middleware answers
+ * its own errors with sendApiError instead of next(err): with the front end served, serve-static turns
+ * every error passed along under /api into a 404.
+ */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
-  private readonly logger = new Logger('HTTP');
-
   catch(exception: unknown, host: ArgumentsHost): void {
     const ctx = host.switchToHttp();
-    const req = ctx.getRequest<Request>();
-    const res = ctx.getResponse<Response>();
-    const error: ApiError = { ...toApiError(exception), requestId: req.id };
-    const where = `${req.method} ${req.originalUrl} → ${error.statusCode} [${req.id}]`;
-    if (error.statusCode >= 500) {
-      this.logger.error(`${where}: ${exception instanceof Error ? exception.message : String(exception)}`, exception instanceof Error ? exception.stack : undefined);
-    } else {
-      this.logger.verbose(`${where}: ${error.message}`);
-    }
-    if (res.headersSent) return;
-    res.status(error.statusCode).json(error);
+    sendApiError(ctx.getRequest<Request>(), ctx.getResponse<Response>(), exception);
   }
 }
