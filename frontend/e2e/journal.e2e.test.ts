@@ -150,7 +150,7 @@ describe('the journal, as the demo angler', () => {
     await expectNoSeriousAxe(page, 'competition day with catches');
     await screenshot(page, 'journal-catches-desk');
 
-    await page.getByRole('link', { name: 'Weigh-ins' }).click();
+    await page.getByRole('navigation', { name: 'Event sections' }).getByRole('link', { name: 'Weigh-ins' }).click();
     const bag = page.getByRole('group', { name: 'Bag of Sat, 12 Apr 2025' });
     await bag.getByText('3 of 5').waitFor();
     // 3.45 + 2.10 + 4.02 = 9.57 lb gross; one dead fish at the default 0.25 lb (common practice, set per event).

@@ -65,8 +65,8 @@ export function WeighInsPanel({
             <dd>{w(totals.computedNetLb)}</dd>
           </div>
           <div>
-            <dt>Official</dt>
-            <dd>{totals.officialLb !== null ? w(totals.officialLb) : 'Not entered'}</dd>
+            <dt>Total, official figures where entered</dt>
+            <dd>{w(totals.officialLb)}</dd>
           </div>
           <div>
             <dt>Final place</dt>
@@ -116,41 +116,43 @@ export function WeighInsPanel({
             </Text>
           ) : null}
           {day.catches.length ? (
-            <table className={styles.table}>
-              <caption className={styles.caption}>Fish of {dayLabel(day.date)}</caption>
-              <thead>
-                <tr>
-                  <th scope="col">Time</th>
-                  <th scope="col">Species</th>
-                  <th scope="col" className={styles.numeric}>
-                    Weight
-                  </th>
-                  <th scope="col" className={styles.numeric}>
-                    Length
-                  </th>
-                  <th scope="col">In the bag</th>
-                </tr>
-              </thead>
-              <tbody>
-                {[...day.catches]
-                  .sort((a, b) => b.weightLb - a.weightLb)
-                  .map((c) => {
-                    const standing = STANDING_LABEL[standingOf(day, c.id)];
-                    return (
-                      <tr key={c.id}>
-                        <td>{clockTime(c.caughtAt, timeZone)}</td>
-                        <td>{SPECIES_LABELS[c.species]}</td>
-                        <td className={styles.numeric}>{w(c.weightLb)}</td>
-                        <td className={styles.numeric}>{formatLength(c.lengthIn, prefs.length)}</td>
-                        <td>
-                          <Label variant={standing.variant}>{standing.text}</Label>
-                          {c.fate === 'dead' ? <Text size="small"> dead fish</Text> : null}
-                        </td>
-                      </tr>
-                    );
-                  })}
-              </tbody>
-            </table>
+            <div className={styles.tableScroll}>
+              <table className={styles.table}>
+                <caption className={styles.caption}>Fish of {dayLabel(day.date)}</caption>
+                <thead>
+                  <tr>
+                    <th scope="col">Time</th>
+                    <th scope="col">Species</th>
+                    <th scope="col" className={styles.numeric}>
+                      Weight
+                    </th>
+                    <th scope="col" className={styles.numeric}>
+                      Length
+                    </th>
+                    <th scope="col">In the bag</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {[...day.catches]
+                    .sort((a, b) => b.weightLb - a.weightLb)
+                    .map((c) => {
+                      const standing = STANDING_LABEL[standingOf(day, c.id)];
+                      return (
+                        <tr key={c.id}>
+                          <td>{clockTime(c.caughtAt, timeZone)}</td>
+                          <td>{SPECIES_LABELS[c.species]}</td>
+                          <td className={styles.numeric}>{w(c.weightLb)}</td>
+                          <td className={styles.numeric}>{formatLength(c.lengthIn, prefs.length)}</td>
+                          <td>
+                            <Label variant={standing.variant}>{standing.text}</Label>
+                            {c.fate === 'dead' ? <Text size="small"> dead fish</Text> : null}
+                          </td>
+                        </tr>
+                      );
+                    })}
+                </tbody>
+              </table>
+            </div>
           ) : (
             <Text as="p" className={styles.muted}>
               No fish logged for this day yet.

@@ -17,8 +17,9 @@ import styles from './journal.module.css';
 
 const SECTION_LABELS: Record<EventSection, string> = {
   overview: 'Overview',
-  finds: 'Practice finds',
-  days: 'Competition days',
+  // Short enough that all four fit a phone's width (the nav hides overflow behind "More").
+  finds: 'Finds',
+  days: 'Days',
   'weigh-ins': 'Weigh-ins',
 };
 
