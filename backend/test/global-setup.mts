@@ -14,8 +14,15 @@ export async function setup(): Promise<void> {
   }
   // vitest's test.env does not reach globalSetup: the profile is named here, so this is always the test database.
   const p = profile('test');
-  await prepareDatabase(p, { fresh: true });
+  // The fake SMTP server first: its port check fails fast when another run (e.g. the browser tests)
+  // uses the test profile, before this run drops the database under it.
   smtp = await startFakeSmtp(p, { clearOutbox: true });
+  try {
+    await prepareDatabase(p, { fresh: true });
+  } catch (e) {
+    await teardown();
+    throw e;
+  }
 }
 
 export async function teardown(): Promise<void> {
