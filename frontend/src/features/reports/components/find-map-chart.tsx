@@ -167,6 +167,8 @@ export function FindMapChart({ report, unit }: { report: FindMapReport; unit: We
               ]}
               theme={chartTheme}
               animate={false}
+              role="img"
+              ariaLabel="Map of the finds by kind and outcome"
               tooltip={({ node }) => (
                 <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
                   {node.data.outcome === 'catch' ? (

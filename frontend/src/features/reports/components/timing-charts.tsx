@@ -119,6 +119,8 @@ export function CatchTimingScatter({ catches, unit }: { catches: TimingCatch[]; 
             }
             theme={chartTheme}
             animate={false}
+            role="img"
+            ariaLabel="Catches by time of day and weight, marked by solunar period"
             tooltip={({ node }) => (
               <div style={{ background: '#fff', padding: '6px 8px', border: '1px solid #d1d9e0', borderRadius: 6 }}>
                 {node.data.clock}: {formatWeight(node.data.weightLb, unit)} ·{' '}

@@ -97,6 +97,7 @@ export function WeightTimeline({
             animate={false}
             useMesh
             role="img"
+            ariaLabel="Bag weight through each competition day"
             tooltip={({ point }) => {
               const data = point.data as unknown as TimelinePoint;
               return (
