@@ -32,6 +32,7 @@ export const journalPaths = {
   find: { path: 'finds/:findId', href: (crewId: string, findId: string) => `${crew(crewId)}/finds/${id(findId)}` },
   editFind: { path: 'finds/:findId/edit', href: (crewId: string, findId: string) => `${crew(crewId)}/finds/${id(findId)}/edit` },
   catches: { path: 'catches', href: (crewId: string) => `${crew(crewId)}/catches` },
+  catch: { path: 'catches/:catchId', href: (crewId: string, catchId: string) => `${crew(crewId)}/catches/${id(catchId)}` },
   import: {
     path: 'import',
     href: (crewId: string, params: { kind?: 'gpx' | 'csv'; lakeId?: string; eventId?: string } = {}) => {

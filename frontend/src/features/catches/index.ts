@@ -1,3 +1,7 @@
-export { CatchEntryForm, findOptionLabel } from './components/catch-entry-form';
+export { CatchEntryForm } from './components/catch-entry-form';
+export { CatchEditForm } from './components/catch-edit-form';
+export { CatchFacts, CatchSide } from './components/catch-detail';
 export { CatchesTable } from './components/catches-table';
-export { useCatches, useLogCatch, useDeleteCatch, type CatchInput } from './api/catches-api';
+export { catchName } from './components/catch-names';
+export { findOptionLabel } from './components/catch-values';
+export { useCatches, useCatch, useLogCatch, useUpdateCatch, useDeleteCatch, type CatchInput, type CatchChanges } from './api/catches-api';

@@ -23,13 +23,47 @@ export interface CatchInput {
   depth: DepthEntry | null;
   waterTemp: TemperatureEntry | null;
   fate: Fate;
+  notes?: string;
+  photoId?: string | null;
 }
+
+/**
+ * Body of PATCH /catches/:catchId: only what changed (an unchanged weight is not re-sent, so what was typed
+ * stays exactly as typed), plus the version the form was loaded with (409 "stale_version" when outdated).
+ */
+export type CatchChanges = Partial<Omit<CatchInput, 'competitionDayId' | 'findId'>> & { findId?: string | null; version: number };
+
+const catchPath = (crewId: string, catchId: string) => crewApiPath(crewId, `/catches/${encodeURIComponent(catchId)}`);
+const catchKey = (crewId: string, catchId: string) => [...journalKeys.allCatches(crewId), 'one', catchId] as const;
 
 export function useCatches(crewId: string, filter: { eventId?: string; competitionDayId?: string }) {
   return useQuery({
     queryKey: journalKeys.catches(crewId, filter),
     queryFn: () => api.get<CatchWithSky[]>(crewApiPath(crewId, `/catches${queryString(filter)}`)),
     enabled: Boolean(filter.eventId || filter.competitionDayId),
+  });
+}
+
+/** One catch with its sun and moon context. */
+export function useCatch(crewId: string, catchId: string) {
+  return useQuery({
+    queryKey: catchKey(crewId, catchId),
+    queryFn: () => api.get<CatchWithSky>(catchPath(crewId, catchId)),
+  });
+}
+
+/** Save changes to a catch; lists and the weigh-in are refreshed (a changed weight or fate recounts the bag). */
+export function useUpdateCatch(crewId: string, catchId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (changes: CatchChanges) => api.patch<CatchWithSky>(catchPath(crewId, catchId), changes),
+    onSuccess: (saved) => {
+      queryClient.setQueryData(catchKey(crewId, catchId), saved);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
+        queryClient.invalidateQueries({ queryKey: journalKeys.allWeighIns(crewId) }),
+      ]);
+    },
   });
 }
 
@@ -49,7 +83,7 @@ export function useLogCatch(crewId: string) {
 export function useDeleteCatch(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (catchId: string) => api.delete(crewApiPath(crewId, `/catches/${encodeURIComponent(catchId)}`)),
+    mutationFn: (catchId: string) => api.delete(catchPath(crewId, catchId)),
     onSuccess: () =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),

@@ -1,6 +1,5 @@
 import {
   FATES,
-  FIND_KIND_LABELS,
   SPECIES,
   SPECIES_LABELS,
   type Fate,
@@ -10,15 +9,15 @@ import {
   type UnitPreferences,
 } from '@shoalbook/shared';
 import { Button, Checkbox, FormControl, Label, Select, Text, TextInput } from '@primer/react';
-import { useId, useMemo, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { useId, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
 import { FishCareCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
+import { PhotoField } from '../../../components/journal-forms/photo-field';
 import { ApiRequestError } from '../../../lib/api-client';
 import { clockTime, dayLabel, isClockTime } from '../../../lib/lake-time';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import {
   entryToLb,
-  formatDepth,
   formatWeight,
   parseDepth,
   parseLength,
@@ -31,6 +30,7 @@ import {
 } from '../../../lib/units';
 import { useLogCatch, type CatchInput } from '../api/catches-api';
 import { FATE_LABELS } from './catch-labels';
+import { findOptionLabel, matchFind } from './catch-values';
 import styles from './catch-entry-form.module.css';
 
 const LAST_SPECIES_KEY = 'shoalbook.lastSpecies';
@@ -51,12 +51,6 @@ function rememberSpecies(species: Species) {
   } catch {
     // Not remembering is harmless.
   }
-}
-
-/** One line per find for the type-to-filter list: name, kind and depth, so two "Shell bar"s can be told apart. */
-export function findOptionLabel(find: FindView, prefs: UnitPreferences): string {
-  const depth = find.depthFt !== null ? `, ${formatDepth(find.depthFt, prefs.depth)}` : '';
-  return `${find.name} (${FIND_KIND_LABELS[find.kind]}${depth})`;
 }
 
 interface Values {
@@ -129,12 +123,14 @@ export function CatchEntryForm({
   const [byCoordinates, setByCoordinates] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [logged, setLogged] = useState<CatchWithSky | null>(null);
+  const [photo, setPhoto] = useState<{ photoId: string | null; busy: boolean }>({ photoId: null, busy: false });
+  // A new key clears the photo field (its file input) for the next fish.
+  const [photoKey, setPhotoKey] = useState(0);
   const log = useLogCatch(crewId);
   const timeRef = useRef<HTMLInputElement>(null);
   const listId = useId();
   const formId = useId();
 
-  const findByLabel = useMemo(() => new Map(finds.map((f) => [findOptionLabel(f, prefs).toLowerCase(), f])), [finds, prefs]);
   const findName = (id: string | null) => finds.find((f) => f.id === id)?.name ?? 'a find';
 
   const serverMessages = (field: string) =>
@@ -162,7 +158,7 @@ export function CatchEntryForm({
       if (lon === null || lon < -180 || lon > 180) found.lon = 'Longitude in decimal degrees, -180 to 180.';
       if (lat !== null && lon !== null) where = { lat, lon };
     } else if (values.find.trim()) {
-      const match = findByLabel.get(values.find.trim().toLowerCase()) ?? finds.find((f) => f.name.toLowerCase() === values.find.trim().toLowerCase());
+      const match = matchFind(values.find, finds, prefs);
       if (!match) found.find = 'No find by that name: pick one from the list, or leave the field empty.';
       else where = { findId: match.id };
     }
@@ -181,12 +177,13 @@ export function CatchEntryForm({
         depth: depth.entry,
         waterTemp: temp.entry,
         fate: values.fate,
+        ...(photo.photoId ? { photoId: photo.photoId } : {}),
       },
     };
   };
 
   const submit = () => {
-    if (log.isPending) return;
+    if (log.isPending || photo.busy) return;
     const { input, errors: found } = build();
     setErrors(found);
     if (!input) return;
@@ -195,6 +192,8 @@ export function CatchEntryForm({
         rememberSpecies(values.species);
         setLogged(saved);
         setValues((v) => fresh(v));
+        setPhoto({ photoId: null, busy: false });
+        setPhotoKey((k) => k + 1);
         timeRef.current?.focus();
       },
     });
@@ -343,13 +342,21 @@ export function CatchEntryForm({
           <TextInput name="waterTemp" value={values.waterTemp} onChange={set('waterTemp')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('waterTemp')} />,
         )}
       </div>
+      <PhotoField
+        key={photoKey}
+        crewId={crewId}
+        label="Photo (optional)"
+        photoId={photo.photoId}
+        onChange={setPhoto}
+        describe="Photo of this catch"
+      />
       <datalist id={listId}>
         {finds.map((f) => (
           <option key={f.id} value={findOptionLabel(f, prefs)} />
         ))}
       </datalist>
       <div className={styles.actions}>
-        <Button type="submit" variant="primary" loading={log.isPending}>
+        <Button type="submit" variant="primary" loading={log.isPending} disabled={photo.busy}>
           Log catch
         </Button>
         <Text size="small" className={styles.hint}>

@@ -1,15 +1,23 @@
 import { SPECIES, SPECIES_LABELS, FATES, type FindView, type UnitPreferences } from '@shoalbook/shared';
-import { TrashIcon } from '@primer/octicons-react';
-import { IconButton, Label } from '@primer/react';
+import { PencilIcon } from '@primer/octicons-react';
+import { IconButton, Label, Link as PrimerLink } from '@primer/react';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
 import { DataTable } from '../../../components/data-table/data-table';
 import { EmptyState } from '../../../components/feedback/query-states';
+import { DeleteRecordButton } from '../../../components/journal-forms/confirm-delete-dialog';
+import { solunarText, solunarWord } from '../../../components/sky/solunar-label';
+import { journalPaths } from '../../../config/journal-paths';
 import { clockTime } from '../../../lib/lake-time';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import { formatDepth, formatLength, formatTemperature, formatWeight } from '../../../lib/units';
 import { useDeleteCatch } from '../api/catches-api';
+import styles from './catches-table.module.css';
 import { FATE_SHORT } from './catch-labels';
+import { catchName } from './catch-names';
+
+const SOLUNAR_OPTIONS = ['Major', 'Minor', 'Outside'].map((w) => ({ value: w, label: w }));
 
 const column = createColumnHelper<CatchWithSky>();
 
@@ -35,7 +43,16 @@ export function CatchesTable({
   const findNames = useMemo(() => new Map(finds.map((f) => [f.id, f.name])), [finds]);
   const columns = useMemo(
     () => [
-      column.accessor('caughtAt', { header: 'Time', cell: (info) => clockTime(info.getValue(), timeZone) }),
+      column.accessor('caughtAt', {
+        header: 'Time',
+        enableHiding: false,
+        // The time opens the catch: its sun and moon, its photo, and (for writers) the edit form.
+        cell: (info) => (
+          <PrimerLink as={Link} to={journalPaths.catch.href(crewId, info.row.original.id)}>
+            {clockTime(info.getValue(), timeZone)}
+          </PrimerLink>
+        ),
+      }),
       column.accessor('competitionDate', { header: 'Day' }),
       column.accessor('species', {
         header: 'Species',
@@ -81,6 +98,12 @@ export function CatchesTable({
         cell: (info) => FATE_SHORT[info.getValue()],
         meta: { filterOptions: FATES.map((f) => ({ value: f, label: FATE_SHORT[f] })) },
       }),
+      column.accessor((c) => solunarWord(c.sky), {
+        id: 'solunar',
+        header: 'Solunar',
+        meta: { filterOptions: SOLUNAR_OPTIONS, label: 'Solunar period' },
+        cell: (info) => <span title={solunarText(info.row.original.sky, timeZone)}>{info.getValue()}</span>,
+      }),
       column.accessor('lure', { header: 'Lure' }),
       column.accessor('technique', { header: 'Technique' }),
       column.accessor((c) => c.depthFt ?? undefined, {
@@ -104,22 +127,26 @@ export function CatchesTable({
               header: 'Actions',
               meta: { label: 'Actions' },
               enableHiding: false,
-              cell: (info) => (
-                <IconButton
-                  icon={TrashIcon}
-                  size="small"
-                  variant="invisible"
-                  aria-label={`Delete the catch at ${clockTime(info.row.original.caughtAt, timeZone)}`}
-                  onClick={() => {
-                    if (window.confirm('Delete this catch? Its weigh-in is recounted.')) remove.mutate(info.row.original.id);
-                  }}
-                />
-              ),
+              cell: (info) => {
+                const c = info.row.original;
+                const name = catchName(c, prefs, timeZone);
+                return (
+                  <span className={styles.rowActions}>
+                    <IconButton as={Link} to={journalPaths.catch.href(crewId, c.id)} icon={PencilIcon} size="small" variant="invisible" aria-label={`Edit ${name}`} />
+                    <DeleteRecordButton
+                      compact
+                      record={name}
+                      consequence="The day's counted bag and weigh-in are worked out again without it."
+                      onDelete={() => remove.mutateAsync(c.id)}
+                    />
+                  </span>
+                );
+              },
             }),
           ]
         : []),
     ],
-    [findNames, prefs, timeZone, canWrite, remove],
+    [crewId, findNames, prefs, timeZone, canWrite, remove],
   );
   if (catches.length === 0) {
     return (

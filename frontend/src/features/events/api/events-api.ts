@@ -92,3 +92,13 @@ export function useUpdateCompetitionDay(crewId: string, eventId: string) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
   });
 }
+
+/** PATCH /practice-days/:dayId: the day's notes and water temperature (as typed, with its unit); 409 when the version is stale. */
+export function useUpdatePracticeDay(crewId: string, eventId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ dayId, ...body }: { dayId: string; version: number; notes?: string; waterTemp?: TemperatureEntry | null }) =>
+      api.patch<PracticeDayView>(crewApiPath(crewId, `/practice-days/${encodeURIComponent(dayId)}`), body),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
+  });
+}

@@ -3,6 +3,7 @@ import { Button, FormControl, Select, Textarea } from '@primer/react';
 import { useState } from 'react';
 import { RulesCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
+import { isApiError } from '../../../lib/api-client';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
 import {
@@ -155,7 +156,7 @@ export function EventForm({
 
   return (
     <FormStack onSubmit={submit} label={event ? `Edit ${event.name}` : 'New event'}>
-      <FormError error={save.error} />
+      <FormError error={save.error} title={isApiError(save.error, 409, 'day_in_use') ? 'The dates were not changed: a day you removed still has records' : undefined} />
       <FormControl required>
         <FormControl.Label>Lake</FormControl.Label>
         <Select name="lakeId" value={values.lakeId} onChange={set('lakeId')} block validationStatus={lakeMessages.length ? 'error' : undefined}>

@@ -3,7 +3,6 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
 import type { FindWithSky } from '../../../lib/journal-types';
-import { uploadFile, type UploadProgress } from '../../../lib/upload';
 import type { DepthEntry, TemperatureEntry } from '../../../lib/units';
 
 /** Body of POST /finds and PATCH /finds/:findId; depth and temperature go as typed, with their unit. */
@@ -73,12 +72,5 @@ export function useDeleteFind(crewId: string) {
   });
 }
 
-/** POST /photos: an image (≤ 8 MB; the server re-encodes it and strips its GPS tags) → its id. */
-export function uploadPhoto(crewId: string, file: File, onProgress?: (p: UploadProgress) => void) {
-  return uploadFile<{ id: string }>(crewApiPath(crewId, '/photos'), file, { onProgress });
-}
-
-/** Where a crew member's browser loads a stored photo (the session cookie goes along; non-members get 404). */
-export function photoUrl(crewId: string, photoId: string): string {
-  return `/api${crewApiPath(crewId, `/photos/${encodeURIComponent(photoId)}`)}`;
-}
+// Photos are shared with the catch forms, so they live in lib; re-exported for the find screens.
+export { photoUrl, uploadPhoto } from '../../../lib/photos';

@@ -1,11 +1,12 @@
 import { PencilIcon, PlusIcon, UploadIcon } from '@primer/octicons-react';
 import type { EventView, LakeView, UnitPreferences } from '@shoalbook/shared';
 import { Button, Details, Heading, SegmentedControl, UnderlineNav } from '@primer/react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../../../components/feedback/query-states';
+import { DeleteRecordButton } from '../../../../../components/journal-forms/confirm-delete-dialog';
 import { EVENT_SECTIONS, journalPaths, type EventSection } from '../../../../../config/journal-paths';
 import { CatchEntryForm, CatchesTable, useCatches } from '../../../../../features/catches';
-import { CompetitionDayForm, EventSummary, useEvent, useEventDays } from '../../../../../features/events';
+import { CompetitionDayForm, EventSummary, PracticeDaysPanel, useDeleteEvent, useEvent, useEventDays } from '../../../../../features/events';
 import { FindsTable, useFinds } from '../../../../../features/finds';
 import { ExportButtons } from '../../../../../features/imports';
 import { UnitsNote } from '../../../../../features/journal-units';
@@ -32,6 +33,8 @@ export function Component() {
   const section: EventSection = requested && EVENT_SECTIONS.includes(requested) ? requested : 'overview';
   const event = useEvent(crewId, eventId);
   const lake = useLake(crewId, event.data?.lakeId);
+  const remove = useDeleteEvent(crewId);
+  const navigate = useNavigate();
 
   if (event.isPending) return <LoadingState label="Loading the event…" />;
   if (event.isError) return <ErrorState error={event.error} onRetry={() => event.refetch()} />;
@@ -44,9 +47,17 @@ export function Component() {
         lead={<UnitsNote prefs={prefs} />}
         actions={
           canWrite ? (
-            <Button as={Link} to={journalPaths.editEvent.href(crewId, e.id)} leadingVisual={PencilIcon}>
-              Edit event
-            </Button>
+            <>
+              <Button as={Link} to={journalPaths.editEvent.href(crewId, e.id)} leadingVisual={PencilIcon}>
+                Edit event
+              </Button>
+              <DeleteRecordButton
+                record={`the event “${e.name}”`}
+                consequence="Its practice days, competition days and weigh-in records go with it. An event that still has finds or catches is kept: delete those first."
+                onDelete={() => remove.mutateAsync(e.id)}
+                onDeleted={() => navigate(journalPaths.lake.href(crewId, e.lakeId))}
+              />
+            </>
           ) : undefined
         }
       />
@@ -82,7 +93,19 @@ interface SectionProps {
   canWrite: boolean;
 }
 
-function EventFinds({ crewId, event, lake, prefs, canWrite }: SectionProps) {
+function EventFinds(props: SectionProps) {
+  return (
+    <div className={styles.stack}>
+      <PracticeDaysPanel crewId={props.crewId} eventId={props.event.id} prefs={props.prefs} canWrite={props.canWrite} />
+      <Heading as="h3" className={styles.subheading}>
+        Practice finds
+      </Heading>
+      <EventFindsTable {...props} />
+    </div>
+  );
+}
+
+function EventFindsTable({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   const finds = useFinds(crewId, { eventId: event.id });
   if (finds.isPending) return <LoadingState label="Loading finds…" />;
   if (finds.isError) return <ErrorState error={finds.error} onRetry={() => finds.refetch()} />;

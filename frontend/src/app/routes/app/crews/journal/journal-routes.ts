@@ -16,5 +16,6 @@ export const journalRoutes: RouteObject[] = [
   { path: journalPaths.find.path, lazy: () => import('./find') },
   { path: journalPaths.editFind.path, lazy: () => import('./find-edit') },
   { path: journalPaths.catches.path, lazy: () => import('./catches') },
+  { path: journalPaths.catch.path, lazy: () => import('./catch') },
   { path: journalPaths.import.path, lazy: () => import('./import') },
 ];

@@ -1,10 +1,11 @@
 import { PencilIcon, PlusIcon, UploadIcon } from '@primer/octicons-react';
 import { Button, Heading } from '@primer/react';
-import { Link } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../../../../components/feedback/query-states';
+import { DeleteRecordButton } from '../../../../../components/journal-forms/confirm-delete-dialog';
 import { journalPaths } from '../../../../../config/journal-paths';
 import { EventsTable } from '../../../../../features/events';
-import { useLake, useLakes } from '../../../../../features/lakes';
+import { useDeleteLake, useLake, useLakes } from '../../../../../features/lakes';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
 
@@ -14,6 +15,8 @@ export function Component() {
   const lakeId = useParam('lakeId');
   const lake = useLake(crewId, lakeId);
   const lakes = useLakes(crewId);
+  const remove = useDeleteLake(crewId);
+  const navigate = useNavigate();
   if (lake.isPending) return <LoadingState label="Loading the lake…" />;
   if (lake.isError) return <ErrorState error={lake.error} onRetry={() => lake.refetch()} />;
   const l = lake.data;
@@ -35,6 +38,12 @@ export function Component() {
               <Button as={Link} to={journalPaths.newEvent.href(crewId, l.id)} variant="primary" leadingVisual={PlusIcon}>
                 New event
               </Button>
+              <DeleteRecordButton
+                record={`the lake “${l.name}”`}
+                consequence="A lake that still has events or finds is kept: delete those first. An empty lake goes with its notes and reference point."
+                onDelete={() => remove.mutateAsync(l.id)}
+                onDeleted={() => navigate(journalPaths.lakes.href(crewId))}
+              />
             </>
           ) : undefined
         }
