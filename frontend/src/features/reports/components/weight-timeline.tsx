@@ -54,7 +54,8 @@ export function WeightTimeline({
   const maxX = Math.ceil(Math.max(...allX));
   const ticks = Array.from({ length: maxX - minX + 1 }, (_, i) => minX + i);
   const colourOf = new Map(series.map((s, i) => [s.id, seriesColour(i)]));
-  const indexOfSeries = new Map(series.map((s, i) => [s.id, i]));
+  // nivo hands the symbol its series' colour; read the day back from it.
+  const indexOfColour = new Map(series.map((_, i) => [seriesColour(i), i]));
   const sign = chartWeightSign(unit);
   const height = 320;
 
@@ -77,11 +78,7 @@ export function WeightTimeline({
             pointBorderColor="#1f2328"
             pointColor={{ from: 'series.color' }}
             pointSymbol={({ datum, color, size }) => (
-              <SymbolMark
-                shape={symbolShape(indexOfSeries.get(String((datum as { seriesId?: string }).seriesId)) ?? 0)}
-                size={size}
-                colour={color}
-              />
+              <SymbolMark shape={symbolShape(indexOfColour.get(color) ?? 0)} size={size} colour={color} />
             )}
             enableGridX
             gridXValues={ticks}
