@@ -83,7 +83,7 @@ describe('inviting a new member by e-mail', () => {
     await page.getByText('You: Angler').waitFor();
     // A phone-sized window: the section tabs may fold into a "More" menu, so go by address.
     await page.goto(`${new URL(page.url()).pathname}/settings`);
-    await page.getByRole('cell', { name: email }).waitFor();
+    await page.getByRole('cell', { name: email, exact: true }).waitFor();
     await page.getByRole('row', { name: new RegExp(`${name}.*\\(you\\)`) }).waitFor();
   });
 

@@ -61,7 +61,7 @@ describe('demo accounts and their roles', () => {
 
     await page.getByRole('link', { name: 'Crew & members' }).click();
     await page.getByRole('heading', { name: 'Members' }).waitFor();
-    await page.getByRole('cell', { name: 'viewer@demo.test' }).waitFor();
+    await page.getByRole('cell', { name: 'viewer@demo.test', exact: true }).waitFor();
     // Other test files may add members; the three seeded ones are checked by name.
     for (const name of ['Wren Halvorsen', 'Milo Farrant', 'Ines Barlow (coach)']) {
       await page.getByRole('combobox', { name: `Role of ${name}` }).waitFor();
@@ -71,7 +71,15 @@ describe('demo accounts and their roles', () => {
     await page.getByRole('button', { name: 'Remove Ines Barlow (coach) from the crew' }).waitFor();
     expect(await page.getByRole('button', { name: /^Remove Wren Halvorsen/ }).count()).toBe(0);
     await page.getByRole('button', { name: 'Send invite' }).waitFor();
-    await page.getByRole('switch', { name: /Viewers see exact positions/ }).waitFor();
+    const positions = page.getByRole('button', { name: /Viewers see exact positions/ });
+    await positions.waitFor();
+    await expect(positions.getAttribute('aria-pressed')).resolves.toBe('false');
+    await positions.click();
+    await expect.poll(() => positions.getAttribute('aria-pressed')).toBe('true');
+    await page.reload();
+    await expect.poll(() => positions.getAttribute('aria-pressed'), { timeout: 15_000 }).toBe('true');
+    await positions.click();
+    await expect.poll(() => positions.getAttribute('aria-pressed')).toBe('false');
     await page.getByRole('heading', { name: 'Pending invites' }).waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);
     await screenshot(page, 'owner-crew-settings');
@@ -83,7 +91,7 @@ describe('demo accounts and their roles', () => {
     expect(await seriousAxeViolations(page)).toEqual([]);
     await screenshot(page, 'owner-remove-dialog');
     await dialog.getByRole('button', { name: 'Cancel' }).click();
-    await page.getByRole('cell', { name: 'angler@demo.test' }).waitFor();
+    await page.getByRole('cell', { name: 'angler@demo.test', exact: true }).waitFor();
 
     // The owner's crew switcher lists the demo crew only.
     await page.getByRole('button', { name: /: switch crew$/ }).click();
@@ -134,11 +142,12 @@ describe('demo accounts and their roles', () => {
       if (who.role === 'Viewer') await page.getByText(/As a viewer you can read everything/).waitFor();
 
       await page.goto(`${new URL(page.url()).pathname}/settings`);
-      await page.getByRole('cell', { name: 'owner@demo.test' }).waitFor();
+      await page.getByRole('cell', { name: 'owner@demo.test', exact: true }).waitFor();
       expect(await page.getByRole('combobox').count()).toBe(0);
       expect(await page.getByRole('button', { name: /^Remove / }).count()).toBe(0);
       expect(await page.getByRole('button', { name: 'Send invite' }).count()).toBe(0);
-      expect(await page.getByRole('switch').count()).toBe(0);
+      // Primer's toggle switch is a button with aria-pressed.
+      expect(await page.getByRole('button', { name: /Viewers see exact positions/ }).count()).toBe(0);
       expect(await page.getByRole('heading', { name: 'Pending invites' }).count()).toBe(0);
       expect(await page.getByRole('button', { name: 'Save name' }).count()).toBe(0);
       expect(await seriousAxeViolations(page)).toEqual([]);
@@ -162,7 +171,7 @@ describe('demo accounts and their roles', () => {
     await page.getByRole('link', { name: 'Accounts' }).click();
     await page.getByRole('heading', { level: 1, name: 'Accounts' }).waitFor();
     for (const email of ['owner@demo.test', 'angler@demo.test', 'viewer@demo.test', 'rival@demo.test', 'admin@demo.test']) {
-      await page.getByRole('cell', { name: email }).waitFor();
+      await page.getByRole('cell', { name: email, exact: true }).waitFor();
     }
     await page.getByRole('button', { name: 'Disable the account of rival@demo.test' }).waitFor();
     expect(await page.getByRole('button', { name: /the account of admin@demo\.test/ }).count()).toBe(0);
@@ -200,7 +209,7 @@ describe('demo accounts and their roles', () => {
       await screenshot(phone.page, 'phone-crew-home');
       // On a phone the section tabs may fold into a "More" menu; the address works either way.
       await phone.page.goto(`${demoCrewPath}/settings`);
-      await phone.page.getByRole('cell', { name: 'viewer@demo.test' }).waitFor();
+      await phone.page.getByRole('cell', { name: 'viewer@demo.test', exact: true }).waitFor();
       expect(await seriousAxeViolations(phone.page)).toEqual([]);
       await screenshot(phone.page, 'phone-crew-settings');
     } finally {
