@@ -79,6 +79,13 @@ export interface AxeViolation {
  * The script is evaluated through the DevTools protocol, so the app's strict CSP stays on.
  */
 export async function seriousAxeViolations(page: Page): Promise<string[]> {
+  // Colours are judged at rest: a dialog fading in would otherwise read as low contrast.
+  // Only finite animations end; a spinner's never does, and the wait is capped either way.
+  await page.evaluate(() => {
+    const finite = document.getAnimations().filter((a) => a.effect?.getComputedTiming().iterations !== Infinity);
+    const settled = Promise.all(finite.map((a) => a.finished.catch(() => undefined)));
+    return Promise.race([settled, new Promise((resolve) => setTimeout(resolve, 2000))]);
+  });
   await page.evaluate(AXE_SOURCE);
   const violations = (await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: unknown[] }> } }).axe;
