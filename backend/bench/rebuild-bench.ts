@@ -21,12 +21,14 @@ async function main(): Promise<void> {
     await em.execute('CREATE TABLE bench_bulk LIKE rm_catch_fact');
     const spec = { ...CATCH_TABLE, table: 'bench_bulk' };
     const crewId = randomUUID();
+    // Ids in key order, as the rebuild writes its rows.
+    const ids = Array.from({ length: rebuild.events }, () => randomUUID()).sort();
     const started = Date.now();
     const chunk = 20_000;
     for (let i = 0; i < rebuild.events; i += chunk) {
       const rows: CatchRow[] = [];
       for (let j = i; j < Math.min(rebuild.events, i + chunk); j++) {
-        rows.push({ id: randomUUID(), crewId, lakeId: crewId, eventId: crewId, competitionDayId: crewId, dayDate: '2026-10-10', findId: crewId, caughtAtMs: 1_790_000_000_000 + j * 1000, weightLb: 2.5, weightUlb: 2_500_000, lengthIn: null, species: 'largemouth', fate: 'weighed', lure: 'jig', lat: null, lon: null, localMinutes: 420, minutesFromSunrise: 35, solunarPeriod: 'none', timeOfDay: 'early' });
+        rows.push({ id: ids[j]!, crewId, lakeId: crewId, eventId: crewId, competitionDayId: crewId, dayDate: '2026-10-10', findId: crewId, caughtAtMs: 1_790_000_000_000 + j * 1000, weightLb: 2.5, weightUlb: 2_500_000, lengthIn: null, species: 'largemouth', fate: 'weighed', lure: 'jig', lat: null, lon: null, localMinutes: 420, minutesFromSunrise: 35, solunarPeriod: 'none', timeOfDay: 'early' });
       }
       await em.transactional(async (tx) => {
         for (const sql of insertChunks(spec, rows)) await tx.execute(sql);

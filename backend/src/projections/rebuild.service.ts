@@ -77,8 +77,10 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       await tx.execute('START TRANSACTION');
       // Each statement is built while the previous one runs.
       let pending: Promise<unknown> = Promise.resolve();
+      // Rows go in primary-key order: InnoDB then appends to its clustered index instead of splitting pages.
       const write = async <R>(spec: TableSpec<R>, rows: Iterable<R>) => {
-        const all = [...rows];
+        const keyOf = (r: R) => spec.key.map((k) => String(r[k])).join('\u0000');
+        const all = [...rows].map((r) => ({ r, k: keyOf(r) })).sort((a, b) => (a.k < b.k ? -1 : a.k > b.k ? 1 : 0)).map((x) => x.r);
         for (let i = 0; i < all.length; i += WRITE_CHUNK) {
           const sql = insertSql(spec, all.slice(i, i + WRITE_CHUNK));
           await pending;
