@@ -227,7 +227,8 @@ export function CatchEditForm({
       setUnchanged(true);
       return;
     }
-    update.mutate(changes, { onSuccess: onSaved });
+    // mutateAsync, not mutate's callbacks: saving bumps the version, which remounts this form before they would run.
+    update.mutateAsync(changes).then(onSaved, () => undefined);
   };
 
   const weightEntered = typedAs(catchView.entered?.weight, prefs.weight);

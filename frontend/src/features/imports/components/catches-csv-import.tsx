@@ -1,4 +1,4 @@
-import type { EventView, UnitPreferences } from '@shoalbook/shared';
+import type { EventView, LakeView, UnitPreferences } from '@shoalbook/shared';
 import { DownloadIcon } from '@primer/octicons-react';
 import { Banner, Button, FormControl, Label, LinkButton, Select, Text } from '@primer/react';
 import { useId, useState } from 'react';
@@ -20,11 +20,14 @@ export function rowErrors(row: CsvPreviewRow): string[] {
 export function CatchesCsvImport({
   crewId,
   events,
+  lakes,
   prefs,
   defaultEventId,
 }: {
   crewId: string;
   events: EventView[];
+  /** For the lake's clock: times in the preview are shown as the file gave them, in lake time. */
+  lakes: LakeView[];
   prefs: UnitPreferences;
   defaultEventId?: string;
 }) {
@@ -37,6 +40,7 @@ export function CatchesCsvImport({
   const [failure, setFailure] = useState<unknown>(null);
   const afterImport = useAfterImport(crewId);
   const fileId = useId();
+  const timeZone = lakes.find((l) => l.id === events.find((e) => e.id === eventId)?.lakeId)?.timeZone ?? 'UTC';
 
   const check = async () => {
     if (!file) return setProblem('Choose a CSV file first.');
@@ -126,7 +130,23 @@ export function CatchesCsvImport({
             <Label variant="success">{preview.accepted} rows ready</Label>
             <Label variant="danger">{preview.rejected} rows with errors</Label>
           </div>
-          <CsvPreviewTable rows={preview.rows} prefs={prefs} />
+          <CsvPreviewTable rows={preview.rows} prefs={prefs} timeZone={timeZone} />
+          {preview.rejected > 0 ? (
+            <section aria-label="What to fix, line by line" className={styles.fixList}>
+              <Text as="p" weight="semibold">
+                What to fix, line by line
+              </Text>
+              <ul>
+                {preview.rows
+                  .filter((row) => row.errors.length)
+                  .map((row) => (
+                    <li key={row.index}>
+                      Line {row.line}: {rowErrors(row).join('; ')}
+                    </li>
+                  ))}
+              </ul>
+            </section>
+          ) : null}
           <div className={styles.actions}>
             <Button variant="primary" onClick={commit} disabled={progress !== null || preview.accepted === 0 || preview.rejected > 0}>
               {`Import ${preview.accepted} catches`}

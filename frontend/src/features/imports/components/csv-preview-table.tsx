@@ -4,12 +4,13 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/data-table/data-table';
 import type { CsvPreviewRow } from '../../../lib/journal-types';
+import { clockTime } from '../../../lib/lake-time';
 import { formatLength, formatWeight } from '../../../lib/units';
 
 const column = createColumnHelper<CsvPreviewRow>();
 
 /** Every row of a catch CSV as the server read it: its values in the user's units, or what is wrong with it. */
-export function CsvPreviewTable({ rows, prefs }: { rows: CsvPreviewRow[]; prefs: UnitPreferences }) {
+export function CsvPreviewTable({ rows, prefs, timeZone }: { rows: CsvPreviewRow[]; prefs: UnitPreferences; timeZone: string }) {
   const columns = useMemo(
     () => [
       column.accessor('line', { header: 'Line', meta: { numeric: true } }),
@@ -30,7 +31,7 @@ export function CsvPreviewTable({ rows, prefs }: { rows: CsvPreviewRow[]; prefs:
         header: 'What is wrong',
         enableSorting: false,
       }),
-      column.accessor((r) => r.caughtAt ?? '', { id: 'caughtAt', header: 'Time' }),
+      column.accessor((r) => r.caughtAt ?? '', { id: 'caughtAt', header: 'Time', cell: (info) => (info.getValue() ? clockTime(info.getValue(), timeZone) : '—') }),
       column.accessor((r) => r.species ?? '', { id: 'species', header: 'Species' }),
       column.accessor((r) => r.weightLb ?? undefined, {
         id: 'weight',
@@ -61,7 +62,7 @@ export function CsvPreviewTable({ rows, prefs }: { rows: CsvPreviewRow[]; prefs:
         header: 'Find',
       }),
     ],
-    [prefs],
+    [prefs, timeZone],
   );
   return (
     <DataTable data={rows} columns={columns} caption="Rows of the CSV file" getRowId={(r) => String(r.index)} initialSorting={[{ id: 'line', desc: false }]} height={400} />

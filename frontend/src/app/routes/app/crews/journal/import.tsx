@@ -51,7 +51,7 @@ export function Component() {
               defaults={{ lakeId: search.get('lakeId') ?? undefined, eventId: search.get('eventId') ?? undefined }}
             />
           ) : null}
-          {kind === 'csv' ? <CatchesCsvImport crewId={crewId} events={events.data} prefs={prefs} defaultEventId={search.get('eventId') ?? undefined} /> : null}
+          {kind === 'csv' ? <CatchesCsvImport crewId={crewId} events={events.data} lakes={lakes.data} prefs={prefs} defaultEventId={search.get('eventId') ?? undefined} /> : null}
           {kind === 'export' && canExport ? <ExportButtons crewId={crewId} /> : null}
         </>
       ) : null}
