@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { hitRates } from '@shoalbook/analytics';
 import { describe, expect, it } from 'vitest';
-import { deriveGroupStats, deriveOutcomes, FIND_GROUPINGS } from './derive';
+import { catchGroupSums, deriveGroupStats, deriveOutcomes, FIND_GROUPINGS } from './derive';
 import { JournalApplier } from './journal-applier';
 import type { JournalRecord } from './journal-record';
 import { ProjectionState } from './projection-state';
@@ -65,7 +65,7 @@ describe('derived rows against analytics hitRates', () => {
           for (const e of journal(finds, catches)) applier.apply(e);
           const facts = [...state.catches.rows.values()];
           const outcomes = [...state.finds.rows.values()].flatMap((f) => deriveOutcomes(f, facts.filter((c) => c.findId === f.id)));
-          const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomes.filter((o) => o.eventId === ev.id), facts.filter((c) => c.eventId === ev.id)));
+          const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomes.filter((o) => o.eventId === ev.id), catchGroupSums(facts.filter((c) => c.eventId === ev.id))));
 
           // The reference: one analytics "find" per (find, event) fished, its catches keyed the same way.
           const pairs = outcomes.map((o) => {

@@ -28,53 +28,96 @@ export function findKeys(find: FindRow): Pick<OutcomeRow, 'kind' | 'subKind' | '
   };
 }
 
-/**
- * A find's outcome rows, recomputed from scratch from its catch facts: one per event it was fished in (marked
- * in that event's practice, or caught on in it). A deleted find has none.
- */
-export function deriveOutcomes(find: FindRow | undefined, catches: readonly CatchRow[]): OutcomeRow[] {
-  if (!find) return [];
-  const byEvent = new Map<string, CatchRow[]>();
-  if (find.eventId) byEvent.set(find.eventId, []);
+/** What outcomes and group statistics need of a set of catches: counts, integer micro-pound sums, first bite. */
+export interface CatchSums {
+  fishCount: number;
+  weighedCount: number;
+  weightUlb: number;
+  weighedWeightUlb: number;
+  firstBiteAtMs: number | null;
+}
+
+/** The sums of some catches (the rebuild's path; incremental batches get the same sums from SQL GROUP BY). */
+export function sumCatches(catches: Iterable<Pick<CatchRow, 'fate' | 'weightUlb' | 'caughtAtMs'>>): CatchSums {
+  const s: CatchSums = { fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null };
   for (const c of catches) {
-    if (c.findId !== find.id) continue;
-    let list = byEvent.get(c.eventId);
-    if (!list) byEvent.set(c.eventId, (list = []));
-    list.push(c);
-  }
-  const keys = findKeys(find);
-  const rows: OutcomeRow[] = [];
-  for (const eventId of [...byEvent.keys()].sort()) {
-    const list = byEvent.get(eventId)!;
-    let weighedCount = 0;
-    let weightUlb = 0;
-    let weighedWeightUlb = 0;
-    let firstBiteAtMs: number | null = null;
-    for (const c of list) {
-      weightUlb += c.weightUlb;
-      if (c.fate === 'weighed') {
-        weighedCount++;
-        weighedWeightUlb += c.weightUlb;
-      }
-      if (firstBiteAtMs === null || c.caughtAtMs < firstBiteAtMs) firstBiteAtMs = c.caughtAtMs;
+    s.fishCount++;
+    s.weightUlb += c.weightUlb;
+    if (c.fate === 'weighed') {
+      s.weighedCount++;
+      s.weighedWeightUlb += c.weightUlb;
     }
+    if (s.firstBiteAtMs === null || c.caughtAtMs < s.firstBiteAtMs) s.firstBiteAtMs = c.caughtAtMs;
+  }
+  return s;
+}
+
+/**
+ * A find's outcome rows from the sums of its catches per event: one per event it was fished in (marked in that
+ * event's practice, or caught on in it). A deleted find has none.
+ */
+export function outcomesFromSums(find: FindRow | undefined, sumsByEvent: ReadonlyMap<string, CatchSums>): OutcomeRow[] {
+  if (!find) return [];
+  const events = new Set(sumsByEvent.keys());
+  if (find.eventId) events.add(find.eventId);
+  const keys = findKeys(find);
+  return [...events].sort().map((eventId) => {
+    const s = sumsByEvent.get(eventId) ?? { fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null };
     const practiced = find.eventId === eventId;
-    rows.push({
+    return {
       findId: find.id,
       eventId,
       crewId: find.crewId,
       lakeId: find.lakeId,
       ...keys,
       practiced,
-      fished: practiced || list.length > 0,
-      fishCount: list.length,
-      weighedCount,
-      weightUlb,
-      weighedWeightUlb,
-      firstBiteAtMs,
-    });
+      fished: practiced || s.fishCount > 0,
+      fishCount: s.fishCount,
+      weighedCount: s.weighedCount,
+      weightUlb: s.weightUlb,
+      weighedWeightUlb: s.weighedWeightUlb,
+      firstBiteAtMs: s.firstBiteAtMs,
+    };
+  });
+}
+
+/** A find's outcome rows, recomputed from scratch from its catch facts. */
+export function deriveOutcomes(find: FindRow | undefined, catches: readonly CatchRow[]): OutcomeRow[] {
+  if (!find) return [];
+  const byEvent = new Map<string, CatchRow[]>();
+  for (const c of catches) {
+    if (c.findId !== find.id) continue;
+    let list = byEvent.get(c.eventId);
+    if (!list) byEvent.set(c.eventId, (list = []));
+    list.push(c);
   }
-  return rows;
+  return outcomesFromSums(find, new Map([...byEvent].map(([e, list]) => [e, sumCatches(list)])));
+}
+
+/** Sums of one catch grouping key within an event. */
+export interface CatchGroupSums extends CatchSums {
+  grouping: (typeof CATCH_GROUPINGS)[number];
+  key: string;
+}
+
+/** The catch-grouping sums of one event's catches (the rebuild's path). */
+export function catchGroupSums(catches: readonly CatchForStats[]): CatchGroupSums[] {
+  const out = new Map<string, CatchGroupSums>();
+  for (const c of catches) {
+    for (const grouping of CATCH_GROUPINGS) {
+      const key = c[grouping];
+      const id = `${grouping}\u0000${key}`;
+      let g = out.get(id);
+      if (!g) out.set(id, (g = { grouping, key, fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null }));
+      g.fishCount++;
+      g.weightUlb += c.weightUlb;
+      if (c.fate === 'weighed') {
+        g.weighedCount++;
+        g.weighedWeightUlb += c.weightUlb;
+      }
+    }
+  }
+  return [...out.values()];
 }
 
 function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsRow {
@@ -96,10 +139,10 @@ function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsR
 }
 
 /**
- * An event's group statistics, recomputed from its outcome rows (find groupings) and its catch facts (catch
- * groupings). Sums are integer micro-pounds, so the result does not depend on the order of the inputs.
+ * An event's group statistics, recomputed from its outcome rows (find groupings) and the sums of its catch facts per
+ * catch-grouping key. Sums are integer micro-pounds, so the result does not depend on the order of the inputs.
  */
-export function deriveGroupStats(event: EventRow | undefined, outcomes: readonly OutcomeRow[], catches: readonly CatchForStats[]): GroupStatsRow[] {
+export function deriveGroupStats(event: EventRow | undefined, outcomes: readonly OutcomeRow[], catchGroups: readonly CatchGroupSums[]): GroupStatsRow[] {
   if (!event) return [];
   const groups = new Map<string, GroupStatsRow>();
   const row = (grouping: string, key: string) => {
@@ -122,17 +165,13 @@ export function deriveGroupStats(event: EventRow | undefined, outcomes: readonly
       g.weighedWeightUlb += o.weighedWeightUlb;
     }
   }
-  for (const c of catches) {
-    if (c.eventId !== event.id) continue;
-    for (const grouping of CATCH_GROUPINGS) {
-      const g = row(grouping, c[grouping]);
-      g.fishCount++;
-      g.weightUlb += c.weightUlb;
-      if (c.fate === 'weighed') {
-        g.weighedCount++;
-        g.weighedWeightUlb += c.weightUlb;
-      }
-    }
+  for (const c of catchGroups) {
+    if (c.fishCount === 0) continue;
+    const g = row(c.grouping, c.key);
+    g.fishCount += c.fishCount;
+    g.weighedCount += c.weighedCount;
+    g.weightUlb += c.weightUlb;
+    g.weighedWeightUlb += c.weighedWeightUlb;
   }
   return [...groups.values()].sort((a, b) => (a.grouping + a.groupKey < b.grouping + b.groupKey ? -1 : 1));
 }

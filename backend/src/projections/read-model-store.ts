@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
-import { CATCH_GROUPINGS, type CatchForStats, deriveGroupStats, deriveOutcomes } from './derive';
+import { CATCH_GROUPINGS, type CatchGroupSums, type CatchSums, deriveGroupStats, outcomesFromSums } from './derive';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
 import type { OutcomeRow } from './rows';
@@ -9,6 +9,11 @@ import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAK
 type Row = Record<string, unknown>;
 
 const str = (v: unknown): string | null => (typeof v === 'string' && v ? v : null);
+const instant = (v: unknown): number | null => (v === null || v === undefined ? null : v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`));
+
+/** The same sums as derive.ts sumCatches, in SQL (integer micro-pounds: exact in any order). */
+const SUM_COLUMNS = "COUNT(*) AS fish_count, SUM(fate = 'weighed') AS weighed_count, SUM(weight_ulb) AS weight_ulb, SUM(IF(fate = 'weighed', weight_ulb, 0)) AS weighed_weight_ulb";
+const sumsOf = (r: Row) => ({ fishCount: Number(r.fish_count), weighedCount: Number(r.weighed_count), weightUlb: Number(r.weight_ulb), weighedWeightUlb: Number(r.weighed_weight_ulb) });
 
 /** `SELECT * FROM table WHERE …` as projector rows. */
 async function select<R>(tx: EntityManager, spec: TableSpec<R>, where: string): Promise<R[]> {
@@ -101,8 +106,17 @@ export class ReadModelStore {
       for (const r of old) dirtyEvents.add(String(r.event_id));
       const missing = dirtyFinds.filter((id) => !state.finds.rows.has(id) && !state.finds.changed.has(id));
       for (const f of await select(tx, FIND_TABLE, inList('id', missing))) state.finds.load(f.id, f);
-      const byFind = groupBy(await select(tx, CATCH_TABLE, inList('find_id', dirtyFinds)), (c) => c.findId);
-      const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) => deriveOutcomes(state.finds.get(id), byFind.get(id) ?? []));
+      // Sums per (find, event) straight from SQL: a find with thousands of catches costs one small result.
+      const sumRows: Row[] = await tx.execute(
+        `SELECT find_id, event_id, ${SUM_COLUMNS}, MIN(caught_at) AS first_bite FROM rm_catch_fact WHERE ${inList('find_id', dirtyFinds)} GROUP BY find_id, event_id`,
+      );
+      const sums = new Map<string, Map<string, CatchSums>>();
+      for (const r of sumRows) {
+        const findId = String(r.find_id);
+        if (!sums.has(findId)) sums.set(findId, new Map());
+        sums.get(findId)!.set(String(r.event_id), { ...sumsOf(r), firstBiteAtMs: instant(r.first_bite) });
+      }
+      const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) => outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map()));
       for (const o of outcomes) dirtyEvents.add(o.eventId);
       await tx.execute(`DELETE FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
       for (const sql of insertChunks(OUTCOME_TABLE, outcomes)) await tx.execute(sql);
@@ -113,17 +127,17 @@ export class ReadModelStore {
       const missing = events.filter((id) => !state.events.rows.has(id) && !state.events.changed.has(id));
       for (const ev of await select(tx, EVENT_TABLE, inList('id', missing))) state.events.load(ev.id, ev);
       const outcomes = await select(tx, OUTCOME_TABLE, inList('event_id', events));
-      const catchCols = ['event_id', 'fate', 'weight_ulb', ...CATCH_GROUPINGS.map((g) => (g === 'solunarPeriod' ? 'solunar_period' : 'time_of_day'))];
-      const catchRows: Row[] = await tx.execute(`SELECT ${catchCols.join(', ')} FROM rm_catch_fact WHERE ${inList('event_id', events)}`);
-      const catches: CatchForStats[] = catchRows.map((r) => ({
-        eventId: String(r.event_id),
-        fate: String(r.fate),
-        weightUlb: Number(r.weight_ulb),
-        solunarPeriod: String(r.solunar_period),
-        timeOfDay: String(r.time_of_day),
-      }));
+      const groupRows: Row[] = await tx.execute(
+        CATCH_GROUPINGS.map(
+          (g) => `SELECT event_id, '${g}' AS grouping_name, \`${g === 'solunarPeriod' ? 'solunar_period' : 'time_of_day'}\` AS group_key, ${SUM_COLUMNS}
+                    FROM rm_catch_fact WHERE ${inList('event_id', events)} GROUP BY event_id, group_key`,
+        ).join(' UNION ALL '),
+      );
+      const catchesByEvent = groupBy(
+        groupRows.map((r) => ({ eventId: String(r.event_id), grouping: String(r.grouping_name) as CatchGroupSums['grouping'], key: String(r.group_key), ...sumsOf(r), firstBiteAtMs: null })),
+        (c) => c.eventId,
+      );
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
-      const catchesByEvent = groupBy(catches, (c) => c.eventId);
       const stats = events.flatMap((id) => deriveGroupStats(state.events.get(id), outcomesByEvent.get(id) ?? [], catchesByEvent.get(id) ?? []));
       await tx.execute(`DELETE FROM rm_group_stats WHERE ${inList('event_id', events)}`);
       for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);

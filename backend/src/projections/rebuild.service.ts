@@ -2,7 +2,7 @@ import { MikroORM } from '@mikro-orm/mariadb';
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
 import { READ_MODEL_TABLES } from '../read-models';
-import { type CatchForStats, deriveGroupStats, deriveOutcomes } from './derive';
+import { type CatchForStats, catchGroupSums, deriveGroupStats, deriveOutcomes } from './derive';
 import { JournalApplier } from './journal-applier';
 import { GapPolicy, readJournal } from './journal-reader';
 import { JournalProjector } from './journal-projector.service';
@@ -68,7 +68,7 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       for (const find of state.finds.rows.values()) outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? []));
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
       const catchesByEvent = groupBy<CatchForStats>(state.catches.rows.values(), (c) => c.eventId);
-      const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchesByEvent.get(ev.id) ?? []));
+      const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchGroupSums(catchesByEvent.get(ev.id) ?? [])));
 
       options.onProgress?.({ seq: last, maxSeq, events, phase: 'write' });
       // TRUNCATE commits implicitly; the refill then runs in its own transaction, committed with the checkpoint.
