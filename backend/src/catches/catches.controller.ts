@@ -1,7 +1,7 @@
 import { Body, Controller, Delete, Get, Header, HttpCode, Param, Patch, Post, Query, Req, Res, UseInterceptors } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import { EntityManager } from '@mikro-orm/mariadb';
-import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiNoContentResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { CatchImportPreview, CatchImportResult, CatchView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -17,6 +17,8 @@ import { RecordIdPipe } from '../journal/record-id.pipe';
 import { CatchesService } from './catches.service';
 import { DeleteCatchCommand, ImportCatchesCommand, LogCatchCommand, UpdateCatchCommand } from './commands/catch.commands';
 import { CatchImportQueryDto, CatchListQueryDto, LogCatchDto, UpdateCatchDto } from './dto/catch.dto';
+import { CatchViewDto } from './dto/catch-view.dto';
+import { CatchImportPreviewDto, CatchImportResultDto } from '../imports/dto/import-view.dto';
 
 const UPLOAD_BODY = { schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } };
 
@@ -33,6 +35,7 @@ export class CatchesController {
 
   @Get()
   @ApiOperation({ summary: 'Catches, optionally of one event or competition day; X-Total-Count has the total' })
+  @ApiOkResponse({ type: [CatchViewDto], headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'catches matching the filter' } } })
   async list(@CurrentCrew() access: CrewAccess, @Query() query: CatchListQueryDto, @Res({ passthrough: true }) res: Response): Promise<CatchView[]> {
     const { views, total } = await this.catches.list(access, query);
     res.setHeader('X-Total-Count', String(total));
@@ -41,12 +44,14 @@ export class CatchesController {
 
   @Post()
   @ApiOperation({ summary: 'Log a catch; with lat/lon and no findId it is attributed to the nearest find within radiusM (default 50 m)' })
+  @ApiCreatedResponse({ type: CatchViewDto })
   create(@CurrentCrew() access: CrewAccess, @Body() dto: LogCatchDto): Promise<CatchView> {
     return this.commands.execute(new LogCatchCommand(access, dto));
   }
 
   @Get('import/template')
   @ApiProduces('text/csv')
+  @ApiOkResponse({ description: 'the CSV header row with the catch columns', schema: { type: 'string' } })
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="shoalbook-catches-template.csv"')
   template(): string {
@@ -59,6 +64,7 @@ export class CatchesController {
   @ApiConsumes('multipart/form-data')
   @ApiBody(UPLOAD_BODY)
   @ApiOperation({ summary: 'Check a catch CSV row by row; nothing is written' })
+  @ApiOkResponse({ type: CatchImportPreviewDto })
   async preview(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: CatchImportQueryDto): Promise<CatchImportPreview> {
     const event = await this.em.findOne(TournamentEvent, { id: query.eventId, crewId: access.crewId });
     if (!event) throw recordNotFound('event');
@@ -73,16 +79,20 @@ export class CatchesController {
   @ApiConsumes('multipart/form-data')
   @ApiBody(UPLOAD_BODY)
   @ApiOperation({ summary: 'Import a catch CSV: every row in one transaction, or none if any row has an error (400 import_refused)' })
+  @ApiCreatedResponse({ type: CatchImportResultDto })
   import(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: CatchImportQueryDto): Promise<CatchImportResult> {
     return this.commands.execute(new ImportCatchesCommand(access, query.eventId, req.file!.buffer));
   }
 
   @Get(':catchId')
+  @ApiOkResponse({ type: CatchViewDto })
   get(@CurrentCrew() access: CrewAccess, @Param('catchId', new RecordIdPipe('catch')) catchId: string): Promise<CatchView> {
     return this.catches.get(access, catchId);
   }
 
   @Patch(':catchId')
+  @ApiOperation({ summary: 'Change a catch; send the version you loaded' })
+  @ApiOkResponse({ type: CatchViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
   update(@CurrentCrew() access: CrewAccess, @Param('catchId', new RecordIdPipe('catch')) catchId: string, @Body() dto: UpdateCatchDto): Promise<CatchView> {
     return this.commands.execute(new UpdateCatchCommand(access, catchId, dto));

@@ -1,6 +1,6 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiConflictResponse, ApiCookieAuth, ApiNoContentResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { CompetitionDayView, EventView, PracticeDayView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -15,6 +15,7 @@ import {
 } from './commands/event.commands';
 import { UpdateCompetitionDayDto, UpdatePracticeDayDto } from './dto/day.dto';
 import { CreateEventDto, EventListQueryDto, UpdateEventDto } from './dto/event.dto';
+import { CompetitionDayViewDto, EventViewDto, PracticeDayViewDto } from './dto/event-view.dto';
 import { competitionDayView, eventView, practiceDayView } from './event-views';
 import { EventsService } from './events.service';
 
@@ -30,22 +31,27 @@ export class EventsController {
 
   @Get('events')
   @ApiOperation({ summary: "The crew's events, optionally of one lake" })
+  @ApiOkResponse({ type: [EventViewDto] })
   async list(@CurrentCrew() access: CrewAccess, @Query() query: EventListQueryDto): Promise<EventView[]> {
     return (await this.events.list(access.crewId, query.lakeId)).map(eventView);
   }
 
   @Post('events')
   @ApiOperation({ summary: 'Add an event; its practice and competition days are created from the dates' })
+  @ApiCreatedResponse({ type: EventViewDto })
   create(@CurrentCrew() access: CrewAccess, @Body() dto: CreateEventDto): Promise<EventView> {
     return this.commands.execute(new CreateEventCommand(access, dto));
   }
 
   @Get('events/:eventId')
+  @ApiOkResponse({ type: EventViewDto })
   async get(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventView> {
     return eventView(await this.events.get(access.crewId, eventId));
   }
 
   @Patch('events/:eventId')
+  @ApiOperation({ summary: 'Change an event; send the version you loaded' })
+  @ApiOkResponse({ type: EventViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version, or day_in_use when a dropped date has finds or catches' })
   update(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string, @Body() dto: UpdateEventDto): Promise<EventView> {
     return this.commands.execute(new UpdateEventCommand(access, eventId, dto));
@@ -60,12 +66,15 @@ export class EventsController {
   }
 
   @Get('events/:eventId/practice-days')
+  @ApiOkResponse({ type: [PracticeDayViewDto] })
   async practiceDays(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<PracticeDayView[]> {
     await this.events.get(access.crewId, eventId);
     return (await this.events.practiceDays(access.crewId, eventId)).map(practiceDayView);
   }
 
   @Patch('practice-days/:dayId')
+  @ApiOkResponse({ type: PracticeDayViewDto })
+  @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
   updatePracticeDay(
     @CurrentCrew() access: CrewAccess,
     @Param('dayId', new RecordIdPipe('practice day')) dayId: string,
@@ -75,12 +84,15 @@ export class EventsController {
   }
 
   @Get('events/:eventId/competition-days')
+  @ApiOkResponse({ type: [CompetitionDayViewDto] })
   async competitionDays(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<CompetitionDayView[]> {
     await this.events.get(access.crewId, eventId);
     return (await this.events.competitionDays(access.crewId, eventId)).map(competitionDayView);
   }
 
   @Patch('competition-days/:dayId')
+  @ApiOkResponse({ type: CompetitionDayViewDto })
+  @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
   updateCompetitionDay(
     @CurrentCrew() access: CrewAccess,
     @Param('dayId', new RecordIdPipe('competition day')) dayId: string,

@@ -1,6 +1,6 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query, Req, Res, UseInterceptors } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiNoContentResponse, ApiOperation, ApiPayloadTooLargeResponse, ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiPayloadTooLargeResponse, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { FindImportPreview, FindImportResult, FindView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -19,6 +19,8 @@ import { AddFindCommand, DeleteFindCommand, UpdateFindCommand } from './commands
 import { ImportFindsCommand } from './commands/import-finds.command';
 import { AddFindDto, FindListQueryDto, UpdateFindDto } from './dto/find.dto';
 import { FindImportOptionsDto } from './dto/find-import.dto';
+import { FindViewDto } from './dto/find-view.dto';
+import { FindImportPreviewDto, FindImportResultDto } from '../imports/dto/import-view.dto';
 import { FindsService } from './finds.service';
 
 const UPLOAD_BODY = { schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } };
@@ -46,6 +48,7 @@ export class FindsController {
 
   @Get()
   @ApiOperation({ summary: 'Finds, optionally of one lake or event; X-Total-Count has the total; positions hidden from viewers unless allowed' })
+  @ApiOkResponse({ type: [FindViewDto], headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'finds matching the filter' } } })
   async list(@CurrentCrew() access: CrewAccess, @Query() query: FindListQueryDto, @Res({ passthrough: true }) res: Response): Promise<FindView[]> {
     const { views, total } = await this.finds.list(access, query);
     res.setHeader('X-Total-Count', String(total));
@@ -54,6 +57,7 @@ export class FindsController {
 
   @Post()
   @ApiOperation({ summary: 'Add a find' })
+  @ApiCreatedResponse({ type: FindViewDto })
   create(@CurrentCrew() access: CrewAccess, @Body() dto: AddFindDto): Promise<FindView> {
     return this.commands.execute(new AddFindCommand(access, dto));
   }
@@ -64,6 +68,7 @@ export class FindsController {
   @ApiConsumes('multipart/form-data')
   @ApiBody(UPLOAD_BODY)
   @ApiOperation({ summary: 'Check a GPX 1.1 file: per-waypoint errors and duplicates within 15 m; nothing is written' })
+  @ApiOkResponse({ type: FindImportPreviewDto })
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto })
   async preview(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: FindImportOptionsDto, @Body() body: FindImportOptionsDto): Promise<FindImportPreview> {
     const options = importOptions(query, body);
@@ -81,6 +86,7 @@ export class FindsController {
   @ApiConsumes('multipart/form-data')
   @ApiBody(UPLOAD_BODY)
   @ApiOperation({ summary: 'Import a GPX 1.1 file as finds: all accepted rows in one transaction, or none' })
+  @ApiCreatedResponse({ type: FindImportResultDto })
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto })
   import(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: FindImportOptionsDto, @Body() body: FindImportOptionsDto): Promise<FindImportResult> {
     const options = importOptions(query, body);
@@ -96,11 +102,14 @@ export class FindsController {
   }
 
   @Get(':findId')
+  @ApiOkResponse({ type: FindViewDto })
   get(@CurrentCrew() access: CrewAccess, @Param('findId', new RecordIdPipe('find')) findId: string): Promise<FindView> {
     return this.finds.get(access, findId);
   }
 
   @Patch(':findId')
+  @ApiOperation({ summary: 'Change a find; send the version you loaded' })
+  @ApiOkResponse({ type: FindViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
   update(@CurrentCrew() access: CrewAccess, @Param('findId', new RecordIdPipe('find')) findId: string, @Body() dto: UpdateFindDto): Promise<FindView> {
     return this.commands.execute(new UpdateFindCommand(access, findId, dto));

@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Controller, Get, Param, Post, Req, Res, StreamableFile, UseInterceptors } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBody, ApiConsumes, ApiCookieAuth, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { PhotoView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -11,6 +11,7 @@ import { recordNotFound } from '../journal/journal-errors';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { StorageService } from '../storage/storage.service';
 import { UploadPhotoCommand } from './commands/upload-photo.command';
+import { PhotoViewDto } from './dto/photo-view.dto';
 import { PHOTO_LIMITS } from './image-processing';
 import { Photo } from './photo.entity';
 
@@ -30,6 +31,7 @@ export class PhotosController {
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
   @ApiOperation({ summary: 'Upload a photo or sonar screenshot (images only, ≤ 8 MB); re-encoded, all metadata incl. GPS removed' })
+  @ApiCreatedResponse({ type: PhotoViewDto })
   upload(@CurrentCrew() access: CrewAccess, @Req() req: Request): Promise<PhotoView> {
     return this.commands.execute(new UploadPhotoCommand(access, req.file!.buffer));
   }
@@ -37,6 +39,7 @@ export class PhotosController {
   @Get(':photoId')
   @ApiProduces('image/jpeg')
   @ApiOperation({ summary: 'The image (crew members only)' })
+  @ApiOkResponse({ description: 'the re-encoded image bytes', schema: { type: 'string', format: 'binary' } })
   async get(@CurrentCrew() access: CrewAccess, @Param('photoId', new RecordIdPipe('photo')) photoId: string, @Res({ passthrough: true }) res: Response): Promise<StreamableFile> {
     const photo = await this.em.findOne(Photo, { id: photoId, crewId: access.crewId });
     const bytes = photo ? await this.storage.get(photo.storageKey) : null;

@@ -1,5 +1,5 @@
 import { Controller, Get, Query } from '@nestjs/common';
-import { ApiCookieAuth, ApiOperation, ApiProperty, ApiTags } from '@nestjs/swagger';
+import { ApiCookieAuth, ApiOkResponse, ApiOperation, ApiProperty, ApiTags } from '@nestjs/swagger';
 import type { SkyDayView } from '@shoalbook/shared';
 import { IsUUID, Matches } from 'class-validator';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -7,6 +7,7 @@ import type { CrewAccess } from '../common/request-context';
 import { fieldErrors } from '../journal/journal-errors';
 import { isCalendarDate } from '../journal/local-time';
 import { LakesService } from '../lakes/lakes.service';
+import { SkyDayViewDto } from './dto/sky-view.dto';
 import { SkyService } from './sky.service';
 
 export class SkyQueryDto {
@@ -26,6 +27,7 @@ export class SkyController {
 
   @Get()
   @ApiOperation({ summary: "Sun, moon and solunar periods of a lake's local day" })
+  @ApiOkResponse({ type: SkyDayViewDto })
   async day(@CurrentCrew() access: CrewAccess, @Query() query: SkyQueryDto): Promise<SkyDayView> {
     if (!isCalendarDate(query.date)) throw fieldErrors({ date: ['No such calendar date.'] });
     const lake = await this.lakes.get(access.crewId, query.lakeId);

@@ -1,0 +1,72 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import type { CatchImportPreview, CatchImportResult, CatchImportRow, DuplicateOf, FindImportPreview, FindImportResult, FindImportRow, ImportRowError } from '@shoalbook/shared';
+
+const nullableNumber = { type: Number, nullable: true } as const;
+
+export class DuplicateOfDto implements DuplicateOf {
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) findId: string | null;
+  @ApiProperty() name: string;
+  @ApiProperty({ description: 'm' }) distanceM: number;
+  @ApiPropertyOptional({ description: 'the match is an earlier row of the same file' }) inFile?: boolean;
+  @ApiPropertyOptional() rowIndex?: number;
+}
+
+export class FindImportRowDto implements FindImportRow {
+  @ApiProperty() index: number;
+  @ApiProperty() name: string;
+  @ApiProperty(nullableNumber) lat: number | null;
+  @ApiProperty(nullableNumber) lon: number | null;
+  @ApiProperty({ type: String, format: 'date-time', nullable: true }) markedAt: string | null;
+  @ApiProperty(nullableNumber) depthFt: number | null;
+  @ApiProperty({ type: String, nullable: true }) error: string | null;
+  @ApiProperty({ type: DuplicateOfDto, nullable: true }) duplicateOf: DuplicateOfDto | null;
+}
+
+export class FindImportPreviewDto implements FindImportPreview {
+  @ApiProperty({ type: [FindImportRowDto] }) rows: FindImportRowDto[];
+  @ApiProperty() accepted: number;
+  @ApiProperty() rejected: number;
+  @ApiProperty() duplicates: number;
+}
+
+export class ImportRowErrorDto implements ImportRowError {
+  @ApiProperty() index: number;
+  @ApiPropertyOptional({ description: '1-based CSV line (header = 1)' }) line?: number;
+  @ApiPropertyOptional() field?: string;
+  @ApiProperty() message: string;
+}
+
+export class FindImportResultDto implements FindImportResult {
+  @ApiProperty() imported: number;
+  @ApiProperty() skipped: number;
+  @ApiProperty({ type: [ImportRowErrorDto] }) errors: ImportRowErrorDto[];
+}
+
+export class FieldMessageDto {
+  @ApiProperty() field: string;
+  @ApiProperty() message: string;
+}
+
+export class CatchImportRowDto implements CatchImportRow {
+  @ApiProperty() index: number;
+  @ApiProperty() line: number;
+  @ApiProperty({ type: String, format: 'date-time', nullable: true }) caughtAt: string | null;
+  @ApiProperty({ type: String, nullable: true }) species: string | null;
+  @ApiProperty(nullableNumber) weightLb: number | null;
+  @ApiProperty(nullableNumber) lengthIn: number | null;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) findId: string | null;
+  @ApiProperty(nullableNumber) attributionDistanceM: number | null;
+  @ApiProperty() weightFlagged: boolean;
+  @ApiProperty({ type: [FieldMessageDto] }) errors: FieldMessageDto[];
+}
+
+export class CatchImportPreviewDto implements CatchImportPreview {
+  @ApiProperty({ type: [CatchImportRowDto] }) rows: CatchImportRowDto[];
+  @ApiProperty() accepted: number;
+  @ApiProperty() rejected: number;
+}
+
+export class CatchImportResultDto implements CatchImportResult {
+  @ApiProperty() imported: number;
+  @ApiProperty({ type: [ImportRowErrorDto] }) errors: ImportRowErrorDto[];
+}
