@@ -64,7 +64,7 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     const bad = await crew.angler.send('put', `${base}/competition-days/${day2!.id}/weigh-in`, { officialLb: -1 });
     expect(bad.status).toBe(400);
     const after = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
-    expect(after.days[0]!.official).toEqual({ grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2 });
+    expect(after.days[0]!.official).toEqual({ grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2, version: 1 });
     expect(after.days[0]!.computed.penaltyLb).toBeCloseTo(3.25, 6); // 1.25 + 2 min × 1 lb/min
     expect(after.totals.officialLb).toBeCloseTo(12.77, 6);
     expect(after.totals.computedNetLb).toBeCloseTo(12.75, 6);
@@ -72,5 +72,48 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     expect(recorded).toHaveLength(1); // the refused PUT wrote nothing
     expect(recorded[0]!.payload).toMatchObject({ competitionDayId: day1!.id, eventId: event.id, officialLb: 12.77, lateMinutes: 2, version: 1 });
     expect((await journalOf(app, ids[0]!)).map((e) => e.type)).toEqual(['CatchLogged']);
+  });
+
+  it('refuses a weigh-in PUT based on a stale version (409 stale_version) and changes nothing', async () => {
+    const base = `/api/crews/${crew.crewId}`;
+    const lake = await createLake(crew.angler, crew.crewId, { name: 'Version Lake' });
+    const event = await createEvent(crew.angler, crew.crewId, lake.id);
+    const [day] = await competitionDays(crew.angler, crew.crewId, event.id);
+    const path = `${base}/competition-days/${day!.id}/weigh-in`;
+
+    // The first recording carries no version (nothing is recorded yet) and answers version 1.
+    const first = await crew.angler.send('put', path, { officialLb: 11.5 });
+    expectOk(first);
+    expect(first.body).toMatchObject({ officialLb: 11.5, version: 1 });
+
+    // Two people loaded version 1: the first change wins, the second is refused.
+    const owner = await crew.owner.send('put', path, { officialLb: 12.25, version: 1 });
+    expectOk(owner);
+    expect(owner.body).toMatchObject({ officialLb: 12.25, version: 2 });
+    const stale = await crew.angler.send('put', path, { officialLb: 9, dayPlace: 3, version: 1 });
+    expect(stale.status).toBe(409);
+    expect(stale.body).toMatchObject({ statusCode: 409, code: 'stale_version' });
+    expect(stale.body.message).toMatch(/version 2/);
+
+    // A client that thinks nothing is recorded yet (no version) is refused too, as is a version for a day without one.
+    const blind = await crew.angler.send('put', path, { officialLb: 9 });
+    expect(blind.status).toBe(409);
+    expect(blind.body.code).toBe('stale_version');
+    const [, emptyDay] = await competitionDays(crew.angler, crew.crewId, event.id);
+    const phantom = await crew.angler.send('put', `${base}/competition-days/${emptyDay!.id}/weigh-in`, { officialLb: 9, version: 3 });
+    expect(phantom.status).toBe(409);
+    expect(phantom.body.code).toBe('stale_version');
+
+    const view = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
+    expect(view.days[0]!.official).toMatchObject({ officialLb: 12.25, dayPlace: null, version: 2 });
+    expect(view.days[1]!.official).toBeNull();
+    const recorded = await testEm(app).find(JournalEvent, { crewId: crew.crewId, type: 'WeighInRecorded' }, { orderBy: { seq: 'asc' } });
+    const forDay = recorded.filter((e) => (e.payload as { competitionDayId?: string }).competitionDayId === day!.id);
+    expect(forDay.map((e) => (e.payload as { version: number }).version)).toEqual([1, 2]); // the refused PUTs wrote nothing
+
+    // The current version is accepted.
+    const fresh = await crew.angler.send('put', path, { dayPlace: 3, version: 2 });
+    expectOk(fresh);
+    expect(fresh.body).toMatchObject({ officialLb: 12.25, dayPlace: 3, version: 3 });
   });
 });

@@ -1,13 +1,15 @@
 import { Body, Controller, Get, Param, Put } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiCookieAuth, ApiOperation, ApiTags } from '@nestjs/swagger';
-import type { OfficialWeighIn, WeighInsView } from '@shoalbook/shared';
+import { ApiConflictResponse, ApiCookieAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiErrorDto } from '../common/dto/api-error.dto';
+import type { WeighInsView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import type { CrewAccess } from '../common/request-context';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { RecordWeighInCommand } from './commands/record-weigh-in.command';
 import { RecordWeighInDto } from './weigh-in.dto';
-import { WeighInsService } from './weigh-ins.service';
+import { RecordedWeighInDto, WeighInsViewDto } from './weigh-in-view.dto';
+import { type VersionedWeighIn, WeighInsService } from './weigh-ins.service';
 
 @ApiTags('weigh-ins')
 @ApiCookieAuth()
@@ -21,17 +23,20 @@ export class WeighInsController {
 
   @Get('events/:eventId/weigh-ins')
   @ApiOperation({ summary: "Each competition day's computed bag (event rules) beside the official figures, and the event totals" })
+  @ApiOkResponse({ type: WeighInsViewDto })
   list(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<WeighInsView> {
     return this.weighIns.forEvent(access, eventId);
   }
 
   @Put('competition-days/:dayId/weigh-in')
-  @ApiOperation({ summary: "Record a day's official weigh-in figures (they override the computed ones in the totals)" })
+  @ApiOperation({ summary: "Record a day's official weigh-in figures (they override the computed ones in the totals); send the version you loaded, none for the first recording" })
+  @ApiOkResponse({ type: RecordedWeighInDto })
+  @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version: recorded or changed by someone else since you loaded it' })
   record(
     @CurrentCrew() access: CrewAccess,
     @Param('dayId', new RecordIdPipe('competition day')) dayId: string,
     @Body() dto: RecordWeighInDto,
-  ): Promise<OfficialWeighIn & { competitionDayId: string }> {
+  ): Promise<VersionedWeighIn & { competitionDayId: string }> {
     return this.commands.execute(new RecordWeighInCommand(access, dayId, dto));
   }
 }

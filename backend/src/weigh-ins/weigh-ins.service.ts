@@ -9,8 +9,11 @@ import { EventsService } from '../events/events.service';
 import { computeDayBag } from './day-bag';
 import { WeighIn } from './weigh-in.entity';
 
-export function officialOf(w: WeighIn | undefined): OfficialWeighIn | null {
-  return w ? { grossLb: w.grossLb, penaltyLb: w.penaltyLb, officialLb: w.officialLb, dayPlace: w.dayPlace, lateMinutes: w.lateMinutes } : null;
+/** The official figures with the version a client sends back on its next PUT. */
+export type VersionedWeighIn = OfficialWeighIn & { version: number };
+
+export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
+  return w ? { grossLb: w.grossLb, penaltyLb: w.penaltyLb, officialLb: w.officialLb, dayPlace: w.dayPlace, lateMinutes: w.lateMinutes, version: w.version } : null;
 }
 
 const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;

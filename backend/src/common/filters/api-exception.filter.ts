@@ -1,4 +1,4 @@
-import { ConnectionException, DriverException } from '@mikro-orm/core';
+import { ConnectionException, DriverException, OptimisticLockError } from '@mikro-orm/core';
 import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import { STATUS_CODES } from 'node:http';
 import type { Request, Response } from 'express';
@@ -42,6 +42,10 @@ export function toApiError(exception: unknown): Omit<ApiError, 'requestId'> {
     if (finalCode) error.code = finalCode;
     if (fieldErrors) error.fieldErrors = fieldErrors;
     return error;
+  }
+  // Two writers passed the version check at once; the second UPDATE matched no row.
+  if (exception instanceof OptimisticLockError) {
+    return { statusCode: 409, error: STATUS_CODES[409]!, message: 'This record was changed by someone else a moment ago. Reload it and apply your change again.', code: 'stale_version' };
   }
   if (isDatabaseUnreachable(exception)) {
     return { statusCode: 503, error: STATUS_CODES[503]!, message: 'The database is not answering. Try again in a moment.', code: ErrorCode.dbUnavailable };
