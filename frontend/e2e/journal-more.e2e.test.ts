@@ -188,6 +188,8 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await page.getByRole('textbox', { name: 'Lure' }).fill('a change made too late');
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.getByText('This catch was changed elsewhere').waitFor();
+    // The note about the earlier save went away with the first new keystroke: it no longer describes the form.
+    await expect(page.getByText('Changes saved').count()).resolves.toBe(0);
     await expectNoSeriousAxe(page, 'catch edit, stale');
     await screenshot(page, 'journal-catch-stale');
     await page.getByRole('button', { name: 'Reload the latest' }).click();

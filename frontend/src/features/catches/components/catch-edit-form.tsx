@@ -142,6 +142,7 @@ export function CatchEditForm({
   timeZone,
   onSaved,
   onReload,
+  onEdit,
 }: {
   crewId: string;
   catchView: CatchWithSky;
@@ -151,6 +152,8 @@ export function CatchEditForm({
   onSaved: (saved: CatchWithSky) => void;
   /** Fetch the latest version of the catch (the form is remounted with it). */
   onReload: () => void;
+  /** Called on every change, so the page can drop an earlier "saved" note that no longer describes the form. */
+  onEdit?: () => void;
 }) {
   const [start] = useState(() => startValues(catchView, finds, prefs, timeZone));
   const [values, setValues] = useState<Values>(start);
@@ -166,6 +169,7 @@ export function CatchEditForm({
 
   const set = (key: keyof Values) => (e: { target: { value: string } }) => {
     setUnchanged(false);
+    onEdit?.();
     setValues((v) => ({ ...v, [key]: e.target.value }));
   };
   const server = (key: keyof typeof SERVER_FIELDS) =>
@@ -311,6 +315,7 @@ export function CatchEditForm({
         photoId={photo.photoId}
         onChange={(p) => {
           setUnchanged(false);
+          onEdit?.();
           setPhoto(p);
         }}
         describe="Photo of this catch"

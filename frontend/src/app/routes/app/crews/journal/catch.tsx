@@ -89,6 +89,7 @@ export function Component() {
             prefs={prefs}
             timeZone={zone}
             onSaved={() => setSaved(true)}
+            onEdit={() => setSaved(false)}
             onReload={() => {
               setSaved(false);
               void found.refetch();
