@@ -1,4 +1,4 @@
-import * as FileType from 'file-type';
+import { sniffType } from '../imports/sniff';
 import sharp from 'sharp';
 
 /** Upload limits (our choices): 8 MB, and at most 40 megapixels so a small file cannot decode to gigabytes. */
@@ -22,7 +22,7 @@ export interface ProcessedPhoto {
  */
 export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
   if (input.length > PHOTO_LIMITS.maxBytes) throw new PhotoRejected('The image is larger than 8 MB.');
-  const type = await FileType.fromBuffer(input);
+  const type = await sniffType(input);
   if (!type || !ACCEPTED.has(type.mime)) {
     throw new PhotoRejected(type ? `The file's content is ${type.mime}, not an image we accept (JPEG, PNG, WebP, GIF, TIFF, AVIF, HEIC).` : 'The file is not an image.');
   }
