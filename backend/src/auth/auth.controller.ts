@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import { ApiAcceptedResponse, ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiForbiddenResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
@@ -12,9 +12,10 @@ import { MeResponseDto } from '../users/dto/user-view.dto';
 import { UpdateMeDto } from '../users/dto/update-me.dto';
 import type { User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
+import { AccountDeletionService } from './account-deletion.service';
 import { AuthService } from './auth.service';
 import { SignUpCommand } from './commands/sign-up.command';
-import { ChangePasswordDto, CsrfResponseDto, MessageResponseDto, PasswordResetConfirmDto, PasswordResetRequestDto, SignInDto, SignUpDto } from './dto/auth.dto';
+import { ChangePasswordDto, CsrfResponseDto, DeleteAccountDto, MessageResponseDto, PasswordResetConfirmDto, PasswordResetRequestDto, SignInDto, SignUpDto } from './dto/auth.dto';
 import { SessionsService } from './sessions.service';
 
 @ApiTags('auth')
@@ -28,6 +29,7 @@ export class AuthController {
     private readonly users: UsersService,
     private readonly sessions: SessionsService,
     private readonly csrf: CsrfService,
+    private readonly accounts: AccountDeletionService,
   ) {}
 
   @Public()
@@ -89,6 +91,21 @@ export class AuthController {
   async updateMe(@CurrentUser() user: User, @Body() dto: UpdateMeDto): Promise<MeResponse> {
     await this.users.updateProfile(user, dto);
     return this.users.me(user);
+  }
+
+  @Delete('me')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({
+    summary: 'Delete my account (confirm with the password)',
+    description:
+      'Removes the account, its memberships, sessions and pending tokens; crews where it is the only member are deleted with their data. Refused with 409 last_owner while the account is the last owner of a crew that has other members.',
+  })
+  @ApiNoContentResponse({ description: 'The account is gone and the session cookie cleared.' })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto })
+  @ApiConflictResponse({ type: ApiErrorDto, description: 'last_owner: make another member an owner (or delete the crew) first.' })
+  async deleteMe(@CurrentUser() user: User, @Body() dto: DeleteAccountDto, @Res({ passthrough: true }) res: Response): Promise<void> {
+    await this.accounts.deleteAccount(user, dto.password);
+    this.sessions.clearCookie(res);
   }
 
   @Post('change-password')

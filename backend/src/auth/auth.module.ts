@@ -1,17 +1,20 @@
 import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { CsrfService } from '../common/csrf/csrf.service';
+import { CrewsModule } from '../crews/crews.module';
 import { UsersModule } from '../users/users.module';
+import { AccountDeletionService } from './account-deletion.service';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
+import { ExpiredCredentialsCleanup } from './expired-credentials-cleanup.service';
 import { AUTH_COMMAND_HANDLERS } from './commands';
 import { SessionGuard } from './session.guard';
 import { SessionsService } from './sessions.service';
 
 @Module({
-  imports: [UsersModule],
+  imports: [UsersModule, CrewsModule],
   controllers: [AuthController],
-  providers: [AuthService, SessionsService, CsrfService, ...AUTH_COMMAND_HANDLERS, { provide: APP_GUARD, useClass: SessionGuard }],
+  providers: [AuthService, SessionsService, AccountDeletionService, ExpiredCredentialsCleanup, CsrfService, ...AUTH_COMMAND_HANDLERS, { provide: APP_GUARD, useClass: SessionGuard }],
   exports: [SessionsService, CsrfService],
 })
 export class AuthModule {}

@@ -31,6 +31,8 @@ export class EnvironmentVariables extends DatabaseEnv {
   /** Session lifetimes: ends after this many idle hours, and in any case after ABSOLUTE days. */
   @Type(() => Number) @IsInt() @Min(1) SESSION_IDLE_HOURS = 24 * 7;
   @Type(() => Number) @IsInt() @Min(1) SESSION_ABSOLUTE_DAYS = 30;
+  /** How often expired sessions, reset tokens and invites are deleted (minutes; 0 = never). */
+  @Type(() => Number) @IsInt() @Min(0) SESSION_CLEANUP_MINUTES = 60;
 }
 
 /**

@@ -1,6 +1,6 @@
-import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Patch, Post } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBadRequestResponse, ApiCookieAuth, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import { ApiBadRequestResponse, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiServiceUnavailableResponse, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
 import type { CrewView } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -8,9 +8,10 @@ import { ApiErrorDto } from '../common/dto/api-error.dto';
 import type { CrewAccess } from '../common/request-context';
 import type { User } from '../users/user.entity';
 import { CreateCrewCommand } from './commands/create-crew.command';
+import { DeleteCrewCommand } from './commands/delete-crew.command';
 import { toCrewView } from './crew-views';
 import { CrewsService } from './crews.service';
-import { CreateCrewDto, CrewViewDto, UpdateCrewDto } from './dto/crew.dto';
+import { CreateCrewDto, CrewViewDto, DeleteCrewDto, UpdateCrewDto } from './dto/crew.dto';
 
 @ApiTags('crews')
 @ApiCookieAuth()
@@ -45,7 +46,10 @@ export class CrewsController {
 @CrewRoute()
 @Controller('crews/:crewId')
 export class CrewController {
-  constructor(private readonly crews: CrewsService) {}
+  constructor(
+    private readonly crews: CrewsService,
+    private readonly commands: CommandBus,
+  ) {}
 
   @Get()
   @ApiOperation({ summary: 'One crew (any member)' })
@@ -61,5 +65,20 @@ export class CrewController {
   @ApiBadRequestResponse({ type: ApiErrorDto })
   update(@CurrentCrew() access: CrewAccess, @Body() dto: UpdateCrewDto): Promise<CrewView> {
     return this.crews.update(access, dto);
+  }
+
+  @Delete()
+  @CrewRoles('owner')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({
+    summary: 'Delete the crew with everything in it (owner; type the crew’s name as confirmName)',
+    description:
+      'Removes the crew, its memberships and invites, every journal record (lakes, events, days, finds, catches, weigh-ins, journal events), the report tables’ rows and the photo files. It cannot be undone: export the journal first if it is to be kept.',
+  })
+  @ApiNoContentResponse({ description: 'The crew and its data are gone.' })
+  @ApiBadRequestResponse({ type: ApiErrorDto, description: 'confirmName does not match the crew’s name (fieldErrors.confirmName); nothing was changed.' })
+  @ApiServiceUnavailableResponse({ type: ApiErrorDto, description: 'The report tables are being rebuilt; try again.' })
+  async remove(@CurrentCrew() access: CrewAccess, @Body() dto: DeleteCrewDto): Promise<void> {
+    await this.commands.execute(new DeleteCrewCommand(access.crewId, dto.confirmName));
   }
 }

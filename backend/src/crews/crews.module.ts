@@ -1,12 +1,17 @@
 import { Module } from '@nestjs/common';
+import { ProjectionsModule } from '../projections/projections.module';
+import { StorageModule } from '../storage/storage.module';
 import { CREW_COMMAND_HANDLERS } from './commands';
 import { CrewController, CrewsController } from './crews.controller';
+import { CrewRemovalService } from './crew-removal.service';
 import { CrewsService } from './crews.service';
 import { CrewInvitesController, InvitesController } from './invites.controller';
 import { MembersController } from './members.controller';
 
 @Module({
+  imports: [StorageModule, ProjectionsModule],
   controllers: [CrewsController, CrewController, MembersController, CrewInvitesController, InvitesController],
-  providers: [CrewsService, ...CREW_COMMAND_HANDLERS],
+  providers: [CrewsService, CrewRemovalService, ...CREW_COMMAND_HANDLERS],
+  exports: [CrewRemovalService],
 })
 export class CrewsModule {}

@@ -63,8 +63,8 @@ export class ApiClient {
     return this.send('patch', path, body);
   }
 
-  delete(path: string): Promise<Response> {
-    return this.send('delete', path);
+  delete(path: string, body?: unknown): Promise<Response> {
+    return this.send('delete', path, body);
   }
 
   private captureSession(res: Response): void {

@@ -24,6 +24,8 @@ const crewOwner: Expectation = { ...crewWrite, angler: 'forbidden' };
 /** Crew routes only owners may use (keys: "METHOD /api/path" as in the OpenAPI document). */
 export const OWNER_ONLY = [
   'PATCH /api/crews/{crewId}',
+  // Sent without a body here (400 after authorisation); the deletion itself is tested in crew-account-deletion.e2e-spec.
+  'DELETE /api/crews/{crewId}',
   'PATCH /api/crews/{crewId}/members/{userId}',
   // The target is another member; leaving (own id) is allowed to all and tested in crews.e2e-spec.
   'DELETE /api/crews/{crewId}/members/{userId}',
@@ -42,6 +44,7 @@ export const OVERRIDES: Record<string, Expectation> = {
   'POST /api/auth/password-reset/confirm': everyone,
   'GET /api/auth/me': signedIn,
   'PATCH /api/auth/me': signedIn,
+  'DELETE /api/auth/me': signedIn,
   'POST /api/auth/change-password': signedIn,
   'GET /api/crews': signedIn,
   'POST /api/crews': signedIn,

@@ -1,4 +1,4 @@
-import { MikroORM } from '@mikro-orm/mariadb';
+import { type EntityManager, MikroORM } from '@mikro-orm/mariadb';
 import type { INestApplication } from '@nestjs/common';
 import { Test } from '@nestjs/testing';
 import { AppModule } from '../../src/app.module';
@@ -18,6 +18,6 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
 }
 
 /** A fresh EntityManager for direct reads and set-up writes in tests. */
-export function testEm(app: INestApplication) {
-  return app.get(MikroORM).em.fork();
+export function testEm(app: INestApplication): EntityManager {
+  return app.get(MikroORM).em.fork() as EntityManager;
 }

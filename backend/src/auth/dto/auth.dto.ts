@@ -42,6 +42,12 @@ export class ChangePasswordDto {
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH }) @NewPassword() newPassword: string;
 }
 
+export class DeleteAccountDto {
+  @ApiProperty({ description: 'The current password, to confirm.' })
+  @IsString({ message: 'Enter your password to confirm.' }) @IsNotEmpty({ message: 'Enter your password to confirm.' }) @MaxLength(PASSWORD_MAX_LENGTH)
+  password: string;
+}
+
 export class PasswordResetRequestDto implements PasswordResetRequest {
   @ApiProperty() @Email() email: string;
 }

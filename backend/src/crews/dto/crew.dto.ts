@@ -18,6 +18,12 @@ export class UpdateCrewDto implements UpdateCrewRequest {
   viewersSeePositions?: boolean;
 }
 
+export class DeleteCrewDto {
+  @ApiProperty({ maxLength: 80, description: 'The crew’s name, typed again to confirm the deletion.' })
+  @Trim() @IsString({ message: 'Type the crew’s name to confirm.' }) @IsNotEmpty({ message: 'Type the crew’s name to confirm.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
+  confirmName: string;
+}
+
 export class ChangeRoleDto implements ChangeRoleRequest {
   @ApiProperty({ enum: CREW_ROLES }) @IsIn(CREW_ROLES, roleMessage) role: CrewRole;
 }
