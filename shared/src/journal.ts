@@ -302,6 +302,8 @@ export interface RecordWeighInRequest {
   officialLb?: number | null;
   dayPlace?: number | null;
   lateMinutes?: number | null;
+  /** The version of the recorded weigh-in this change is based on; omitted only for the first recording. */
+  version?: number;
 }
 
 export interface OfficialWeighIn {
@@ -310,6 +312,8 @@ export interface OfficialWeighIn {
   officialLb: number | null;
   dayPlace: number | null;
   lateMinutes: number | null;
+  /** Send it back with the next PUT (409 "stale_version" when someone saved in between). */
+  version?: number;
 }
 
 export interface ComputedBag {

@@ -7,6 +7,7 @@ export type {
   PracticeDayView,
   CompetitionDayView,
   OfficialWeighIn,
+  RecordWeighInRequest,
   WeighInsView,
   WeighInDayView as WeighInDay,
   FindImportRow as GpxPreviewRow,

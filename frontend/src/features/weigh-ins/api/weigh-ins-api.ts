@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys } from '../../../lib/journal-keys';
-import type { OfficialWeighIn, WeighInsView } from '../../../lib/journal-types';
+import type { RecordWeighInRequest, WeighInsView } from '../../../lib/journal-types';
 
 /** GET /events/:eventId/weigh-ins: each day's counted bag (from the catches and the event's rules) and the totals. */
 export function useWeighIns(crewId: string, eventId: string) {
@@ -11,11 +11,11 @@ export function useWeighIns(crewId: string, eventId: string) {
   });
 }
 
-/** PUT /competition-days/:dayId/weigh-in: the official figures, which override the computed ones. Weights in lb. */
+/** PUT /competition-days/:dayId/weigh-in: the official figures, which override the computed ones. Weights in lb; `version` of the recorded figures once there are any. */
 export function useRecordWeighIn(crewId: string, eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ dayId, ...body }: { dayId: string } & Partial<OfficialWeighIn>) =>
+    mutationFn: ({ dayId, ...body }: { dayId: string } & RecordWeighInRequest) =>
       api.request<unknown>('PUT', crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`), { body }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.weighIns(crewId, eventId) }),
   });

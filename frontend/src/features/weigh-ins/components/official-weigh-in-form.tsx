@@ -65,6 +65,8 @@ export function OfficialWeighInForm({
       officialLb: weight('officialLb'),
       dayPlace: whole('dayPlace', 1),
       lateMinutes: whole('lateMinutes', 0),
+      // The figures this correction is based on; the server refuses it if someone saved in between.
+      ...(official?.version !== undefined ? { version: official.version } : {}),
     };
     setErrors(found);
     if (Object.keys(found).length) return;
