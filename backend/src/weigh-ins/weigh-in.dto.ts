@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { RecordWeighInRequest } from '@shoalbook/shared';
 import { IsInt, IsNumber, IsOptional, Max, Min } from 'class-validator';
+import { IsOmittable } from '../common/dto/omittable';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -15,7 +16,7 @@ export class RecordWeighInDto implements RecordWeighInRequest {
     minimum: 1,
     description: 'The version of the recorded weigh-in the change is based on; omit it only for the first recording. 409 "stale_version" when outdated.',
   })
-  @IsOptional()
+  @IsOmittable()
   @IsInt()
   @Min(1)
   version?: number;

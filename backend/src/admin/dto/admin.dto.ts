@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsIn, IsOptional } from 'class-validator';
+import { IsBoolean, IsIn } from 'class-validator';
 import { type AdminUpdateUserRequest, type AdminUserView, SITE_ROLES, type SiteRole } from '@shoalbook/shared';
+import { IsOmittable } from '../../common/dto/omittable';
 
 export class AdminUserViewDto implements AdminUserView {
   @ApiProperty({ format: 'uuid' }) id: string;
@@ -13,10 +14,10 @@ export class AdminUserViewDto implements AdminUserView {
 
 export class AdminUpdateUserDto implements AdminUpdateUserRequest {
   @ApiPropertyOptional({ description: 'Disabling ends every session of the account.' })
-  @IsOptional() @IsBoolean({ message: 'Use true or false.' })
+  @IsOmittable() @IsBoolean({ message: 'Use true or false.' })
   disabled?: boolean;
 
   @ApiPropertyOptional({ enum: SITE_ROLES })
-  @IsOptional() @IsIn(SITE_ROLES, { message: `The site role is one of ${SITE_ROLES.join(', ')}.` })
+  @IsOmittable() @IsIn(SITE_ROLES, { message: `The site role is one of ${SITE_ROLES.join(', ')}.` })
   siteRole?: SiteRole;
 }

@@ -1,7 +1,8 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsEmail, IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsEmail, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { CREW_ROLES, type ChangeRoleRequest, type CreateCrewRequest, type CreateInviteRequest, type CrewRole, type CrewView, type InvitePreview, type InviteView, type MemberView, type UpdateCrewRequest } from '@shoalbook/shared';
 import { NormaliseEmail, Trim } from '../../common/dto/common-transforms';
+import { IsOmittable } from '../../common/dto/omittable';
 
 const roleMessage = { message: `The role is one of ${CREW_ROLES.join(', ')}.` };
 const nameRules = (target: object, key: string | symbol) =>
@@ -12,9 +13,9 @@ export class CreateCrewDto implements CreateCrewRequest {
 }
 
 export class UpdateCrewDto implements UpdateCrewRequest {
-  @ApiPropertyOptional({ maxLength: 80 }) @IsOptional() @(nameRules as PropertyDecorator) name?: string;
+  @ApiPropertyOptional({ maxLength: 80 }) @IsOmittable() @(nameRules as PropertyDecorator) name?: string;
   @ApiPropertyOptional({ description: 'Whether viewers see exact positions.' })
-  @IsOptional() @IsBoolean({ message: 'Use true or false.' })
+  @IsOmittable() @IsBoolean({ message: 'Use true or false.' })
   viewersSeePositions?: boolean;
 }
 

@@ -3,12 +3,13 @@ import { Type } from 'class-transformer';
 import type { UpdateCompetitionDayRequest, UpdatePracticeDayRequest } from '@shoalbook/shared';
 import { IsInt, IsNumber, IsOptional, IsString, Matches, MaxLength, Min, ValidateNested } from 'class-validator';
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
+import { IsOmittable } from '../../common/dto/omittable';
 
 const finite = { allowNaN: false, allowInfinity: false };
 const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 export class UpdatePracticeDayDto implements UpdatePracticeDayRequest {
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
   @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty() @IsInt() @Min(1) version: number;
@@ -23,7 +24,7 @@ export class UpdateCompetitionDayDto implements UpdateCompetitionDayRequest {
   @IsOptional()
   @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
   checkInTime?: string | null;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) weatherNotes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) weatherNotes?: string;
   @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty() @IsInt() @Min(1) version: number;

@@ -20,6 +20,7 @@ import {
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { isCalendarDate } from '../../journal/local-time';
+import { IsOmittable } from '../../common/dto/omittable';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -35,24 +36,24 @@ export class CalendarDatesConstraint implements ValidatorConstraintInterface {
 
 /** The event's rules; every field optional on input, defaults are common practice (5 fish, 12 in). */
 export class EventRulesDto implements Partial<EventRules> {
-  @ApiPropertyOptional({ default: 5, minimum: 1, maximum: 10 }) @IsOptional() @IsInt() @Min(1) @Max(10) fishPerDay?: number;
+  @ApiPropertyOptional({ default: 5, minimum: 1, maximum: 10 }) @IsOmittable() @IsInt() @Min(1) @Max(10) fishPerDay?: number;
   @ApiPropertyOptional({ default: 12, nullable: true, description: 'inches; null = no minimum' })
   @IsOptional()
   @IsNumber(finite)
   @Min(0)
   @Max(30)
   minLengthIn?: number | null;
-  @ApiPropertyOptional({ default: 0.25 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) deadFishPenaltyLb?: number;
-  @ApiPropertyOptional({ default: 1 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) shortFishPenaltyLb?: number;
-  @ApiPropertyOptional({ default: 1 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(20) latePenaltyLbPerMinute?: number;
+  @ApiPropertyOptional({ default: 0.25 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) deadFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) shortFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) latePenaltyLbPerMinute?: number;
 }
 
 export class CreateEventDto implements CreateEventRequest {
   @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
   @ApiProperty({ maxLength: 160 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(160) name: string;
-  @ApiPropertyOptional({ maxLength: 160 }) @IsOptional() @Trim() @IsString() @MaxLength(160) organiser?: string;
+  @ApiPropertyOptional({ maxLength: 160 }) @IsOmittable() @Trim() @IsString() @MaxLength(160) organiser?: string;
   @ApiPropertyOptional({ type: [String], example: ['2024-04-10', '2024-04-11'] })
-  @IsOptional()
+  @IsOmittable()
   @IsArray()
   @ArrayMaxSize(14)
   @Validate(CalendarDatesConstraint)
@@ -62,14 +63,15 @@ export class CreateEventDto implements CreateEventRequest {
   @ArrayMaxSize(7)
   @Validate(CalendarDatesConstraint)
   competitionDates: string[];
-  @ApiPropertyOptional({ type: EventRulesDto }) @IsOptional() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
+  @ApiPropertyOptional({ type: EventRulesDto }) @IsOmittable() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?: number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?: number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
 }
 
-export class UpdateEventDto extends PartialType(OmitType(CreateEventDto, ['lakeId'] as const)) {
+/** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
+export class UpdateEventDto extends PartialType(OmitType(CreateEventDto, ['lakeId'] as const), { skipNullProperties: false }) {
   @ApiProperty({ description: 'The version the change is based on' }) @IsInt() @Min(1) version: number;
 }
 

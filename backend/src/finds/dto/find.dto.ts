@@ -44,7 +44,8 @@ export class AddFindDto implements AddFindRequest {
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() photoId?: string | null;
 }
 
-export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const)) {
+/** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
+export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const), { skipNullProperties: false }) {
   @ApiProperty() @IsInt() @Min(1) version: number;
 }
 

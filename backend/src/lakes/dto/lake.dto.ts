@@ -26,7 +26,8 @@ export class CreateLakeDto implements CreateLakeRequest {
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
 }
 
-export class UpdateLakeDto extends PartialType(CreateLakeDto) {
+/** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
+export class UpdateLakeDto extends PartialType(CreateLakeDto, { skipNullProperties: false }) {
   @ApiProperty({ description: 'The version the change is based on; 409 "stale_version" when outdated.' })
   @IsInt()
   @Min(1)

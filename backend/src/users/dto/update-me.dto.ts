@@ -1,34 +1,35 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsIn, IsNotEmpty, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { IsIn, IsNotEmpty, IsString, MaxLength, ValidateNested } from 'class-validator';
 import { DEPTH_UNITS, LENGTH_UNITS, TEMPERATURE_UNITS, type UnitPreferences, WEIGHT_UNITS } from '@shoalbook/shared';
 import { Trim } from '../../common/dto/common-transforms';
+import { IsOmittable } from '../../common/dto/omittable';
 
 /** Any subset of the unit preferences; the rest stay as they are. */
 export class UpdateUnitsDto implements Partial<UnitPreferences> {
   @ApiPropertyOptional({ enum: WEIGHT_UNITS })
-  @IsOptional() @IsIn(WEIGHT_UNITS, { message: `Weight is one of ${WEIGHT_UNITS.join(', ')}.` })
+  @IsOmittable() @IsIn(WEIGHT_UNITS, { message: `Weight is one of ${WEIGHT_UNITS.join(', ')}.` })
   weight?: UnitPreferences['weight'];
 
   @ApiPropertyOptional({ enum: LENGTH_UNITS })
-  @IsOptional() @IsIn(LENGTH_UNITS, { message: `Length is one of ${LENGTH_UNITS.join(', ')}.` })
+  @IsOmittable() @IsIn(LENGTH_UNITS, { message: `Length is one of ${LENGTH_UNITS.join(', ')}.` })
   length?: UnitPreferences['length'];
 
   @ApiPropertyOptional({ enum: DEPTH_UNITS })
-  @IsOptional() @IsIn(DEPTH_UNITS, { message: `Depth is one of ${DEPTH_UNITS.join(', ')}.` })
+  @IsOmittable() @IsIn(DEPTH_UNITS, { message: `Depth is one of ${DEPTH_UNITS.join(', ')}.` })
   depth?: UnitPreferences['depth'];
 
   @ApiPropertyOptional({ enum: TEMPERATURE_UNITS })
-  @IsOptional() @IsIn(TEMPERATURE_UNITS, { message: `Temperature is one of ${TEMPERATURE_UNITS.join(', ')}.` })
+  @IsOmittable() @IsIn(TEMPERATURE_UNITS, { message: `Temperature is one of ${TEMPERATURE_UNITS.join(', ')}.` })
   temperature?: UnitPreferences['temperature'];
 }
 
 export class UpdateMeDto {
   @ApiPropertyOptional({ maxLength: 80 })
-  @IsOptional() @Trim() @IsString({ message: 'Enter a name.' }) @IsNotEmpty({ message: 'Enter a name.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
+  @IsOmittable() @Trim() @IsString({ message: 'Enter a name.' }) @IsNotEmpty({ message: 'Enter a name.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
   displayName?: string;
 
   @ApiPropertyOptional({ type: UpdateUnitsDto })
-  @IsOptional() @ValidateNested() @Type(() => UpdateUnitsDto)
+  @IsOmittable() @ValidateNested() @Type(() => UpdateUnitsDto)
   units?: UpdateUnitsDto;
 }
