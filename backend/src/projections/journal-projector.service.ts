@@ -2,7 +2,7 @@ import { MikroORM } from '@mikro-orm/mariadb';
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { AppConfig } from '../config/app-config.service';
 import { JournalApplier } from './journal-applier';
-import { GapPolicy, readJournal } from './journal-reader';
+import { GapPolicy, readJournal, settledGaps } from './journal-reader';
 import { ProjectionState } from './projection-state';
 import { readCheckpoint, withProjectionLock, writeCheckpoint } from './projection-lock';
 import { ReadModelStore } from './read-model-store';
@@ -106,7 +106,7 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
       withProjectionLock(tx, 0, async () => {
         const checkpoint = await readCheckpoint(tx);
         const records = await readJournal(tx, checkpoint, BATCH_SIZE);
-        const { usable, last, waiting } = this.gaps.contiguous(records, checkpoint);
+        const { usable, last, waiting } = this.gaps.contiguous(records, checkpoint, await settledGaps(tx, records, checkpoint));
         if (usable.length) {
           const state = new ProjectionState(true);
           const store = new ReadModelStore(tx);

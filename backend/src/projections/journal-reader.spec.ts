@@ -32,4 +32,10 @@ describe('GapPolicy', () => {
     expect(gaps.contiguous([rec(1), rec(2), rec(3)], 2)).toMatchObject({ last: 3, waiting: false });
     expect(gaps.contiguous([rec(1), rec(2), rec(3)], 2).usable.map((r) => r.seq)).toEqual([3]);
   });
+
+  it('passes at once a gap known to be settled (events deleted with their crew), but waits on any other', () => {
+    const gaps = new GapPolicy(5000, () => 0);
+    expect(gaps.contiguous([rec(1), rec(4), rec(5)], 0, [[2, 3]])).toMatchObject({ last: 5, waiting: false });
+    expect(gaps.contiguous([rec(1), rec(4), rec(5)], 0, [[2, 2]])).toMatchObject({ last: 1, waiting: true });
+  });
 });

@@ -4,7 +4,7 @@ import { Injectable, Logger, ServiceUnavailableException } from '@nestjs/common'
 import { READ_MODEL_TABLES } from '../read-models';
 import { type CatchForStats, catchGroupSums, deriveGroupStats, deriveOutcomes } from './derive';
 import { JournalApplier } from './journal-applier';
-import { GapPolicy, readJournal } from './journal-reader';
+import { GapPolicy, readJournal, settledGaps } from './journal-reader';
 import { JournalProjector } from './journal-projector.service';
 import { ProjectionState } from './projection-state';
 import { JOURNAL_PROJECTION, withProjectionLock, writeCheckpoint } from './projection-lock';
@@ -54,7 +54,7 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       for (;;) {
         const records = await next;
         if (!records.length) break;
-        const { usable, last: reached, waiting } = gaps.contiguous(records, last);
+        const { usable, last: reached, waiting } = gaps.contiguous(records, last, await settledGaps(tx, records, last));
         last = reached;
         if (waiting && last < maxSeq) await sleep(50);
         next = waiting && last >= maxSeq ? Promise.resolve([]) : readJournal(tx, last, READ_PAGE);
