@@ -12,6 +12,13 @@ import { GetLakeComparisonQuery } from './lake-comparison.query';
 
 const points = (x: number) => `${Math.round(Math.abs(x) * 100)}`;
 
+/** The difference as a size in points with its interval on the same side, so "worse" never reads with negative bounds. */
+function differenceText(difference: number, lower: number, upper: number): string {
+  const [lo, hi] = difference < 0 ? [-upper, -lower] : [lower, upper];
+  const side = difference < 0 ? ' lower' : difference > 0 ? ' higher' : '';
+  return `${points(difference)} points${side}, likely ${Math.round(lo * 100)} to ${Math.round(hi * 100)}`;
+}
+
 /** Reads rm_group_stats for the lake's events; differences with @shoalbook/analytics compareProportions. */
 @QueryHandler(GetLakeComparisonQuery)
 export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparisonQuery, LakeComparisonView> {
@@ -78,7 +85,7 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
           const unit = catchUnit ? 'of the fish' : 'of finds fished';
           reading =
             `${label} ${verb} in ${la} than in ${lb}: ${percent(rateA)} against ${percent(rateB)} ${unit} ` +
-            `(difference ${points(cmp.difference)} points, ${Math.round(cmp.lower * 100)} to ${Math.round(cmp.upper * 100)}); ` +
+            `(${differenceText(cmp.difference, cmp.lower, cmp.upper)}); ` +
             (moreThanChance ? `more than chance (${pValueText(cmp.pValue)}).` : `could well be chance (${pValueText(cmp.pValue)}).`);
         }
         view.comparisons.push({
