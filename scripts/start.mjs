@@ -2,7 +2,7 @@
 // Reuses what is already there, so a second run is ready in seconds. Ctrl-C stops everything cleanly.
 import { profile } from './lib/profile.mjs';
 import { stopMariadb } from './lib/mariadb.mjs';
-import { prepareDatabase, seed, startBackend, startFakeSmtp } from './lib/services.mjs';
+import { portOpen, prepareDatabase, seed, startBackend, startFakeSmtp } from './lib/services.mjs';
 import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.mjs';
 import { fail, log } from './lib/run.mjs';
 
@@ -18,6 +18,8 @@ const started = Date.now();
 const children = [];
 let p;
 let stopping = false;
+// Only a database this run started is stopped on exit; one that was already running is left alone.
+let ownsDatabase = false;
 
 async function stopAll(code = 0) {
   if (stopping) return;
@@ -29,7 +31,7 @@ async function stopAll(code = 0) {
       await new Promise((r) => c.once('exit', r));
     }
   }
-  if (p) await stopMariadb(p).catch(() => {});
+  if (p && ownsDatabase) await stopMariadb(p).catch(() => {});
   log('stopped; your data is kept in .data/demo');
   process.exit(code);
 }
@@ -40,9 +42,12 @@ try {
   ensureNpmPackages();
   ensureSystemPackages();
   p = profile('demo');
+  if (await portOpen(p.port)) {
+    fail(`port ${p.port} is already in use: is Shoalbook already running? Stop it with Ctrl-C, or set PORT to a free port.`);
+  }
   buildAll();
   log('starting MariaDB and running migrations …');
-  await prepareDatabase(p);
+  ownsDatabase = !(await prepareDatabase(p)).reused;
   seed(p);
   children.push(await startFakeSmtp(p));
   const server = await startBackend(p);

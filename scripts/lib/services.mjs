@@ -27,17 +27,18 @@ export function seed(p, args = []) {
   run(process.execPath, [join(BACKEND_DIST, 'database', 'seed.js'), ...args], { cwd: join(ROOT, 'backend'), env: backendEnv(p) });
 }
 
-/** Start MariaDB; with `fresh`, drop and recreate the database first (test runs). Then migrate. */
+/** Start MariaDB (or reuse a running one: `{ reused }`); with `fresh`, drop and recreate the database first. Then migrate. */
 export async function prepareDatabase(p, { fresh = false } = {}) {
-  await startMariadb(p);
+  const started = await startMariadb(p);
   if (fresh) {
     dropDatabase(p);
     await ensureDatabase(p);
   }
   migrate(p);
+  return started;
 }
 
-function portOpen(port) {
+export function portOpen(port) {
   return new Promise((resolve) => {
     const s = createConnection({ host: '127.0.0.1', port });
     s.once('connect', () => (s.destroy(), resolve(true)));
