@@ -7,7 +7,7 @@ import type { CatchWithSky } from '../../../lib/journal-types';
 import { photoUrl } from '../../../lib/photos';
 import { formatDepth, formatLength, formatTemperature, formatWeight } from '../../../lib/units';
 import { FATE_LABELS } from './catch-labels';
-import styles from './catch-detail.module.css';
+import styles from '../../../components/record-detail/record-detail.module.css';
 
 /** Where a catch came from, in words: the find (and how far, when matched from coordinates). */
 export function catchSource(c: CatchWithSky): string {

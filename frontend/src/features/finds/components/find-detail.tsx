@@ -6,7 +6,7 @@ import type { FindWithSky } from '../../../lib/journal-types';
 import { formatDepth, formatTemperature } from '../../../lib/units';
 import { photoUrl } from '../api/finds-api';
 import { foundHowLabel, HARDNESS_LABELS, kindLabel, positionText, VEGETATION_LABELS } from './find-labels';
-import styles from './find-detail.module.css';
+import styles from '../../../components/record-detail/record-detail.module.css';
 
 /** One find in full: what was read on the sonar, where and when, its photo and the sun and moon at that moment. */
 export function FindDetail({ crewId, find, lake, prefs }: { crewId: string; find: FindWithSky; lake: LakeView | undefined; prefs: UnitPreferences }) {
