@@ -200,7 +200,9 @@ export interface EventRecapView {
   readings: string[];
 }
 
-export type FindOutcome = 'weighed' | 'caught' | 'fished-blank' | 'not-fished';
+/** Outcomes of a find in an event, best first. */
+export const FIND_OUTCOMES = ['weighed', 'caught', 'fished-blank', 'not-fished'] as const;
+export type FindOutcome = (typeof FIND_OUTCOMES)[number];
 
 export interface PaidOffFindView {
   findId: string;

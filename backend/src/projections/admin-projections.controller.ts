@@ -2,6 +2,7 @@ import { Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { ProjectionRebuildResult } from '@shoalbook/shared';
 import { SiteAdminOnly } from '../common/guards/site-admin.guard';
+import { ProjectionRebuildResultDto } from './dto/projection-rebuild-result.dto';
 import { ProjectionRebuildService } from './rebuild.service';
 
 @ApiTags('admin')
@@ -13,7 +14,7 @@ export class AdminProjectionsController {
   @Post('rebuild')
   @HttpCode(200)
   @ApiOperation({ summary: 'Rebuild every read model from the journal (site admins).' })
-  @ApiOkResponse({ description: '{ events, durationMs }' })
+  @ApiOkResponse({ type: ProjectionRebuildResultDto })
   async rebuild(): Promise<ProjectionRebuildResult> {
     const { events, durationMs } = await this.rebuilds.rebuild();
     return { events, durationMs };

@@ -1,6 +1,6 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post, Query as QueryParams } from '@nestjs/common';
 import { CommandBus, QueryBus } from '@nestjs/cqrs';
-import { ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiAcceptedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { EventFindsView, EventRecapView, FindMapView, HitRatesView, LakeComparisonView, RecapEmailResult, ReportFilters, TimingView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiException, ErrorCode, fieldError } from '../common/errors/api-errors';
@@ -8,7 +8,14 @@ import type { CrewAccess } from '../common/request-context';
 import { canSeePositions } from '../journal/positions';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { SendRecapEmailCommand } from './commands/send-recap-email.command';
+import { EventFindsViewDto } from './dto/event-finds-view.dto';
+import { EventRecapViewDto } from './dto/event-recap-view.dto';
+import { FindMapViewDto } from './dto/find-map-view.dto';
+import { HitRatesViewDto } from './dto/hit-rates-view.dto';
+import { LakeComparisonViewDto } from './dto/lake-comparison-view.dto';
+import { RecapEmailResultDto } from './dto/recap-email-result.dto';
 import { FindMapQueryDto, HitRatesQueryDto, LakeComparisonQueryDto, RecapEmailDto, ReportFiltersDto } from './dto/report-filters.dto';
+import { TimingViewDto } from './dto/timing-view.dto';
 import { GetEventFindsQuery } from './queries/event-finds.query';
 import { GetEventRecapQuery } from './queries/event-recap.query';
 import { GetFindMapQuery } from './queries/find-map.query';
@@ -35,12 +42,14 @@ export class ReportsController {
 
   @Get('hit-rates')
   @ApiOperation({ summary: 'Hit rates of the crew’s finds by a grouping, with intervals, shrinkage and readings.' })
+  @ApiOkResponse({ type: HitRatesViewDto })
   hitRates(@CurrentCrew() access: CrewAccess, @QueryParams() q: HitRatesQueryDto): Promise<HitRatesView> {
     return this.queries.execute(new GetHitRatesQuery(access.crewId, filtersOf(q), q.by ?? 'kind'));
   }
 
   @Get('lake-comparison')
   @ApiOperation({ summary: 'One grouping side by side for the events on one lake, with the differences.' })
+  @ApiOkResponse({ type: LakeComparisonViewDto })
   lakeComparison(@CurrentCrew() access: CrewAccess, @QueryParams() q: LakeComparisonQueryDto): Promise<LakeComparisonView> {
     if (!q.lakeId) throw fieldError('lakeId', 'Choose a lake to compare its events.');
     return this.queries.execute(new GetLakeComparisonQuery(access.crewId, q.lakeId, q.by ?? 'kind', filtersOf(q), q.eventIds));
@@ -48,6 +57,7 @@ export class ReportsController {
 
   @Get('events/:eventId/recap')
   @ApiOperation({ summary: 'The event recap: bags by day, standings, producing finds, weight timeline, big fish.' })
+  @ApiOkResponse({ type: EventRecapViewDto })
   async recap(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventRecapView> {
     const recap = await this.queries.execute(new GetEventRecapQuery(access.crewId, eventId));
     if (!recap) throw notFound('event');
@@ -56,6 +66,7 @@ export class ReportsController {
 
   @Get('events/:eventId/finds')
   @ApiOperation({ summary: 'Every find of the event with its outcome, and the share that paid off.' })
+  @ApiOkResponse({ type: EventFindsViewDto })
   async eventFinds(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventFindsView> {
     const finds = await this.queries.execute(new GetEventFindsQuery(access.crewId, eventId));
     if (!finds) throw notFound('event');
@@ -64,12 +75,14 @@ export class ReportsController {
 
   @Get('timing')
   @ApiOperation({ summary: 'Catches against the local clock and the sun/moon periods; weight by hour.' })
+  @ApiOkResponse({ type: TimingViewDto })
   timing(@CurrentCrew() access: CrewAccess, @QueryParams() q: ReportFiltersDto): Promise<TimingView> {
     return this.queries.execute(new GetTimingQuery(access.crewId, filtersOf(q)));
   }
 
   @Get('find-map')
   @ApiOperation({ summary: 'A lake’s finds and catches in metres from its reference point (hidden from viewers unless allowed).' })
+  @ApiOkResponse({ type: FindMapViewDto })
   async findMap(@CurrentCrew() access: CrewAccess, @QueryParams() q: FindMapQueryDto): Promise<FindMapView> {
     if (!q.lakeId) throw fieldError('lakeId', 'Choose a lake to see its finds on the map.');
     const map = await this.queries.execute(new GetFindMapQuery(access.crewId, q.lakeId, filtersOf(q), canSeePositions(access)));
@@ -80,6 +93,7 @@ export class ReportsController {
   @Post('events/:eventId/recap-email')
   @HttpCode(202)
   @ApiOperation({ summary: 'E-mail the recap (key numbers and a link, never positions) to chosen members of this crew.' })
+  @ApiAcceptedResponse({ type: RecapEmailResultDto })
   recapEmail(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string, @Body() body: RecapEmailDto): Promise<RecapEmailResult> {
     return this.commands.execute(new SendRecapEmailCommand(access, eventId, body.userIds));
   }

@@ -1,4 +1,4 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import { IsArray, IsIn, IsInt, IsOptional, IsUUID, Matches, Max, Min, ArrayMaxSize } from 'class-validator';
 import { HIT_RATE_GROUPINGS, type HitRateGroupingKey, SEASONS, type Season } from '@shoalbook/shared';
@@ -61,6 +61,7 @@ export class LakeComparisonQueryDto extends HitRatesQueryDto {
 export class FindMapQueryDto extends ReportFiltersDto {}
 
 export class RecapEmailDto {
+  @ApiProperty({ type: [String], format: 'uuid', maxItems: 100, description: 'members of this crew to send the recap to' })
   @IsArray()
   @ArrayMaxSize(100)
   @IsUUID('all', { each: true })

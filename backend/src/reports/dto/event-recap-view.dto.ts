@@ -1,0 +1,101 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { FATES, FIND_KINDS, SPECIES, type EventRecapView, type Fate, type FindKind, type RecapDay, type ReportFish, type Species } from '@shoalbook/shared';
+import { EventRulesViewDto } from '../../events/dto/event-view.dto';
+import { RateDto } from './rate-view.dto';
+
+type Recap = EventRecapView;
+type RecapTotals = Recap['totals'];
+type ProducingFind = Recap['producingFinds'][number];
+type TimelinePoint = Recap['timeline'][number];
+const nullableNumber = { type: Number, nullable: true } as const;
+const date = { example: '2025-10-10', description: 'lake-local YYYY-MM-DD' } as const;
+
+/** A fish in a report (never its position). */
+export class ReportFishDto implements ReportFish {
+  @ApiProperty({ format: 'uuid' }) catchId: string;
+  @ApiProperty({ format: 'date-time' }) caughtAt: string;
+  @ApiProperty({ description: 'lb' }) weightLb: number;
+  @ApiProperty({ ...nullableNumber, description: 'inches' }) lengthIn: number | null;
+  @ApiProperty({ enum: SPECIES }) species: Species;
+  @ApiProperty({ enum: FATES }) fate: Fate;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) findId: string | null;
+  @ApiProperty({ type: String, nullable: true }) findName: string | null;
+  @ApiProperty() lure: string;
+  @ApiProperty({ ...date, description: 'the competition day (lake-local)' }) day: string;
+}
+
+export class RecapOfficialDto implements NonNullable<RecapDay['official']> {
+  @ApiProperty({ ...nullableNumber, description: 'lb' }) grossLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'lb' }) penaltyLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'lb' }) officialLb: number | null;
+  @ApiProperty({ type: 'integer', nullable: true }) dayPlace: number | null;
+  @ApiProperty({ type: 'integer', nullable: true, description: 'minutes late at check-in' }) lateMinutes: number | null;
+}
+
+export class RecapDayDto implements RecapDay {
+  @ApiProperty({ format: 'uuid' }) competitionDayId: string;
+  @ApiProperty(date) date: string;
+  @ApiProperty({ type: [ReportFishDto], description: 'the bag under the event’s rules, heaviest first' }) counted: ReportFishDto[];
+  @ApiProperty({ type: [ReportFishDto] }) culled: ReportFishDto[];
+  @ApiProperty({ description: 'lb' }) grossLb: number;
+  @ApiProperty({ description: 'lb' }) penaltyLb: number;
+  @ApiProperty({ description: 'lb' }) netLb: number;
+  @ApiProperty({ type: RecapOfficialDto, nullable: true, description: 'the organiser’s figures, when recorded' }) official: RecapOfficialDto | null;
+  @ApiProperty({ type: 'integer', nullable: true }) dayPlace: number | null;
+}
+
+export class RecapLakeDto {
+  @ApiProperty({ format: 'uuid' }) id: string;
+  @ApiProperty() name: string;
+  @ApiProperty({ example: 'America/Chicago' }) timeZone: string;
+}
+
+export class RecapDatesDto {
+  @ApiProperty({ type: [String], description: 'lake-local YYYY-MM-DD' }) practice: string[];
+  @ApiProperty({ type: [String], description: 'lake-local YYYY-MM-DD' }) competition: string[];
+}
+
+export class RecapEventDto implements Omit<Recap['event'], 'rules'> {
+  @ApiProperty({ format: 'uuid' }) id: string;
+  @ApiProperty() name: string;
+  @ApiProperty({ type: RecapLakeDto }) lake: RecapLakeDto;
+  @ApiProperty({ type: RecapDatesDto }) dates: RecapDatesDto;
+  @ApiProperty({ type: EventRulesViewDto }) rules: EventRulesViewDto;
+  @ApiProperty({ type: 'integer', nullable: true }) finalPlace: number | null;
+}
+
+export class RecapTotalsDto implements RecapTotals {
+  @ApiProperty({ description: 'lb' }) netLb: number;
+  @ApiProperty({ description: 'lb: per day the official weight where recorded, else the computed net' }) officialLb: number;
+  @ApiProperty({ type: 'integer', nullable: true }) finalPlace: number | null;
+}
+
+export class ProducingFindDto implements ProducingFind {
+  @ApiProperty({ format: 'uuid' }) findId: string;
+  @ApiProperty() name: string;
+  @ApiProperty({ enum: FIND_KINDS }) kind: FindKind;
+  @ApiProperty() subKind: string;
+  @ApiProperty({ type: 'integer', minimum: 1 }) fishCount: number;
+  @ApiProperty({ minimum: 0, description: 'lb' }) weightLb: number;
+}
+
+export class TimelinePointDto implements TimelinePoint {
+  @ApiProperty({ format: 'uuid' }) catchId: string;
+  @ApiProperty({ format: 'date-time' }) caughtAt: string;
+  @ApiProperty({ description: 'lb' }) weightLb: number;
+  @ApiProperty({ description: 'lb: the day’s best legal bag after this fish' }) cumulativeBagLb: number;
+  @ApiProperty(date) day: string;
+}
+
+export class EventRecapViewDto implements Recap {
+  @ApiProperty({ type: RecapEventDto }) event: RecapEventDto;
+  @ApiProperty({ type: [RecapDayDto] }) days: RecapDayDto[];
+  @ApiProperty({ type: RecapTotalsDto }) totals: RecapTotalsDto;
+  @ApiProperty({ type: [ProducingFindDto], description: 'heaviest first' }) producingFinds: ProducingFindDto[];
+  @ApiProperty({ type: [TimelinePointDto], description: 'every fish by time' }) timeline: TimelinePointDto[];
+  @ApiProperty({ type: ReportFishDto, nullable: true }) bigFish: ReportFishDto | null;
+  @ApiProperty({ type: 'integer', minimum: 0 }) findsFished: number;
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'finds marked in the event’s practice' }) findsPracticed: number;
+  @ApiProperty({ type: RateDto, description: 'practice finds that produced a fish / practice finds' }) shareOfPracticePaidOff: RateDto;
+  @ApiProperty({ type: [String] }) readings: string[];
+}
