@@ -178,6 +178,50 @@ describe('imports: GPX finds and CSV catches', () => {
       expect(await journalCount(app, crew.crewId)).toBe(journalBefore + 2);
     });
 
+    it('refuses a row timed before the day’s start or after its check-in, naming the line, and writes nothing', async () => {
+      const timed = await createEvent(crew.angler, crew.crewId, lakeId, { name: 'Timed Open' });
+      const [day] = await competitionDays(crew.angler, crew.crewId, timed.id);
+      expectOk(await crew.angler.patch(`${base}/competition-days/${day!.id}`, { startTime: '06:30', checkInTime: '15:00', version: day!.version }));
+      const file = [
+        header,
+        '2024-04-12,06:30,largemouth,3,,,18,,weighed,,,,,,at take-off',
+        '2024-04-12,06:29,largemouth,2,,,15,,weighed,,,,,,a minute early',
+        '2024-04-12,15:00,spotted,2,,,15,,weighed,,,,,,at check-in',
+        '2024-04-12,15:20,spotted,2,,,15,,weighed,,,,,,after check-in',
+        '2024-04-13,05:10,spotted,2,,,15,,weighed,,,,,,second day has no times',
+      ].join('\n');
+      const window = 'Catches on 2024-04-12 count from the 06:30 start to the 15:00 check-in (lake time, America/Chicago)';
+
+      const preview = await upload(crew.angler, `${base}/catches/import/preview?eventId=${timed.id}`, file, 'timed.csv');
+      expectOk(preview);
+      expect(preview.body).toMatchObject({ accepted: 3, rejected: 2 });
+      const rows = preview.body.rows as { line: number; caughtAt: string | null; errors: { field: string; message: string }[] }[];
+      expect(rows.map((r) => r.errors)).toEqual([
+        [],
+        [{ field: 'time', message: `${window}; 06:29 is before the start.` }],
+        [],
+        [{ field: 'time', message: `${window}; 15:20 is after check-in.` }],
+        [],
+      ]);
+      expect(rows[0]!.caughtAt).toBe('2024-04-12T11:30:00.000Z'); // 06:30 CDT = UTC−5 (IANA tz database)
+
+      const before = await testEm(app).count(Catch, { eventId: timed.id });
+      const journalBefore = await journalCount(app, crew.crewId);
+      const refused = await upload(crew.angler, `${base}/catches/import?eventId=${timed.id}`, file, 'timed.csv');
+      expect(refused.status).toBe(400);
+      expect(refused.body).toMatchObject({ code: 'import_refused', fieldErrors: { 'line 3: time': [`${window}; 06:29 is before the start.`], 'line 5: time': [`${window}; 15:20 is after check-in.`] } });
+      expect(Object.keys(refused.body.fieldErrors)).toHaveLength(2);
+      expect(refused.body.message).toMatch(/2 of 5 row\(s\) have errors; nothing was imported/);
+      expect(await testEm(app).count(Catch, { eventId: timed.id })).toBe(before);
+      expect(await journalCount(app, crew.crewId)).toBe(journalBefore);
+
+      const boundaries = [header, file.split('\n')[1], file.split('\n')[3]].join('\n');
+      const ok = await upload(crew.angler, `${base}/catches/import?eventId=${timed.id}`, boundaries, 'timed.csv');
+      expectOk(ok, 201);
+      expect(ok.body).toEqual({ imported: 2, errors: [] });
+      expect(await testEm(app).count(Catch, { eventId: timed.id })).toBe(before + 2);
+    });
+
     it('refuses unknown columns and binary files', async () => {
       const res = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, 'date,time,species,weight,fate,colour\n2024-04-12,07:00,largemouth,2,weighed,green', 'x.csv');
       expect(res.status).toBe(400);

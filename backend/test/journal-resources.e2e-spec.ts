@@ -1,10 +1,11 @@
 import type { INestApplication } from '@nestjs/common';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CatchView, FindView } from '@shoalbook/shared';
+import { Catch } from '../src/catches/catch.entity';
 import { Lake } from '../src/lakes/lake.entity';
 import { crewWithMembers, type CrewFixture } from './utils/api-client';
 import { createTestApp, testEm } from './utils/test-app';
-import { competitionDays, createEvent, createLake, expectFieldError, expectOk, journalOf } from './journal-fixtures';
+import { competitionDays, createEvent, createLake, expectFieldError, expectOk, journalCount, journalOf } from './journal-fixtures';
 
 describe('journal resources: CRUD, validation, versions and the journal_event rows', () => {
   let app: INestApplication;
@@ -180,6 +181,47 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       expect(upd.body).toMatchObject({ fate: 'culled', version: 2, weightLb: 3.25 });
       expect((await crew.angler.delete(`${base}/catches/${c1.id}`)).status).toBe(204);
       expect((await journalOf(app, c1.id)).map((e) => e.type)).toEqual(['CatchLogged', 'CatchUpdated', 'CatchDeleted']);
+    });
+
+    it('takes a catch only between the day’s start and check-in on the lake clock, both ends included', async () => {
+      const lake = await createLake(crew.angler, crew.crewId);
+      const event = await createEvent(crew.angler, crew.crewId, lake.id);
+      const [day] = await competitionDays(crew.angler, crew.crewId, event.id);
+      const post = (caughtAt: string) => crew.angler.post(`${base}/catches`, { competitionDayId: day!.id, caughtAt, species: 'spotted', weightLb: 2.1, fate: 'weighed' });
+      const count = () => testEm(app).count(Catch, { competitionDayId: day!.id });
+
+      // Before the day has times, only the date bounds a catch.
+      const dawn = await post('05:10');
+      expectOk(dawn, 201);
+      expectOk(await crew.angler.patch(`${base}/competition-days/${day!.id}`, { startTime: '06:30', checkInTime: '15:00', version: day!.version }), 200);
+
+      const atStart = await post('06:30');
+      expectOk(atStart, 201);
+      expect(atStart.body.caughtAt).toBe('2024-04-12T11:30:00.000Z'); // 06:30 CDT = UTC−5 (IANA tz database)
+      expectOk(await post('15:00'), 201);
+      expectOk(await post('2024-04-12T14:59:59-05:00'), 201);
+
+      const before = await count();
+      const journalBefore = await journalCount(app, crew.crewId);
+      const window = 'Catches on 2024-04-12 count from the 06:30 start to the 15:00 check-in (lake time, America/Chicago)';
+      const early = await post('06:29');
+      expectFieldError(early, 'caughtAt');
+      expect(early.body.fieldErrors.caughtAt).toEqual([`${window}; 06:29 is before the start.`]);
+      expect(early.body.message).toMatch(/caughtAt/);
+      expectFieldError(await post('15:01'), 'caughtAt', /15:01 is after check-in/);
+      // An instant is read on the lake clock: 11:29 UTC is 06:29 in Chicago, 20:00:01 UTC is 15:00:01.
+      expectFieldError(await post('2024-04-12T11:29:00Z'), 'caughtAt', /06:29 is before the start/);
+      expectFieldError(await post('2024-04-12T20:00:01Z'), 'caughtAt', /15:00:01 is after check-in/);
+      expect(await count()).toBe(before);
+      expect(await journalCount(app, crew.crewId)).toBe(journalBefore);
+
+      // Moving a catch out of the window is refused too, and leaves it as it was.
+      const moved = await crew.angler.patch(`${base}/catches/${atStart.body.id}`, { caughtAt: '06:00', fate: 'released', version: 1 });
+      expectFieldError(moved, 'caughtAt', /06:00 is before the start/);
+      const kept = await crew.viewer.get(`${base}/catches/${atStart.body.id}`);
+      expect(kept.body).toMatchObject({ caughtAt: '2024-04-12T11:30:00.000Z', fate: 'weighed', version: 1 });
+      // A change that leaves the time alone does not re-check it (the 05:10 catch predates the times).
+      expectOk(await crew.angler.patch(`${base}/catches/${dawn.body.id}`, { fate: 'released', version: 1 }));
     });
   });
 });

@@ -2,11 +2,12 @@ import { nearestFind, units, weightLooksWrong } from '@shoalbook/analytics';
 import { DEFAULT_ATTRIBUTION_RADIUS_M } from '@shoalbook/shared';
 import type { CompetitionDay } from '../events/competition-day.entity';
 import type { FieldProblems } from '../journal/journal-errors';
-import { isHhMm, localDateOf, localTimeOn, parseInstant } from '../journal/local-time';
+import { isHhMm, localTimeOn, parseInstant } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
 import { MeasurementError, resolveDepth, resolveLength, resolveTemperature, resolveWeight } from '../measurements/measurements';
 import { assignMeasured, checkRange, RANGES, sentField } from '../measurements/ranges';
 import type { Catch } from './catch.entity';
+import { catchTimeProblem } from './catch-window';
 import type { LogCatchDto, UpdateCatchDto } from './dto/catch.dto';
 
 /** A find of the catch's lake, as attribution needs it. */
@@ -34,10 +35,10 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
   const { lake, day } = ctx;
   if (input.caughtAt !== undefined) {
     const at = isHhMm(input.caughtAt) ? localTimeOn(day.date, input.caughtAt, lake.timeZone) : parseInstant(input.caughtAt);
+    const outside = at && catchTimeProblem(at, day, lake.timeZone);
     if (!at) problems.add('caughtAt', 'Give the time as HH:MM (lake time) or an ISO-8601 date-time with a zone; that local time must exist on the day.');
-    else if (localDateOf(at, lake.timeZone) !== day.date) {
-      problems.add('caughtAt', `The catch time falls on ${localDateOf(at, lake.timeZone)} (lake time, ${lake.timeZone}), not on the competition day ${day.date}.`);
-    } else c.caughtAt = at;
+    else if (outside) problems.add('caughtAt', outside);
+    else c.caughtAt = at;
   }
   if (input.species !== undefined) c.species = input.species;
   if (input.fate !== undefined) c.fate = input.fate;
