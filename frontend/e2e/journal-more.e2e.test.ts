@@ -109,10 +109,9 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await page.goto(`${crewPath}/import?kind=csv&eventId=${eventId}`);
     await page.getByLabel('CSV file of catches').setInputFiles(sampleFilePath('catchesInvalidCsv'));
     await page.getByRole('button', { name: 'Check the file' }).click();
-    // fixtures/README.md: lines 2–12 and 14 each have one problem; lines 13 and 15 are good. Line 3 (05:10, before
-    // the day's 06:30 start) is accepted by the server today: it checks the catch's date, not the start time.
-    await page.getByText('3 rows ready').waitFor();
-    await page.getByText('11 rows with errors').waitFor();
+    // fixtures/README.md: lines 2–12 and 14 each have one problem; lines 13 and 15 are good.
+    await page.getByText('2 rows ready').waitFor();
+    await page.getByText('12 rows with errors').waitFor();
     const table = page.getByRole('table', { name: 'Rows of the CSV file' });
     // The table is virtualised, so only the first rows are in the page: line 2 has the impossible time 25:61.
     await table.getByText('Needs fixing').first().waitFor();
@@ -121,9 +120,11 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
       .first()
       .waitFor();
     const fixes = page.getByRole('region', { name: 'What to fix, line by line' });
-    await expect(fixes.getByRole('listitem').count()).resolves.toBe(11);
+    await expect(fixes.getByRole('listitem').count()).resolves.toBe(12);
     await fixes.getByText(/^Line 12: .+/).waitFor();
-    expect(await page.getByRole('button', { name: 'Import 3 catches' }).isDisabled()).toBe(true);
+    // Line 3 is timed 05:10, before the day's 06:30 start: the fix says the allowed window.
+    await fixes.getByText(/^Line 3: .*from the 06:30 start to the 15:00 check-in.*05:10 is before the start/).waitFor();
+    expect(await page.getByRole('button', { name: 'Import 2 catches' }).isDisabled()).toBe(true);
     await page.getByText(/nothing is imported while a row is wrong/).waitFor();
     await expectNoSeriousAxe(page, 'CSV preview with errors');
     await screenshot(page, 'journal-csv-errors');
@@ -197,6 +198,18 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await expect.poll(() => page.getByRole('textbox', { name: 'Technique' }).inputValue()).toBe('changed elsewhere');
     await expect(page.getByRole('textbox', { name: 'Lure' }).inputValue()).resolves.toBe('football jig, green pumpkin');
     await expect(page.getByText('This catch was changed elsewhere').count()).resolves.toBe(0);
+
+    // A time before the day's 06:30 start is refused beside the time field, saying the allowed window.
+    const time = page.getByRole('textbox', { name: /^Time/ });
+    await time.fill('05:00');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await page.getByText('The changes were not saved').waitFor();
+    await expect(time.getAttribute('aria-invalid')).resolves.toBe('true');
+    const describedBy = ((await time.getAttribute('aria-describedby')) ?? '').split(' ').filter(Boolean);
+    const description = await Promise.all(describedBy.map((id) => page.locator(`[id="${id}"]`).textContent()));
+    expect(description.join(' ')).toMatch(/from the 06:30 start to the 15:00 check-in .*05:00 is before the start/);
+    const unchanged = await apiCall<{ caughtAt: string }>(page, 'GET', `${crewApi}/catches/${catchId}`);
+    expect(unchanged.caughtAt).toBe('2025-06-14T11:48:00.000Z'); // 06:48 CDT = UTC−5 (IANA tz database)
   });
 
   it('keeps notes for a practice day', async () => {
