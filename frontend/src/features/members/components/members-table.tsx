@@ -20,7 +20,7 @@ export interface MembersTableProps {
 
 const column = createColumnHelper<MemberView>();
 
-/** The crew's members: name, e-mail and role, with owner-only controls. */
+/** The crew's members: name, e-mail and role, with owner-only controls; on a phone each row stacks into two lines. */
 export function MembersTable({ members, ownUserId, canManage, busyUserId, onChangeRole, onRemove }: MembersTableProps) {
   const columns = useMemo(() => {
     // Columns hold different value types; TanStack's own idiom for such a list is `any` here.
@@ -93,7 +93,7 @@ export function MembersTable({ members, ownUserId, canManage, busyUserId, onChan
 
   return (
     <div className={tableStyles.scroller} role="region" aria-label="Crew members" tabIndex={0}>
-      <table className={tableStyles.table}>
+      <table className={`${tableStyles.table} ${styles.members}`}>
         <thead>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>

@@ -2,7 +2,10 @@ import { SegmentedControl } from '@primer/react';
 import { HIT_RATE_GROUPINGS, type HitRateGrouping } from '../api/report-types';
 import { GROUPING_LABELS } from './report-labels';
 
-/** Chooses how finds are grouped; the choice lives in the address (?by=…). */
+/**
+ * Chooses how finds are grouped; the choice lives in the address (?by=…). Seven labelled segments do not
+ * fit a phone, so on a narrow viewport (Primer's < 768 px) the control becomes a menu of the same choices.
+ */
 export function GroupingSwitch({
   value,
   onChange,
@@ -13,7 +16,11 @@ export function GroupingSwitch({
   options?: readonly HitRateGrouping[];
 }) {
   return (
-    <SegmentedControl aria-label="Group finds by" onChange={(index) => onChange(options[index])}>
+    <SegmentedControl
+      aria-label="Group finds by"
+      variant={{ narrow: 'dropdown', regular: 'default' }}
+      onChange={(index) => onChange(options[index])}
+    >
       {options.map((by) => (
         <SegmentedControl.Button key={by} selected={by === value}>
           {GROUPING_LABELS[by]}

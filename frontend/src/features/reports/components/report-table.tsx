@@ -10,9 +10,15 @@ import {
 import { useState } from 'react';
 import styles from './reports.module.css';
 
+/** A column's header as plain text, for the label a stacked row shows beside each value on a phone. */
+function labelOf(header: unknown): string | undefined {
+  return typeof header === 'string' ? header : undefined;
+}
+
 /**
  * A compact sortable table for a report's numbers (a dozen rows at most, so no virtual scrolling).
- * The caption is visible: it says what the rows are and in which units.
+ * The caption is visible: it says what the rows are and in which units. On a phone each row stacks
+ * (reports.module.css): the first column as its heading, then every other value with its column's name.
  */
 export function ReportTable<T>({
   data,
@@ -89,7 +95,11 @@ export function ReportTable<T>({
                     {content}
                   </th>
                 ) : (
-                  <td key={cell.id} className={numeric ? styles.numeric : undefined}>
+                  <td
+                    key={cell.id}
+                    className={numeric ? styles.numeric : undefined}
+                    data-label={labelOf(cell.column.columnDef.header)}
+                  >
                     {content}
                   </td>
                 );
