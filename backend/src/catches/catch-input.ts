@@ -8,22 +8,15 @@ import { MeasurementError, resolveDepth, resolveLength, resolveTemperature, reso
 import { assignMeasured, checkRange, RANGES, sentField } from '../measurements/ranges';
 import type { Catch } from './catch.entity';
 import { catchTimeProblem } from './catch-window';
+import type { FindLookup } from './find-lookup';
 import type { LogCatchDto, UpdateCatchDto } from './dto/catch.dto';
 
-/** A find of the catch's lake, as attribution needs it. */
-export interface FindRef {
-  id: string;
-  name: string;
-  lat: number;
-  lon: number;
-}
-
-/** What checking a catch needs from the database, loaded once (an import checks thousands of rows). */
+/** What checking a catch needs from the database. */
 export interface CatchContext {
   lake: Lake;
   day: CompetitionDay;
-  /** Finds of the lake, by id. */
-  finds: Map<string, FindRef>;
+  /** Finds of the lake. */
+  finds: FindLookup;
   photoIds: (id: string) => Promise<boolean>;
 }
 
@@ -79,7 +72,7 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
     if (input.findId === null) {
       c.findId = null;
       c.attributionDistanceM = null;
-    } else if (!ctx.finds.has(input.findId)) {
+    } else if (!(await ctx.finds.byId(input.findId))) {
       // Another crew's find, another lake's, or none at all: the same answer, so nothing leaks.
       problems.add('findId', 'No such find on this lake in this crew.');
     } else {
@@ -87,7 +80,9 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
       c.attributionDistanceM = null;
     }
   } else if (input.lat !== undefined && input.lat !== null && c.lat !== null && c.lon !== null) {
-    const near = nearestFind({ lat: c.lat, lon: c.lon }, [...ctx.finds.values()], input.radiusM ?? DEFAULT_ATTRIBUTION_RADIUS_M);
+    const point = { lat: c.lat, lon: c.lon };
+    const radiusM = input.radiusM ?? DEFAULT_ATTRIBUTION_RADIUS_M;
+    const near = nearestFind(point, await ctx.finds.near(point, radiusM), radiusM);
     c.findId = near?.find.id ?? null;
     c.attributionDistanceM = near ? Math.round(near.distanceM * 10) / 10 : null;
   }

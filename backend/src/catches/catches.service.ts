@@ -13,6 +13,7 @@ import { SkyService } from '../sky/sky.service';
 import { Catch } from './catch.entity';
 import type { CatchContext } from './catch-input';
 import { catchView } from './catch-view';
+import { type FindRef, findsInDatabase, findsInMemory } from './find-lookup';
 
 /** Reads of a crew's catches (scoped by crew in every query) and the context checks need. */
 @Injectable()
@@ -59,21 +60,30 @@ export class CatchesService {
     });
   }
 
-  /** The day, its event and lake, and the lake's finds: everything checking a catch on that day needs. */
+  /** The view of a catch just checked in `ctx`: the day, lake and find are already at hand, so nothing is read again. */
+  async viewInContext(access: CrewAccess, c: Catch, ctx: CatchContext): Promise<CatchView> {
+    const find = c.findId ? await ctx.finds.byId(c.findId) : undefined;
+    return catchView(c, { showPositions: canSeePositions(access), competitionDate: ctx.day.date, findName: find?.name ?? null, sky: this.sky.at(ctx.lake, c.caughtAt) });
+  }
+
+  /** The day, its event and lake, and the lake's finds looked up as needed: everything checking one catch on that day needs. */
   async context(em: EntityManager, crewId: string, dayId: string): Promise<CatchContext & { event: TournamentEvent }> {
     const day = await em.findOne(CompetitionDay, { id: dayId, crewId });
     if (!day) throw unknownReference('competitionDayId', 'competition day');
     const event = await em.findOneOrFail(TournamentEvent, { id: day.eventId, crewId });
-    return { ...(await this.lakeContext(em, crewId, event)), day, event };
+    const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
+    return { lake, day, event, finds: findsInDatabase(em, crewId, lake.id), photoIds: this.photoIds(em, crewId) };
   }
 
-  async lakeContext(em: EntityManager, crewId: string, event: TournamentEvent): Promise<Omit<CatchContext, 'day'>> {
+  /** For an import: the event's lake and all its finds, loaded once for thousands of rows. */
+  async lakeContext(em: EntityManager, crewId: string, event: TournamentEvent): Promise<Omit<CatchContext, 'day'> & { lakeFinds: FindRef[] }> {
     const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
-    const finds = await em.find(Find, { crewId, lakeId: lake.id }, { fields: ['id', 'name', 'lat', 'lon'] });
-    return {
-      lake,
-      finds: new Map(finds.map((f) => [f.id, { id: f.id, name: f.name, lat: f.lat, lon: f.lon }])),
-      photoIds: async (id) => (await em.count(Photo, { id, crewId })) > 0,
-    };
+    const found = await em.find(Find, { crewId, lakeId: lake.id }, { fields: ['id', 'name', 'lat', 'lon'], orderBy: { id: 'asc' } });
+    const lakeFinds = found.map((f) => ({ id: f.id, name: f.name, lat: f.lat, lon: f.lon }));
+    return { lake, lakeFinds, finds: findsInMemory(lakeFinds), photoIds: this.photoIds(em, crewId) };
+  }
+
+  private photoIds(em: EntityManager, crewId: string) {
+    return async (id: string) => (await em.count(Photo, { id, crewId })) > 0;
   }
 }

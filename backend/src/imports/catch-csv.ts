@@ -4,6 +4,7 @@ import Papa from 'papaparse';
 import { CATCH_CSV_COLUMNS, type CatchImportPreview, type CatchImportRow } from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
 import { applyCatchInput, type CatchContext } from '../catches/catch-input';
+import type { FindRef } from '../catches/find-lookup';
 import { LogCatchDto } from '../catches/dto/catch.dto';
 import { toFieldErrors } from '../common/pipes/api-validation.pipe';
 import type { CompetitionDay } from '../events/competition-day.entity';
@@ -113,12 +114,12 @@ export async function checkCatchRows(
   crewId: string,
   eventId: string,
   days: CompetitionDay[],
-  ctx: Omit<CatchContext, 'day'>,
+  ctx: Omit<CatchContext, 'day'> & { lakeFinds: readonly FindRef[] },
   parsed: ParsedCsv,
 ): Promise<CheckedCatchRow[]> {
   const dayByDate = new Map(days.map((d) => [d.date, d]));
   const findsByName = new Map<string, string[]>();
-  for (const f of ctx.finds.values()) findsByName.set(f.name.toLowerCase(), [...(findsByName.get(f.name.toLowerCase()) ?? []), f.id]);
+  for (const f of ctx.lakeFinds) findsByName.set(f.name.toLowerCase(), [...(findsByName.get(f.name.toLowerCase()) ?? []), f.id]);
   const out: CheckedCatchRow[] = [];
   for (const [index, row] of parsed.rows.entries()) {
     const problems = new FieldProblems();

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CATCH_CSV_COLUMNS } from '@shoalbook/shared';
+import { findsInMemory } from '../catches/find-lookup';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { Lake } from '../lakes/lake.entity';
 import { checkCatchRows, parseCatchCsv } from './catch-csv';
@@ -140,8 +141,8 @@ const csvText = fc
 describe('catch CSV parser and row checks under fuzzing (fast-check)', () => {
   const lake = Object.assign(new Lake(), { id: '11111111-1111-4111-8111-111111111111', crewId: 'c', name: 'Fuzz Lake', timeZone: 'America/Chicago', lat: 32.95, lon: -96.2 });
   const day = Object.assign(new CompetitionDay(), { id: '22222222-2222-4222-8222-222222222222', crewId: 'c', eventId: 'e', date: '2024-04-13' });
-  const finds = new Map([['33333333-3333-4333-8333-333333333333', { id: '33333333-3333-4333-8333-333333333333', name: 'Shell bar', lat: 32.951, lon: -96.201 }]]);
-  const ctx = { lake, finds, photoIds: async () => false };
+  const lakeFinds = [{ id: '33333333-3333-4333-8333-333333333333', name: 'Shell bar', lat: 32.951, lon: -96.201 }];
+  const ctx = { lake, lakeFinds, finds: findsInMemory(lakeFinds), photoIds: async () => false };
 
   it('arbitrary text: a whole-file ImportFileError, or rows each checked with field errors or a record', async () => {
     await fc.assert(

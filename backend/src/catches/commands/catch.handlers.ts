@@ -25,7 +25,7 @@ export class LogCatchHandler implements ICommandHandler<LogCatchCommand> {
       tx.persist(c);
       await tx.flush();
       log.record({ type: 'CatchLogged', aggregateType: 'catch', aggregateId: c.id, payload: recordState(tx, 'Catch', c) });
-      return (await this.catches.views(access, [c], tx))[0]!;
+      return this.catches.viewInContext(access, c, ctx);
     });
   }
 }
@@ -48,7 +48,7 @@ export class UpdateCatchHandler implements ICommandHandler<UpdateCatchCommand> {
       problems.throwIfAny();
       await tx.flush();
       log.record({ type: 'CatchUpdated', aggregateType: 'catch', aggregateId: c.id, payload: recordState(tx, 'Catch', c) });
-      return (await this.catches.views(access, [c], tx))[0]!;
+      return this.catches.viewInContext(access, c, ctx);
     });
   }
 }
