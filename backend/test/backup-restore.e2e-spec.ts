@@ -25,8 +25,9 @@ function backup(cmd: 'dump' | 'restore', file: string) {
 }
 
 function tar(args: string[]): string {
-  const r = spawnSync('tar', args, { encoding: 'utf8' });
-  if (r.status !== 0) throw new Error(`tar ${args.join(' ')}: ${r.stderr}`);
+  // The dump of a whole test run's database is several megabytes: room for it on stdout.
+  const r = spawnSync('tar', args, { encoding: 'utf8', maxBuffer: 512 * 1024 * 1024 });
+  if (r.status !== 0) throw new Error(`tar ${args.join(' ')}: ${r.error?.message ?? r.stderr}`);
   return r.stdout;
 }
 
