@@ -42,14 +42,18 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
 
   async execute({ crewId, filters, by }: GetHitRatesQuery): Promise<HitRatesView> {
     const where = eventWhere(crewId, filters);
+    // One round trip: the sums per group, and a first row counting the selected events (an event with no finds has no sums).
     const rows: Record<string, unknown>[] = await this.em.execute(
-      `SELECT s.grouping, s.group_key, SUM(s.finds) AS finds, SUM(s.finds_fished) AS finds_fished, SUM(s.finds_producing) AS finds_producing,
-              SUM(s.finds_weighed) AS finds_weighed, SUM(s.fish_count) AS fish_count, SUM(s.weighed_count) AS weighed_count,
-              SUM(s.weight_ulb) AS weight_ulb, COUNT(DISTINCT s.event_id) AS events
+      `SELECT '#events' AS grouping, '' AS group_key, 0 AS finds, 0 AS finds_fished, 0 AS finds_producing, 0 AS finds_weighed, 0 AS fish_count,
+              0 AS weighed_count, 0 AS weight_ulb, COUNT(*) AS events
+         FROM rm_event e WHERE ${where.sql}
+       UNION ALL
+       SELECT s.grouping, s.group_key, SUM(s.finds), SUM(s.finds_fished), SUM(s.finds_producing), SUM(s.finds_weighed), SUM(s.fish_count),
+              SUM(s.weighed_count), SUM(s.weight_ulb), COUNT(DISTINCT s.event_id)
          FROM rm_event e JOIN rm_group_stats s ON s.event_id = e.id AND s.crew_id = e.crew_id
         WHERE ${where.sql} AND s.grouping IN (?, 'kind')
         GROUP BY s.grouping, s.group_key`,
-      [...where.params, by],
+      [...where.params, ...where.params, by],
     );
     const sums = (grouping: string): Sums[] =>
       rows
@@ -67,7 +71,7 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
         .sort((a, b) => keyOrder(by)(a.key, b.key));
     const groups = sums(by);
     const kinds = sums('kind');
-    const [countRow] = (await this.em.execute(`SELECT COUNT(*) AS n FROM rm_event e WHERE ${where.sql}`, where.params)) as { n: unknown }[];
+    const eventCount = Number(rows.find((r) => r.grouping === '#events')?.events ?? 0);
 
     const total = (list: Sums[], f: keyof Omit<Sums, 'key'>) => list.reduce((s, g) => s + g[f], 0);
     const overall = {
@@ -117,6 +121,6 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       for (const v of byRank.filter((g) => g.findsFished > 0)) readings.push(findRateReading(v.label, v.producing));
       for (const v of byRank.filter((g) => g.findsFished > 0 && g.findsFished < SMALL_SAMPLE_FINDS)) readings.push(smallSampleReading(v.label, v.findsFished));
     }
-    return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount: Number(countRow?.n ?? 0) };
+    return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount };
   }
 }

@@ -25,9 +25,9 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
   constructor(private readonly em: EntityManager) {}
 
   async execute({ crewId, lakeId, by, filters, eventIds }: GetLakeComparisonQuery): Promise<LakeComparisonView> {
-    const lake = await findLake(this.em, crewId, lakeId);
+    // Side by side on two pooled connections: a report is read on every filter change.
+    const [lake, events] = await Promise.all([findLake(this.em, crewId, lakeId), selectEvents(this.em, crewId, { ...filters, lakeId }, { ids: eventIds })]);
     if (!lake) throw new ApiException(HttpStatus.NOT_FOUND, 'No such lake in this crew.', ErrorCode.notFound);
-    const events = await selectEvents(this.em, crewId, { ...filters, lakeId }, { ids: eventIds });
     const refs = events.map(({ id, name, firstDate, season, year }) => ({ id, name, firstDate, season, year }));
     const view: LakeComparisonView = { lake: { id: lake.id, name: lake.name }, by, events: refs, groups: [], comparisons: [] };
     if (!events.length) return view;
