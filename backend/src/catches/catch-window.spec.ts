@@ -69,7 +69,11 @@ describe('catchTimeProblem: a catch inside its competition day, on the lake cloc
       journal.catches.flatMap((c) => {
         const lake = journal.lakes.find((l) => l.id === journal.events.find((e) => e.id === c.eventId)!.lakeId)!;
         const d = journal.competitionDays.find((x) => x.eventId === c.eventId && x.date === c.competitionDate)!;
-        const problem = catchTimeProblem(new Date(c.caughtAt), { date: d.date, startTime: d.startLocal, checkInTime: d.checkInLocal }, lake.timeZone);
+        const problem = catchTimeProblem(
+          new Date(c.caughtAt),
+          { date: d.date, startTime: d.startLocal, checkInTime: d.checkInLocal },
+          lake.timeZone,
+        );
         return problem ? [`${c.id}: ${problem}`] : [];
       });
     const demo = demoJournal();

@@ -21,7 +21,8 @@ function boundOn(date: string, hhmm: string, timeZone: string): DateTime {
 export function catchTimeProblem(at: Date, day: CatchWindowDay, timeZone: string): string | null {
   const local = DateTime.fromJSDate(at, { zone: timeZone });
   const date = local.toISODate();
-  if (date !== day.date) return `The catch time falls on ${date} (lake time, ${timeZone}), not on the competition day ${day.date}.`;
+  if (date !== day.date)
+    return `The catch time falls on ${date} (lake time, ${timeZone}), not on the competition day ${day.date}.`;
   const start = day.startTime ? boundOn(day.date, day.startTime, timeZone) : null;
   const checkIn = day.checkInTime ? boundOn(day.date, day.checkInTime, timeZone) : null;
   const early = start !== null && local < start;
