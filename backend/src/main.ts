@@ -2,11 +2,12 @@ import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from './app.module';
+import { StartupQuietLogger } from './common/logging/startup-quiet.logger';
 import { APP_OPTIONS, configureApp } from './configure-app';
 import { AppConfig } from './config/app-config.service';
 
 async function bootstrap(): Promise<void> {
-  const app = await NestFactory.create(AppModule.forRoot(), APP_OPTIONS);
+  const app = await NestFactory.create(AppModule.forRoot(), { ...APP_OPTIONS, logger: new StartupQuietLogger() });
   configureApp(app);
   const config = app.get(AppConfig);
   await app.listen(config.get('PORT'), '127.0.0.1');
