@@ -35,5 +35,5 @@ export type TimingReport = TimingView;
 export type FindMapReport = FindMapView;
 export type MapFind = FindMapView['finds'][number];
 
-/** Outcomes of a find in an event, best first. */
-export const FIND_OUTCOMES = ['weighed', 'caught', 'fished-blank', 'not-fished'] as const;
+/** Outcomes of a find in an event, best first (the contract's list). */
+export { FIND_OUTCOMES } from '@shoalbook/shared';
