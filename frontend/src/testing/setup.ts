@@ -1,7 +1,11 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
 import { api } from '../lib/api-client';
+
+// A screen's first render loads its lazy route module and Primer; on a busy shared machine that takes more
+// than Testing Library's default 1 s for findBy* queries, so wait up to 5 s (a real failure still fails).
+configure({ asyncUtilTimeout: 5000 });
 
 // jsdom lacks these browser APIs; Primer's overlays and responsive hooks call them.
 if (!window.matchMedia) {

@@ -2,7 +2,7 @@ import { Label } from '@primer/react';
 import { createColumnHelper } from '@tanstack/react-table';
 import type { UnitPreferences } from '@shoalbook/shared';
 import { formatWeight } from '../../../lib/units';
-import type { HitRateGroup } from '../api/report-types';
+import type { HitRateGroup, Rate } from '../api/report-types';
 import { FEW_FINDS, percent, percentRange } from './report-labels';
 import { ReportTable } from './report-table';
 import styles from './reports.module.css';
@@ -35,63 +35,53 @@ export function HitRatesTable({
   );
 }
 
-function findColumns() {
+/** The group's name, flagged when too few finds or fish stand behind it. */
+function groupColumn(count: (g: HitRateGroup) => number, few: string) {
+  return column.accessor('label', {
+    header: 'Group',
+    cell: (info) => (
+      <span className={styles.groupCell}>
+        {info.getValue()}
+        {count(info.row.original) < FEW_FINDS ? (
+          <Label variant="attention" size="small">
+            {few}
+          </Label>
+        ) : null}
+      </span>
+    ),
+  });
+}
+
+/** A rate, its likely range and its small-sample-adjusted value. */
+function rateColumns(rate: (g: HitRateGroup) => Rate, headers: { id: string; rate: string; range: string; adjusted: string }) {
   return [
-    column.accessor('label', {
-      header: 'Group',
-      cell: (info) => (
-        <span className={styles.groupCell}>
-          {info.getValue()}
-          {info.row.original.findsFished < FEW_FINDS ? (
-            <Label variant="attention" size="small">
-              few finds
-            </Label>
-          ) : null}
-        </span>
-      ),
-    }),
-    column.accessor('findsFished', { header: 'Fished', meta: { numeric: true } }),
-    column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
-    column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
-    column.accessor((g) => g.producing.rate, {
-      id: 'rate',
-      header: 'Hit rate',
-      cell: (info) => percent(info.getValue()),
-      meta: { numeric: true },
-    }),
-    column.accessor((g) => g.producing.upper - g.producing.lower, {
+    column.accessor((g) => rate(g).rate, { id: headers.id, header: headers.rate, cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor((g) => rate(g).upper - rate(g).lower, {
       id: 'interval',
-      header: 'Range',
-      cell: (info) => percentRange(info.row.original.producing.lower, info.row.original.producing.upper),
+      header: headers.range,
+      cell: (info) => percentRange(rate(info.row.original).lower, rate(info.row.original).upper),
       meta: { numeric: true },
     }),
-    column.accessor((g) => g.producing.shrunk, {
-      id: 'shrunk',
-      header: 'Adjusted',
-      cell: (info) => percent(info.getValue()),
-      meta: { numeric: true },
-    }),
-    rankColumn,
+    column.accessor((g) => rate(g).shrunk, { id: 'shrunk', header: headers.adjusted, cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
   ];
 }
 
 const rankColumn = column.accessor('rank', { header: 'Rank', meta: { numeric: true }, sortDescFirst: false });
 
+function findColumns() {
+  return [
+    groupColumn((g) => g.findsFished, 'few finds'),
+    column.accessor('findsFished', { header: 'Fished', meta: { numeric: true } }),
+    column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
+    column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
+    ...rateColumns((g) => g.producing, { id: 'rate', rate: 'Hit rate', range: 'Range', adjusted: 'Adjusted' }),
+    rankColumn,
+  ];
+}
+
 function catchColumns(units: UnitPreferences) {
   return [
-    column.accessor('label', {
-      header: 'Group',
-      cell: (info) => (
-        <span className={styles.groupCell}>
-          {info.getValue()}
-          {info.row.original.fishCount < FEW_FINDS ? (
-            <Label variant="attention" size="small">
-              few fish
-            </Label>
-          ) : null}
-        </span>
-      ),
-    }),
+    groupColumn((g) => g.fishCount, 'few fish'),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
     column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
     column.accessor('weightLb', {
@@ -99,24 +89,7 @@ function catchColumns(units: UnitPreferences) {
       cell: (info) => formatWeight(info.getValue(), units.weight),
       meta: { numeric: true },
     }),
-    column.accessor((g) => g.shareOfFish.rate, {
-      id: 'share',
-      header: 'Share of fish',
-      cell: (info) => percent(info.getValue()),
-      meta: { numeric: true },
-    }),
-    column.accessor((g) => g.shareOfFish.upper - g.shareOfFish.lower, {
-      id: 'interval',
-      header: 'Likely range',
-      cell: (info) => percentRange(info.row.original.shareOfFish.lower, info.row.original.shareOfFish.upper),
-      meta: { numeric: true },
-    }),
-    column.accessor((g) => g.shareOfFish.shrunk, {
-      id: 'shrunk',
-      header: 'Adjusted share',
-      cell: (info) => percent(info.getValue()),
-      meta: { numeric: true },
-    }),
+    ...rateColumns((g) => g.shareOfFish, { id: 'share', rate: 'Share of fish', range: 'Likely range', adjusted: 'Adjusted share' }),
     rankColumn,
   ];
 }
