@@ -175,6 +175,9 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, lengthIn: 40 }), 'lengthIn');
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, length: { value: 0, unit: 'mm' } }), 'length');
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, colour: 'green' }), 'colour');
+      // An array where a measurement object belongs (once a 500, found by the request-body fuzzer).
+      expectFieldError(await post({ caughtAt: '08:00', weight: [] }), 'weight', /object/);
+      expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, depth: [] }), 'depth', /object/);
 
       const upd = await crew.angler.patch(`${base}/catches/${c1.id}`, { fate: 'culled', version: 1 });
       expectOk(upd);

@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { FATES, SPECIES, type Fate, type LogCatchRequest, type Species } from '@shoalbook/shared';
-import { IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import { IsIn, IsInt, IsNotEmpty, IsNumber, IsObject, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
 import { EnteredDepthDto, EnteredLengthDto, EnteredTemperatureDto, EnteredWeightDto } from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { IsOmittable } from '../../common/dto/omittable';
@@ -21,17 +21,17 @@ export class LogCatchDto implements LogCatchRequest {
   @ApiPropertyOptional({ default: 50, description: 'attribution radius, m' }) @IsOmittable() @IsNumber(finite) @Min(1) @Max(1000) radiusM?: number;
   @ApiProperty({ enum: SPECIES }) @IsIn([...SPECIES]) species: Species;
   @ApiPropertyOptional({ nullable: true, description: 'inches' }) @IsOptional() @IsNumber(finite) lengthIn?: number | null;
-  @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredLengthDto) length?: EnteredLengthDto | null;
+  @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredLengthDto) length?: EnteredLengthDto | null;
   @ApiPropertyOptional({ description: 'decimal pounds (or give weight)' }) @IsOmittable() @IsNumber(finite) weightLb?: number;
-  @ApiPropertyOptional({ type: EnteredWeightDto }) @IsOmittable() @ValidateNested() @Type(() => EnteredWeightDto) weight?: EnteredWeightDto;
+  @ApiPropertyOptional({ type: EnteredWeightDto }) @IsOmittable() @IsObject() @ValidateNested() @Type(() => EnteredWeightDto) weight?: EnteredWeightDto;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) lure?: string;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) technique?: string;
   @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
-  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
   @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
-  @ValidateNested()
+  @IsObject() @ValidateNested()
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty({ enum: FATES }) @IsIn([...FATES]) fate: Fate;

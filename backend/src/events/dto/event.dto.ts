@@ -7,6 +7,7 @@ import {
   IsInt,
   IsNotEmpty,
   IsNumber,
+  IsObject,
   IsOptional,
   IsString,
   IsUUID,
@@ -63,7 +64,7 @@ export class CreateEventDto implements CreateEventRequest {
   @ArrayMaxSize(7)
   @Validate(CalendarDatesConstraint)
   competitionDates: string[];
-  @ApiPropertyOptional({ type: EventRulesDto }) @IsOmittable() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
+  @ApiPropertyOptional({ type: EventRulesDto }) @IsOmittable() @IsObject() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?: number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?: number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;

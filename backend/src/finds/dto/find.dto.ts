@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { FIND_KINDS, FOUND_HOW, VEGETATION_DENSITIES, type AddFindRequest, type FindKind, type FoundHow, type HardnessGrade, type VegetationDensity } from '@shoalbook/shared';
-import { IsBoolean, IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import { IsBoolean, IsIn, IsInt, IsNotEmpty, IsNumber, IsObject, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateNested } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
@@ -25,7 +25,7 @@ export class AddFindDto implements AddFindRequest {
   @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
   @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
   @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
-  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
   @ApiProperty({ enum: FIND_KINDS }) @IsIn([...FIND_KINDS]) kind: FindKind;
   @ApiPropertyOptional({ description: 'one of the sub-kinds of the kind (FIND_SUB_KINDS), or empty' }) @IsOptional() @IsString() @MaxLength(40) subKind?: string;
   @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 5 }) @IsOptional() @IsInt() @Min(1) @Max(5) hardness?: HardnessGrade | null;
@@ -37,7 +37,7 @@ export class AddFindDto implements AddFindRequest {
   @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
-  @ValidateNested()
+  @IsObject() @ValidateNested()
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;

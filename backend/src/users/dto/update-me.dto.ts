@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsIn, IsNotEmpty, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { IsIn, IsNotEmpty, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
 import { DEPTH_UNITS, LENGTH_UNITS, TEMPERATURE_UNITS, type UnitPreferences, WEIGHT_UNITS } from '@shoalbook/shared';
 import { Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
@@ -30,6 +30,6 @@ export class UpdateMeDto {
   displayName?: string;
 
   @ApiPropertyOptional({ type: UpdateUnitsDto })
-  @IsOmittable() @ValidateNested() @Type(() => UpdateUnitsDto)
+  @IsOmittable() @IsObject() @ValidateNested() @Type(() => UpdateUnitsDto)
   units?: UpdateUnitsDto;
 }
