@@ -41,8 +41,16 @@ class Session {
     const headers = { cookie: this.cookie, 'x-csrf-token': this.csrf };
     if (body !== undefined) headers['content-type'] = 'application/json';
     const init = { method, headers, body: body === undefined ? undefined : JSON.stringify(body) };
-    // A keep-alive socket the server closed while the bench was busy elsewhere: retry once on a fresh one.
-    const res = await fetch(this.base + path, init).catch(() => fetch(this.base + path, init));
+    // A keep-alive socket the server closed while the bench was blocked in a child process (the rebuild) fails
+    // on first use; a short pause lets the event loop see the closes, then a fresh socket is used.
+    let res;
+    for (let attempt = 1; !res; attempt++) {
+      res = await fetch(this.base + path, init).catch(async (e) => {
+        if (attempt >= 3) throw e;
+        await new Promise((r) => setTimeout(r, 200));
+        return undefined;
+      });
+    }
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(';');
       const i = pair.indexOf('=');
