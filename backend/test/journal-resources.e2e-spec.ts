@@ -196,7 +196,13 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       // Before the day has times, only the date bounds a catch.
       const dawn = await post('05:10');
       expectOk(dawn, 201);
-      expectOk(await crew.angler.patch(`${base}/competition-days/${day!.id}`, { startTime: '06:30', checkInTime: '15:00', version: day!.version }), 200);
+      const setTimes = (times: object) => crew.angler.patch(`${base}/competition-days/${day!.id}`, { ...times, version: day!.version });
+      // A window must run forwards, and must still hold the catches already logged: the 05:10 fish comes first.
+      expectFieldError(await setTimes({ startTime: '15:00', checkInTime: '06:30' }), 'checkInTime', /must come after the start \(15:00\)/);
+      expectFieldError(await setTimes({ startTime: '06:30', checkInTime: '15:00' }), 'startTime', /1 catch\(es\) logged on this day fall outside the new window \(at 05:10, lake time\)/);
+      expect((await competitionDays(crew.viewer, crew.crewId, event.id))[0]).toMatchObject({ startTime: null, checkInTime: null, version: day!.version });
+      expectOk(await crew.angler.patch(`${base}/catches/${dawn.body.id}`, { caughtAt: '06:45', version: 1 }));
+      expectOk(await setTimes({ startTime: '06:30', checkInTime: '15:00' }), 200);
 
       const atStart = await post('06:30');
       expectOk(atStart, 201);
@@ -223,8 +229,8 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       expectFieldError(moved, 'caughtAt', /06:00 is before the start/);
       const kept = await crew.viewer.get(`${base}/catches/${atStart.body.id}`);
       expect(kept.body).toMatchObject({ caughtAt: '2024-04-12T11:30:00.000Z', fate: 'weighed', version: 1 });
-      // A change that leaves the time alone does not re-check it (the 05:10 catch predates the times).
-      expectOk(await crew.angler.patch(`${base}/catches/${dawn.body.id}`, { fate: 'released', version: 1 }));
+      // A change that leaves the time alone goes through.
+      expectOk(await crew.angler.patch(`${base}/catches/${dawn.body.id}`, { fate: 'released', version: 2 }));
     });
   });
 });
