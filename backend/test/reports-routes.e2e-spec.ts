@@ -78,6 +78,13 @@ describe('report routes', () => {
     const hard = body.groups.find((g) => g.key === 'hard-bottom')!;
     expect(hard).toMatchObject({ findsFished: 5, findsProducing: 3, fishCount: 5 });
     expect(body.overall).toMatchObject({ findsFished: 10, findsProducing: 5, fishCount: 7 });
+    // The "no spread" reading is said exactly when the adjusted rates of the fished groups sit within one point.
+    for (const by of ['kind', 'subKind', 'depthBand', 'hardness', 'temperatureBand']) {
+      const view = (await get<HitRatesView>(crew.viewer, `hit-rates?by=${by}`)).body;
+      const adjusted = view.groups.filter((g) => g.findsFished > 0).map((g) => g.producing.shrunk!);
+      const flat = adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < 0.01;
+      expect(view.readings.some((r) => r.includes('no bigger than chance'))).toBe(flat);
+    }
     expect(body.readings).toContain(`Hard bottom produced on 3 of 5 finds fished (60 %, ${Math.round(wilsonInterval(3, 5).lower * 100)}–${Math.round(wilsonInterval(3, 5).upper * 100)} %).`);
   });
 

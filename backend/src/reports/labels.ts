@@ -28,3 +28,12 @@ export function eventLabel(event: ReportEventRef, all: readonly ReportEventRef[]
   const same = all.filter((e) => e.season === event.season && e.year === event.year);
   return same.length > 1 ? event.name : `${SEASON_LABELS[event.season]} ${event.year}`;
 }
+
+/** The groups of a find-based grouping, in a sentence: "between kinds of place". */
+export const GROUPING_PLURALS: Record<string, string> = {
+  kind: 'kinds of place',
+  subKind: 'sub-kinds',
+  depthBand: 'depth bands',
+  hardness: 'hardness grades',
+  temperatureBand: 'water-temperature bands',
+};

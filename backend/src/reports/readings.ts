@@ -29,3 +29,11 @@ export function catchShareReading(label: string, r: Rate): string {
 export function smallSampleReading(label: string, trials: number): string {
   return `${label}: only ${plural(trials, 'find')} fished, too few to rank with confidence; its ranking leans on the crew's overall rate.`;
 }
+
+/**
+ * Said when the small-sample adjustment pulls every group to the same rate: the empirical-Bayes prior found
+ * no spread between the groups beyond what chance gives with these counts, so the ranking is not telling.
+ */
+export function noSpreadReading(groupingLabel: string, shrunk: number): string {
+  return `Between ${groupingLabel}, the differences are no bigger than chance would give with these numbers of finds, so every adjusted rate sits near the overall ${percent(shrunk)}: narrow the filters to one lake or season, or fish more finds, before ranking them.`;
+}

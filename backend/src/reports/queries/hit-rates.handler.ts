@@ -3,14 +3,16 @@ import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import { CATCH_UNIT_GROUPINGS, type HitRateGroupView, type HitRatesView } from '@shoalbook/shared';
 import { depthBandLabels, temperatureBandLabels } from '@shoalbook/analytics';
 import { fromMicroLb } from '../../projections/rows';
-import { groupLabel } from '../labels';
+import { GROUPING_PLURALS, groupLabel } from '../labels';
 import { groupRates, ranks, singleRate } from '../rates';
-import { catchShareReading, findRateReading, smallSampleReading } from '../readings';
+import { catchShareReading, findRateReading, noSpreadReading, smallSampleReading } from '../readings';
 import { eventWhere } from '../report-events';
 import { GetHitRatesQuery } from './hit-rates.query';
 
 /** Below this many finds fished a group's rank is flagged as resting mostly on the overall rate (our choice). */
 export const SMALL_SAMPLE_FINDS = 10;
+/** Adjusted rates closer together than this (one percentage point) read as "no spread between the groups". */
+const NO_SPREAD = 0.01;
 
 interface Sums {
   key: string;
@@ -120,6 +122,8 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       else readings.push(findRateReading('Overall, the practice', overall.producing));
       for (const v of byRank.filter((g) => g.findsFished > 0)) readings.push(findRateReading(v.label, v.producing));
       for (const v of byRank.filter((g) => g.findsFished > 0 && g.findsFished < SMALL_SAMPLE_FINDS)) readings.push(smallSampleReading(v.label, v.findsFished));
+      const adjusted = byRank.filter((g) => g.findsFished > 0 && g.producing.shrunk !== null).map((g) => g.producing.shrunk!);
+      if (adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < NO_SPREAD) readings.push(noSpreadReading(GROUPING_PLURALS[by] ?? 'the groups', adjusted[0]!));
     }
     return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount };
   }
