@@ -128,7 +128,8 @@ describe('report routes', () => {
     expect(veg.pValue).toBeCloseTo(expected.pValue, 12);
     expect(veg.moreThanChance).toBe(expected.pValue < 0.05 && expected.lower > 0);
     expect(veg.reading).toMatch(/^Vegetation did better in Fall 2026 than in Fall 2025: 100 % against 0 % of finds fished/);
-    expect(veg.reading).toMatch(/\(\d+ points higher, likely -?\d+ to \d+\)/);
+    const [lo, hi] = [Math.round(expected.lower * 100), Math.round(expected.upper * 100)];
+    expect(veg.reading).toContain(lo < 0 ? `(100 points higher, likely from ${-lo} points lower to ${hi} higher)` : `(100 points higher, likely ${lo} to ${hi})`);
     expect(body.groups.find((g) => g.key === 'hard-bottom')!.perEvent[events[0]!.id]).toMatchObject({ successes: 2, trials: 4, findsFished: 4 });
     const missing = await get(crew.owner, 'lake-comparison?by=kind');
     expect(missing.status).toBe(400);
