@@ -38,7 +38,9 @@ function runClient(cmd, args, { stdin = 'ignore', stdout = 'ignore', okCodes = [
     child.stdout?.on('data', (c) => (out += c));
     child.stderr.on('data', (c) => (stderr += c));
     child.once('error', reject);
-    child.once('exit', (code) => (okCodes.includes(code) ? resolvePromise(out) : reject(new Error(`${cmd} exited with ${code}: ${stderr.trim()}`))));
+    child.once('exit', (code) =>
+      okCodes.includes(code) ? resolvePromise(out) : reject(new Error(`${cmd} exited with ${code}: ${stderr.trim()}`)),
+    );
   });
 }
 
@@ -76,7 +78,14 @@ function isTar(file) {
 
 /** tar arguments that add the photo folder as `uploads/…`, whatever the folder is called on disk. */
 function uploadsArgs(p) {
-  return ['--ignore-failed-read', '--warning=no-file-changed', `--transform=s,^\\.,${UPLOADS_MEMBER},`, '-C', p.uploadDir, '.'];
+  return [
+    '--ignore-failed-read',
+    '--warning=no-file-changed',
+    `--transform=s,^\\.,${UPLOADS_MEMBER},`,
+    '-C',
+    p.uploadDir,
+    '.',
+  ];
 }
 
 /** GNU tar exits 1 when a file changed while it was archived (an upload meanwhile): the second pass adds it. */
@@ -111,14 +120,28 @@ export async function dump(p, file = defaultFile(p)) {
     try {
       await runClient(
         'mariadb-dump',
-        ['--no-defaults', `--socket=${mariadbSocket(p)}`, '-uroot', '--single-transaction', '--routines', '--triggers', '--hex-blob', '--default-character-set=utf8mb4', p.dbName],
+        [
+          '--no-defaults',
+          `--socket=${mariadbSocket(p)}`,
+          '-uroot',
+          '--single-transaction',
+          '--routines',
+          '--triggers',
+          '--hex-blob',
+          '--default-character-set=utf8mb4',
+          p.dbName,
+        ],
         { stdout: out },
       );
     } finally {
       closeSync(out);
     }
     if (!isCompleteDump(sql)) throw new Error('mariadb-dump wrote an incomplete file');
-    await runClient('tar', ['--append', `--file=${partial}`, `--newer-mtime=@${since}`, ...uploadsArgs(p), '-C', work, SQL_MEMBER], TAR_WRITE);
+    await runClient(
+      'tar',
+      ['--append', `--file=${partial}`, `--newer-mtime=@${since}`, ...uploadsArgs(p), '-C', work, SQL_MEMBER],
+      TAR_WRITE,
+    );
     const names = (await runClient('tar', ['--list', `--file=${partial}`], { stdout: 'pipe' })).split('\n');
     if (!names.includes(SQL_MEMBER)) throw new Error(`tar did not add ${SQL_MEMBER} to the archive`);
     renameSync(partial, file);
@@ -134,8 +157,10 @@ export async function dump(p, file = defaultFile(p)) {
 /** Why an unpacked archive is not a backup made by `dump` (null when it is): only our two members, plain files. */
 function unexpectedContent(dir) {
   const top = readdirSync(dir).sort();
-  if (top.join(',') !== [SQL_MEMBER, UPLOADS_MEMBER].sort().join(',')) return `it holds ${top.join(', ') || 'nothing'} instead of ${SQL_MEMBER} and ${UPLOADS_MEMBER}/`;
-  if (!lstatSync(join(dir, SQL_MEMBER)).isFile() || !lstatSync(join(dir, UPLOADS_MEMBER)).isDirectory()) return `${SQL_MEMBER} or ${UPLOADS_MEMBER}/ is of the wrong kind`;
+  if (top.join(',') !== [SQL_MEMBER, UPLOADS_MEMBER].sort().join(','))
+    return `it holds ${top.join(', ') || 'nothing'} instead of ${SQL_MEMBER} and ${UPLOADS_MEMBER}/`;
+  if (!lstatSync(join(dir, SQL_MEMBER)).isFile() || !lstatSync(join(dir, UPLOADS_MEMBER)).isDirectory())
+    return `${SQL_MEMBER} or ${UPLOADS_MEMBER}/ is of the wrong kind`;
   const odd = (sub) =>
     readdirSync(join(dir, sub), { withFileTypes: true }).flatMap((e) =>
       e.isDirectory() ? odd(join(sub, e.name)) : e.isFile() ? [] : [join(sub, e.name)],
@@ -152,7 +177,11 @@ async function loadSql(p, sqlFile) {
   await ensureDatabase(p);
   const input = openSync(sqlFile, 'r');
   try {
-    await runClient('mariadb', ['--no-defaults', `--socket=${mariadbSocket(p)}`, '-uroot', '--default-character-set=utf8mb4', p.dbName], { stdin: input });
+    await runClient(
+      'mariadb',
+      ['--no-defaults', `--socket=${mariadbSocket(p)}`, '-uroot', '--default-character-set=utf8mb4', p.dbName],
+      { stdin: input },
+    );
   } finally {
     closeSync(input);
   }
@@ -167,7 +196,8 @@ export async function restore(p, file) {
   if (!file) throw new Error('name the backup file to restore');
   if (!existsSync(file)) throw new Error(`no such file: ${file}`);
   if (!isTar(file)) {
-    if (!isCompleteDump(file)) throw new Error(`${file} is neither a backup archive nor a complete mariadb-dump file; nothing was restored`);
+    if (!isCompleteDump(file))
+      throw new Error(`${file} is neither a backup archive nor a complete mariadb-dump file; nothing was restored`);
     await loadSql(p, file);
     return { photos: null };
   }
@@ -200,7 +230,9 @@ if (isMain) {
     const p = profile(name);
     if (cmd === 'dump') {
       const written = await dump(p, file ? resolve(file) : undefined);
-      log(`backed up ${p.dbName} (${p.name}) and ${written.photos} photo file(s) from ${p.uploadDir} to ${written.file}`);
+      log(
+        `backed up ${p.dbName} (${p.name}) and ${written.photos} photo file(s) from ${p.uploadDir} to ${written.file}`,
+      );
     } else if (cmd === 'restore') {
       const restored = await restore(p, file && resolve(file));
       log(

@@ -22,7 +22,13 @@ const LOAD = { connections: 10, duration: 10 };
 const BENCH_DIST = join(ROOT, 'backend', 'bench', 'dist');
 
 function node(script, args, env, { capture = false } = {}) {
-  const r = spawnSync(process.execPath, [script, ...args], { cwd: join(ROOT, 'backend'), env, stdio: capture ? ['ignore', 'pipe', 'inherit'] : 'inherit', encoding: 'utf8', maxBuffer: 1 << 26 });
+  const r = spawnSync(process.execPath, [script, ...args], {
+    cwd: join(ROOT, 'backend'),
+    env,
+    stdio: capture ? ['ignore', 'pipe', 'inherit'] : 'inherit',
+    encoding: 'utf8',
+    maxBuffer: 1 << 26,
+  });
   if (r.status !== 0) throw new Error(`${script} exited with ${r.status}`);
   return capture ? r.stdout : '';
 }
@@ -82,7 +88,9 @@ async function latency(session, path, count, warmUp = 3) {
   }
   times.sort((a, b) => a - b);
   const result = { n: times.length, p50: percentile(times, 0.5), p95: percentile(times, 0.95) };
-  log(`  ${path.split('?')[0].split('/').slice(-2).join('/')}: p50 ${result.p50.toFixed(1)} ms, p95 ${result.p95.toFixed(1)} ms (n=${result.n})`);
+  log(
+    `  ${path.split('?')[0].split('/').slice(-2).join('/')}: p50 ${result.p50.toFixed(1)} ms, p95 ${result.p95.toFixed(1)} ms (n=${result.n})`,
+  );
   return result;
 }
 
@@ -109,7 +117,9 @@ async function main() {
   log('building the back end and the bench code');
   buildBackend();
   const tsc = join(ROOT, 'node_modules', 'typescript', 'bin', 'tsc');
-  const built = spawnSync(process.execPath, [tsc, '-p', join(ROOT, 'backend', 'bench', 'tsconfig.json')], { stdio: 'inherit' });
+  const built = spawnSync(process.execPath, [tsc, '-p', join(ROOT, 'backend', 'bench', 'tsconfig.json')], {
+    stdio: 'inherit',
+  });
   if (built.status !== 0) throw new Error('the bench code did not compile');
 
   log(`bench database on port ${p.dbPort} (${REUSE ? 'reused' : 'fresh'})`);
@@ -118,39 +128,66 @@ async function main() {
   sqlAsRoot(p, 'SET GLOBAL innodb_buffer_pool_size = 3221225472');
   const smtp = await startFakeSmtp(p, { clearOutbox: true });
   const env = backendEnv(p, { NODE_ENV: 'development' });
-  const server = spawn(process.execPath, [join(BENCH_DIST, 'bench', 'bench-server.js')], { cwd: join(ROOT, 'backend'), env, stdio: ['ignore', 'inherit', 'inherit'] });
+  const server = spawn(process.execPath, [join(BENCH_DIST, 'bench', 'bench-server.js')], {
+    cwd: join(ROOT, 'backend'),
+    env,
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
   const base = `http://127.0.0.1:${p.port}`;
   const results = {};
   try {
-    await waitFor(async () => (await fetch(`${base}/api/health`).catch(() => null))?.ok ?? false, { timeoutMs: 60_000, what: 'the bench server' });
+    await waitFor(async () => (await fetch(`${base}/api/health`).catch(() => null))?.ok ?? false, {
+      timeoutMs: 60_000,
+      what: 'the bench server',
+    });
     const owner = new Session(base);
     await owner.refreshCsrf();
     const credentials = { email: 'bench-owner@example.test', password: 'bench passphrase for the crew' };
-    const db = await mariadb.createConnection({ host: '127.0.0.1', port: p.dbPort, user: p.dbUser, password: p.secrets.dbPassword, database: p.dbName });
-    const [{ n: existing }] = await db.query("SELECT COUNT(*) AS n FROM users WHERE email = 'bench-owner@example.test'");
+    const db = await mariadb.createConnection({
+      host: '127.0.0.1',
+      port: p.dbPort,
+      user: p.dbUser,
+      password: p.secrets.dbPassword,
+      database: p.dbName,
+    });
+    const [{ n: existing }] = await db.query(
+      "SELECT COUNT(*) AS n FROM users WHERE email = 'bench-owner@example.test'",
+    );
     let crewId;
     if (REUSE && Number(existing) > 0) {
       await owner.request('POST', '/api/auth/sign-in', credentials);
       await owner.refreshCsrf();
       crewId = (await owner.request('GET', '/api/crews')).find((c) => c.name === 'Bench Crew').id;
       const [counts] = await db.query(
-        "SELECT (SELECT COUNT(*) FROM events) AS events, (SELECT COUNT(*) FROM finds) AS finds, (SELECT COUNT(*) FROM catches) AS catches, (SELECT COUNT(*) FROM journal_event) AS journalEvents",
+        'SELECT (SELECT COUNT(*) FROM events) AS events, (SELECT COUNT(*) FROM finds) AS finds, (SELECT COUNT(*) FROM catches) AS catches, (SELECT COUNT(*) FROM journal_event) AS journalEvents',
       );
-      results.generated = { events: Number(counts.events), finds: Number(counts.finds), catches: Number(counts.catches), journalEvents: Number(counts.journalEvents), seconds: NaN };
+      results.generated = {
+        events: Number(counts.events),
+        finds: Number(counts.finds),
+        catches: Number(counts.catches),
+        journalEvents: Number(counts.journalEvents),
+        seconds: NaN,
+      };
       log(`reusing the bench crew: ${results.generated.journalEvents} journal events`);
     } else {
       const me = await owner.request('POST', '/api/auth/sign-up', { ...credentials, displayName: 'Bench Owner' });
       await owner.refreshCsrf();
       crewId = (await owner.request('POST', '/api/crews', { name: 'Bench Crew' })).id;
-      log(`generating the bench crew (scale ${SCALE}: ${Math.round(200 * SCALE)} events, ${Math.round(20_000 * SCALE)} finds, ${Math.round(1_000_000 * SCALE)} catches)`);
-      results.generated = JSON.parse(node(join(BENCH_DIST, 'bench', 'generate.js'), [crewId, me.user.id, String(SCALE)], env, { capture: true }));
+      log(
+        `generating the bench crew (scale ${SCALE}: ${Math.round(200 * SCALE)} events, ${Math.round(20_000 * SCALE)} finds, ${Math.round(1_000_000 * SCALE)} catches)`,
+      );
+      results.generated = JSON.parse(
+        node(join(BENCH_DIST, 'bench', 'generate.js'), [crewId, me.user.id, String(SCALE)], env, { capture: true }),
+      );
       log(`generated ${results.generated.journalEvents} journal events in ${results.generated.seconds.toFixed(0)} s`);
     }
     const crew = { id: crewId };
 
     log('rebuilding the read models (and a bulk INSERT of as many rows)');
     results.rebuild = JSON.parse(node(join(BENCH_DIST, 'bench', 'rebuild-bench.js'), [], env, { capture: true }));
-    log(`rebuild: ${results.rebuild.events} events in ${results.rebuild.rebuildMs} ms; bulk INSERT of as many rows: ${results.rebuild.bulkMs} ms`);
+    log(
+      `rebuild: ${results.rebuild.events} events in ${results.rebuild.rebuildMs} ms; bulk INSERT of as many rows: ${results.rebuild.bulkMs} ms`,
+    );
 
     const lakes = await owner.request('GET', `/api/crews/${crew.id}/lakes`);
     const lakeId = lakes[0].id;
@@ -160,7 +197,12 @@ async function main() {
       hitRates: await latency(owner, `/api/crews/${crew.id}/reports/hit-rates?${q}`, LATENCY_REQUESTS),
       hitRatesAdHoc: await latency(owner, `/api/crews/${crew.id}/bench/ad-hoc/hit-rates?${q}`, AD_HOC_REQUESTS, 1),
       comparison: await latency(owner, `/api/crews/${crew.id}/reports/lake-comparison?${q}`, LATENCY_REQUESTS),
-      comparisonAdHoc: await latency(owner, `/api/crews/${crew.id}/bench/ad-hoc/lake-comparison?${q}`, AD_HOC_REQUESTS, 1),
+      comparisonAdHoc: await latency(
+        owner,
+        `/api/crews/${crew.id}/bench/ad-hoc/lake-comparison?${q}`,
+        AD_HOC_REQUESTS,
+        1,
+      ),
       bareSelect: await latency(owner, `/api/crews/${crew.id}/bench/bare-select?${q}`, LATENCY_REQUESTS),
     };
 
@@ -169,13 +211,24 @@ async function main() {
     const event = events[events.length - 1];
     const days = await owner.request('GET', `/api/crews/${crew.id}/events/${event.id}/competition-days`);
     const finds = await owner.request('GET', `/api/crews/${crew.id}/finds?eventId=${event.id}&limit=5`);
-    const catchBody = { competitionDayId: days[0].id, caughtAt: '10:30', findId: finds[0].id, species: 'largemouth', weightLb: 2.5, fate: 'released' };
+    const catchBody = {
+      competitionDayId: days[0].id,
+      caughtAt: '10:30',
+      findId: finds[0].id,
+      species: 'largemouth',
+      weightLb: 2.5,
+      fate: 'released',
+    };
     results.logCatch = await load(`${base}/api/crews/${crew.id}/catches`, owner, catchBody);
-    log(`  log catch: ${results.logCatch.requests.average} req/s, p99 ${results.logCatch.latency.p99} ms, ${results.logCatch['2xx']} ok, ${results.logCatch.non2xx} not`);
+    log(
+      `  log catch: ${results.logCatch.requests.average} req/s, p99 ${results.logCatch.latency.p99} ms, ${results.logCatch['2xx']} ok, ${results.logCatch.non2xx} not`,
+    );
     const loadEnded = Date.now();
     await waitFor(
       async () => {
-        const [row] = await db.query("SELECT (SELECT MAX(seq) FROM journal_event) - (SELECT last_seq FROM projection_checkpoint WHERE name = 'journal') AS behind");
+        const [row] = await db.query(
+          "SELECT (SELECT MAX(seq) FROM journal_event) - (SELECT last_seq FROM projection_checkpoint WHERE name = 'journal') AS behind",
+        );
         return Number(row.behind) <= 0;
       },
       { timeoutMs: 120_000, intervalMs: 20, what: 'the projection to catch up' },
@@ -197,12 +250,48 @@ function report(r) {
   const rebuildRate = (r.rebuild.events / r.rebuild.rebuildMs) * 1000;
   const bulkRate = (r.rebuild.bulkRows / r.rebuild.bulkMs) * 1000;
   const rows = [
-    ['hit rates (read model)', `p50 ${fmt(l.hitRates.p50)} ms, p95 ${fmt(l.hitRates.p95)} ms (n=${l.hitRates.n})`, `ad hoc GROUP BY p50 ${fmt(l.hitRatesAdHoc.p50)} ms, p95 ${fmt(l.hitRatesAdHoc.p95)} ms (n=${l.hitRatesAdHoc.n})`, `${fmt(l.hitRatesAdHoc.p50 / l.hitRates.p50)}× faster`, '≥ 20×'],
-    ['hit rates vs bare SELECT', `p50 ${fmt(l.hitRates.p50)} ms`, `bare SELECT p50 ${fmt(l.bareSelect.p50)} ms, p95 ${fmt(l.bareSelect.p95)} ms`, `${fmt(l.hitRates.p50 / l.bareSelect.p50, 2)}× the bare SELECT`, '≤ 1.5×'],
-    ['lake comparison (read model)', `p50 ${fmt(l.comparison.p50)} ms, p95 ${fmt(l.comparison.p95)} ms (n=${l.comparison.n})`, `ad hoc GROUP BY p50 ${fmt(l.comparisonAdHoc.p50)} ms, p95 ${fmt(l.comparisonAdHoc.p95)} ms (n=${l.comparisonAdHoc.n})`, `${fmt(l.comparisonAdHoc.p50 / l.comparison.p50)}× faster`, '≥ 20×'],
-    ['lake comparison vs bare SELECT', `p50 ${fmt(l.comparison.p50)} ms`, `bare SELECT p50 ${fmt(l.bareSelect.p50)} ms`, `${fmt(l.comparison.p50 / l.bareSelect.p50, 2)}× the bare SELECT`, '≤ 1.5×'],
-    ['projection rebuild', `${r.rebuild.events} events in ${fmt(r.rebuild.rebuildMs / 1000, 2)} s = ${fmt(rebuildRate, 0)} events/s`, `bulk INSERT of ${r.rebuild.bulkRows} rows: ${fmt(bulkRate, 0)} rows/s`, `${fmt(rebuildRate / bulkRate, 2)}× the bulk INSERT rate`, '≥ 100,000 events/s'],
-    ['log catch (incl. projection)', `${fmt(r.logCatch.requests.average, 0)} req/s, p50 ${r.logCatch.latency.p50} ms, p99 ${r.logCatch.latency.p99} ms, ${r.logCatch['2xx']} ok / ${r.logCatch.non2xx} not`, `bare Nest route: ${fmt(r.bare.requests.average, 0)} req/s, p99 ${r.bare.latency.p99} ms`, `${fmt(r.logCatch.requests.average / r.bare.requests.average, 2)}× the bare route; projection caught up ${r.projectionLagMs} ms after the load`, '≥ 800 req/s, p99 ≤ 50 ms'],
+    [
+      'hit rates (read model)',
+      `p50 ${fmt(l.hitRates.p50)} ms, p95 ${fmt(l.hitRates.p95)} ms (n=${l.hitRates.n})`,
+      `ad hoc GROUP BY p50 ${fmt(l.hitRatesAdHoc.p50)} ms, p95 ${fmt(l.hitRatesAdHoc.p95)} ms (n=${l.hitRatesAdHoc.n})`,
+      `${fmt(l.hitRatesAdHoc.p50 / l.hitRates.p50)}× faster`,
+      '≥ 20×',
+    ],
+    [
+      'hit rates vs bare SELECT',
+      `p50 ${fmt(l.hitRates.p50)} ms`,
+      `bare SELECT p50 ${fmt(l.bareSelect.p50)} ms, p95 ${fmt(l.bareSelect.p95)} ms`,
+      `${fmt(l.hitRates.p50 / l.bareSelect.p50, 2)}× the bare SELECT`,
+      '≤ 1.5×',
+    ],
+    [
+      'lake comparison (read model)',
+      `p50 ${fmt(l.comparison.p50)} ms, p95 ${fmt(l.comparison.p95)} ms (n=${l.comparison.n})`,
+      `ad hoc GROUP BY p50 ${fmt(l.comparisonAdHoc.p50)} ms, p95 ${fmt(l.comparisonAdHoc.p95)} ms (n=${l.comparisonAdHoc.n})`,
+      `${fmt(l.comparisonAdHoc.p50 / l.comparison.p50)}× faster`,
+      '≥ 20×',
+    ],
+    [
+      'lake comparison vs bare SELECT',
+      `p50 ${fmt(l.comparison.p50)} ms`,
+      `bare SELECT p50 ${fmt(l.bareSelect.p50)} ms`,
+      `${fmt(l.comparison.p50 / l.bareSelect.p50, 2)}× the bare SELECT`,
+      '≤ 1.5×',
+    ],
+    [
+      'projection rebuild',
+      `${r.rebuild.events} events in ${fmt(r.rebuild.rebuildMs / 1000, 2)} s = ${fmt(rebuildRate, 0)} events/s`,
+      `bulk INSERT of ${r.rebuild.bulkRows} rows: ${fmt(bulkRate, 0)} rows/s`,
+      `${fmt(rebuildRate / bulkRate, 2)}× the bulk INSERT rate`,
+      '≥ 100,000 events/s',
+    ],
+    [
+      'log catch (incl. projection)',
+      `${fmt(r.logCatch.requests.average, 0)} req/s, p50 ${r.logCatch.latency.p50} ms, p99 ${r.logCatch.latency.p99} ms, ${r.logCatch['2xx']} ok / ${r.logCatch.non2xx} not`,
+      `bare Nest route: ${fmt(r.bare.requests.average, 0)} req/s, p99 ${r.bare.latency.p99} ms`,
+      `${fmt(r.logCatch.requests.average / r.bare.requests.average, 2)}× the bare route; projection caught up ${r.projectionLagMs} ms after the load`,
+      '≥ 800 req/s, p99 ≤ 50 ms',
+    ],
   ];
   const head = ['measure', 'Shoalbook', 'side by side', 'ratio', 'target'];
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
@@ -219,7 +308,9 @@ function report(r) {
 main().then(
   () => process.exit(0),
   (e) => {
-    process.stderr.write(`bench failed: ${e instanceof Error ? `${e.stack}${e.cause ? `\ncause: ${e.cause.stack ?? e.cause}` : ''}` : String(e)}\n`);
+    process.stderr.write(
+      `bench failed: ${e instanceof Error ? `${e.stack}${e.cause ? `\ncause: ${e.cause.stack ?? e.cause}` : ''}` : String(e)}\n`,
+    );
     process.exit(1);
   },
 );

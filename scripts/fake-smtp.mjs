@@ -28,7 +28,12 @@ const server = new SMTPServer({
           receivedAt: new Date().toISOString(),
           envelopeTo: session.envelope.rcptTo.map((r) => r.address),
           from: mail.from?.text ?? '',
-          to: mail.to ? [].concat(mail.to).map((t) => t.text).join(', ') : '',
+          to: mail.to
+            ? []
+                .concat(mail.to)
+                .map((t) => t.text)
+                .join(', ')
+            : '',
           subject: mail.subject ?? '',
           text: mail.text ?? '',
           html: typeof mail.html === 'string' ? mail.html : '',
@@ -40,7 +45,9 @@ const server = new SMTPServer({
   },
 });
 server.on('error', (e) => console.error(`fake SMTP error: ${e.message}`));
-server.listen(Number(port), '127.0.0.1', () => console.log(`fake SMTP listening on 127.0.0.1:${port}, outbox ${outboxDir}`));
+server.listen(Number(port), '127.0.0.1', () =>
+  console.log(`fake SMTP listening on 127.0.0.1:${port}, outbox ${outboxDir}`),
+);
 const stop = () => server.close(() => process.exit(0));
 process.on('SIGTERM', stop);
 process.on('SIGINT', stop);

@@ -43,7 +43,9 @@ try {
   ensureSystemPackages();
   p = profile('demo');
   if (await portOpen(p.port)) {
-    fail(`port ${p.port} is already in use: is Shoalbook already running? Stop it with Ctrl-C, or set PORT to a free port.`);
+    fail(
+      `port ${p.port} is already in use: is Shoalbook already running? Stop it with Ctrl-C, or set PORT to a free port.`,
+    );
   }
   buildAll();
   log('starting MariaDB and running migrations …');
@@ -60,7 +62,9 @@ try {
   });
   const secs = ((Date.now() - started) / 1000).toFixed(1);
   log(`Shoalbook is running on http://127.0.0.1:${p.port}  (ready in ${secs} s)`);
-  log(`API docs: http://127.0.0.1:${p.port}/api/docs   e-mail outbox (development only): http://127.0.0.1:${p.port}/dev/outbox`);
+  log(
+    `API docs: http://127.0.0.1:${p.port}/api/docs   e-mail outbox (development only): http://127.0.0.1:${p.port}/dev/outbox`,
+  );
   log('Demo accounts (password: shoalbook-demo):');
   for (const [email, what] of DEMO_ACCOUNTS) log(`  ${email.padEnd(18)} ${what}`);
   log('Press Ctrl-C to stop.');

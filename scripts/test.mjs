@@ -36,7 +36,14 @@ for (const s of SUITES) {
   const t0 = Date.now();
   const r = spawnSync(
     process.execPath,
-    [join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', ...s.args, '--reporter=default', '--reporter=json', `--outputFile=${out}`],
+    [
+      join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'),
+      'run',
+      ...s.args,
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile=${out}`,
+    ],
     { cwd: join(ROOT, s.dir), stdio: 'inherit', env: { ...process.env, FORCE_COLOR: '1' } },
   );
   let passed = 0;
@@ -55,7 +62,10 @@ await stopMariadb(p).catch(() => {});
 const passed = tally.reduce((a, t) => a + t.passed, 0);
 const failed = tally.reduce((a, t) => a + t.failed, 0);
 log('summary:');
-for (const t of tally) log(`  ${t.name.padEnd(20)} ${String(t.passed).padStart(4)} passed ${String(t.failed).padStart(3)} failed  (${t.secs.toFixed(1)} s)`);
+for (const t of tally)
+  log(
+    `  ${t.name.padEnd(20)} ${String(t.passed).padStart(4)} passed ${String(t.failed).padStart(3)} failed  (${t.secs.toFixed(1)} s)`,
+  );
 log(`total time ${((Date.now() - started) / 1000).toFixed(1)} s`);
 process.stdout.write(`${passed} passed, ${failed} failed\n`);
 process.exit(failed > 0 ? 1 : 0);

@@ -62,7 +62,21 @@ function plainLoopHitRates(finds, catches, keyOf) {
     const key = keyOf(f);
     const s = stats.get(f.id);
     let g = groups.get(key);
-    if (!g) groups.set(key, (g = { key, finds: 0, findsFished: 0, findsWithFish: 0, findsWithWeighedFish: 0, fish: 0, fishWeightLb: 0, weighedFish: 0, weighedWeightLb: 0 }));
+    if (!g)
+      groups.set(
+        key,
+        (g = {
+          key,
+          finds: 0,
+          findsFished: 0,
+          findsWithFish: 0,
+          findsWithWeighedFish: 0,
+          fish: 0,
+          fishWeightLb: 0,
+          weighedFish: 0,
+          weighedWeightLb: 0,
+        }),
+      );
     g.finds++;
     if (f.fished || s.fish > 0) g.findsFished++;
     if (s.fish > 0) g.findsWithFish++;
@@ -74,8 +88,15 @@ function plainLoopHitRates(finds, catches, keyOf) {
   }
   const rows = [...groups.values()];
   const hit = shrinkRates(rows.map((g) => ({ key: g.key, successes: g.findsWithFish, trials: g.findsFished })));
-  const weighed = shrinkRates(rows.map((g) => ({ key: g.key, successes: g.findsWithWeighedFish, trials: g.findsFished })));
-  return rows.map((g, i) => ({ ...g, hitRate: hit[i], weighedHitRate: weighed[i], interval: wilsonInterval(g.findsWithFish, g.findsFished) }));
+  const weighed = shrinkRates(
+    rows.map((g) => ({ key: g.key, successes: g.findsWithWeighedFish, trials: g.findsFished })),
+  );
+  return rows.map((g, i) => ({
+    ...g,
+    hitRate: hit[i],
+    weighedHitRate: weighed[i],
+    interval: wilsonInterval(g.findsWithFish, g.findsFished),
+  }));
 }
 
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -92,7 +113,9 @@ const cases = [
   ['depthBand', { by: 'depthBand' }, (f) => depthBand(f.depthFt)],
 ];
 
-console.log(`hitRates bench: ${CATCHES.toLocaleString('en-US')} catches on ${FINDS.toLocaleString('en-US')} finds, median of ${RUNS} runs (after 2 warm-up runs each)`);
+console.log(
+  `hitRates bench: ${CATCHES.toLocaleString('en-US')} catches on ${FINDS.toLocaleString('en-US')} finds, median of ${RUNS} runs (after 2 warm-up runs each)`,
+);
 for (const [name, options, keyOf] of cases) {
   for (let i = 0; i < 2; i++) {
     hitRates(finds, catches, options);
@@ -113,12 +136,19 @@ for (const [name, options, keyOf] of cases) {
   const [ours, reference] = check;
   for (const g of ours) {
     const r = reference.find((x) => x.key === g.key);
-    if (!r || r.findsWithFish !== g.findsWithFish || r.fish !== g.fish || Math.abs(r.hitRate.shrunk - g.hitRate.shrunk) > 1e-12) {
+    if (
+      !r ||
+      r.findsWithFish !== g.findsWithFish ||
+      r.fish !== g.fish ||
+      Math.abs(r.hitRate.shrunk - g.hitRate.shrunk) > 1e-12
+    ) {
       throw new Error(`bench: results differ for group ${g.key}`);
     }
   }
   const libMs = median(library);
   const plainMs = median(plain);
   const rate = (ms) => Math.round(CATCHES / (ms / 1000)).toLocaleString('en-US');
-  console.log(`by ${name.padEnd(10)} hitRates ${libMs.toFixed(1).padStart(7)} ms (${rate(libMs)} rows/s) | plain loop ${plainMs.toFixed(1).padStart(7)} ms (${rate(plainMs)} rows/s) | ratio ${(libMs / plainMs).toFixed(2)}× | ${ours.length} groups`);
+  console.log(
+    `by ${name.padEnd(10)} hitRates ${libMs.toFixed(1).padStart(7)} ms (${rate(libMs)} rows/s) | plain loop ${plainMs.toFixed(1).padStart(7)} ms (${rate(plainMs)} rows/s) | ratio ${(libMs / plainMs).toFixed(2)}× | ${ours.length} groups`,
+  );
 }

@@ -7,7 +7,15 @@
 export { wilsonInterval, type ProportionInterval } from './stats/wilson.js';
 export { compareProportions, type SuccessCount, type ProportionComparison } from './stats/newcombe.js';
 export { fisherExactTwoSided } from './stats/fisher.js';
-export { shrinkRates, fitBetaPrior, MAX_PRIOR_STRENGTH, type RateGroup, type ShrunkRate, type BetaPrior, type GroupKey } from './stats/shrinkage.js';
+export {
+  shrinkRates,
+  fitBetaPrior,
+  MAX_PRIOR_STRENGTH,
+  type RateGroup,
+  type ShrunkRate,
+  type BetaPrior,
+  type GroupKey,
+} from './stats/shrinkage.js';
 export {
   hitRates,
   type FindInput,
@@ -25,8 +33,18 @@ export { countedBag, type BagFish, type BagRules, type CountedBag } from './weig
 export { units, KG_PER_LB, MM_PER_IN, M_PER_FT, OZ_PER_LB, type PoundsOunces } from './weigh-in/units.js';
 
 // Fish condition
-export { standardWeightG, STANDARD_WEIGHT_EQUATIONS, type BassSpecies, type StandardWeightEquation } from './condition/standard-weight.js';
-export { relativeWeight, weightLooksWrong, DEFAULT_PLAUSIBLE_RELATIVE_WEIGHT, type PlausibleRelativeWeight } from './condition/relative-weight.js';
+export {
+  standardWeightG,
+  STANDARD_WEIGHT_EQUATIONS,
+  type BassSpecies,
+  type StandardWeightEquation,
+} from './condition/standard-weight.js';
+export {
+  relativeWeight,
+  weightLooksWrong,
+  DEFAULT_PLAUSIBLE_RELATIVE_WEIGHT,
+  type PlausibleRelativeWeight,
+} from './condition/relative-weight.js';
 
 // Sun and moon
 export { sunMoonDay, type SunMoonDay } from './sky/sun-moon-day.js';

@@ -51,8 +51,16 @@ class BenchController {
   @Get('ad-hoc/lake-comparison')
   async adHocLakeComparison(@Param('crewId') crewId: string, @Query('lakeId') lakeId: string) {
     const rows = await this.adHoc(crewId, lakeId);
-    const eventRows = (await this.em.execute('SELECT id FROM events WHERE crew_id = ? AND lake_id = ? ORDER BY JSON_VALUE(competition_dates, "$[0]")', [crewId, lakeId])) as { id: string }[];
-    const cell = new Map(rows.map((r) => [`${String(r.event_id)}|${String(r.kind)}`, { successes: Number(r.producing), trials: Number(r.finds) }]));
+    const eventRows = (await this.em.execute(
+      'SELECT id FROM events WHERE crew_id = ? AND lake_id = ? ORDER BY JSON_VALUE(competition_dates, "$[0]")',
+      [crewId, lakeId],
+    )) as { id: string }[];
+    const cell = new Map(
+      rows.map((r) => [
+        `${String(r.event_id)}|${String(r.kind)}`,
+        { successes: Number(r.producing), trials: Number(r.finds) },
+      ]),
+    );
     const kinds = [...new Set(rows.map((r) => String(r.kind)))];
     const comparisons = [];
     for (const k of kinds)
@@ -66,7 +74,10 @@ class BenchController {
 
   @Get('bare-select')
   async bareSelect(@Param('crewId') crewId: string, @Query('lakeId') lakeId: string) {
-    return this.em.execute("SELECT * FROM rm_group_stats WHERE crew_id = ? AND lake_id = ? AND grouping = 'kind'", [crewId, lakeId]);
+    return this.em.execute("SELECT * FROM rm_group_stats WHERE crew_id = ? AND lake_id = ? AND grouping = 'kind'", [
+      crewId,
+      lakeId,
+    ]);
   }
 
   @Post('bare-write')

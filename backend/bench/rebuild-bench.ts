@@ -28,7 +28,28 @@ async function main(): Promise<void> {
     for (let i = 0; i < rebuild.events; i += chunk) {
       const rows: CatchRow[] = [];
       for (let j = i; j < Math.min(rebuild.events, i + chunk); j++) {
-        rows.push({ id: ids[j]!, crewId, lakeId: crewId, eventId: crewId, competitionDayId: crewId, dayDate: '2026-10-10', findId: crewId, caughtAtMs: 1_790_000_000_000 + j * 1000, weightLb: 2.5, weightUlb: 2_500_000, lengthIn: null, species: 'largemouth', fate: 'weighed', lure: 'jig', lat: null, lon: null, localMinutes: 420, minutesFromSunrise: 35, solunarPeriod: 'none', timeOfDay: 'early' });
+        rows.push({
+          id: ids[j]!,
+          crewId,
+          lakeId: crewId,
+          eventId: crewId,
+          competitionDayId: crewId,
+          dayDate: '2026-10-10',
+          findId: crewId,
+          caughtAtMs: 1_790_000_000_000 + j * 1000,
+          weightLb: 2.5,
+          weightUlb: 2_500_000,
+          lengthIn: null,
+          species: 'largemouth',
+          fate: 'weighed',
+          lure: 'jig',
+          lat: null,
+          lon: null,
+          localMinutes: 420,
+          minutesFromSunrise: 35,
+          solunarPeriod: 'none',
+          timeOfDay: 'early',
+        });
       }
       await em.transactional(async (tx) => {
         for (const sql of insertChunks(spec, rows)) await tx.execute(sql);
@@ -36,7 +57,10 @@ async function main(): Promise<void> {
     }
     const bulkMs = Date.now() - started;
     await em.execute('DROP TABLE bench_bulk');
-    process.stdout.write(JSON.stringify({ events: rebuild.events, rebuildMs: rebuild.durationMs, bulkRows: rebuild.events, bulkMs }) + '\n');
+    process.stdout.write(
+      JSON.stringify({ events: rebuild.events, rebuildMs: rebuild.durationMs, bulkRows: rebuild.events, bulkMs }) +
+        '\n',
+    );
   } finally {
     await orm.close(true);
   }

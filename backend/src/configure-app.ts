@@ -67,6 +67,9 @@ export function configureApp(app: INestApplication): INestApplication {
       .build(),
     { operationIdFactory: (controller, method) => `${controller.replace(/Controller$/, '')}_${method}` },
   );
-  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, { jsonDocumentUrl: `${API_PREFIX}/docs-json`, raw: ['json'] });
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, {
+    jsonDocumentUrl: `${API_PREFIX}/docs-json`,
+    raw: ['json'],
+  });
   return app;
 }

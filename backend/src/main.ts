@@ -11,7 +11,9 @@ async function bootstrap(): Promise<void> {
   configureApp(app);
   const config = app.get(AppConfig);
   await app.listen(config.get('PORT'), '127.0.0.1');
-  new Logger('Shoalbook').log(`listening on ${config.appUrl} (API under ${config.appUrl}/api, docs at ${config.appUrl}/api/docs)`);
+  new Logger('Shoalbook').log(
+    `listening on ${config.appUrl} (API under ${config.appUrl}/api, docs at ${config.appUrl}/api/docs)`,
+  );
 }
 
 bootstrap().catch((e: unknown) => {

@@ -21,7 +21,14 @@ describe('site administration', () => {
     const res = await admin.get('/api/admin/users');
     expect(res.status).toBe(200);
     const row = res.body.find((u: { id: string }) => u.id === user.userId);
-    expect(row).toEqual({ id: user.userId, email: user.email, displayName: 'Test Angler', siteRole: 'user', disabled: false, createdAt: expect.any(String) });
+    expect(row).toEqual({
+      id: user.userId,
+      email: user.email,
+      displayName: 'Test Angler',
+      siteRole: 'user',
+      disabled: false,
+      createdAt: expect.any(String),
+    });
     expect(Object.keys(row)).not.toContain('passwordHash');
     expect((await user.get('/api/admin/users')).status).toBe(403);
     expect((await new ApiClient(app).get('/api/admin/users')).status).toBe(401);
@@ -44,13 +51,18 @@ describe('site administration', () => {
     const user = await newUser(app);
     expect((await admin.patch(`/api/admin/users/${user.userId}`, { disabled: 'yes' })).status).toBe(400);
     expect((await admin.patch(`/api/admin/users/${user.userId}`, { siteRole: 'owner' })).status).toBe(400);
-    expect((await admin.patch('/api/admin/users/00000000-0000-4000-8000-000000000000', { disabled: true })).status).toBe(404);
+    expect(
+      (await admin.patch('/api/admin/users/00000000-0000-4000-8000-000000000000', { disabled: true })).status,
+    ).toBe(404);
     expect((await user.patch(`/api/admin/users/${user.userId}`, { siteRole: 'admin' })).status).toBe(403);
     const self = await admin.patch(`/api/admin/users/${admin.userId}`, { disabled: true });
     expect(self.status).toBe(409);
     expect(self.body.code).toBe('self_lockout');
     const rows = await testEm(app).find(User, { id: { $in: [user.userId, admin.userId] } });
-    expect(rows.map((u) => [u.siteRole, u.disabled]).sort()).toEqual([['admin', false], ['user', false]]);
+    expect(rows.map((u) => [u.siteRole, u.disabled]).sort()).toEqual([
+      ['admin', false],
+      ['user', false],
+    ]);
   });
 
   it('opens no crew to the site admin', async () => {

@@ -8,7 +8,12 @@ import { ApiClient, GOOD_PASSWORD, newUser, uniqueEmail } from './utils/api-clie
 import { createTestApp, testEm } from './utils/test-app';
 
 function expectApiError(body: unknown, statusCode: number) {
-  expect(body).toMatchObject({ statusCode, error: expect.any(String), message: expect.any(String), requestId: expect.any(String) });
+  expect(body).toMatchObject({
+    statusCode,
+    error: expect.any(String),
+    message: expect.any(String),
+    requestId: expect.any(String),
+  });
   expect(JSON.stringify(body)).not.toMatch(/\bat [\w.<>]+ \(|\.ts:\d+|\.js:\d+|stack|select |insert into/i);
 }
 
@@ -27,9 +32,18 @@ describe('accounts and sessions', () => {
     it('creates the account, signs in with an httpOnly SameSite=Lax cookie, and GET /me answers', async () => {
       const client = new ApiClient(app);
       const email = uniqueEmail('signup');
-      const res = await client.post('/api/auth/sign-up', { email: `  ${email.toUpperCase()} `, password: GOOD_PASSWORD, displayName: '  Jo Tester ' });
+      const res = await client.post('/api/auth/sign-up', {
+        email: `  ${email.toUpperCase()} `,
+        password: GOOD_PASSWORD,
+        displayName: '  Jo Tester ',
+      });
       expect(res.status).toBe(201);
-      expect(res.body.user).toMatchObject({ email, displayName: 'Jo Tester', siteRole: 'user', units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } });
+      expect(res.body.user).toMatchObject({
+        email,
+        displayName: 'Jo Tester',
+        siteRole: 'user',
+        units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' },
+      });
       expect(res.body.crews).toEqual([]);
       const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('sb_session='))!;
       expect(cookie).toMatch(/HttpOnly/i);
@@ -56,7 +70,11 @@ describe('accounts and sessions', () => {
 
     it('refuses a duplicate e-mail (any case) with 409 and creates nothing', async () => {
       const first = await newUser(app);
-      const res = await new ApiClient(app).post('/api/auth/sign-up', { email: first.email.toUpperCase(), password: GOOD_PASSWORD, displayName: 'Copy' });
+      const res = await new ApiClient(app).post('/api/auth/sign-up', {
+        email: first.email.toUpperCase(),
+        password: GOOD_PASSWORD,
+        displayName: 'Copy',
+      });
       expect(res.status).toBe(409);
       expectApiError(res.body, 409);
       expect(res.body.code).toBe('email_taken');
@@ -69,12 +87,32 @@ describe('accounts and sessions', () => {
       ['an invalid e-mail', { email: 'not-an-address', password: GOOD_PASSWORD, displayName: 'X' }, 'email'],
       ['a number for the e-mail', { email: 12345, password: GOOD_PASSWORD, displayName: 'X' }, 'email'],
       ['a short password', { email: 'x@example.test', password: 'short', displayName: 'X' }, 'password'],
-      ['a 129-character password', { email: 'x@example.test', password: 'p'.repeat(64) + 'q'.repeat(65), displayName: 'X' }, 'password'],
+      [
+        'a 129-character password',
+        { email: 'x@example.test', password: 'p'.repeat(64) + 'q'.repeat(65), displayName: 'X' },
+        'password',
+      ],
       ['a common password', { email: 'x@example.test', password: 'qwertyuiop', displayName: 'X' }, 'password'],
-      ['an 81-character name', { email: 'x@example.test', password: GOOD_PASSWORD, displayName: 'n'.repeat(81) }, 'displayName'],
+      [
+        'an 81-character name',
+        { email: 'x@example.test', password: GOOD_PASSWORD, displayName: 'n'.repeat(81) },
+        'displayName',
+      ],
       ['a blank name', { email: 'x@example.test', password: GOOD_PASSWORD, displayName: '   ' }, 'displayName'],
-      ['a 255-character e-mail', { email: `${'a'.repeat(64)}@${'b'.repeat(63)}.${'c'.repeat(63)}.${'d'.repeat(58)}.test`, password: GOOD_PASSWORD, displayName: 'X' }, 'email'],
-      ['an unknown field', { email: 'x@example.test', password: GOOD_PASSWORD, displayName: 'X', siteRole: 'admin' }, 'siteRole'],
+      [
+        'a 255-character e-mail',
+        {
+          email: `${'a'.repeat(64)}@${'b'.repeat(63)}.${'c'.repeat(63)}.${'d'.repeat(58)}.test`,
+          password: GOOD_PASSWORD,
+          displayName: 'X',
+        },
+        'email',
+      ],
+      [
+        'an unknown field',
+        { email: 'x@example.test', password: GOOD_PASSWORD, displayName: 'X', siteRole: 'admin' },
+        'siteRole',
+      ],
     ];
     it.each(badBodies)('refuses %s with 400, a field error, and no account', async (_label, body, field) => {
       const res = await new ApiClient(app).post('/api/auth/sign-up', body);
@@ -87,13 +125,21 @@ describe('accounts and sessions', () => {
     it('refuses malformed JSON, a JSON array and an oversized body with clear 4xx answers', async () => {
       const client = new ApiClient(app);
       const token = await client.refreshCsrf();
-      const malformed = await client.agent.post('/api/auth/sign-up').set(CSRF_HEADER, token).set('Content-Type', 'application/json').send('{"email": "x@example.test",');
+      const malformed = await client.agent
+        .post('/api/auth/sign-up')
+        .set(CSRF_HEADER, token)
+        .set('Content-Type', 'application/json')
+        .send('{"email": "x@example.test",');
       expect(malformed.status).toBe(400);
       expect(malformed.body).toMatchObject({ code: 'invalid_json', message: 'The request body is not valid JSON.' });
       const array = await client.post('/api/auth/sign-up', [{ email: 'x@example.test' }]);
       expect(array.status).toBe(400);
       expect(array.body.message).toMatch(/JSON object/);
-      const huge = await client.post('/api/auth/sign-up', { email: 'x@example.test', password: GOOD_PASSWORD, displayName: 'x'.repeat(70_000) });
+      const huge = await client.post('/api/auth/sign-up', {
+        email: 'x@example.test',
+        password: GOOD_PASSWORD,
+        displayName: 'x'.repeat(70_000),
+      });
       expect(huge.status).toBe(413);
       expectApiError(huge.body, 413);
       expect(await testEm(app).count(User, { email: 'x@example.test' })).toBe(0);
@@ -103,7 +149,9 @@ describe('accounts and sessions', () => {
   describe('CSRF', () => {
     it('refuses a state-changing request without the token (403 csrf_invalid) and changes nothing', async () => {
       const email = uniqueEmail('csrf');
-      const res = await request(app.getHttpServer()).post('/api/auth/sign-up').send({ email, password: GOOD_PASSWORD, displayName: 'No Token' });
+      const res = await request(app.getHttpServer())
+        .post('/api/auth/sign-up')
+        .send({ email, password: GOOD_PASSWORD, displayName: 'No Token' });
       expect(res.status).toBe(403);
       expectApiError(res.body, 403);
       expect(res.body.code).toBe('csrf_invalid');
@@ -115,7 +163,10 @@ describe('accounts and sessions', () => {
       const foreignToken = await other.refreshCsrf();
       const client = new ApiClient(app);
       await client.refreshCsrf();
-      const forged = await client.agent.post('/api/auth/sign-in').set(CSRF_HEADER, foreignToken).send({ email: 'a@example.test', password: 'whatever-1234' });
+      const forged = await client.agent
+        .post('/api/auth/sign-in')
+        .set(CSRF_HEADER, foreignToken)
+        .send({ email: 'a@example.test', password: 'whatever-1234' });
       expect(forged.status).toBe(403);
 
       const user = await newUser(app);
@@ -133,8 +184,14 @@ describe('accounts and sessions', () => {
   describe('sign-in and sign-out', () => {
     it('answers a wrong password and an unknown e-mail with the same 401', async () => {
       const user = await newUser(app);
-      const wrong = await new ApiClient(app).post('/api/auth/sign-in', { email: user.email, password: 'not the right password' });
-      const unknown = await new ApiClient(app).post('/api/auth/sign-in', { email: uniqueEmail('nobody'), password: 'not the right password' });
+      const wrong = await new ApiClient(app).post('/api/auth/sign-in', {
+        email: user.email,
+        password: 'not the right password',
+      });
+      const unknown = await new ApiClient(app).post('/api/auth/sign-in', {
+        email: uniqueEmail('nobody'),
+        password: 'not the right password',
+      });
       for (const res of [wrong, unknown]) {
         expect(res.status).toBe(401);
         expectApiError(res.body, 401);
@@ -166,7 +223,11 @@ describe('accounts and sessions', () => {
 
     it('ends sessions that were idle too long or reached their absolute end', async () => {
       const user = await newUser(app);
-      await testEm(app).nativeUpdate(Session, { user: user.userId }, { lastSeenAt: new Date(Date.now() - 8 * 86_400_000) });
+      await testEm(app).nativeUpdate(
+        Session,
+        { user: user.userId },
+        { lastSeenAt: new Date(Date.now() - 8 * 86_400_000) },
+      );
       expect((await user.get('/api/auth/me')).status).toBe(401);
       await user.signIn();
       await testEm(app).nativeUpdate(Session, { user: user.userId }, { expiresAt: new Date(Date.now() - 1000) });
@@ -185,7 +246,10 @@ describe('accounts and sessions', () => {
       const user = await newUser(app);
       const ok = await user.patch('/api/auth/me', { displayName: 'Renamed', units: { weight: 'kg', depth: 'm' } });
       expect(ok.status).toBe(200);
-      expect(ok.body.user).toMatchObject({ displayName: 'Renamed', units: { weight: 'kg', length: 'in', depth: 'm', temperature: 'F' } });
+      expect(ok.body.user).toMatchObject({
+        displayName: 'Renamed',
+        units: { weight: 'kg', length: 'in', depth: 'm', temperature: 'F' },
+      });
       const bad = await user.patch('/api/auth/me', { displayName: 'Again', units: { weight: 'stone' } });
       expect(bad.status).toBe(400);
       expect(bad.body.fieldErrors['units.weight']).toBeDefined();
@@ -200,12 +264,18 @@ describe('accounts and sessions', () => {
       const user = await newUser(app);
       const elsewhere = new ApiClient(app);
       await elsewhere.signIn(user.email, user.password);
-      const wrong = await user.post('/api/auth/change-password', { currentPassword: 'not my password', newPassword: 'a brand new passphrase' });
+      const wrong = await user.post('/api/auth/change-password', {
+        currentPassword: 'not my password',
+        newPassword: 'a brand new passphrase',
+      });
       expect(wrong.status).toBe(400);
       expect(wrong.body.fieldErrors.currentPassword).toBeDefined();
       expect((await elsewhere.get('/api/auth/me')).status).toBe(200);
 
-      const res = await user.post('/api/auth/change-password', { currentPassword: user.password, newPassword: 'a brand new passphrase' });
+      const res = await user.post('/api/auth/change-password', {
+        currentPassword: user.password,
+        newPassword: 'a brand new passphrase',
+      });
       expect(res.status).toBe(204);
       expect((await user.get('/api/auth/me')).status).toBe(200);
       expect((await elsewhere.get('/api/auth/me')).status).toBe(401);

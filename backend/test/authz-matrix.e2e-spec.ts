@@ -20,12 +20,19 @@ interface Operation {
 
 /** Bodies that let an allowed caller's request succeed (others get {} and may answer 400: still "passed"). */
 const SAMPLE_BODIES: Record<string, () => object> = {
-  'POST /api/auth/sign-up': () => ({ email: `matrix-${randomUUID().slice(0, 8)}@example.test`, password: 'matrix passphrase one', displayName: 'Matrix' }),
+  'POST /api/auth/sign-up': () => ({
+    email: `matrix-${randomUUID().slice(0, 8)}@example.test`,
+    password: 'matrix passphrase one',
+    displayName: 'Matrix',
+  }),
   'PATCH /api/auth/me': () => ({ displayName: 'Matrix Renamed' }),
   'POST /api/crews': () => ({ name: 'Matrix Crew' }),
   'PATCH /api/crews/{crewId}': () => ({ name: 'Crew A' }),
   'PATCH /api/crews/{crewId}/members/{userId}': () => ({ role: 'viewer' }),
-  'POST /api/crews/{crewId}/invites': () => ({ email: `matrix-invite-${randomUUID().slice(0, 8)}@example.test`, role: 'viewer' }),
+  'POST /api/crews/{crewId}/invites': () => ({
+    email: `matrix-invite-${randomUUID().slice(0, 8)}@example.test`,
+    role: 'viewer',
+  }),
   'PATCH /api/admin/users/{userId}': () => ({ disabled: false }),
 };
 
@@ -51,7 +58,13 @@ describe('authorisation matrix from the OpenAPI document', () => {
     const other = await crewWithMembers(app, 'Crew B');
     const admin = await newUser(app, 'admin');
     await makeAdmin(app, admin.userId);
-    actors = { nonMember: other.owner.userId, viewer: crew.viewer.userId, angler: crew.angler.userId, owner: crew.owner.userId, admin: admin.userId };
+    actors = {
+      nonMember: other.owner.userId,
+      viewer: crew.viewer.userId,
+      angler: crew.angler.userId,
+      owner: crew.owner.userId,
+      admin: admin.userId,
+    };
     const doc = await request(app.getHttpServer()).get('/api/docs-json');
     expect(doc.status).toBe(200);
     operations = Object.entries(doc.body.paths as Record<string, Record<string, unknown>>).flatMap(([path, item]) =>
@@ -72,7 +85,10 @@ describe('authorisation matrix from the OpenAPI document', () => {
       cookie = `sb_session=${await app.get(SessionsService).create(em.getReference(User, actors[actor]), em)}`;
     }
     const res = await request(app.getHttpServer()).get('/api/auth/csrf').set('Cookie', cookie);
-    const csrfCookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('sb_csrf='))!.split(';')[0]!;
+    const csrfCookie = ([] as string[])
+      .concat(res.headers['set-cookie'] ?? [])
+      .find((c) => c.startsWith('sb_csrf='))!
+      .split(';')[0]!;
     return { cookie: [cookie, csrfCookie].filter(Boolean).join('; '), csrf: res.body.csrfToken as string };
   }
 
@@ -87,13 +103,27 @@ describe('authorisation matrix from the OpenAPI document', () => {
         return target.userId;
       },
       inviteId: async () => {
-        const invite = em.create(Invite, { crew: em.getReference(Crew, crew.crewId), email: `${randomUUID()}@example.test`, role: 'viewer', tokenHash: hashToken(randomToken()), invitedBy: em.getReference(User, crew.owner.userId), expiresAt: new Date(Date.now() + 86_400_000) });
+        const invite = em.create(Invite, {
+          crew: em.getReference(Crew, crew.crewId),
+          email: `${randomUUID()}@example.test`,
+          role: 'viewer',
+          tokenHash: hashToken(randomToken()),
+          invitedBy: em.getReference(User, crew.owner.userId),
+          expiresAt: new Date(Date.now() + 86_400_000),
+        });
         await em.flush();
         return invite.id;
       },
       token: async () => {
         const token = randomToken();
-        em.create(Invite, { crew: em.getReference(Crew, crew.crewId), email: `${randomUUID()}@example.test`, role: 'viewer', tokenHash: hashToken(token), invitedBy: em.getReference(User, crew.owner.userId), expiresAt: new Date(Date.now() + 86_400_000) });
+        em.create(Invite, {
+          crew: em.getReference(Crew, crew.crewId),
+          email: `${randomUUID()}@example.test`,
+          role: 'viewer',
+          tokenHash: hashToken(token),
+          invitedBy: em.getReference(User, crew.owner.userId),
+          expiresAt: new Date(Date.now() + 86_400_000),
+        });
         await em.flush();
         return token;
       },
@@ -123,10 +153,18 @@ describe('authorisation matrix from the OpenAPI document', () => {
       for (const actor of ACTORS) {
         const { cookie, csrf } = await credentials(actor);
         const url = await fillPath(op.path);
-        const req = (request(app.getHttpServer()) as unknown as Record<string, (u: string) => request.Test>)[op.method]!(url).set('Cookie', cookie).set(CSRF_HEADER, csrf);
-        const res = op.method === 'get' || op.method === 'delete' ? await req : await req.send(SAMPLE_BODIES[op.key]?.() ?? {});
+        const req = (request(app.getHttpServer()) as unknown as Record<string, (u: string) => request.Test>)[
+          op.method
+        ]!(url)
+          .set('Cookie', cookie)
+          .set(CSRF_HEADER, csrf);
+        const res =
+          op.method === 'get' || op.method === 'delete' ? await req : await req.send(SAMPLE_BODIES[op.key]?.() ?? {});
         const got = classify(res);
-        if (got !== expected[actor]) failures.push(`${op.key} as ${actor}: expected ${expected[actor]}, got ${got} (${res.status} ${JSON.stringify(res.body).slice(0, 120)})`);
+        if (got !== expected[actor])
+          failures.push(
+            `${op.key} as ${actor}: expected ${expected[actor]}, got ${got} (${res.status} ${JSON.stringify(res.body).slice(0, 120)})`,
+          );
       }
     }
     expect(failures).toEqual([]);

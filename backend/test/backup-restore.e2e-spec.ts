@@ -20,7 +20,12 @@ const UPLOAD_DIR = process.env.UPLOAD_DIR!;
 
 /** Run the backup script on the test profile (SHOALBOOK_TEST_PROFILE passes through the environment). */
 function backup(cmd: 'dump' | 'restore', file: string) {
-  const r = spawnSync(process.execPath, [join(ROOT, 'scripts', 'backup.mjs'), cmd, 'test', file], { cwd: ROOT, encoding: 'utf8', env: process.env, timeout: 120_000 });
+  const r = spawnSync(process.execPath, [join(ROOT, 'scripts', 'backup.mjs'), cmd, 'test', file], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    env: process.env,
+    timeout: 120_000,
+  });
   return { status: r.status, output: `${r.stdout}\n${r.stderr}` };
 }
 
@@ -56,13 +61,19 @@ describe('backup and restore round trip: database (mariadb-dump --single-transac
     rmSync(dir, { recursive: true, force: true });
   });
 
-  const image = (r: number) => sharp({ create: { width: 40, height: 30, channels: 3, background: { r, g: 90, b: 120 } } }).png().toBuffer();
+  const image = (r: number) =>
+    sharp({ create: { width: 40, height: 30, channels: 3, background: { r, g: 90, b: 120 } } })
+      .png()
+      .toBuffer();
   const photoBytes = async (id: string) => {
-    const res = await crew.viewer.agent.get(`${base}/photos/${id}`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await crew.viewer.agent
+      .get(`${base}/photos/${id}`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     return { status: res.status, body: res.body as Buffer };
   };
 
@@ -70,7 +81,16 @@ describe('backup and restore round trip: database (mariadb-dump --single-transac
     const lake = await createLake(crew.owner, crew.crewId, { name: 'Backup Lake' });
     const photo = await upload(crew.angler, `${base}/photos`, await image(30), 'shell-bed.png');
     expectOk(photo, 201);
-    const find = await crew.owner.post(`${base}/finds`, { lakeId: lake.id, name: 'Rock pile', lat: 32.9501, lon: -96.2002, kind: 'hard-bottom', subKind: 'rock', depthFt: 14, photoId: photo.body.id });
+    const find = await crew.owner.post(`${base}/finds`, {
+      lakeId: lake.id,
+      name: 'Rock pile',
+      lat: 32.9501,
+      lon: -96.2002,
+      kind: 'hard-bottom',
+      subKind: 'rock',
+      depthFt: 14,
+      photoId: photo.body.id,
+    });
     expectOk(find, 201);
     const journalBefore = await testEm(app).count(JournalEvent, { crewId: crew.crewId });
     const photoBefore = await photoBytes(photo.body.id);
@@ -108,7 +128,14 @@ describe('backup and restore round trip: database (mariadb-dump --single-transac
     const em = testEm(app);
     expect((await em.findOneOrFail(Lake, { id: lake.id })).name).toBe('Backup Lake');
     const back = await em.findOneOrFail(Find, { id: find.body.id });
-    expect(back).toMatchObject({ name: 'Rock pile', lat: 32.9501, lon: -96.2002, depthFt: 14, kind: 'hard-bottom', photoId: photo.body.id });
+    expect(back).toMatchObject({
+      name: 'Rock pile',
+      lat: 32.9501,
+      lon: -96.2002,
+      depthFt: 14,
+      kind: 'hard-bottom',
+      photoId: photo.body.id,
+    });
     expect(await em.count(Lake, { id: extra.id })).toBe(0);
     expect(await em.count(User, { id: later.owner.userId })).toBe(0);
     expect(await em.count(Photo, { id: laterPhoto.body.id })).toBe(0);
@@ -138,7 +165,9 @@ describe('backup and restore round trip: database (mariadb-dump --single-transac
     writeFileSync(join(dir, 'notes.txt'), 'not a backup');
     const other = join(dir, 'other.tar');
     tar(['--create', `--file=${other}`, '-C', dir, 'notes.txt']);
-    expect(backup('restore', other).output).toMatch(/not a Shoalbook backup: it holds notes\.txt instead of database\.sql and uploads\/; nothing was restored/);
+    expect(backup('restore', other).output).toMatch(
+      /not a Shoalbook backup: it holds notes\.txt instead of database\.sql and uploads\/; nothing was restored/,
+    );
 
     const linked = join(dir, 'linked');
     mkdirSync(join(linked, 'uploads'), { recursive: true });
@@ -146,7 +175,9 @@ describe('backup and restore round trip: database (mariadb-dump --single-transac
     spawnSync('ln', ['-s', '/etc/hostname', join(linked, 'uploads', 'ab')]);
     const withLink = join(dir, 'with-link.tar');
     tar(['--create', `--file=${withLink}`, '-C', linked, 'database.sql', 'uploads']);
-    expect(backup('restore', withLink).output).toMatch(/uploads\/ab is neither a file nor a folder; nothing was restored/);
+    expect(backup('restore', withLink).output).toMatch(
+      /uploads\/ab is neither a file nor a folder; nothing was restored/,
+    );
 
     const junk = join(dir, 'junk.sql');
     writeFileSync(junk, 'DROP TABLE lakes;\n');

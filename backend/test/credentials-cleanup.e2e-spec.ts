@@ -32,13 +32,25 @@ describe('cleanup of expired sessions, reset tokens and invites', () => {
     const ahead = (ms: number) => new Date(now.getTime() + ms);
     const userRef = em.getReference(User, user.userId);
     const session = (name: string, lastSeenAt: Date, expiresAt: Date) => {
-      em.create(Session, { tokenHash: hashToken(`${name}-${randomToken()}`), user: userRef, createdAt: ago(3 * DAY), lastSeenAt, expiresAt });
+      em.create(Session, {
+        tokenHash: hashToken(`${name}-${randomToken()}`),
+        user: userRef,
+        createdAt: ago(3 * DAY),
+        lastSeenAt,
+        expiresAt,
+      });
     };
     session('live', ago(HOUR), ahead(DAY));
     session('idle', ago(3 * HOUR), ahead(DAY)); // idle past 2 h
     session('absolute', ago(60_000), ago(1000)); // past its absolute end
     const token = (expiresAt: Date, usedAt: Date | null) =>
-      em.create(AuthToken, { tokenHash: hashToken(randomToken()), purpose: 'password_reset', user: userRef, expiresAt, usedAt });
+      em.create(AuthToken, {
+        tokenHash: hashToken(randomToken()),
+        purpose: 'password_reset',
+        user: userRef,
+        expiresAt,
+        usedAt,
+      });
     const liveToken = token(ahead(HOUR), null);
     token(ago(1000), null);
     token(ahead(HOUR), ago(60_000));
@@ -71,7 +83,9 @@ describe('cleanup of expired sessions, reset tokens and invites', () => {
     expect(await check.count(Session, { user: user.userId, lastSeenAt: { $lte: ago(2 * HOUR) } })).toBe(0);
     expect(await check.count(Session, { user: user.userId, expiresAt: { $lte: now } })).toBe(0);
     expect((await check.find(AuthToken, { user: user.userId })).map((t) => t.id)).toEqual([liveToken.id]);
-    expect((await check.find(Invite, { crew: crew.crewId }, { orderBy: { id: 'asc' } })).map((i) => i.id).sort()).toEqual([pending.id, accepted.id].sort());
+    expect(
+      (await check.find(Invite, { crew: crew.crewId }, { orderBy: { id: 'asc' } })).map((i) => i.id).sort(),
+    ).toEqual([pending.id, accepted.id].sort());
     // Other people's live sessions are untouched, and the user is still signed in.
     expect(await check.count(Session, { user: crew.owner.userId })).toBe(liveSessionsBefore);
     expect((await user.get('/api/auth/me')).status).toBe(200);

@@ -19,7 +19,9 @@ async function rowsOf(app: INestApplication, crewId: string): Promise<Record<str
   const em = testEm(app);
   const out: Record<string, number> = {};
   for (const table of await crewScopedTables(em)) {
-    const [row] = (await em.execute(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE crew_id = ?`, [crewId])) as { n: unknown }[];
+    const [row] = (await em.execute(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE crew_id = ?`, [crewId])) as {
+      n: unknown;
+    }[];
     out[table] = Number(row!.n);
   }
   return out;
@@ -33,14 +35,41 @@ async function fillJournal(app: INestApplication, owner: ApiClient, crewId: stri
   const lake = await createLake(owner, crewId);
   const event = await createEvent(owner, crewId, lake.id);
   const [day] = await competitionDays(owner, crewId, event.id);
-  const jpeg = await sharp({ create: { width: 16, height: 16, channels: 3, background: { r: 10, g: 90, b: 60 } } }).jpeg().toBuffer();
+  const jpeg = await sharp({ create: { width: 16, height: 16, channels: 3, background: { r: 10, g: 90, b: 60 } } })
+    .jpeg()
+    .toBuffer();
   const photo = await upload(owner, `${base}/photos`, jpeg, 'find.jpg');
   expectOk(photo, 201);
-  const find = await owner.post(`${base}/finds`, { lakeId: lake.id, eventId: event.id, practiceDate: '2024-04-10', name: 'Shell bar', lat: 32.951, lon: -96.201, kind: 'hard-bottom', subKind: 'shell', photoId: photo.body.id });
+  const find = await owner.post(`${base}/finds`, {
+    lakeId: lake.id,
+    eventId: event.id,
+    practiceDate: '2024-04-10',
+    name: 'Shell bar',
+    lat: 32.951,
+    lon: -96.201,
+    kind: 'hard-bottom',
+    subKind: 'shell',
+    photoId: photo.body.id,
+  });
   expectOk(find, 201);
-  expectOk(await owner.post(`${base}/catches`, { competitionDayId: day!.id, caughtAt: '08:15', findId: find.body.id, species: 'largemouth', weightLb: 3.4, lengthIn: 18, fate: 'weighed', photoId: photo.body.id }), 201);
+  expectOk(
+    await owner.post(`${base}/catches`, {
+      competitionDayId: day!.id,
+      caughtAt: '08:15',
+      findId: find.body.id,
+      species: 'largemouth',
+      weightLb: 3.4,
+      lengthIn: 18,
+      fate: 'weighed',
+      photoId: photo.body.id,
+    }),
+    201,
+  );
   expectOk(await owner.send('put', `${base}/competition-days/${day!.id}/weigh-in`, { officialLb: 3.4 }));
-  expectOk(await owner.post(`${base}/invites`, { email: `invitee-${crewId.slice(0, 6)}@example.test`, role: 'viewer' }), 201);
+  expectOk(
+    await owner.post(`${base}/invites`, { email: `invitee-${crewId.slice(0, 6)}@example.test`, role: 'viewer' }),
+    201,
+  );
   await app.get(JournalProjector).requestCatchUp();
   const stored = await testEm(app).findOneOrFail(Photo, { id: photo.body.id });
   return { photoKey: stored.storageKey };
@@ -65,7 +94,19 @@ describe('deleting a crew (owner, confirmed by its name)', () => {
 
   it('has data in the journal, read-model and photo storage to remove', async () => {
     const rows = await rowsOf(app, crew.crewId);
-    for (const table of ['lakes', 'events', 'practice_days', 'competition_days', 'finds', 'catches', 'weigh_ins', 'photos', 'journal_event', 'memberships', 'invites']) {
+    for (const table of [
+      'lakes',
+      'events',
+      'practice_days',
+      'competition_days',
+      'finds',
+      'catches',
+      'weigh_ins',
+      'photos',
+      'journal_event',
+      'memberships',
+      'invites',
+    ]) {
       expect(rows[table], table).toBeGreaterThan(0);
     }
     // The read models are someone else's tables: found by their crew_id column, not by name.
@@ -84,7 +125,14 @@ describe('deleting a crew (owner, confirmed by its name)', () => {
 
   it('refuses a missing or wrong confirmation (400 beside confirmName), and changes nothing', async () => {
     const before = await rowsOf(app, crew.crewId);
-    for (const body of [undefined, {}, { confirmName: 'crew to remove' }, { confirmName: 'Crew To Keep' }, { confirmName: 42 }, { confirmName: 'Crew To Remove', extra: true }]) {
+    for (const body of [
+      undefined,
+      {},
+      { confirmName: 'crew to remove' },
+      { confirmName: 'Crew To Keep' },
+      { confirmName: 42 },
+      { confirmName: 'Crew To Remove', extra: true },
+    ]) {
       const res = await crew.owner.delete(`/api/crews/${crew.crewId}`, body);
       expect(res.status, JSON.stringify(body)).toBe(400);
       expect(res.body.statusCode).toBe(400);
@@ -144,7 +192,9 @@ describe('deleting one’s own account (confirmed by the password)', () => {
     expect(wrong.status).toBe(400);
     expect(wrong.body).toMatchObject({ code: 'wrong_password', fieldErrors: { password: expect.any(Array) } });
     expect((await crew.angler.delete('/api/auth/me')).status).toBe(400);
-    expect((await crew.angler.delete('/api/auth/me', { password: crew.angler.password, id: crew.owner.userId })).status).toBe(400);
+    expect(
+      (await crew.angler.delete('/api/auth/me', { password: crew.angler.password, id: crew.owner.userId })).status,
+    ).toBe(400);
     expect(await accountRows(crew.angler.userId)).toEqual(before);
     expect((await crew.angler.get('/api/auth/me')).status).toBe(200);
   });
@@ -167,7 +217,9 @@ describe('deleting one’s own account (confirmed by the password)', () => {
     // The crew stays with its remaining members.
     const members = await crew.angler.get(`/api/crews/${crew.crewId}/members`);
     expectOk(members);
-    expect((members.body as { userId: string }[]).map((m) => m.userId).sort()).toEqual([crew.angler.userId, crew.viewer.userId].sort());
+    expect((members.body as { userId: string }[]).map((m) => m.userId).sort()).toEqual(
+      [crew.angler.userId, crew.viewer.userId].sort(),
+    );
   });
 
   it('ends every session, forgets the address, and removes crews where the user was the only member', async () => {
@@ -186,7 +238,9 @@ describe('deleting one’s own account (confirmed by the password)', () => {
 
     const res = await user.delete('/api/auth/me', { password: user.password });
     expect(res.status, JSON.stringify(res.body)).toBe(204);
-    expect(([] as string[]).concat(res.headers['set-cookie'] ?? []).some((c) => c.startsWith('sb_session=;'))).toBe(true);
+    expect(([] as string[]).concat(res.headers['set-cookie'] ?? []).some((c) => c.startsWith('sb_session=;'))).toBe(
+      true,
+    );
 
     expect(await accountRows(user.userId)).toEqual({ users: 0, memberships: 0, sessions: 0, tokens: 0 });
     expect(await testEm(app).count(User, { email: user.email })).toBe(0);
@@ -197,6 +251,14 @@ describe('deleting one’s own account (confirmed by the password)', () => {
     expect((await second.get('/api/auth/me')).status).toBe(401);
     expect((await new ApiClient(app).signIn(user.email, user.password)).status).toBe(401);
     // The address is free again.
-    expect((await new ApiClient(app).post('/api/auth/sign-up', { email: user.email, password: user.password, displayName: 'Back again' })).status).toBe(201);
+    expect(
+      (
+        await new ApiClient(app).post('/api/auth/sign-up', {
+          email: user.email,
+          password: user.password,
+          displayName: 'Back again',
+        })
+      ).status,
+    ).toBe(201);
   });
 });

@@ -39,7 +39,11 @@ describe('crews, members and roles', () => {
   });
 
   it('lets every member read the crew and its members, each seeing their own role', async () => {
-    for (const [client, role] of [[a.owner, 'owner'], [a.angler, 'angler'], [a.viewer, 'viewer']] as const) {
+    for (const [client, role] of [
+      [a.owner, 'owner'],
+      [a.angler, 'angler'],
+      [a.viewer, 'viewer'],
+    ] as const) {
       const crew = await client.get(`/api/crews/${a.crewId}`);
       expect(crew.status).toBe(200);
       expect(crew.body.role).toBe(role);
@@ -70,7 +74,9 @@ describe('crews, members and roles', () => {
     }
     const crew = await testEm(app).findOneOrFail(Crew, { id: a.crewId });
     expect(crew.name).toBe('Crew A');
-    expect(await testEm(app).findOneOrFail(Membership, { crew: a.crewId, user: target })).toMatchObject({ role: 'angler' });
+    expect(await testEm(app).findOneOrFail(Membership, { crew: a.crewId, user: target })).toMatchObject({
+      role: 'angler',
+    });
   });
 
   it('refuses writes to viewers (403) and owner-only actions to anglers (403)', async () => {
@@ -83,7 +89,10 @@ describe('crews, members and roles', () => {
     expect(anglerPromotes.status).toBe(403);
     const viewerRemoves = await a.viewer.delete(`/api/crews/${a.crewId}/members/${a.angler.userId}`);
     expect(viewerRemoves.status).toBe(403);
-    const anglerInvites = await a.angler.post(`/api/crews/${a.crewId}/invites`, { email: 'x@example.test', role: 'viewer' });
+    const anglerInvites = await a.angler.post(`/api/crews/${a.crewId}/invites`, {
+      email: 'x@example.test',
+      role: 'viewer',
+    });
     expect(anglerInvites.status).toBe(403);
     expect((await testEm(app).findOneOrFail(Crew, { id: a.crewId })).name).toBe('Crew A');
     expect(await testEm(app).count(Membership, { crew: a.crewId })).toBe(3);
@@ -106,10 +115,14 @@ describe('crews, members and roles', () => {
     expect(res.body).toMatchObject({ userId: crew.viewer.userId, role: 'angler' });
     const promoted = await crew.viewer.patch(`/api/crews/${crew.crewId}`, { name: 'Now I can? No, owners only' });
     expect(promoted.status).toBe(403);
-    const unknownRole = await crew.owner.patch(`/api/crews/${crew.crewId}/members/${crew.viewer.userId}`, { role: 'captain' });
+    const unknownRole = await crew.owner.patch(`/api/crews/${crew.crewId}/members/${crew.viewer.userId}`, {
+      role: 'captain',
+    });
     expect(unknownRole.status).toBe(400);
     expect(unknownRole.body.fieldErrors.role).toBeDefined();
-    const notMember = await crew.owner.patch(`/api/crews/${crew.crewId}/members/${b.angler.userId}`, { role: 'viewer' });
+    const notMember = await crew.owner.patch(`/api/crews/${crew.crewId}/members/${b.angler.userId}`, {
+      role: 'viewer',
+    });
     expect(notMember.status).toBe(404);
     expect(await testEm(app).count(Membership, { user: b.angler.userId, role: 'viewer' })).toBe(0);
   });

@@ -31,7 +31,10 @@ describe('migrations', () => {
 
   it('leave no difference between the entities and the migrated schema', async () => {
     // Safe mode: tables of features whose entities are registered elsewhere are not counted as drift.
-    const sql = await app.get(MikroORM).getSchemaGenerator().getUpdateSchemaSQL({ wrap: false, safe: true, dropTables: false });
+    const sql = await app
+      .get(MikroORM)
+      .getSchemaGenerator()
+      .getUpdateSchemaSQL({ wrap: false, safe: true, dropTables: false });
     // Journal entities keep foreign ids as plain columns while their migration adds the foreign keys
     // (and MariaDB the index behind each): the generator would drop those, which is not drift.
     const drift = sql

@@ -99,10 +99,18 @@ describe('serving the built front end', () => {
     expect(noToken.body.code).toBe('csrf_invalid');
     const client = new ApiClient(app);
     const token = await client.refreshCsrf();
-    const malformed = await client.agent.post('/api/auth/sign-in').set('x-csrf-token', token).set('Content-Type', 'application/json').send('{"email":');
+    const malformed = await client.agent
+      .post('/api/auth/sign-in')
+      .set('x-csrf-token', token)
+      .set('Content-Type', 'application/json')
+      .send('{"email":');
     expect(malformed.status).toBe(400);
     expect(malformed.body.code).toBe('invalid_json');
-    const signUp = await new ApiClient(app).post('/api/auth/sign-up', { email: uniqueEmail('static'), password: 'a fine long passphrase', displayName: 'Static' });
+    const signUp = await new ApiClient(app).post('/api/auth/sign-up', {
+      email: uniqueEmail('static'),
+      password: 'a fine long passphrase',
+      displayName: 'Static',
+    });
     expect(signUp.status).toBe(201);
   });
 });

@@ -21,7 +21,8 @@ import { createTestApp, testEm } from './utils/test-app';
 const RUNS_PER_ROUTE = 100;
 
 /** Tables left out of the change check: projections written in the background, and sessions (touched on use). */
-const UNCHECKED = (table: string) => table.startsWith('rm_') || table === 'projection_checkpoint' || table === 'sessions';
+const UNCHECKED = (table: string) =>
+  table.startsWith('rm_') || table === 'projection_checkpoint' || table === 'sessions';
 
 /**
  * Stands for "the record's current version" in sample bodies: replaced at send time by the version the
@@ -30,7 +31,12 @@ const UNCHECKED = (table: string) => table.startsWith('rm_') || table === 'proje
 const CURRENT_VERSION = -4242;
 
 /** Routes reached without a session (a signed-in sign-in or sign-up would end the fuzzing session). */
-const ANONYMOUS = new Set(['POST /api/auth/sign-up', 'POST /api/auth/sign-in', 'POST /api/auth/password-reset/request', 'POST /api/auth/password-reset/confirm']);
+const ANONYMOUS = new Set([
+  'POST /api/auth/sign-up',
+  'POST /api/auth/sign-in',
+  'POST /api/auth/password-reset/request',
+  'POST /api/auth/password-reset/confirm',
+]);
 
 interface Route {
   key: string;
@@ -40,13 +46,39 @@ interface Route {
 
 /** Strings that have broken parsers and validators elsewhere. */
 const NASTY = [
-  '', ' ', '\u0000', '\uFEFF', '__proto__', 'constructor', 'toString', 'NaN', 'Infinity', '-1', '1e309', '0x10', 'null', 'true',
-  "'; DROP TABLE lakes; --", '<script>alert(1)</script>', '%s%n', '../../etc/passwd', '2024-02-30', '2024-04-12T25:61:00Z', '99:99', '07:45',
-  '00000000-0000-0000-0000-000000000000', randomUUID(), 'A'.repeat(300), 'é'.repeat(5000), '😀'.repeat(100),
+  '',
+  ' ',
+  '\u0000',
+  '\uFEFF',
+  '__proto__',
+  'constructor',
+  'toString',
+  'NaN',
+  'Infinity',
+  '-1',
+  '1e309',
+  '0x10',
+  'null',
+  'true',
+  "'; DROP TABLE lakes; --",
+  '<script>alert(1)</script>',
+  '%s%n',
+  '../../etc/passwd',
+  '2024-02-30',
+  '2024-04-12T25:61:00Z',
+  '99:99',
+  '07:45',
+  '00000000-0000-0000-0000-000000000000',
+  randomUUID(),
+  'A'.repeat(300),
+  'é'.repeat(5000),
+  '😀'.repeat(100),
 ];
 
 /** Strings around and far past the 64 kB JSON limit, cheap to build. */
-const hugeString = fc.tuple(fc.constantFrom('x', 'é', '😀', '"\\'), fc.integer({ min: 1_000, max: 90_000 })).map(([c, n]) => c.repeat(Math.ceil(n / c.length)));
+const hugeString = fc
+  .tuple(fc.constantFrom('x', 'é', '😀', '"\\'), fc.integer({ min: 1_000, max: 90_000 }))
+  .map(([c, n]) => c.repeat(Math.ceil(n / c.length)));
 
 const { junk } = fc.letrec((tie) => ({
   junk: fc.oneof(
@@ -60,7 +92,11 @@ const { junk } = fc.letrec((tie) => ({
     fc.constantFrom(...NASTY),
     hugeString,
     fc.array(tie('junk'), { maxLength: 4 }),
-    fc.dictionary(fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom('__proto__', 'constructor', 'version', 'crewId', 'id')), tie('junk'), { maxKeys: 4 }),
+    fc.dictionary(
+      fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom('__proto__', 'constructor', 'version', 'crewId', 'id')),
+      tie('junk'),
+      { maxKeys: 4 },
+    ),
   ),
 }));
 
@@ -74,11 +110,26 @@ type Edit = { kind: 'set' | 'delete' | 'nest'; key: string; value: unknown };
 /** A value of the same JSON type as `like` (or null), often at an edge: it passes the type check and tests the rules behind it. */
 function plausible(like: unknown): fc.Arbitrary<unknown> {
   if (typeof like === 'number') {
-    return fc.oneof(fc.constant(null), fc.integer({ min: -1000, max: 100_000 }), fc.double({ noNaN: true, noDefaultInfinity: true }), fc.constantFrom(0, -1, 0.5, 90.000001, -180.5, 1e9, like + 1, like - 1));
+    return fc.oneof(
+      fc.constant(null),
+      fc.integer({ min: -1000, max: 100_000 }),
+      fc.double({ noNaN: true, noDefaultInfinity: true }),
+      fc.constantFrom(0, -1, 0.5, 90.000001, -180.5, 1e9, like + 1, like - 1),
+    );
   }
-  if (typeof like === 'string') return fc.oneof(fc.constant(null), fc.string({ maxLength: 40 }), fc.constantFrom(...NASTY), fc.string({ minLength: 100, maxLength: 6000 }));
+  if (typeof like === 'string')
+    return fc.oneof(
+      fc.constant(null),
+      fc.string({ maxLength: 40 }),
+      fc.constantFrom(...NASTY),
+      fc.string({ minLength: 100, maxLength: 6000 }),
+    );
   if (typeof like === 'boolean') return fc.constantFrom(null, true, false);
-  if (Array.isArray(like)) return fc.oneof(fc.constant(null), fc.array(fc.oneof(...like.map((v) => plausible(v)), fc.constantFrom(...NASTY)), { maxLength: 20 }));
+  if (Array.isArray(like))
+    return fc.oneof(
+      fc.constant(null),
+      fc.array(fc.oneof(...like.map((v) => plausible(v)), fc.constantFrom(...NASTY)), { maxLength: 20 }),
+    );
   if (like && typeof like === 'object') {
     const entries = Object.entries(like);
     return fc.oneof(fc.constant(null), ...entries.map(([k, v]) => plausible(v).map((nv) => ({ ...like, [k]: nv }))));
@@ -91,10 +142,21 @@ type Body = { value: unknown } | { raw: string };
 /** A body for a route: a valid one with random edits, arbitrary JSON, or text that is not JSON at all. */
 function bodyFor(sample: Record<string, unknown>): fc.Arbitrary<Body> {
   const keys = Object.keys(sample);
-  const key = keys.length ? fc.oneof(fc.constantFrom(...keys), fc.string({ maxLength: 12 })) : fc.string({ maxLength: 12 });
-  const edit: fc.Arbitrary<Edit> = fc.record({ kind: fc.constantFrom('set', 'set', 'delete', 'nest'), key, value: junk }) as fc.Arbitrary<Edit>;
+  const key = keys.length
+    ? fc.oneof(fc.constantFrom(...keys), fc.string({ maxLength: 12 }))
+    : fc.string({ maxLength: 12 });
+  const edit: fc.Arbitrary<Edit> = fc.record({
+    kind: fc.constantFrom('set', 'set', 'delete', 'nest'),
+    key,
+    value: junk,
+  }) as fc.Arbitrary<Edit>;
   const typed: fc.Arbitrary<Edit[]> = keys.length
-    ? fc.array(fc.constantFrom(...keys).chain((k) => plausible(sample[k]).map((value): Edit => ({ kind: 'set', key: k, value }))), { minLength: 1, maxLength: 2 })
+    ? fc.array(
+        fc
+          .constantFrom(...keys)
+          .chain((k) => plausible(sample[k]).map((value): Edit => ({ kind: 'set', key: k, value }))),
+        { minLength: 1, maxLength: 2 },
+      )
     : fc.constant([]);
   const edited = fc.oneof(fc.array(edit, { minLength: 1, maxLength: 4 }), typed, typed).map((edits) => {
     const body: Record<string, unknown> = structuredClone(sample);
@@ -109,13 +171,35 @@ function bodyFor(sample: Record<string, unknown>): fc.Arbitrary<Body> {
     { weight: 4, arbitrary: edited },
     { weight: 2, arbitrary: junk.map((value) => ({ value })) },
     { weight: 1, arbitrary: fc.string({ maxLength: 60 }).map((raw) => ({ raw })) },
-    { weight: 1, arbitrary: fc.constantFrom('{', '{"a":', '[1,2', '{"version":1,}', '{"__proto__":{"admin":true}}', '"just a string"', '1', 'null', '[]', '{}', `{"a":${'['.repeat(5000)}`).map((raw) => ({ raw })) },
+    {
+      weight: 1,
+      arbitrary: fc
+        .constantFrom(
+          '{',
+          '{"a":',
+          '[1,2',
+          '{"version":1,}',
+          '{"__proto__":{"admin":true}}',
+          '"just a string"',
+          '1',
+          'null',
+          '[]',
+          '{}',
+          `{"a":${'['.repeat(5000)}`,
+        )
+        .map((raw) => ({ raw })),
+    },
   );
 }
 
 /** JSON text of a body, with the current-version stand-in replaced (or dropped when there is no version yet). */
 function serialise(value: unknown, current: number | undefined): string {
-  if (value && typeof value === 'object' && !Array.isArray(value) && (value as Record<string, unknown>).version === CURRENT_VERSION) {
+  if (
+    value &&
+    typeof value === 'object' &&
+    !Array.isArray(value) &&
+    (value as Record<string, unknown>).version === CURRENT_VERSION
+  ) {
     const copy: Record<string, unknown> = { ...(value as Record<string, unknown>) };
     if (current === undefined) delete copy.version;
     else copy.version = current;
@@ -128,7 +212,8 @@ function serialise(value: unknown, current: number | undefined): string {
 function apiErrorProblems(res: Response): string[] {
   const b = res.body as Record<string, unknown>;
   const problems: string[] = [];
-  if (!String(res.headers['content-type'] ?? '').includes('application/json')) problems.push(`content-type ${res.headers['content-type']}`);
+  if (!String(res.headers['content-type'] ?? '').includes('application/json'))
+    problems.push(`content-type ${res.headers['content-type']}`);
   if (b?.statusCode !== res.status) problems.push(`statusCode ${String(b?.statusCode)}`);
   if (typeof b?.error !== 'string') problems.push('no error name');
   if (typeof b?.message !== 'string' || b.message.length === 0) problems.push('no message');
@@ -151,18 +236,31 @@ describe('fuzzing every JSON request body (fast-check)', () => {
   /** A CSRF pair for a session cookie (or none). */
   async function csrfFor(sessionCookie: string): Promise<{ cookie: string; csrf: string }> {
     const res = await request(app.getHttpServer()).get('/api/auth/csrf').set('Cookie', sessionCookie);
-    const csrfCookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('sb_csrf='))!.split(';')[0]!;
+    const csrfCookie = ([] as string[])
+      .concat(res.headers['set-cookie'] ?? [])
+      .find((c) => c.startsWith('sb_csrf='))!
+      .split(';')[0]!;
     return { cookie: [sessionCookie, csrfCookie].filter(Boolean).join('; '), csrf: res.body.csrfToken as string };
   }
 
   /** A checksum of every checked table plus the watched users' session count: any write shows. */
   async function snapshot(): Promise<string> {
     const em = testEm(app);
-    const tables = ((await em.execute(`SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = 'BASE TABLE'`)) as { t: string }[])
+    const tables = (
+      (await em.execute(
+        `SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = 'BASE TABLE'`,
+      )) as { t: string }[]
+    )
       .map((r) => r.t)
       .filter((t) => !UNCHECKED(t));
-    const sums = (await em.execute(`CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`)) as { Table: string; Checksum: unknown }[];
-    const [sessions] = (await em.execute(`SELECT COUNT(*) AS n FROM sessions WHERE user_id IN (${watchedUsers.map(() => '?').join(',')})`, watchedUsers)) as { n: unknown }[];
+    const sums = (await em.execute(`CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`)) as {
+      Table: string;
+      Checksum: unknown;
+    }[];
+    const [sessions] = (await em.execute(
+      `SELECT COUNT(*) AS n FROM sessions WHERE user_id IN (${watchedUsers.map(() => '?').join(',')})`,
+      watchedUsers,
+    )) as { n: unknown }[];
     return JSON.stringify([sums.map((s) => `${s.Table}=${String(s.Checksum)}`), Number(sessions!.n)]);
   }
 
@@ -183,21 +281,53 @@ describe('fuzzing every JSON request body (fast-check)', () => {
     const event = await createEvent(crew.owner, crew.crewId, lake.id);
     const practice = (await crew.owner.get(`${base}/events/${event.id}/practice-days`)).body as { id: string }[];
     const [day] = await competitionDays(crew.owner, crew.crewId, event.id);
-    const find = await crew.owner.post(`${base}/finds`, { lakeId: lake.id, name: 'Fuzz point', lat: 32.95, lon: -96.2, kind: 'contour', subKind: 'point' });
+    const find = await crew.owner.post(`${base}/finds`, {
+      lakeId: lake.id,
+      name: 'Fuzz point',
+      lat: 32.95,
+      lon: -96.2,
+      kind: 'contour',
+      subKind: 'point',
+    });
     expectOk(find, 201);
-    const caught = await crew.owner.post(`${base}/catches`, { competitionDayId: day!.id, caughtAt: '09:10', species: 'spotted', weightLb: 2.5, fate: 'weighed' });
+    const caught = await crew.owner.post(`${base}/catches`, {
+      competitionDayId: day!.id,
+      caughtAt: '09:10',
+      species: 'spotted',
+      weightLb: 2.5,
+      fate: 'weighed',
+    });
     expectOk(caught, 201);
     const em = testEm(app);
-    const invite = em.create(Invite, { crew: em.getReference(Crew, crew.crewId), email: 'fuzz-invitee@example.test', role: 'viewer', tokenHash: hashToken(randomToken()), invitedBy: em.getReference(User, crew.owner.userId), expiresAt: new Date(Date.now() + 86_400_000) });
+    const invite = em.create(Invite, {
+      crew: em.getReference(Crew, crew.crewId),
+      email: 'fuzz-invitee@example.test',
+      role: 'viewer',
+      tokenHash: hashToken(randomToken()),
+      invitedBy: em.getReference(User, crew.owner.userId),
+      expiresAt: new Date(Date.now() + 86_400_000),
+    });
     await em.flush();
 
     const sessionEm = testEm(app);
-    owner = await csrfFor(`sb_session=${await app.get(SessionsService).create(sessionEm.getReference(User, crew.owner.userId), sessionEm)}`);
+    owner = await csrfFor(
+      `sb_session=${await app.get(SessionsService).create(sessionEm.getReference(User, crew.owner.userId), sessionEm)}`,
+    );
     anonymous = await csrfFor('');
     watchedUsers = [crew.owner.userId, target.userId];
 
-    const ids: Record<string, string> = { lakeId: lake.id, eventId: event.id, findId: find.body.id, catchId: caught.body.id, userId: target.userId, inviteId: invite.id, token: randomToken() };
-    const doc = (await request(app.getHttpServer()).get('/api/docs-json')).body as { paths: Record<string, Record<string, { requestBody?: { content?: Record<string, unknown> } }>> };
+    const ids: Record<string, string> = {
+      lakeId: lake.id,
+      eventId: event.id,
+      findId: find.body.id,
+      catchId: caught.body.id,
+      userId: target.userId,
+      inviteId: invite.id,
+      token: randomToken(),
+    };
+    const doc = (await request(app.getHttpServer()).get('/api/docs-json')).body as {
+      paths: Record<string, Record<string, { requestBody?: { content?: Record<string, unknown> } }>>;
+    };
     routes = Object.entries(doc.paths).flatMap(([path, item]) =>
       Object.entries(item)
         .filter(([, op]) => op.requestBody?.content?.['application/json'])
@@ -221,11 +351,21 @@ describe('fuzzing every JSON request body (fast-check)', () => {
     };
     // Valid bodies to start the edits from (others start from {}).
     samples = {
-      'POST /api/auth/sign-up': { email: 'fuzz.new@example.test', password: 'a long enough passphrase', displayName: 'Fuzz' },
+      'POST /api/auth/sign-up': {
+        email: 'fuzz.new@example.test',
+        password: 'a long enough passphrase',
+        displayName: 'Fuzz',
+      },
       'POST /api/auth/sign-in': { email: crew.owner.email, password: 'not the password at all' },
-      'PATCH /api/auth/me': { displayName: 'Fuzz Owner', units: { weight: 'kg', length: 'mm', depth: 'm', temperature: 'C' } },
+      'PATCH /api/auth/me': {
+        displayName: 'Fuzz Owner',
+        units: { weight: 'kg', length: 'mm', depth: 'm', temperature: 'C' },
+      },
       'DELETE /api/auth/me': { password: 'not the password at all' },
-      'POST /api/auth/change-password': { currentPassword: 'not the password at all', newPassword: 'another long passphrase' },
+      'POST /api/auth/change-password': {
+        currentPassword: 'not the password at all',
+        newPassword: 'another long passphrase',
+      },
       'POST /api/auth/password-reset/request': { email: 'nobody@example.test' },
       'POST /api/auth/password-reset/confirm': { token: randomToken(), password: 'another long passphrase' },
       'POST /api/crews': { name: 'Fuzzed Crew' },
@@ -235,17 +375,70 @@ describe('fuzzing every JSON request body (fast-check)', () => {
       'POST /api/crews/{crewId}/invites': { email: 'fuzz-invite@example.test', role: 'viewer' },
       'POST /api/invites/accept': { token: randomToken() },
       'PATCH /api/admin/users/{userId}': { disabled: false },
-      'POST /api/crews/{crewId}/lakes': { name: 'Fuzz Lake', region: 'Fuzz County', timeZone: 'America/Chicago', lat: 33, lon: -96, areaAcres: 1200, notes: '' },
+      'POST /api/crews/{crewId}/lakes': {
+        name: 'Fuzz Lake',
+        region: 'Fuzz County',
+        timeZone: 'America/Chicago',
+        lat: 33,
+        lon: -96,
+        areaAcres: 1200,
+        notes: '',
+      },
       'PATCH /api/crews/{crewId}/lakes/{lakeId}': { name: 'Fuzz Lake 2', version: CURRENT_VERSION },
-      'POST /api/crews/{crewId}/events': { lakeId: lake.id, name: 'Fuzz Open', practiceDates: ['2024-05-01'], competitionDates: ['2024-05-02'], rules: { fishPerDay: 5, minLengthIn: 12 } },
-      'PATCH /api/crews/{crewId}/events/{eventId}': { name: 'Spring Open 2', version: CURRENT_VERSION, competitionDates: ['2024-04-12', '2024-04-13'] },
-      'PATCH /api/crews/{crewId}/practice-days/{dayId}': { notes: 'fuzz', waterTemp: { value: 18, unit: 'C' }, version: CURRENT_VERSION },
-      'PATCH /api/crews/{crewId}/competition-days/{dayId}': { startTime: '06:30', checkInTime: '15:00', weatherNotes: '', version: CURRENT_VERSION },
-      'POST /api/crews/{crewId}/finds': { lakeId: lake.id, eventId: event.id, name: 'Fuzz find', lat: 32.9, lon: -96.1, kind: 'vegetation', subKind: 'hydrilla', depth: { value: 3, unit: 'm' }, hardness: 3 },
+      'POST /api/crews/{crewId}/events': {
+        lakeId: lake.id,
+        name: 'Fuzz Open',
+        practiceDates: ['2024-05-01'],
+        competitionDates: ['2024-05-02'],
+        rules: { fishPerDay: 5, minLengthIn: 12 },
+      },
+      'PATCH /api/crews/{crewId}/events/{eventId}': {
+        name: 'Spring Open 2',
+        version: CURRENT_VERSION,
+        competitionDates: ['2024-04-12', '2024-04-13'],
+      },
+      'PATCH /api/crews/{crewId}/practice-days/{dayId}': {
+        notes: 'fuzz',
+        waterTemp: { value: 18, unit: 'C' },
+        version: CURRENT_VERSION,
+      },
+      'PATCH /api/crews/{crewId}/competition-days/{dayId}': {
+        startTime: '06:30',
+        checkInTime: '15:00',
+        weatherNotes: '',
+        version: CURRENT_VERSION,
+      },
+      'POST /api/crews/{crewId}/finds': {
+        lakeId: lake.id,
+        eventId: event.id,
+        name: 'Fuzz find',
+        lat: 32.9,
+        lon: -96.1,
+        kind: 'vegetation',
+        subKind: 'hydrilla',
+        depth: { value: 3, unit: 'm' },
+        hardness: 3,
+      },
       'PATCH /api/crews/{crewId}/finds/{findId}': { name: 'Fuzz point 2', depthFt: 12, version: CURRENT_VERSION },
-      'POST /api/crews/{crewId}/catches': { competitionDayId: day!.id, caughtAt: '10:30', species: 'largemouth', weight: { value: 3, unit: 'lb-oz', ounces: 4 }, length: { value: 460, unit: 'mm' }, fate: 'culled', lat: 32.95, lon: -96.2 },
+      'POST /api/crews/{crewId}/catches': {
+        competitionDayId: day!.id,
+        caughtAt: '10:30',
+        species: 'largemouth',
+        weight: { value: 3, unit: 'lb-oz', ounces: 4 },
+        length: { value: 460, unit: 'mm' },
+        fate: 'culled',
+        lat: 32.95,
+        lon: -96.2,
+      },
       'PATCH /api/crews/{crewId}/catches/{catchId}': { weightLb: 2.75, fate: 'weighed', version: CURRENT_VERSION },
-      'PUT /api/crews/{crewId}/competition-days/{dayId}/weigh-in': { grossLb: 14, penaltyLb: 0.25, officialLb: 13.75, dayPlace: 7, lateMinutes: 0, version: CURRENT_VERSION },
+      'PUT /api/crews/{crewId}/competition-days/{dayId}/weigh-in': {
+        grossLb: 14,
+        penaltyLb: 0.25,
+        officialLb: 13.75,
+        dayPlace: 7,
+        lateMinutes: 0,
+        version: CURRENT_VERSION,
+      },
       'POST /api/crews/{crewId}/reports/events/{eventId}/recap-email': { userIds: [crew.owner.userId] },
     };
   });
@@ -255,7 +448,14 @@ describe('fuzzing every JSON request body (fast-check)', () => {
 
   it('finds the journal and foundation write routes in the document', () => {
     const keys = routes.map((r) => r.key);
-    for (const k of ['POST /api/crews/{crewId}/lakes', 'PATCH /api/crews/{crewId}/catches/{catchId}', 'PUT /api/crews/{crewId}/competition-days/{dayId}/weigh-in', 'POST /api/auth/sign-up', 'DELETE /api/crews/{crewId}', 'DELETE /api/auth/me']) {
+    for (const k of [
+      'POST /api/crews/{crewId}/lakes',
+      'PATCH /api/crews/{crewId}/catches/{catchId}',
+      'PUT /api/crews/{crewId}/competition-days/{dayId}/weigh-in',
+      'POST /api/auth/sign-up',
+      'DELETE /api/crews/{crewId}',
+      'DELETE /api/auth/me',
+    ]) {
       expect(keys).toContain(k);
     }
   });
@@ -271,7 +471,12 @@ describe('fuzzing every JSON request body (fast-check)', () => {
         fc.asyncProperty(bodyFor(samples[route.key] ?? {}), async (body) => {
           const raw = 'raw' in body ? body.raw : serialise(body.value, versions.get(route.key));
           const who = ANONYMOUS.has(route.key) ? anonymous : owner;
-          const res = await request(app.getHttpServer())[route.method](route.url).set('Cookie', who.cookie).set(CSRF_HEADER, who.csrf).set('Content-Type', 'application/json').send(raw);
+          const res = await request(app.getHttpServer())
+            [route.method](route.url)
+            .set('Cookie', who.cookie)
+            .set(CSRF_HEADER, who.csrf)
+            .set('Content-Type', 'application/json')
+            .send(raw);
           const after = await snapshot();
           const where = `${route.key} ${res.status} ${JSON.stringify(res.body).slice(0, 200)} for ${raw.slice(0, 200)}`;
           if (res.status >= 500 || res.status < 200) throw new Error(`server error: ${where}`);
@@ -289,7 +494,10 @@ describe('fuzzing every JSON request body (fast-check)', () => {
         }),
         { numRuns: RUNS_PER_ROUTE, endOnFailure: true },
       );
-      if (result.failed) failures.push(`${route.key}: ${result.errorInstance instanceof Error ? result.errorInstance.message : String(result.errorInstance)} (seed ${result.seed})`);
+      if (result.failed)
+        failures.push(
+          `${route.key}: ${result.errorInstance instanceof Error ? result.errorInstance.message : String(result.errorInstance)} (seed ${result.seed})`,
+        );
     }
     expect(failures).toEqual([]);
     // The generator reaches both sides: most bodies are refused, some edited valid ones get through.

@@ -21,7 +21,10 @@ describe('invites by e-mail', () => {
   async function invite(email: string, role = 'angler') {
     const res = await crew.owner.post(`/api/crews/${crew.crewId}/invites`, { email, role });
     expect(res.status).toBe(201);
-    return { view: res.body as { id: string; email: string; role: string; expiresAt: string }, token: tokenFromMail(await waitForMail(email, 1), '/invite') };
+    return {
+      view: res.body as { id: string; email: string; role: string; expiresAt: string },
+      token: tokenFromMail(await waitForMail(email, 1), '/invite'),
+    };
   }
 
   it('mails a link whose token is accepted once by the invited address, then refused', async () => {
@@ -67,7 +70,9 @@ describe('invites by e-mail', () => {
     const expired = await invitee.post('/api/invites/accept', { token });
     expect(expired.status).toBe(400);
     expect(expired.body.code).toBe('token_invalid');
-    expect(await testEm(app).count(Membership, { crew: crew.crewId, user: { $in: [stranger.userId, invitee.userId] } })).toBe(0);
+    expect(
+      await testEm(app).count(Membership, { crew: crew.crewId, user: { $in: [stranger.userId, invitee.userId] } }),
+    ).toBe(0);
   });
 
   it('needs a session to accept, and refuses bad input', async () => {
@@ -83,7 +88,10 @@ describe('invites by e-mail', () => {
   });
 
   it('refuses to invite a current member, and lets the owner withdraw an invite', async () => {
-    const member = await crew.owner.post(`/api/crews/${crew.crewId}/invites`, { email: crew.angler.email, role: 'viewer' });
+    const member = await crew.owner.post(`/api/crews/${crew.crewId}/invites`, {
+      email: crew.angler.email,
+      role: 'viewer',
+    });
     expect(member.status).toBe(409);
     expect(member.body.code).toBe('already_member');
     const email = uniqueEmail('withdrawn');

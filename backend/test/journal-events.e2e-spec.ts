@@ -28,10 +28,23 @@ describe('journal_event: written with the change, in one transaction, published 
     sub.unsubscribe();
     const [row] = await journalOf(app, lake.id);
     expect(row!.payload).toEqual({
-      id: lake.id, crewId: crew.crewId, name: 'Lake Marrowind', region: 'Test County', timeZone: 'America/Chicago', lat: 32.95, lon: -96.2,
-      areaAcres: null, notes: 'full state', version: 1, createdAt: expect.any(String), updatedAt: expect.any(String),
+      id: lake.id,
+      crewId: crew.crewId,
+      name: 'Lake Marrowind',
+      region: 'Test County',
+      timeZone: 'America/Chicago',
+      lat: 32.95,
+      lon: -96.2,
+      areaAcres: null,
+      notes: 'full state',
+      version: 1,
+      createdAt: expect.any(String),
+      updatedAt: expect.any(String),
     });
-    expect(heard.find((e) => e.events.some((x) => x.aggregateId === lake.id))).toMatchObject({ crewId: crew.crewId, events: [{ type: 'LakeCreated', aggregateType: 'lake' }] });
+    expect(heard.find((e) => e.events.some((x) => x.aggregateId === lake.id))).toMatchObject({
+      crewId: crew.crewId,
+      events: [{ type: 'LakeCreated', aggregateType: 'lake' }],
+    });
   });
 
   it('leaves neither the record nor its event when the journal insert fails after the record was flushed', async () => {
@@ -42,7 +55,12 @@ describe('journal_event: written with the change, in one transaction, published 
     const attempt = journal.transaction(crew.crewId, crew.angler.userId, async (tx, log) => {
       const lake = tx.create(Lake, { crewId: crew.crewId, name: 'Doomed', timeZone: 'UTC', lat: 0, lon: 0 });
       await tx.flush(); // the lake row is written inside the transaction …
-      log.record({ type: 'LakeCreated', aggregateType: 'lake', aggregateId: lake.id, payload: recordState(tx, 'Lake', lake) });
+      log.record({
+        type: 'LakeCreated',
+        aggregateType: 'lake',
+        aggregateId: lake.id,
+        payload: recordState(tx, 'Lake', lake),
+      });
       // … and a second event with an aggregate id too long for its column makes the journal insert fail.
       log.record({ type: 'LakeUpdated', aggregateType: 'lake', aggregateId: 'x'.repeat(80), payload: {} });
     });

@@ -7,10 +7,17 @@ import type { ApiClient } from './utils/api-client';
 import { testEm } from './utils/test-app';
 
 /** Invented test lake: a plausible reservoir position in the US South (America/Chicago). */
-export const TEST_LAKE = { name: 'Lake Marrowind', region: 'Test County', timeZone: 'America/Chicago', lat: 32.95, lon: -96.2 };
+export const TEST_LAKE = {
+  name: 'Lake Marrowind',
+  region: 'Test County',
+  timeZone: 'America/Chicago',
+  lat: 32.95,
+  lon: -96.2,
+};
 
 export function expectOk(res: Response, status = 200): void {
-  if (res.status !== status) throw new Error(`expected ${status}, got ${res.status}: ${JSON.stringify(res.body).slice(0, 600)}`);
+  if (res.status !== status)
+    throw new Error(`expected ${status}, got ${res.status}: ${JSON.stringify(res.body).slice(0, 600)}`);
 }
 
 export async function createLake(client: ApiClient, crewId: string, overrides: object = {}): Promise<LakeView> {
@@ -19,7 +26,12 @@ export async function createLake(client: ApiClient, crewId: string, overrides: o
   return res.body as LakeView;
 }
 
-export async function createEvent(client: ApiClient, crewId: string, lakeId: string, overrides: object = {}): Promise<EventView> {
+export async function createEvent(
+  client: ApiClient,
+  crewId: string,
+  lakeId: string,
+  overrides: object = {},
+): Promise<EventView> {
   const res = await client.post(`/api/crews/${crewId}/events`, {
     lakeId,
     name: 'Spring Open',
@@ -32,7 +44,11 @@ export async function createEvent(client: ApiClient, crewId: string, lakeId: str
   return res.body as EventView;
 }
 
-export async function competitionDays(client: ApiClient, crewId: string, eventId: string): Promise<CompetitionDayView[]> {
+export async function competitionDays(
+  client: ApiClient,
+  crewId: string,
+  eventId: string,
+): Promise<CompetitionDayView[]> {
   const res = await client.get(`/api/crews/${crewId}/events/${eventId}/competition-days`);
   expectOk(res);
   return res.body as CompetitionDayView[];
@@ -48,12 +64,16 @@ export async function journalCount(app: INestApplication, crewId: string): Promi
 }
 
 /** A GPX 1.1 document from waypoints. */
-export function gpxOf(waypoints: { lat: number | string; lon: number | string; name?: string; time?: string; depthM?: number }[]): string {
+export function gpxOf(
+  waypoints: { lat: number | string; lon: number | string; name?: string; time?: string; depthM?: number }[],
+): string {
   const body = waypoints
     .map(
       (w) =>
         `<wpt lat="${w.lat}" lon="${w.lon}">${w.time ? `<time>${w.time}</time>` : ''}${w.name ? `<name>${w.name}</name>` : ''}${
-          w.depthM !== undefined ? `<extensions><sb:depth xmlns:sb="urn:shoalbook:test">${w.depthM}</sb:depth></extensions>` : ''
+          w.depthM !== undefined
+            ? `<extensions><sb:depth xmlns:sb="urn:shoalbook:test">${w.depthM}</sb:depth></extensions>`
+            : ''
         }</wpt>`,
     )
     .join('\n');
@@ -61,7 +81,13 @@ export function gpxOf(waypoints: { lat: number | string; lon: number | string; n
 }
 
 /** Upload a file as multipart field "file" with the CSRF header. */
-export async function upload(client: ApiClient, path: string, content: Buffer | string, filename: string, fields: Record<string, string> = {}): Promise<Response> {
+export async function upload(
+  client: ApiClient,
+  path: string,
+  content: Buffer | string,
+  filename: string,
+  fields: Record<string, string> = {},
+): Promise<Response> {
   const token = await client.refreshCsrf();
   let req = client.agent.post(path).set('x-csrf-token', token);
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);

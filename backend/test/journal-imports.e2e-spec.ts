@@ -30,7 +30,11 @@ describe('imports: GPX finds and CSV catches', () => {
 
   const countFinds = () => testEm(app).count(Find, { crewId: crew.crewId });
 
-  async function expectNothingWritten(run: () => Promise<{ status: number; body: { code?: string; message: string } }>, status: number, code: string) {
+  async function expectNothingWritten(
+    run: () => Promise<{ status: number; body: { code?: string; message: string } }>,
+    status: number,
+    code: string,
+  ) {
     const [finds, events] = [await countFinds(), await journalCount(app, crew.crewId)];
     const res = await run();
     expect(res.status, JSON.stringify(res.body)).toBe(status);
@@ -42,7 +46,14 @@ describe('imports: GPX finds and CSV catches', () => {
 
   describe('GPX', () => {
     it('previews without writing, flags duplicates within 15 m (existing find and same file) and per-row errors, then commits in one go', async () => {
-      const existing = await crew.angler.post(`${base}/finds`, { lakeId, name: 'Old rock pile', lat: 32.96, lon: -96.21, kind: 'hard-bottom', subKind: 'rock' });
+      const existing = await crew.angler.post(`${base}/finds`, {
+        lakeId,
+        name: 'Old rock pile',
+        lat: 32.96,
+        lon: -96.21,
+        kind: 'hard-bottom',
+        subKind: 'rock',
+      });
       expectOk(existing, 201);
       const gpx = gpxOf([
         { lat: 32.97, lon: -96.22, name: 'Grass edge', time: '2024-04-10T14:00:00Z', depthM: 3.048 },
@@ -54,11 +65,21 @@ describe('imports: GPX finds and CSV catches', () => {
         { lat: 'abc', lon: -96.2, name: 'Not a number' },
       ]);
       const before = await countFinds();
-      const res = await upload(crew.angler, `${base}/finds/import/preview?lakeId=${lakeId}&eventId=${eventId}`, gpx, 'practice.gpx');
+      const res = await upload(
+        crew.angler,
+        `${base}/finds/import/preview?lakeId=${lakeId}&eventId=${eventId}`,
+        gpx,
+        'practice.gpx',
+      );
       expectOk(res);
       const preview = res.body as FindImportPreview;
       expect(preview).toMatchObject({ accepted: 5, rejected: 2, duplicates: 2 });
-      expect(preview.rows[0]).toMatchObject({ name: 'Grass edge', markedAt: '2024-04-10T14:00:00.000Z', error: null, duplicateOf: null });
+      expect(preview.rows[0]).toMatchObject({
+        name: 'Grass edge',
+        markedAt: '2024-04-10T14:00:00.000Z',
+        error: null,
+        duplicateOf: null,
+      });
       expect(preview.rows[0]!.depthFt).toBeCloseTo(10, 9);
       expect(preview.rows[1]!.duplicateOf).toMatchObject({ findId: existing.body.id, name: 'Old rock pile' });
       expect(preview.rows[1]!.duplicateOf!.distanceM).toBeCloseTo(10, 0);
@@ -69,7 +90,13 @@ describe('imports: GPX finds and CSV catches', () => {
       expect(await countFinds()).toBe(before);
 
       const journalBefore = await journalCount(app, crew.crewId);
-      const commit = await upload(crew.angler, `${base}/finds/import?lakeId=${lakeId}&eventId=${eventId}`, gpx, 'practice.gpx', { kind: 'vegetation', subKind: 'hydrilla' });
+      const commit = await upload(
+        crew.angler,
+        `${base}/finds/import?lakeId=${lakeId}&eventId=${eventId}`,
+        gpx,
+        'practice.gpx',
+        { kind: 'vegetation', subKind: 'hydrilla' },
+      );
       expectOk(commit, 201);
       expect(commit.body).toMatchObject({ imported: 3, skipped: 2 });
       expect(commit.body.errors.map((e: { index: number }) => e.index)).toEqual([5, 6]);
@@ -77,18 +104,49 @@ describe('imports: GPX finds and CSV catches', () => {
       expect(await journalCount(app, crew.crewId)).toBe(journalBefore + 3);
       const list = await crew.angler.get(`${base}/finds?lakeId=${lakeId}&eventId=${eventId}`);
       const grass = list.body.find((f: { name: string }) => f.name === 'Grass edge');
-      expect(grass).toMatchObject({ kind: 'vegetation', subKind: 'hydrilla', source: 'gpx', practiceDate: '2024-04-10', entered: { depth: { value: 3.048, unit: 'm' } } });
+      expect(grass).toMatchObject({
+        kind: 'vegetation',
+        subKind: 'hydrilla',
+        source: 'gpx',
+        practiceDate: '2024-04-10',
+        entered: { depth: { value: 3.048, unit: 'm' } },
+      });
     });
 
     it('refuses malformed XML, a DOCTYPE (XXE), non-GPX XML, a PNG renamed .gpx, and a file over 20 MB: clear errors, nothing written', async () => {
       const url = `${base}/finds/import?lakeId=${lakeId}`;
-      await expectNothingWritten(() => upload(crew.angler, url, '<gpx xmlns="http://www.topografix.com/GPX/1/1"><wpt lat="1" lon="1"><name>x</wpt></gpx>', 'broken.gpx'), 400, 'malformed_file');
+      await expectNothingWritten(
+        () =>
+          upload(
+            crew.angler,
+            url,
+            '<gpx xmlns="http://www.topografix.com/GPX/1/1"><wpt lat="1" lon="1"><name>x</wpt></gpx>',
+            'broken.gpx',
+          ),
+        400,
+        'malformed_file',
+      );
       const xxe = `<?xml version="1.0"?>\n<!DOCTYPE gpx [ <!ENTITY secret SYSTEM "file:///etc/passwd"> ]>\n<gpx version="1.1" xmlns="http://www.topografix.com/GPX/1/1"><wpt lat="32.9" lon="-96.2"><name>&secret;</name></wpt></gpx>`;
       await expectNothingWritten(() => upload(crew.angler, url, xxe, 'xxe.gpx'), 400, 'dtd_refused');
-      await expectNothingWritten(() => upload(crew.angler, url, '<?xml version="1.0"?><kml xmlns="http://www.opengis.net/kml/2.2"><Placemark/></kml>', 'places.gpx'), 400, 'wrong_file_type');
-      const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#336699' } }).png().toBuffer();
+      await expectNothingWritten(
+        () =>
+          upload(
+            crew.angler,
+            url,
+            '<?xml version="1.0"?><kml xmlns="http://www.opengis.net/kml/2.2"><Placemark/></kml>',
+            'places.gpx',
+          ),
+        400,
+        'wrong_file_type',
+      );
+      const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#336699' } })
+        .png()
+        .toBuffer();
       await expectNothingWritten(() => upload(crew.angler, url, png, 'waypoints.gpx'), 400, 'wrong_file_type');
-      const huge = gpxOf([{ lat: 32.9, lon: -96.2, name: 'x'.repeat(100) }]).replace('</gpx>', `<!--${'x'.repeat(21 * 1024 * 1024)}--></gpx>`);
+      const huge = gpxOf([{ lat: 32.9, lon: -96.2, name: 'x'.repeat(100) }]).replace(
+        '</gpx>',
+        `<!--${'x'.repeat(21 * 1024 * 1024)}--></gpx>`,
+      );
       await expectNothingWritten(() => upload(crew.angler, url, huge, 'huge.gpx'), 413, 'file_too_large');
       const preview = await upload(crew.angler, `${base}/finds/import/preview?lakeId=${lakeId}`, xxe, 'xxe.gpx');
       expect(preview.status).toBe(400);
@@ -118,18 +176,23 @@ describe('imports: GPX finds and CSV catches', () => {
       const gpx = gpxOf(waypoints);
       const journalBefore = await journalCount(app, crew.crewId);
       const started = performance.now();
-      const res = await upload(crew.angler, `${base}/finds/import?lakeId=${big.id}`, gpx, 'season.gpx', { kind: 'hard-bottom' });
+      const res = await upload(crew.angler, `${base}/finds/import?lakeId=${big.id}`, gpx, 'season.gpx', {
+        kind: 'hard-bottom',
+      });
       const seconds = (performance.now() - started) / 1000;
       expectOk(res, 201);
       expect(res.body).toMatchObject({ imported: 10_000, skipped: 0, errors: [] });
-      process.stdout.write(`\n[journal] 10,000-waypoint GPX (${(Buffer.byteLength(gpx) / 1024 / 1024).toFixed(1)} MB) imported in ${seconds.toFixed(2)} s over HTTP\n`);
+      process.stdout.write(
+        `\n[journal] 10,000-waypoint GPX (${(Buffer.byteLength(gpx) / 1024 / 1024).toFixed(1)} MB) imported in ${seconds.toFixed(2)} s over HTTP\n`,
+      );
       expect(await testEm(app).count(Find, { lakeId: big.id })).toBe(10_000);
       expect(await journalCount(app, crew.crewId)).toBe(journalBefore + 10_000);
     });
   });
 
   describe('CSV catches', () => {
-    const header = 'date,time,species,weight,weight_unit,weight_oz,length,length_unit,fate,lure,technique,find_name,lat,lon,notes';
+    const header =
+      'date,time,species,weight,weight_unit,weight_oz,length,length_unit,fate,lure,technique,find_name,lat,lon,notes';
 
     it('serves a template whose header the importer accepts', async () => {
       const res = await crew.viewer.get(`${base}/catches/import/template`);
@@ -139,7 +202,14 @@ describe('imports: GPX finds and CSV catches', () => {
     });
 
     it('previews per-row errors, refuses the whole file when any row is bad, and imports a clean file in one transaction', async () => {
-      const find = await crew.angler.post(`${base}/finds`, { lakeId, name: 'CSV shell bed', lat: 32.9, lon: -96.3, kind: 'hard-bottom', subKind: 'shell' });
+      const find = await crew.angler.post(`${base}/finds`, {
+        lakeId,
+        name: 'CSV shell bed',
+        lat: 32.9,
+        lon: -96.3,
+        kind: 'hard-bottom',
+        subKind: 'shell',
+      });
       expectOk(find, 201);
       const bad = [
         header,
@@ -153,7 +223,12 @@ describe('imports: GPX finds and CSV catches', () => {
       const preview = await upload(crew.angler, `${base}/catches/import/preview?eventId=${eventId}`, bad, 'day1.csv');
       expectOk(preview);
       expect(preview.body).toMatchObject({ accepted: 1, rejected: 4 });
-      const rows = preview.body.rows as { line: number; errors: { field: string; message: string }[]; weightLb: number | null; findId: string | null }[];
+      const rows = preview.body.rows as {
+        line: number;
+        errors: { field: string; message: string }[];
+        weightLb: number | null;
+        findId: string | null;
+      }[];
       expect(rows[0]).toMatchObject({ line: 2, errors: [], weightLb: 3.25, findId: find.body.id });
       expect(rows[1]!.errors[0]).toMatchObject({ field: 'date' });
       expect(rows[2]!.errors[0]).toMatchObject({ field: 'species' });
@@ -164,24 +239,40 @@ describe('imports: GPX finds and CSV catches', () => {
       const refused = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, bad, 'day1.csv');
       expect(refused.status).toBe(400);
       expect(refused.body.code).toBe('import_refused');
-      expect(Object.keys(refused.body.fieldErrors)).toEqual(expect.arrayContaining(['line 3: date', 'line 4: species', 'line 5: weight', 'line 6: find_name']));
+      expect(Object.keys(refused.body.fieldErrors)).toEqual(
+        expect.arrayContaining(['line 3: date', 'line 4: species', 'line 5: weight', 'line 6: find_name']),
+      );
       expect(await testEm(app).count(Catch, { crewId: crew.crewId })).toBe(before);
       expect(await journalCount(app, crew.crewId)).toBe(journalBefore);
 
-      const good = [header, '2024-04-12,07:30,largemouth,3,lb-oz,4,18,in,weighed,jig,drag,CSV shell bed,,,first', '2024-04-13,09:05,smallmouth,1.2,kg,,380,mm,released,tube,,,32.9,-96.3,by coordinates'].join('\r\n');
+      const good = [
+        header,
+        '2024-04-12,07:30,largemouth,3,lb-oz,4,18,in,weighed,jig,drag,CSV shell bed,,,first',
+        '2024-04-13,09:05,smallmouth,1.2,kg,,380,mm,released,tube,,,32.9,-96.3,by coordinates',
+      ].join('\r\n');
       const ok = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, good, 'days.csv');
       expectOk(ok, 201);
       expect(ok.body).toEqual({ imported: 2, errors: [] });
       const list = await crew.angler.get(`${base}/catches?eventId=${eventId}`);
       const kg = list.body.find((c: { notes: string }) => c.notes === 'by coordinates');
-      expect(kg).toMatchObject({ findId: find.body.id, attributionDistanceM: 0, entered: { weight: { value: 1.2, unit: 'kg' }, length: { value: 380, unit: 'mm' } } });
+      expect(kg).toMatchObject({
+        findId: find.body.id,
+        attributionDistanceM: 0,
+        entered: { weight: { value: 1.2, unit: 'kg' }, length: { value: 380, unit: 'mm' } },
+      });
       expect(await journalCount(app, crew.crewId)).toBe(journalBefore + 2);
     });
 
     it('refuses a row timed before the day’s start or after its check-in, naming the line, and writes nothing', async () => {
       const timed = await createEvent(crew.angler, crew.crewId, lakeId, { name: 'Timed Open' });
       const [day] = await competitionDays(crew.angler, crew.crewId, timed.id);
-      expectOk(await crew.angler.patch(`${base}/competition-days/${day!.id}`, { startTime: '06:30', checkInTime: '15:00', version: day!.version }));
+      expectOk(
+        await crew.angler.patch(`${base}/competition-days/${day!.id}`, {
+          startTime: '06:30',
+          checkInTime: '15:00',
+          version: day!.version,
+        }),
+      );
       const file = [
         header,
         '2024-04-12,06:30,largemouth,3,,,18,,weighed,,,,,,at take-off',
@@ -190,12 +281,22 @@ describe('imports: GPX finds and CSV catches', () => {
         '2024-04-12,15:20,spotted,2,,,15,,weighed,,,,,,after check-in',
         '2024-04-13,05:10,spotted,2,,,15,,weighed,,,,,,second day has no times',
       ].join('\n');
-      const window = 'Catches on 2024-04-12 count from the 06:30 start to the 15:00 check-in (lake time, America/Chicago)';
+      const window =
+        'Catches on 2024-04-12 count from the 06:30 start to the 15:00 check-in (lake time, America/Chicago)';
 
-      const preview = await upload(crew.angler, `${base}/catches/import/preview?eventId=${timed.id}`, file, 'timed.csv');
+      const preview = await upload(
+        crew.angler,
+        `${base}/catches/import/preview?eventId=${timed.id}`,
+        file,
+        'timed.csv',
+      );
       expectOk(preview);
       expect(preview.body).toMatchObject({ accepted: 3, rejected: 2 });
-      const rows = preview.body.rows as { line: number; caughtAt: string | null; errors: { field: string; message: string }[] }[];
+      const rows = preview.body.rows as {
+        line: number;
+        caughtAt: string | null;
+        errors: { field: string; message: string }[];
+      }[];
       expect(rows.map((r) => r.errors)).toEqual([
         [],
         [{ field: 'time', message: `${window}; 06:29 is before the start.` }],
@@ -209,7 +310,13 @@ describe('imports: GPX finds and CSV catches', () => {
       const journalBefore = await journalCount(app, crew.crewId);
       const refused = await upload(crew.angler, `${base}/catches/import?eventId=${timed.id}`, file, 'timed.csv');
       expect(refused.status).toBe(400);
-      expect(refused.body).toMatchObject({ code: 'import_refused', fieldErrors: { 'line 3: time': [`${window}; 06:29 is before the start.`], 'line 5: time': [`${window}; 15:20 is after check-in.`] } });
+      expect(refused.body).toMatchObject({
+        code: 'import_refused',
+        fieldErrors: {
+          'line 3: time': [`${window}; 06:29 is before the start.`],
+          'line 5: time': [`${window}; 15:20 is after check-in.`],
+        },
+      });
       expect(Object.keys(refused.body.fieldErrors)).toHaveLength(2);
       expect(refused.body.message).toMatch(/2 of 5 row\(s\) have errors; nothing was imported/);
       expect(await testEm(app).count(Catch, { eventId: timed.id })).toBe(before);
@@ -223,11 +330,18 @@ describe('imports: GPX finds and CSV catches', () => {
     });
 
     it('refuses unknown columns and binary files', async () => {
-      const res = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, 'date,time,species,weight,fate,colour\n2024-04-12,07:00,largemouth,2,weighed,green', 'x.csv');
+      const res = await upload(
+        crew.angler,
+        `${base}/catches/import?eventId=${eventId}`,
+        'date,time,species,weight,fate,colour\n2024-04-12,07:00,largemouth,2,weighed,green',
+        'x.csv',
+      );
       expect(res.status).toBe(400);
       expect(res.body).toMatchObject({ code: 'malformed_file' });
       expect(res.body.message).toMatch(/Unknown column\(s\): colour/);
-      const png = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } }).png().toBuffer();
+      const png = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } })
+        .png()
+        .toBuffer();
       const bin = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, png, 'catches.csv');
       expect(bin.body.code).toBe('wrong_file_type');
     });
@@ -235,11 +349,34 @@ describe('imports: GPX finds and CSV catches', () => {
 
   it('attributes a catch to the nearest find within 50 m, says which and how far, and none beyond', async () => {
     const [day] = await competitionDays(crew.angler, crew.crewId, eventId);
-    const a = await crew.angler.post(`${base}/finds`, { lakeId, name: 'Attr A', lat: 32.8, lon: -96.4, kind: 'contour', subKind: 'point' });
-    const b = await crew.angler.post(`${base}/finds`, { lakeId, name: 'Attr B', lat: 32.8 + mLat(60), lon: -96.4, kind: 'contour', subKind: 'ledge' });
+    const a = await crew.angler.post(`${base}/finds`, {
+      lakeId,
+      name: 'Attr A',
+      lat: 32.8,
+      lon: -96.4,
+      kind: 'contour',
+      subKind: 'point',
+    });
+    const b = await crew.angler.post(`${base}/finds`, {
+      lakeId,
+      name: 'Attr B',
+      lat: 32.8 + mLat(60),
+      lon: -96.4,
+      kind: 'contour',
+      subKind: 'ledge',
+    });
     expectOk(a, 201);
     expectOk(b, 201);
-    const log = (lat: number) => crew.angler.post(`${base}/catches`, { competitionDayId: day!.id, caughtAt: '11:00', lat, lon: -96.4, species: 'spotted', weightLb: 2, fate: 'weighed' });
+    const log = (lat: number) =>
+      crew.angler.post(`${base}/catches`, {
+        competitionDayId: day!.id,
+        caughtAt: '11:00',
+        lat,
+        lon: -96.4,
+        species: 'spotted',
+        weightLb: 2,
+        fate: 'weighed',
+      });
     const near = await log(32.8 + mLat(20));
     expectOk(near, 201);
     expect(near.body).toMatchObject({ findId: a.body.id, findName: 'Attr A' });

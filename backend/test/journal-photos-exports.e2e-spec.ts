@@ -23,7 +23,10 @@ describe('photos and exports', () => {
   it('strips EXIF with a GPS position from an uploaded JPEG; only crew members get the image', async () => {
     const jpeg = await sharp({ create: { width: 120, height: 80, channels: 3, background: { r: 20, g: 80, b: 110 } } })
       .jpeg()
-      .withExif({ IFD0: { Make: 'LeakyCam' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '30/1 0/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '95/1 30/1 0/1' } })
+      .withExif({
+        IFD0: { Make: 'LeakyCam' },
+        IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '30/1 0/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '95/1 30/1 0/1' },
+      })
       .toBuffer();
     expect((await sharp(jpeg).metadata()).exif).toBeDefined();
     const res = await upload(crew.angler, `${base}/photos`, jpeg, 'catch-with-gps.jpg');
@@ -32,11 +35,14 @@ describe('photos and exports', () => {
     const stored = await testEm(app).findOneOrFail(Photo, { id: res.body.id });
     expect(stored.storageKey).not.toContain('catch-with-gps');
 
-    const served = await crew.viewer.agent.get(`${base}/photos/${res.body.id}`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const served = await crew.viewer.agent
+      .get(`${base}/photos/${res.body.id}`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(served.status).toBe(200);
     expect(served.headers['content-type']).toBe('image/jpeg');
     const meta = await sharp(served.body as Buffer).metadata();
@@ -48,7 +54,14 @@ describe('photos and exports', () => {
     expect((await rival.owner.get(`${base}/photos/${res.body.id}`)).status).toBe(404);
     expect((await rival.owner.get(`/api/crews/${rival.crewId}/photos/${res.body.id}`)).status).toBe(404);
 
-    const find = await crew.angler.post(`${base}/finds`, { lakeId: (await createLake(crew.angler, crew.crewId)).id, name: 'With photo', lat: 1, lon: 1, kind: 'other', photoId: res.body.id });
+    const find = await crew.angler.post(`${base}/finds`, {
+      lakeId: (await createLake(crew.angler, crew.crewId)).id,
+      name: 'With photo',
+      lat: 1,
+      lon: 1,
+      kind: 'other',
+      photoId: res.body.id,
+    });
     expectOk(find, 201);
     expect(find.body.photoId).toBe(res.body.id);
   });
@@ -68,17 +81,38 @@ describe('photos and exports', () => {
     const lake = await createLake(crew.angler, crew.crewId, { name: '=HYPERLINK("http://evil.test","lake")' });
     const event = await createEvent(crew.angler, crew.crewId, lake.id, { name: '+Spring', notes: '@SUM(A1:A9)' });
     const [day] = await competitionDays(crew.angler, crew.crewId, event.id);
-    const find = await crew.angler.post(`${base}/finds`, { lakeId: lake.id, name: '-2+3', notes: '\tTAB lead', lat: 32.91, lon: -96.21, kind: 'wood-brush' });
+    const find = await crew.angler.post(`${base}/finds`, {
+      lakeId: lake.id,
+      name: '-2+3',
+      notes: '\tTAB lead',
+      lat: 32.91,
+      lon: -96.21,
+      kind: 'wood-brush',
+    });
     expectOk(find, 201);
-    const c = await crew.angler.post(`${base}/catches`, { competitionDayId: day!.id, caughtAt: '08:00', findId: find.body.id, species: 'largemouth', weight: { value: 2, unit: 'lb-oz', ounces: 8 }, fate: 'weighed', lure: '=cmd|" /C calc"!A0' });
+    const c = await crew.angler.post(`${base}/catches`, {
+      competitionDayId: day!.id,
+      caughtAt: '08:00',
+      findId: find.body.id,
+      species: 'largemouth',
+      weight: { value: 2, unit: 'lb-oz', ounces: 8 },
+      fate: 'weighed',
+      lure: '=cmd|" /C calc"!A0',
+    });
     expectOk(c, 201);
 
     const json = await crew.angler.get(`${base}/export.json`);
     expectOk(json);
     expect(json.headers['content-disposition']).toMatch(/attachment/);
     expect(json.body.notice).toMatch(/exact positions/);
-    expect(json.body.finds.find((f: { id: string }) => f.id === find.body.id)).toMatchObject({ lat: 32.91, lon: -96.21 });
-    expect(json.body.catches.find((x: { id: string }) => x.id === c.body.id)).toMatchObject({ weightLb: 2.5, entered: { weight: { value: 2, unit: 'lb-oz', ounces: 8 } } });
+    expect(json.body.finds.find((f: { id: string }) => f.id === find.body.id)).toMatchObject({
+      lat: 32.91,
+      lon: -96.21,
+    });
+    expect(json.body.catches.find((x: { id: string }) => x.id === c.body.id)).toMatchObject({
+      weightLb: 2.5,
+      entered: { weight: { value: 2, unit: 'lb-oz', ounces: 8 } },
+    });
     expect(json.body.events.find((e: { id: string }) => e.id === event.id).competitionDays).toHaveLength(2);
 
     const csv = await crew.owner.get(`${base}/export.csv`);
@@ -90,8 +124,18 @@ describe('photos and exports', () => {
     const cells = rows.flatMap((r) => Object.values(r));
     for (const cell of cells) expect(cell).not.toMatch(/^[=+@\t\r]/);
     for (const cell of cells) if (cell.startsWith('-')) expect(cell).toMatch(/^-\d+(\.\d+)?(e-?\d+)?$/); // negative numbers only
-    expect(rows.find((r) => r.record_type === 'lake' && r.id === lake.id)!.name).toBe(`'=HYPERLINK("http://evil.test","lake")`);
-    expect(rows.find((r) => r.record_type === 'find' && r.id === find.body.id)).toMatchObject({ name: "'-2+3", notes: "'\tTAB lead", lat: '32.91', lon: '-96.21' });
-    expect(rows.find((r) => r.record_type === 'catch')).toMatchObject({ lure: `'=cmd|" /C calc"!A0`, weight_entered: '2 lb 8 oz' });
+    expect(rows.find((r) => r.record_type === 'lake' && r.id === lake.id)!.name).toBe(
+      `'=HYPERLINK("http://evil.test","lake")`,
+    );
+    expect(rows.find((r) => r.record_type === 'find' && r.id === find.body.id)).toMatchObject({
+      name: "'-2+3",
+      notes: "'\tTAB lead",
+      lat: '32.91',
+      lon: '-96.21',
+    });
+    expect(rows.find((r) => r.record_type === 'catch')).toMatchObject({
+      lure: `'=cmd|" /C calc"!A0`,
+      weight_entered: '2 lb 8 oz',
+    });
   });
 });

@@ -23,11 +23,24 @@ describe('journal privacy: crews, viewers and positions', () => {
     lakeId = (await createLake(crew.angler, crew.crewId)).id;
     eventId = (await createEvent(crew.angler, crew.crewId, lakeId)).id;
     dayId = (await competitionDays(crew.angler, crew.crewId, eventId))[0]!.id;
-    const find = await crew.angler.post(`${base}/finds`, { lakeId, name: 'Secret shell', lat: 32.91, lon: -96.21, kind: 'hard-bottom', subKind: 'shell' });
+    const find = await crew.angler.post(`${base}/finds`, {
+      lakeId,
+      name: 'Secret shell',
+      lat: 32.91,
+      lon: -96.21,
+      kind: 'hard-bottom',
+      subKind: 'shell',
+    });
     findId = find.body.id;
     const rivalLake = await createLake(rival.owner, rival.crewId);
     // The rival's find sits on the very same coordinates: attribution must still never pick it.
-    const rf = await rival.owner.post(`/api/crews/${rival.crewId}/finds`, { lakeId: rivalLake.id, name: 'Their spot', lat: 32.95, lon: -96.2, kind: 'bait' });
+    const rf = await rival.owner.post(`/api/crews/${rival.crewId}/finds`, {
+      lakeId: rivalLake.id,
+      name: 'Their spot',
+      lat: 32.95,
+      lon: -96.2,
+      kind: 'bait',
+    });
     rivalFindId = rf.body.id;
   });
   afterAll(async () => {
@@ -36,13 +49,35 @@ describe('journal privacy: crews, viewers and positions', () => {
 
   it("refuses to attach another crew's find to a catch, without telling it exists", async () => {
     const before = await testEm(app).count(Catch, { crewId: crew.crewId });
-    const res = await crew.angler.post(`${base}/catches`, { competitionDayId: dayId, caughtAt: '08:00', findId: rivalFindId, species: 'largemouth', weightLb: 3, fate: 'weighed' });
-    const unknown = await crew.angler.post(`${base}/catches`, { competitionDayId: dayId, caughtAt: '08:00', findId: '6f1c2a4e-8b0d-4c3e-9a51-2b7e4d9c0f13', species: 'largemouth', weightLb: 3, fate: 'weighed' });
+    const res = await crew.angler.post(`${base}/catches`, {
+      competitionDayId: dayId,
+      caughtAt: '08:00',
+      findId: rivalFindId,
+      species: 'largemouth',
+      weightLb: 3,
+      fate: 'weighed',
+    });
+    const unknown = await crew.angler.post(`${base}/catches`, {
+      competitionDayId: dayId,
+      caughtAt: '08:00',
+      findId: '6f1c2a4e-8b0d-4c3e-9a51-2b7e4d9c0f13',
+      species: 'largemouth',
+      weightLb: 3,
+      fate: 'weighed',
+    });
     expect(res.status).toBe(400);
     expect(res.body.fieldErrors).toEqual({ findId: ['No such find on this lake in this crew.'] });
     expect(unknown.body.fieldErrors).toEqual(res.body.fieldErrors);
     expect(JSON.stringify(res.body)).not.toContain('Their spot');
-    const byCoords = await crew.angler.post(`${base}/catches`, { competitionDayId: dayId, caughtAt: '08:05', lat: 32.95, lon: -96.2, species: 'largemouth', weightLb: 3, fate: 'weighed' });
+    const byCoords = await crew.angler.post(`${base}/catches`, {
+      competitionDayId: dayId,
+      caughtAt: '08:05',
+      lat: 32.95,
+      lon: -96.2,
+      species: 'largemouth',
+      weightLb: 3,
+      fate: 'weighed',
+    });
     expectOk(byCoords, 201);
     expect(byCoords.body.findId).toBeNull();
     expect(await testEm(app).count(Catch, { crewId: crew.crewId })).toBe(before + 1);
@@ -50,7 +85,9 @@ describe('journal privacy: crews, viewers and positions', () => {
 
   it("answers 404 for another crew's records by id, and for a non-member on any journal route", async () => {
     expect((await crew.angler.get(`${base}/finds/${rivalFindId}`)).status).toBe(404);
-    expect((await crew.angler.patch(`${base}/finds/${rivalFindId}`, { name: 'mine now', version: 1 })).status).toBe(404);
+    expect((await crew.angler.patch(`${base}/finds/${rivalFindId}`, { name: 'mine now', version: 1 })).status).toBe(
+      404,
+    );
     expect((await crew.angler.delete(`${base}/finds/${rivalFindId}`)).status).toBe(404);
     const outsider = await rival.owner.get(`${base}/finds`);
     expect(outsider.status).toBe(404);
@@ -65,7 +102,13 @@ describe('journal privacy: crews, viewers and positions', () => {
       crew.viewer.post(`${base}/events`, { lakeId, name: 'V', competitionDates: ['2024-06-01'] }),
       crew.viewer.post(`${base}/finds`, { lakeId, name: 'V', lat: 0, lon: 0, kind: 'other' }),
       crew.viewer.patch(`${base}/finds/${findId}`, { name: 'V', version: 1 }),
-      crew.viewer.post(`${base}/catches`, { competitionDayId: dayId, caughtAt: '08:00', species: 'largemouth', weightLb: 3, fate: 'weighed' }),
+      crew.viewer.post(`${base}/catches`, {
+        competitionDayId: dayId,
+        caughtAt: '08:00',
+        species: 'largemouth',
+        weightLb: 3,
+        fate: 'weighed',
+      }),
       crew.viewer.send('put', `${base}/competition-days/${dayId}/weigh-in`, { officialLb: 10 }),
       crew.viewer.delete(`${base}/finds/${findId}`),
     ];

@@ -27,15 +27,30 @@ describe('demo journal seeding', () => {
   it('loads the fixtures into the crew with a journal event per record, once', async () => {
     const demo = demoJournal();
     const em = testEm(app);
-    const seed = () => new JournalDemoSeeder().run(em as unknown as EntityManager, { crews: { [DEMO_CREW_NAME]: em.getReference(Crew, crew.crewId) }, users: {} });
+    const seed = () =>
+      new JournalDemoSeeder().run(em as unknown as EntityManager, {
+        crews: { [DEMO_CREW_NAME]: em.getReference(Crew, crew.crewId) },
+        users: {},
+      });
     await seed();
     const crewId = crew.crewId;
     expect(await em.count(Lake, { crewId })).toBe(demo.lakes.length);
     expect(await em.count(Find, { crewId })).toBe(demo.finds.length);
     expect(await em.count(Catch, { crewId })).toBe(demo.catches.length);
-    const types = await em.getConnection().execute<{ type: string; n: number }[]>('select type, count(*) as n from journal_event where crew_id = ? group by type', [crewId]);
+    const types = await em
+      .getConnection()
+      .execute<{ type: string; n: number }[]>(
+        'select type, count(*) as n from journal_event where crew_id = ? group by type',
+        [crewId],
+      );
     const count = Object.fromEntries(types.map((t) => [t.type, Number(t.n)]));
-    expect(count).toEqual({ LakeCreated: demo.lakes.length, EventCreated: demo.events.length, FindAdded: demo.finds.length, CatchLogged: demo.catches.length, WeighInRecorded: demo.weighIns.length });
+    expect(count).toEqual({
+      LakeCreated: demo.lakes.length,
+      EventCreated: demo.events.length,
+      FindAdded: demo.finds.length,
+      CatchLogged: demo.catches.length,
+      WeighInRecorded: demo.weighIns.length,
+    });
     const event = await em.findOneOrFail(JournalEvent, { crewId, type: 'EventCreated' }, { orderBy: { seq: 'asc' } });
     expect((event.payload.competitionDays as unknown[]).length).toBeGreaterThan(0);
 
@@ -46,10 +61,16 @@ describe('demo journal seeding', () => {
     const events = await crew.angler.get(`/api/crews/${crewId}/events`);
     expect(events.body).toHaveLength(demo.events.length);
     const withResults = demo.weighIns[0]!;
-    const eventId = events.body.find((e: { name: string }) => e.name === demo.events.find((d) => d.id === withResults.eventId)!.name).id;
+    const eventId = events.body.find(
+      (e: { name: string }) => e.name === demo.events.find((d) => d.id === withResults.eventId)!.name,
+    ).id;
     const w = (await crew.angler.get(`/api/crews/${crewId}/events/${eventId}/weigh-ins`)).body as WeighInsView;
     const day = w.days.find((d) => d.date === withResults.competitionDate)!;
-    expect(day.official).toMatchObject({ officialLb: withResults.officialLb, dayPlace: withResults.dayPlace, lateMinutes: withResults.lateMinutes });
+    expect(day.official).toMatchObject({
+      officialLb: withResults.officialLb,
+      dayPlace: withResults.dayPlace,
+      lateMinutes: withResults.lateMinutes,
+    });
     expect(day.computed.counted.length).toBeGreaterThan(0);
   });
 });

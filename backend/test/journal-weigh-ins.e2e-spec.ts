@@ -21,7 +21,9 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     const base = `/api/crews/${crew.crewId}`;
     const lake = await createLake(crew.angler, crew.crewId);
     // Rules (common practice, stated per event): 5 fish, 12 in minimum, 0.25 lb per dead fish counted, 1 lb per short fish.
-    const event = await createEvent(crew.angler, crew.crewId, lake.id, { rules: { fishPerDay: 5, minLengthIn: 12, deadFishPenaltyLb: 0.25, shortFishPenaltyLb: 1 } });
+    const event = await createEvent(crew.angler, crew.crewId, lake.id, {
+      rules: { fishPerDay: 5, minLengthIn: 12, deadFishPenaltyLb: 0.25, shortFishPenaltyLb: 1 },
+    });
     const [day1, day2] = await competitionDays(crew.angler, crew.crewId, event.id);
     const fish = [
       { t: '07:00', w: 4.1, l: 19, fate: 'weighed' },
@@ -35,7 +37,14 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     ];
     const ids: string[] = [];
     for (const f of fish) {
-      const res = await crew.angler.post(`${base}/catches`, { competitionDayId: day1!.id, caughtAt: f.t, species: 'largemouth', weightLb: f.w, lengthIn: f.l, fate: f.fate });
+      const res = await crew.angler.post(`${base}/catches`, {
+        competitionDayId: day1!.id,
+        caughtAt: f.t,
+        species: 'largemouth',
+        weightLb: f.w,
+        lengthIn: f.l,
+        fate: f.fate,
+      });
       expectOk(res, 201);
       ids.push(res.body.id);
     }
@@ -58,19 +67,38 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     expect(view.totals.officialLb).toBeCloseTo(14.75, 6);
 
     // The official figures override in the totals; a late check-in adds its penalty to the computed bag.
-    const put = await crew.angler.send('put', `${base}/competition-days/${day1!.id}/weigh-in`, { grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2 });
+    const put = await crew.angler.send('put', `${base}/competition-days/${day1!.id}/weigh-in`, {
+      grossLb: 16.02,
+      penaltyLb: 3.25,
+      officialLb: 12.77,
+      dayPlace: 4,
+      lateMinutes: 2,
+    });
     expectOk(put);
     expect(put.body).toMatchObject({ competitionDayId: day1!.id, officialLb: 12.77, dayPlace: 4 });
     const bad = await crew.angler.send('put', `${base}/competition-days/${day2!.id}/weigh-in`, { officialLb: -1 });
     expect(bad.status).toBe(400);
     const after = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
-    expect(after.days[0]!.official).toEqual({ grossLb: 16.02, penaltyLb: 3.25, officialLb: 12.77, dayPlace: 4, lateMinutes: 2, version: 1 });
+    expect(after.days[0]!.official).toEqual({
+      grossLb: 16.02,
+      penaltyLb: 3.25,
+      officialLb: 12.77,
+      dayPlace: 4,
+      lateMinutes: 2,
+      version: 1,
+    });
     expect(after.days[0]!.computed.penaltyLb).toBeCloseTo(3.25, 6); // 1.25 + 2 min × 1 lb/min
     expect(after.totals.officialLb).toBeCloseTo(12.77, 6);
     expect(after.totals.computedNetLb).toBeCloseTo(12.75, 6);
     const recorded = await testEm(app).find(JournalEvent, { crewId: crew.crewId, type: 'WeighInRecorded' });
     expect(recorded).toHaveLength(1); // the refused PUT wrote nothing
-    expect(recorded[0]!.payload).toMatchObject({ competitionDayId: day1!.id, eventId: event.id, officialLb: 12.77, lateMinutes: 2, version: 1 });
+    expect(recorded[0]!.payload).toMatchObject({
+      competitionDayId: day1!.id,
+      eventId: event.id,
+      officialLb: 12.77,
+      lateMinutes: 2,
+      version: 1,
+    });
     expect((await journalOf(app, ids[0]!)).map((e) => e.type)).toEqual(['CatchLogged']);
   });
 
@@ -100,14 +128,21 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     expect(blind.status).toBe(409);
     expect(blind.body.code).toBe('stale_version');
     const [, emptyDay] = await competitionDays(crew.angler, crew.crewId, event.id);
-    const phantom = await crew.angler.send('put', `${base}/competition-days/${emptyDay!.id}/weigh-in`, { officialLb: 9, version: 3 });
+    const phantom = await crew.angler.send('put', `${base}/competition-days/${emptyDay!.id}/weigh-in`, {
+      officialLb: 9,
+      version: 3,
+    });
     expect(phantom.status).toBe(409);
     expect(phantom.body.code).toBe('stale_version');
 
     const view = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
     expect(view.days[0]!.official).toMatchObject({ officialLb: 12.25, dayPlace: null, version: 2 });
     expect(view.days[1]!.official).toBeNull();
-    const recorded = await testEm(app).find(JournalEvent, { crewId: crew.crewId, type: 'WeighInRecorded' }, { orderBy: { seq: 'asc' } });
+    const recorded = await testEm(app).find(
+      JournalEvent,
+      { crewId: crew.crewId, type: 'WeighInRecorded' },
+      { orderBy: { seq: 'asc' } },
+    );
     const forDay = recorded.filter((e) => (e.payload as { competitionDayId?: string }).competitionDayId === day!.id);
     expect(forDay.map((e) => (e.payload as { version: number }).version)).toEqual([1, 2]); // the refused PUTs wrote nothing
 

@@ -27,7 +27,9 @@ describe('OpenAPI document and Swagger UI', () => {
   });
 
   it('describes every operation with a 2xx answer and a schema for its body (a DTO for JSON)', () => {
-    const ops = Object.entries(doc.paths).flatMap(([path, item]) => Object.entries(item).map(([method, op]) => ({ key: `${method.toUpperCase()} ${path}`, op })));
+    const ops = Object.entries(doc.paths).flatMap(([path, item]) =>
+      Object.entries(item).map(([method, op]) => ({ key: `${method.toUpperCase()} ${path}`, op })),
+    );
     expect(ops.length).toBeGreaterThanOrEqual(24);
     const problems: string[] = [];
     for (const { key, op } of ops) {
@@ -35,8 +37,10 @@ describe('OpenAPI document and Swagger UI', () => {
       if (success.length === 0) problems.push(`${key}: no 2xx response`);
       const content = op.requestBody?.content ?? {};
       const json = content['application/json'];
-      if (json && !json.schema.$ref?.startsWith('#/components/schemas/')) problems.push(`${key}: JSON body has no DTO schema`);
-      if (op.requestBody && !json && !Object.values(content).some((c) => c.schema)) problems.push(`${key}: body has no schema`);
+      if (json && !json.schema.$ref?.startsWith('#/components/schemas/'))
+        problems.push(`${key}: JSON body has no DTO schema`);
+      if (op.requestBody && !json && !Object.values(content).some((c) => c.schema))
+        problems.push(`${key}: body has no schema`);
     }
     expect(problems).toEqual([]);
     expect(doc.components.schemas).toHaveProperty('ApiErrorDto');

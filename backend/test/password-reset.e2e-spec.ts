@@ -55,7 +55,10 @@ describe('password reset by e-mail', () => {
     expect((await new ApiClient(app).signIn(user.email, user.password)).status).toBe(401);
     expect((await new ApiClient(app).signIn(user.email, NEW_PASSWORD)).status).toBe(200);
 
-    const reuse = await new ApiClient(app).post('/api/auth/password-reset/confirm', { token, password: 'another fine passphrase' });
+    const reuse = await new ApiClient(app).post('/api/auth/password-reset/confirm', {
+      token,
+      password: 'another fine passphrase',
+    });
     expect(reuse.status).toBe(400);
     expect(reuse.body.code).toBe('token_invalid');
     expect((await new ApiClient(app).signIn(user.email, NEW_PASSWORD)).status).toBe(200);
@@ -67,7 +70,10 @@ describe('password reset by e-mail', () => {
     const token = tokenFromMail(await waitForMail(user.email), '/reset-password');
     await testEm(app).nativeUpdate(AuthToken, { user: user.userId }, { expiresAt: new Date(Date.now() - 1000) });
     for (const t of [token, 'made-up-token']) {
-      const res = await new ApiClient(app).post('/api/auth/password-reset/confirm', { token: t, password: NEW_PASSWORD });
+      const res = await new ApiClient(app).post('/api/auth/password-reset/confirm', {
+        token: t,
+        password: NEW_PASSWORD,
+      });
       expect(res.status).toBe(400);
       expect(res.body.code).toBe('token_invalid');
     }
@@ -77,7 +83,10 @@ describe('password reset by e-mail', () => {
   it('does not accept a session token as a reset token (tokens are bound to their purpose)', async () => {
     const user = await newUser(app);
     const sessionToken = user.sessionCookie.replace('sb_session=', '');
-    const res = await new ApiClient(app).post('/api/auth/password-reset/confirm', { token: sessionToken, password: NEW_PASSWORD });
+    const res = await new ApiClient(app).post('/api/auth/password-reset/confirm', {
+      token: sessionToken,
+      password: NEW_PASSWORD,
+    });
     expect(res.status).toBe(400);
     expect(res.body.code).toBe('token_invalid');
     expect((await request(app.getHttpServer()).get('/api/auth/me').set('Cookie', user.sessionCookie)).status).toBe(200);

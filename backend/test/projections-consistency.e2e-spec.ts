@@ -6,22 +6,73 @@ import { JournalProjector } from '../src/projections/journal-projector.service';
 import { EventBus } from '@nestjs/cqrs';
 import { type ApiClient, makeAdmin, newUser } from './utils/api-client';
 import { createTestApp } from './utils/test-app';
-import { expectSameFigures, FIND_GROUPINGS, lakeWithEvents, readModelFigures, readModelSnapshot, recomputeFromJournal, sqlEm, waitForProjection } from './reports-support';
+import {
+  expectSameFigures,
+  FIND_GROUPINGS,
+  lakeWithEvents,
+  readModelFigures,
+  readModelSnapshot,
+  recomputeFromJournal,
+  sqlEm,
+  waitForProjection,
+} from './reports-support';
 
 const KINDS = ['hard-bottom', 'vegetation', 'bait', 'contour'] as const;
 const FATES = ['weighed', 'culled', 'released', 'dead'] as const;
 
 const commandArb = fc.oneof(
-  { weight: 3, arbitrary: fc.record({ t: fc.constant('addFind' as const), kind: fc.constantFrom(...KINDS), event: fc.constantFrom(0, 1, null), depthFt: fc.option(fc.integer({ min: 2, max: 45 }), { nil: null }), hardness: fc.option(fc.integer({ min: 1, max: 5 }), { nil: null }), waterTempF: fc.option(fc.integer({ min: 45, max: 88 }), { nil: null }) }) },
-  { weight: 5, arbitrary: fc.record({ t: fc.constant('logCatch' as const), find: fc.option(fc.nat(), { nil: null, freq: 5 }), event: fc.constantFrom(0, 1), day: fc.constantFrom(0, 1), weightLb: fc.integer({ min: 50, max: 900 }).map((x) => x / 100), fate: fc.constantFrom(...FATES), minute: fc.integer({ min: 360, max: 1080 }) }) },
-  { weight: 2, arbitrary: fc.record({ t: fc.constant('updateCatch' as const), c: fc.nat(), weightLb: fc.option(fc.integer({ min: 50, max: 900 }).map((x) => x / 100), { nil: undefined }), fate: fc.option(fc.constantFrom(...FATES), { nil: undefined }), find: fc.option(fc.option(fc.nat(), { nil: null }), { nil: undefined }) }) },
+  {
+    weight: 3,
+    arbitrary: fc.record({
+      t: fc.constant('addFind' as const),
+      kind: fc.constantFrom(...KINDS),
+      event: fc.constantFrom(0, 1, null),
+      depthFt: fc.option(fc.integer({ min: 2, max: 45 }), { nil: null }),
+      hardness: fc.option(fc.integer({ min: 1, max: 5 }), { nil: null }),
+      waterTempF: fc.option(fc.integer({ min: 45, max: 88 }), { nil: null }),
+    }),
+  },
+  {
+    weight: 5,
+    arbitrary: fc.record({
+      t: fc.constant('logCatch' as const),
+      find: fc.option(fc.nat(), { nil: null, freq: 5 }),
+      event: fc.constantFrom(0, 1),
+      day: fc.constantFrom(0, 1),
+      weightLb: fc.integer({ min: 50, max: 900 }).map((x) => x / 100),
+      fate: fc.constantFrom(...FATES),
+      minute: fc.integer({ min: 360, max: 1080 }),
+    }),
+  },
+  {
+    weight: 2,
+    arbitrary: fc.record({
+      t: fc.constant('updateCatch' as const),
+      c: fc.nat(),
+      weightLb: fc.option(
+        fc.integer({ min: 50, max: 900 }).map((x) => x / 100),
+        { nil: undefined },
+      ),
+      fate: fc.option(fc.constantFrom(...FATES), { nil: undefined }),
+      find: fc.option(fc.option(fc.nat(), { nil: null }), { nil: undefined }),
+    }),
+  },
   { weight: 1, arbitrary: fc.record({ t: fc.constant('deleteCatch' as const), c: fc.nat() }) },
-  { weight: 1, arbitrary: fc.record({ t: fc.constant('updateFind' as const), f: fc.nat(), kind: fc.option(fc.constantFrom(...KINDS), { nil: undefined }), depthFt: fc.option(fc.integer({ min: 2, max: 45 }), { nil: undefined }) }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      t: fc.constant('updateFind' as const),
+      f: fc.nat(),
+      kind: fc.option(fc.constantFrom(...KINDS), { nil: undefined }),
+      depthFt: fc.option(fc.integer({ min: 2, max: 45 }), { nil: undefined }),
+    }),
+  },
   { weight: 1, arbitrary: fc.record({ t: fc.constant('deleteFind' as const), f: fc.nat() }) },
 );
 type Command = typeof commandArb extends fc.Arbitrary<infer T> ? T : never;
 
-const hhmm = (minute: number) => `${String(Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}`;
+const hhmm = (minute: number) =>
+  `${String(Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}`;
 
 describe('projections: incremental = rebuild = recomputation from the journal (property-based)', () => {
   let app: INestApplication;
@@ -76,7 +127,8 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
         const body: Record<string, unknown> = { version: c.version };
         if (cmd.weightLb !== undefined) body.weightLb = cmd.weightLb;
         if (cmd.fate !== undefined) body.fate = cmd.fate;
-        if (cmd.find !== undefined) body.findId = cmd.find === null || !finds.length ? null : finds[cmd.find % finds.length]!.id;
+        if (cmd.find !== undefined)
+          body.findId = cmd.find === null || !finds.length ? null : finds[cmd.find % finds.length]!.id;
         res = await owner.patch(`${base}/catches/${c.id}`, body);
         if (res.status === 200) c.version = res.body.version;
       } else if (cmd.t === 'deleteCatch' && catches.length) {
@@ -84,7 +136,11 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
         res = await owner.delete(`${base}/catches/${c!.id}`);
       } else if (cmd.t === 'updateFind' && finds.length) {
         const f = finds[cmd.f % finds.length]!;
-        res = await owner.patch(`${base}/finds/${f.id}`, { version: f.version, ...(cmd.kind ? { kind: cmd.kind, hardness: null } : {}), ...(cmd.depthFt ? { depthFt: cmd.depthFt } : {}) });
+        res = await owner.patch(`${base}/finds/${f.id}`, {
+          version: f.version,
+          ...(cmd.kind ? { kind: cmd.kind, hardness: null } : {}),
+          ...(cmd.depthFt ? { depthFt: cmd.depthFt } : {}),
+        });
         if (res.status === 200) f.version = res.body.version;
       } else if (cmd.t === 'deleteFind' && finds.length) {
         const [f] = finds.splice(cmd.f % finds.length, 1);
@@ -110,7 +166,12 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
         succeeded += await run(crewId, commands);
         await waitForProjection(app);
         const incremental = await readModelSnapshot(app, crewId);
-        for (const by of FIND_GROUPINGS) expectSameFigures(await readModelFigures(app, crewId, by), await recomputeFromJournal(app, crewId, by), `incremental ${by}`);
+        for (const by of FIND_GROUPINGS)
+          expectSameFigures(
+            await readModelFigures(app, crewId, by),
+            await recomputeFromJournal(app, crewId, by),
+            `incremental ${by}`,
+          );
 
         const rebuilt = await admin.post('/api/admin/projections/rebuild');
         expect(rebuilt.status, JSON.stringify(rebuilt.body)).toBe(200);
@@ -137,7 +198,9 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
     const before = await readModelSnapshot(app, crewId);
 
     // Wind the checkpoint back over the last events: they are applied a second time.
-    await sqlEm(app).execute("UPDATE projection_checkpoint SET last_seq = GREATEST(0, last_seq - 4) WHERE name = 'journal'");
+    await sqlEm(app).execute(
+      "UPDATE projection_checkpoint SET last_seq = GREATEST(0, last_seq - 4) WHERE name = 'journal'",
+    );
     const replay = await app.get(JournalProjector).requestCatchUp();
     expect(replay.applied).toBeGreaterThanOrEqual(4);
     // And the wake-up call delivered twice more.

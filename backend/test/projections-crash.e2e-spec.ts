@@ -3,7 +3,15 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { JournalProjector } from '../src/projections/journal-projector.service';
 import { ApiClient, newUser } from './utils/api-client';
 import { createTestApp } from './utils/test-app';
-import { expectSameFigures, FIND_GROUPINGS, lakeWithEvents, readModelFigures, recomputeFromJournal, sqlEm, waitForProjection } from './reports-support';
+import {
+  expectSameFigures,
+  FIND_GROUPINGS,
+  lakeWithEvents,
+  readModelFigures,
+  recomputeFromJournal,
+  sqlEm,
+  waitForProjection,
+} from './reports-support';
 
 /**
  * A crash between the write and the projection: the first server writes with its projector switched off (as if
@@ -21,14 +29,40 @@ describe('projections: a crash between write and projection loses nothing', () =
     const owner = await newUser(writer, 'owner');
     const crewId = (await owner.post('/api/crews', { name: 'Crash Crew' })).body.id as string;
     const { lakeId, events } = await lakeWithEvents(owner, crewId);
-    const find = await owner.post(`/api/crews/${crewId}/finds`, { lakeId, eventId: events[0]!.id, name: 'Shell bar', lat: 32.951, lon: -96.201, kind: 'hard-bottom', hardness: 4, depthFt: 19 });
+    const find = await owner.post(`/api/crews/${crewId}/finds`, {
+      lakeId,
+      eventId: events[0]!.id,
+      name: 'Shell bar',
+      lat: 32.951,
+      lon: -96.201,
+      kind: 'hard-bottom',
+      hardness: 4,
+      depthFt: 19,
+    });
     expect(find.status).toBe(201);
-    await owner.post(`/api/crews/${crewId}/finds`, { lakeId, eventId: events[0]!.id, name: 'Grass edge', lat: 32.953, lon: -96.203, kind: 'vegetation', depthFt: 8 });
-    const caught = await owner.post(`/api/crews/${crewId}/catches`, { competitionDayId: events[0]!.dayIds[0], caughtAt: '07:45', findId: find.body.id, species: 'largemouth', weightLb: 4.12, fate: 'weighed' });
+    await owner.post(`/api/crews/${crewId}/finds`, {
+      lakeId,
+      eventId: events[0]!.id,
+      name: 'Grass edge',
+      lat: 32.953,
+      lon: -96.203,
+      kind: 'vegetation',
+      depthFt: 8,
+    });
+    const caught = await owner.post(`/api/crews/${crewId}/catches`, {
+      competitionDayId: events[0]!.dayIds[0],
+      caughtAt: '07:45',
+      findId: find.body.id,
+      species: 'largemouth',
+      weightLb: 4.12,
+      fate: 'weighed',
+    });
     expect(caught.status).toBe(201);
 
     const em = sqlEm(writer);
-    const [{ n }] = (await em.execute('SELECT COUNT(*) AS n FROM rm_find_outcome WHERE crew_id = ?', [crewId])) as { n: unknown }[];
+    const [{ n }] = (await em.execute('SELECT COUNT(*) AS n FROM rm_find_outcome WHERE crew_id = ?', [crewId])) as {
+      n: unknown;
+    }[];
     expect(Number(n)).toBe(0);
     const hits = await owner.get(`/api/crews/${crewId}/reports/hit-rates?by=kind`);
     expect(hits.body.overall.findsFished).toBe(0);
@@ -43,7 +77,12 @@ describe('projections: a crash between write and projection loses nothing', () =
     await reader.signIn(owner.email, owner.password);
     const after = await reader.get(`/api/crews/${crewId}/reports/hit-rates?by=kind`);
     expect(after.body.overall).toMatchObject({ findsFished: 2, findsProducing: 1, fishCount: 1 });
-    for (const by of FIND_GROUPINGS) expectSameFigures(await readModelFigures(next, crewId, by), await recomputeFromJournal(next, crewId, by), `after restart ${by}`);
+    for (const by of FIND_GROUPINGS)
+      expectSameFigures(
+        await readModelFigures(next, crewId, by),
+        await recomputeFromJournal(next, crewId, by),
+        `after restart ${by}`,
+      );
     expect(next.get(JournalProjector).enabled).toBe(true);
   });
 });

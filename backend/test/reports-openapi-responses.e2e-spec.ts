@@ -30,7 +30,10 @@ describe('report answers match their OpenAPI response schemas', () => {
     check = responseValidator(doc);
     demo = await crewWithMembers(app, DEMO_CREW_NAME);
     const em = testEm(app);
-    await new JournalDemoSeeder().run(em as unknown as EntityManager, { crews: { [DEMO_CREW_NAME]: em.getReference(Crew, demo.crewId) }, users: {} });
+    await new JournalDemoSeeder().run(em as unknown as EntityManager, {
+      crews: { [DEMO_CREW_NAME]: em.getReference(Crew, demo.crewId) },
+      users: {},
+    });
     // The seeder writes the journal without publishing, as before a start-up; ask the projector to catch up.
     await app.get(JournalProjector).requestCatchUp();
     empty = await crewWithMembers(app, 'Empty Report Crew');
@@ -41,15 +44,24 @@ describe('report answers match their OpenAPI response schemas', () => {
   });
 
   /** Calls a route and returns the problems of its answer against the documented schema for that status. */
-  async function answer(client: ApiClient, method: 'get' | 'post', template: string, values: Record<string, string>, opts: { query?: string; body?: object; status: number }): Promise<string[]> {
-    const url = template.replace(/\{(\w+)\}/g, (_, name: string) => values[name]!) + (opts.query ? `?${opts.query}` : '');
+  async function answer(
+    client: ApiClient,
+    method: 'get' | 'post',
+    template: string,
+    values: Record<string, string>,
+    opts: { query?: string; body?: object; status: number },
+  ): Promise<string[]> {
+    const url =
+      template.replace(/\{(\w+)\}/g, (_, name: string) => values[name]!) + (opts.query ? `?${opts.query}` : '');
     const res = method === 'get' ? await client.get(url) : await client.post(url, opts.body);
-    if (res.status !== opts.status) return [`${method.toUpperCase()} ${url}: ${res.status} ${JSON.stringify(res.body)}`];
+    if (res.status !== opts.status)
+      return [`${method.toUpperCase()} ${url}: ${res.status} ${JSON.stringify(res.body)}`];
     covered.add(`${method.toUpperCase()} ${template}`);
     return check(method, template, res.status, res.body);
   }
 
-  const listOf = async <T>(client: ApiClient, crewId: string, what: string) => (await client.get(`/api/crews/${crewId}/${what}`)).body as T[];
+  const listOf = async <T>(client: ApiClient, crewId: string, what: string) =>
+    (await client.get(`/api/crews/${crewId}/${what}`)).body as T[];
 
   it('the demo journal: every grouping, lake and event, as owner and as viewer (positions hidden)', async () => {
     const crewId = demo.crewId;
@@ -59,20 +71,70 @@ describe('report answers match their OpenAPI response schemas', () => {
     expect(events.length).toBeGreaterThan(1);
     const problems: string[] = [];
     for (const by of HIT_RATE_GROUPINGS) {
-      problems.push(...(await answer(demo.viewer, 'get', `${REPORTS}/hit-rates`, { crewId }, { query: `by=${by}`, status: 200 })));
-      for (const lake of lakes) problems.push(...(await answer(demo.viewer, 'get', `${REPORTS}/lake-comparison`, { crewId }, { query: `lakeId=${lake.id}&by=${by}`, status: 200 })));
+      problems.push(
+        ...(await answer(demo.viewer, 'get', `${REPORTS}/hit-rates`, { crewId }, { query: `by=${by}`, status: 200 })),
+      );
+      for (const lake of lakes)
+        problems.push(
+          ...(await answer(
+            demo.viewer,
+            'get',
+            `${REPORTS}/lake-comparison`,
+            { crewId },
+            { query: `lakeId=${lake.id}&by=${by}`, status: 200 },
+          )),
+        );
     }
     for (const event of events) {
-      problems.push(...(await answer(demo.viewer, 'get', `${REPORTS}/events/{eventId}/recap`, { crewId, eventId: event.id }, { status: 200 })));
-      problems.push(...(await answer(demo.viewer, 'get', `${REPORTS}/events/{eventId}/finds`, { crewId, eventId: event.id }, { status: 200 })));
+      problems.push(
+        ...(await answer(
+          demo.viewer,
+          'get',
+          `${REPORTS}/events/{eventId}/recap`,
+          { crewId, eventId: event.id },
+          { status: 200 },
+        )),
+      );
+      problems.push(
+        ...(await answer(
+          demo.viewer,
+          'get',
+          `${REPORTS}/events/{eventId}/finds`,
+          { crewId, eventId: event.id },
+          { status: 200 },
+        )),
+      );
     }
     problems.push(...(await answer(demo.viewer, 'get', `${REPORTS}/timing`, { crewId }, { status: 200 })));
     for (const lake of lakes) {
-      problems.push(...(await answer(demo.angler, 'get', `${REPORTS}/timing`, { crewId }, { query: `lakeId=${lake.id}&season=spring`, status: 200 })));
-      for (const client of [demo.owner, demo.viewer]) problems.push(...(await answer(client, 'get', `${REPORTS}/find-map`, { crewId }, { query: `lakeId=${lake.id}`, status: 200 })));
+      problems.push(
+        ...(await answer(
+          demo.angler,
+          'get',
+          `${REPORTS}/timing`,
+          { crewId },
+          { query: `lakeId=${lake.id}&season=spring`, status: 200 },
+        )),
+      );
+      for (const client of [demo.owner, demo.viewer])
+        problems.push(
+          ...(await answer(
+            client,
+            'get',
+            `${REPORTS}/find-map`,
+            { crewId },
+            { query: `lakeId=${lake.id}`, status: 200 },
+          )),
+        );
     }
     problems.push(
-      ...(await answer(demo.owner, 'post', `${REPORTS}/events/{eventId}/recap-email`, { crewId, eventId: events[0]!.id }, { body: { userIds: [demo.angler.userId] }, status: 202 })),
+      ...(await answer(
+        demo.owner,
+        'post',
+        `${REPORTS}/events/{eventId}/recap-email`,
+        { crewId, eventId: events[0]!.id },
+        { body: { userIds: [demo.angler.userId] }, status: 202 },
+      )),
     );
     await waitForMail(demo.angler.email);
     expect(problems).toEqual([]);
@@ -81,21 +143,63 @@ describe('report answers match their OpenAPI response schemas', () => {
   it('a crew with nothing logged: empty groups, rates without trials, a lake and an event without catches', async () => {
     const crewId = empty.crewId;
     const problems: string[] = [];
-    for (const by of HIT_RATE_GROUPINGS) problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/hit-rates`, { crewId }, { query: `by=${by}`, status: 200 })));
+    for (const by of HIT_RATE_GROUPINGS)
+      problems.push(
+        ...(await answer(empty.owner, 'get', `${REPORTS}/hit-rates`, { crewId }, { query: `by=${by}`, status: 200 })),
+      );
     problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/timing`, { crewId }, { status: 200 })));
-    const lake = await empty.owner.post(`/api/crews/${crewId}/lakes`, { name: 'Lake Brackenfold', region: 'Test County', timeZone: 'America/Chicago', lat: 33.1, lon: -96.4 });
+    const lake = await empty.owner.post(`/api/crews/${crewId}/lakes`, {
+      name: 'Lake Brackenfold',
+      region: 'Test County',
+      timeZone: 'America/Chicago',
+      lat: 33.1,
+      lon: -96.4,
+    });
     expect(lake.status, JSON.stringify(lake.body)).toBe(201);
     const lakeId = (lake.body as { id: string }).id;
     await waitForProjection(app);
-    problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/lake-comparison`, { crewId }, { query: `lakeId=${lakeId}`, status: 200 })));
-    problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/find-map`, { crewId }, { query: `lakeId=${lakeId}`, status: 200 })));
-    const event = await empty.owner.post(`/api/crews/${crewId}/events`, { lakeId, name: 'Spring Opener', practiceDates: ['2026-03-13'], competitionDates: ['2026-03-14'] });
+    problems.push(
+      ...(await answer(
+        empty.owner,
+        'get',
+        `${REPORTS}/lake-comparison`,
+        { crewId },
+        { query: `lakeId=${lakeId}`, status: 200 },
+      )),
+    );
+    problems.push(
+      ...(await answer(
+        empty.owner,
+        'get',
+        `${REPORTS}/find-map`,
+        { crewId },
+        { query: `lakeId=${lakeId}`, status: 200 },
+      )),
+    );
+    const event = await empty.owner.post(`/api/crews/${crewId}/events`, {
+      lakeId,
+      name: 'Spring Opener',
+      practiceDates: ['2026-03-13'],
+      competitionDates: ['2026-03-14'],
+    });
     expect(event.status, JSON.stringify(event.body)).toBe(201);
     const eventId = (event.body as { id: string }).id;
     await waitForProjection(app);
-    problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/events/{eventId}/recap`, { crewId, eventId }, { status: 200 })));
-    problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/events/{eventId}/finds`, { crewId, eventId }, { status: 200 })));
-    problems.push(...(await answer(empty.owner, 'get', `${REPORTS}/lake-comparison`, { crewId }, { query: `lakeId=${lakeId}&by=hardness`, status: 200 })));
+    problems.push(
+      ...(await answer(empty.owner, 'get', `${REPORTS}/events/{eventId}/recap`, { crewId, eventId }, { status: 200 })),
+    );
+    problems.push(
+      ...(await answer(empty.owner, 'get', `${REPORTS}/events/{eventId}/finds`, { crewId, eventId }, { status: 200 })),
+    );
+    problems.push(
+      ...(await answer(
+        empty.owner,
+        'get',
+        `${REPORTS}/lake-comparison`,
+        { crewId },
+        { query: `lakeId=${lakeId}&by=hardness`, status: 200 },
+      )),
+    );
     expect(problems).toEqual([]);
   });
 
@@ -114,14 +218,32 @@ describe('report answers match their OpenAPI response schemas', () => {
   });
 
   it('the check refuses a wrong answer: a null where none is allowed, an undocumented field, a value outside its enum', () => {
-    expect(toJsonSchema({ $ref: '#/components/schemas/TimingViewDto' })).toEqual({ $ref: 'openapi.json#/definitions/TimingViewDto' });
+    expect(toJsonSchema({ $ref: '#/components/schemas/TimingViewDto' })).toEqual({
+      $ref: 'openapi.json#/definitions/TimingViewDto',
+    });
     const timing = (body: object) => check('get', `${REPORTS}/timing`, 200, body);
     const id = '0b7f6f0e-2d7b-4a40-9d53-6f0c7b1d2e3f';
-    const point = { catchId: id, caughtAt: '2026-03-14T14:05:00.000Z', localMinutes: 545, minutesFromSunrise: null, solunarPeriod: null, weightLb: 3.1, fate: 'weighed', eventId: id, day: '2026-03-14' };
+    const point = {
+      catchId: id,
+      caughtAt: '2026-03-14T14:05:00.000Z',
+      localMinutes: 545,
+      minutesFromSunrise: null,
+      solunarPeriod: null,
+      weightLb: 3.1,
+      fate: 'weighed',
+      eventId: id,
+      day: '2026-03-14',
+    };
     expect(timing({ catches: [point], byHour: [{ hour: 9, fishCount: 1, weightLb: 3.1 }] })).toEqual([]);
-    expect(timing({ catches: [{ ...point, weightLb: null }], byHour: [] }).join()).toContain('.catches[0].weightLb should be number');
+    expect(timing({ catches: [{ ...point, weightLb: null }], byHour: [] }).join()).toContain(
+      '.catches[0].weightLb should be number',
+    );
     expect(timing({ catches: [{ ...point, lat: 32.9 }], byHour: [] }).join()).toContain('lat');
-    expect(timing({ catches: [{ ...point, solunarPeriod: 'none' }], byHour: [] }).join()).toContain('.catches[0].solunarPeriod should be equal to one of the allowed values');
-    expect(timing({ catches: [], byHour: [{ hour: 24, fishCount: 1, weightLb: 1 }] }).join()).toContain('.byHour[0].hour should be <= 23');
+    expect(timing({ catches: [{ ...point, solunarPeriod: 'none' }], byHour: [] }).join()).toContain(
+      '.catches[0].solunarPeriod should be equal to one of the allowed values',
+    );
+    expect(timing({ catches: [], byHour: [{ hour: 24, fishCount: 1, weightLb: 1 }] }).join()).toContain(
+      '.byHour[0].hour should be <= 23',
+    );
   });
 });

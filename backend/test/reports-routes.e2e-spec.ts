@@ -1,7 +1,14 @@
 import type { INestApplication } from '@nestjs/common';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { compareProportions, distanceM, solunarPeriodAt, wilsonInterval } from '@shoalbook/analytics';
-import type { EventFindsView, EventRecapView, FindMapView, HitRatesView, LakeComparisonView, TimingView } from '@shoalbook/shared';
+import type {
+  EventFindsView,
+  EventRecapView,
+  FindMapView,
+  HitRatesView,
+  LakeComparisonView,
+  TimingView,
+} from '@shoalbook/shared';
 import { DateTime } from 'luxon';
 import { type ApiClient, crewWithMembers, type CrewFixture, newUser } from './utils/api-client';
 import { messagesTo, waitForMail } from './utils/outbox';
@@ -38,7 +45,17 @@ describe('report routes', () => {
       ['hb5', 'hard-bottom', 1, 19, 4],
     ];
     for (const [i, [name, kind, ev, depthFt, hardness]] of plan.entries()) {
-      const res = await crew.angler.post(`${base}/finds`, { lakeId, eventId: events[ev]!.id, name, lat: LAKE.lat + 0.004 * (i + 1), lon: LAKE.lon - 0.003 * i, kind, depthFt, hardness: hardness || null, waterTempF: 64 + i });
+      const res = await crew.angler.post(`${base}/finds`, {
+        lakeId,
+        eventId: events[ev]!.id,
+        name,
+        lat: LAKE.lat + 0.004 * (i + 1),
+        lon: LAKE.lon - 0.003 * i,
+        kind,
+        depthFt,
+        hardness: hardness || null,
+        waterTempF: 64 + i,
+      });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
       findIds[name] = res.body.id;
     }
@@ -53,7 +70,14 @@ describe('report routes', () => {
       ['hb5', 1, 1, '15:45', 5.6, 'dead'],
     ];
     for (const [find, ev, day, time, weightLb, fate] of catches) {
-      const res = await crew.angler.post(`${base}/catches`, { competitionDayId: events[ev]!.dayIds[day], caughtAt: time, findId: find ? findIds[find] : null, species: 'largemouth', weightLb, fate });
+      const res = await crew.angler.post(`${base}/catches`, {
+        competitionDayId: events[ev]!.dayIds[day],
+        caughtAt: time,
+        findId: find ? findIds[find] : null,
+        species: 'largemouth',
+        weightLb,
+        fate,
+      });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
     }
     await waitForProjection(app);
@@ -62,7 +86,8 @@ describe('report routes', () => {
     await app.close();
   });
 
-  const get = <T>(client: ApiClient, path: string) => client.get(`/api/crews/${crew.crewId}/reports/${path}`).then((r) => ({ status: r.status, body: r.body as T }));
+  const get = <T>(client: ApiClient, path: string) =>
+    client.get(`/api/crews/${crew.crewId}/reports/${path}`).then((r) => ({ status: r.status, body: r.body as T }));
 
   it('hit rates by kind equal analytics hitRates over the raw journal, with Wilson intervals and readings', async () => {
     const { status, body } = await get<HitRatesView>(crew.viewer, 'hit-rates?by=kind');
@@ -70,7 +95,11 @@ describe('report routes', () => {
     const reference = await recomputeFromJournal(app, crew.crewId, 'kind');
     for (const g of body.groups) {
       const r = reference.get(g.key ?? '')!;
-      expect({ fished: g.findsFished, producing: g.findsProducing, fish: g.fishCount }).toEqual({ fished: r.findsFished, producing: r.findsProducing, fish: r.fishCount });
+      expect({ fished: g.findsFished, producing: g.findsProducing, fish: g.fishCount }).toEqual({
+        fished: r.findsFished,
+        producing: r.findsProducing,
+        fish: r.fishCount,
+      });
       const w = wilsonInterval(g.findsProducing, g.findsFished);
       expect(g.producing.lower).toBeCloseTo(w.lower, 12);
       expect(g.producing.upper).toBeCloseTo(w.upper, 12);
@@ -85,7 +114,9 @@ describe('report routes', () => {
       const flat = adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < 0.01;
       expect(view.readings.some((r) => r.includes('no bigger than chance'))).toBe(flat);
     }
-    expect(body.readings).toContain(`Hard bottom produced on 3 of 5 finds fished (60 %, ${Math.round(wilsonInterval(3, 5).lower * 100)}–${Math.round(wilsonInterval(3, 5).upper * 100)} %).`);
+    expect(body.readings).toContain(
+      `Hard bottom produced on 3 of 5 finds fished (60 %, ${Math.round(wilsonInterval(3, 5).lower * 100)}–${Math.round(wilsonInterval(3, 5).upper * 100)} %).`,
+    );
   });
 
   it('hit rates filter by event and season, and group catches by solunar period and time of day', async () => {
@@ -127,10 +158,20 @@ describe('report routes', () => {
     expect(veg.difference).toBeCloseTo(expected.difference, 12);
     expect(veg.pValue).toBeCloseTo(expected.pValue, 12);
     expect(veg.moreThanChance).toBe(expected.pValue < 0.05 && expected.lower > 0);
-    expect(veg.reading).toMatch(/^Vegetation did better in Fall 2026 than in Fall 2025: 100 % against 0 % of finds fished/);
+    expect(veg.reading).toMatch(
+      /^Vegetation did better in Fall 2026 than in Fall 2025: 100 % against 0 % of finds fished/,
+    );
     const [lo, hi] = [Math.round(expected.lower * 100), Math.round(expected.upper * 100)];
-    expect(veg.reading).toContain(lo < 0 ? `(100 points higher, likely from ${-lo} points lower to ${hi} higher)` : `(100 points higher, likely ${lo} to ${hi})`);
-    expect(body.groups.find((g) => g.key === 'hard-bottom')!.perEvent[events[0]!.id]).toMatchObject({ successes: 2, trials: 4, findsFished: 4 });
+    expect(veg.reading).toContain(
+      lo < 0
+        ? `(100 points higher, likely from ${-lo} points lower to ${hi} higher)`
+        : `(100 points higher, likely ${lo} to ${hi})`,
+    );
+    expect(body.groups.find((g) => g.key === 'hard-bottom')!.perEvent[events[0]!.id]).toMatchObject({
+      successes: 2,
+      trials: 4,
+      findsFished: 4,
+    });
     const missing = await get(crew.owner, 'lake-comparison?by=kind');
     expect(missing.status).toBe(400);
   });
@@ -156,7 +197,12 @@ describe('report routes', () => {
   it('lists the paid-off finds with outcomes', async () => {
     const { body } = await get<EventFindsView>(crew.owner, `events/${events[0]!.id}/finds`);
     expect(body.finds).toHaveLength(7);
-    expect(body.finds.find((f) => f.name === 'hb2')).toMatchObject({ outcome: 'weighed', fishCount: 2, weighedCount: 1, weightLb: 5.85 });
+    expect(body.finds.find((f) => f.name === 'hb2')).toMatchObject({
+      outcome: 'weighed',
+      fishCount: 2,
+      weighedCount: 1,
+      weightLb: 5.85,
+    });
     expect(body.finds.find((f) => f.name === 'v1')).toMatchObject({ outcome: 'fished-blank', fishCount: 0 });
     expect(body.paidOff).toMatchObject({ successes: 2, trials: 7 });
   });
@@ -174,9 +220,23 @@ describe('report routes', () => {
   });
 
   it('shows a write in the reports soon after it is made', async () => {
-    const res = await crew.angler.post(`/api/crews/${crew.crewId}/catches`, { competitionDayId: events[0]!.dayIds[0], caughtAt: '11:30', findId: findIds.v1, species: 'spotted', weightLb: 1.9, fate: 'weighed' });
+    const res = await crew.angler.post(`/api/crews/${crew.crewId}/catches`, {
+      competitionDayId: events[0]!.dayIds[0],
+      caughtAt: '11:30',
+      findId: findIds.v1,
+      species: 'spotted',
+      weightLb: 1.9,
+      fate: 'weighed',
+    });
     expect(res.status).toBe(201);
-    await expect.poll(async () => (await get<HitRatesView>(crew.owner, 'hit-rates?by=kind')).body.groups.find((g) => g.key === 'vegetation')?.findsProducing, { timeout: 5000, interval: 50 }).toBe(3);
+    await expect
+      .poll(
+        async () =>
+          (await get<HitRatesView>(crew.owner, 'hit-rates?by=kind')).body.groups.find((g) => g.key === 'vegetation')
+            ?.findsProducing,
+        { timeout: 5000, interval: 50 },
+      )
+      .toBe(3);
   });
 
   it('keeps every report route private to its crew', async () => {
@@ -194,7 +254,9 @@ describe('report routes', () => {
     }
     // Another crew's ids under one's own crew find nothing either.
     const other = await crewWithMembers(app, 'Other Crew');
-    expect((await other.owner.get(`/api/crews/${other.crewId}/reports/events/${events[0]!.id}/recap`)).status).toBe(404);
+    expect((await other.owner.get(`/api/crews/${other.crewId}/reports/events/${events[0]!.id}/recap`)).status).toBe(
+      404,
+    );
     expect((await other.owner.get(`/api/crews/${other.crewId}/reports/find-map?lakeId=${lakeId}`)).status).toBe(404);
     const otherHits = await other.owner.get(`/api/crews/${other.crewId}/reports/hit-rates?lakeId=${lakeId}`);
     expect(otherHits.body.overall.findsFished).toBe(0);
@@ -213,7 +275,9 @@ describe('report routes', () => {
     const mail = await waitForMail(crew.viewer.email);
     expect(mail.text).toContain(`/crews/${crew.crewId}/reports/events/${events[0]!.id}`);
     const recap = (await get<EventRecapView>(crew.owner, `events/${events[0]!.id}/recap`)).body;
-    expect(mail.text).toContain(`Practice finds that paid off: ${recap.shareOfPracticePaidOff.successes} of ${recap.findsPracticed}`);
+    expect(mail.text).toContain(
+      `Practice finds that paid off: ${recap.shareOfPracticePaidOff.successes} of ${recap.findsPracticed}`,
+    );
     // No coordinates and no find names (which can name landmarks) in the message.
     for (const body of [mail.text, mail.html]) {
       expect(body).not.toMatch(/32\.9|-96\.[12]/);

@@ -18,9 +18,14 @@ export async function waitForProjection(app: INestApplication, timeout = 15_000)
   for (;;) {
     const em = sqlEm(app);
     const [j] = (await em.execute('SELECT COALESCE(MAX(seq), 0) AS m FROM journal_event')) as { m: unknown }[];
-    const [c] = (await em.execute("SELECT COALESCE(MAX(last_seq), 0) AS m FROM projection_checkpoint WHERE name = 'journal'")) as { m: unknown }[];
+    const [c] = (await em.execute(
+      "SELECT COALESCE(MAX(last_seq), 0) AS m FROM projection_checkpoint WHERE name = 'journal'",
+    )) as { m: unknown }[];
     if (Number(c?.m) >= Number(j?.m)) return;
-    if (Date.now() > until) throw new Error(`the projection did not catch up within ${timeout} ms (checkpoint ${Number(c?.m)}, journal ${Number(j?.m)})`);
+    if (Date.now() > until)
+      throw new Error(
+        `the projection did not catch up within ${timeout} ms (checkpoint ${Number(c?.m)}, journal ${Number(j?.m)})`,
+      );
     await new Promise((r) => setTimeout(r, 50));
   }
 }
@@ -40,10 +45,21 @@ export async function readModelSnapshot(app: INestApplication, crewId: string): 
   const em = sqlEm(app);
   const out: Record<string, unknown[]> = {};
   for (const table of READ_MODEL_TABLES) {
-    const rows = (await em.execute(`SELECT * FROM \`${table}\` WHERE crew_id = ? ORDER BY ${KEYS[table]}`, [crewId])) as Record<string, unknown>[];
+    const rows = (await em.execute(`SELECT * FROM \`${table}\` WHERE crew_id = ? ORDER BY ${KEYS[table]}`, [
+      crewId,
+    ])) as Record<string, unknown>[];
     out[table] = rows.map((r) =>
       Object.fromEntries(
-        Object.entries(r).map(([k, v]) => [k, typeof v === 'bigint' ? Number(v) : v instanceof Date ? v.toISOString() : typeof v === 'string' && /^[[{]/.test(v) ? JSON.parse(v) : v]),
+        Object.entries(r).map(([k, v]) => [
+          k,
+          typeof v === 'bigint'
+            ? Number(v)
+            : v instanceof Date
+              ? v.toISOString()
+              : typeof v === 'string' && /^[[{]/.test(v)
+                ? JSON.parse(v)
+                : v,
+        ]),
       ),
     );
   }
@@ -65,33 +81,62 @@ export interface GroupFigures {
  * The reference: hit rates recomputed from the raw journal tables (finds, catches) with @shoalbook/analytics
  * hitRates. One analytics find per (find, event) it was fished in: marked in the event, or caught on in it.
  */
-export async function recomputeFromJournal(app: INestApplication, crewId: string, by: (typeof FIND_GROUPINGS)[number], eventIds?: string[]): Promise<Map<string, GroupFigures>> {
+export async function recomputeFromJournal(
+  app: INestApplication,
+  crewId: string,
+  by: (typeof FIND_GROUPINGS)[number],
+  eventIds?: string[],
+): Promise<Map<string, GroupFigures>> {
   const em = testEm(app);
   const finds = await em.find(Find, { crewId });
   const catches = (await em.find(Catch, { crewId })).filter((c) => !eventIds || eventIds.includes(c.eventId));
   const pairs = new Map<string, FindInput>();
   const addPair = (f: Find, eventId: string) => {
     if (eventIds && !eventIds.includes(eventId)) return;
-    pairs.set(`${f.id}|${eventId}`, { id: `${f.id}|${eventId}`, kind: f.kind, subKind: f.subKind || null, depthFt: f.depthFt, hardness: f.hardness, waterTempF: f.waterTempF, fished: true });
+    pairs.set(`${f.id}|${eventId}`, {
+      id: `${f.id}|${eventId}`,
+      kind: f.kind,
+      subKind: f.subKind || null,
+      depthFt: f.depthFt,
+      hardness: f.hardness,
+      waterTempF: f.waterTempF,
+      fished: true,
+    });
   };
   const byId = new Map(finds.map((f) => [f.id, f]));
   for (const f of finds) if (f.eventId) addPair(f, f.eventId);
   for (const c of catches) if (c.findId && byId.has(c.findId)) addPair(byId.get(c.findId)!, c.eventId);
   const groups = hitRates(
     [...pairs.values()],
-    catches.map((c) => ({ id: c.id, findId: c.findId ? `${c.findId}|${c.eventId}` : null, weightLb: c.weightLb, fate: c.fate })),
+    catches.map((c) => ({
+      id: c.id,
+      findId: c.findId ? `${c.findId}|${c.eventId}` : null,
+      weightLb: c.weightLb,
+      fate: c.fate,
+    })),
     { by },
   );
   return new Map(
     groups.map((g) => [
       g.key === null ? '' : String(g.key),
-      { finds: g.finds, findsFished: g.findsFished, findsProducing: g.findsWithFish, findsWeighed: g.findsWithWeighedFish, fishCount: g.fish, weightLb: g.fishWeightLb },
+      {
+        finds: g.finds,
+        findsFished: g.findsFished,
+        findsProducing: g.findsWithFish,
+        findsWeighed: g.findsWithWeighedFish,
+        fishCount: g.fish,
+        weightLb: g.fishWeightLb,
+      },
     ]),
   );
 }
 
 /** rm_group_stats of a crew summed over events, per key of one grouping. */
-export async function readModelFigures(app: INestApplication, crewId: string, grouping: string): Promise<Map<string, GroupFigures>> {
+export async function readModelFigures(
+  app: INestApplication,
+  crewId: string,
+  grouping: string,
+): Promise<Map<string, GroupFigures>> {
   const rows = (await sqlEm(app).execute(
     `SELECT group_key, SUM(finds) f, SUM(finds_fished) ff, SUM(finds_producing) fp, SUM(finds_weighed) fw, SUM(fish_count) fc, SUM(weight_ulb) w
        FROM rm_group_stats WHERE crew_id = ? AND grouping = ? GROUP BY group_key`,
@@ -100,13 +145,24 @@ export async function readModelFigures(app: INestApplication, crewId: string, gr
   return new Map(
     rows.map((r) => [
       String(r.group_key),
-      { finds: Number(r.f), findsFished: Number(r.ff), findsProducing: Number(r.fp), findsWeighed: Number(r.fw), fishCount: Number(r.fc), weightLb: Number(r.w) / 1e6 },
+      {
+        finds: Number(r.f),
+        findsFished: Number(r.ff),
+        findsProducing: Number(r.fp),
+        findsWeighed: Number(r.fw),
+        fishCount: Number(r.fc),
+        weightLb: Number(r.w) / 1e6,
+      },
     ]),
   );
 }
 
 /** Compare two sets of figures: counts exactly, weights to the micro-pound rounding of the read model. */
-export function expectSameFigures(actual: Map<string, GroupFigures>, expected: Map<string, GroupFigures>, what: string): void {
+export function expectSameFigures(
+  actual: Map<string, GroupFigures>,
+  expected: Map<string, GroupFigures>,
+  what: string,
+): void {
   expect([...actual.keys()].sort(), what).toEqual([...expected.keys()].sort());
   for (const [key, e] of expected) {
     const a = actual.get(key)!;
@@ -118,13 +174,22 @@ export function expectSameFigures(actual: Map<string, GroupFigures>, expected: M
 }
 
 /** A lake with two events, as the crew's owner. */
-export async function lakeWithEvents(client: ApiClient, crewId: string): Promise<{ lakeId: string; events: { id: string; dayIds: string[]; dates: string[] }[] }> {
+export async function lakeWithEvents(
+  client: ApiClient,
+  crewId: string,
+): Promise<{ lakeId: string; events: { id: string; dayIds: string[]; dates: string[] }[] }> {
   const post = async (path: string, body: object) => {
     const res = await client.post(`/api/crews/${crewId}${path}`, body);
     if (res.status !== 201) throw new Error(`${path}: ${res.status} ${JSON.stringify(res.body)}`);
     return res.body as { id: string };
   };
-  const lake = await post('/lakes', { name: 'Lake Quillmere', region: 'Test County', timeZone: 'America/Chicago', lat: 32.95, lon: -96.2 });
+  const lake = await post('/lakes', {
+    name: 'Lake Quillmere',
+    region: 'Test County',
+    timeZone: 'America/Chicago',
+    lat: 32.95,
+    lon: -96.2,
+  });
   const events = [];
   for (const [name, practice, competition] of [
     ['Fall Shootout', ['2025-10-09'], ['2025-10-10', '2025-10-11']],

@@ -20,7 +20,10 @@ async function expectNoSeriousAxe(page: Page, screen: string) {
 }
 
 /** Type one catch by keyboard only, starting with focus on the time field; Enter logs it. */
-async function logCatchByKeyboard(page: Page, c: { time: string; weight: string; length: string; find: string; fateKey?: string }) {
+async function logCatchByKeyboard(
+  page: Page,
+  c: { time: string; weight: string; length: string; find: string; fateKey?: string },
+) {
   const time = page.getByRole('textbox', { name: /^Time/ });
   await expect(time.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
   await page.keyboard.press('Control+A');
@@ -38,7 +41,10 @@ async function logCatchByKeyboard(page: Page, c: { time: string; weight: string;
     await page.keyboard.type(c.fateKey);
   }
   await page.keyboard.press('Enter');
-  await page.getByRole('status').filter({ hasText: `at ${c.time}` }).waitFor();
+  await page
+    .getByRole('status')
+    .filter({ hasText: `at ${c.time}` })
+    .waitFor();
 }
 
 describe('the journal, as the demo angler', () => {
@@ -86,7 +92,10 @@ describe('the journal, as the demo angler', () => {
     await page.getByRole('heading', { name: 'New event' }).waitFor();
     await expect(page.getByRole('textbox', { name: /^Fish counted per day/ }).inputValue()).resolves.toBe('5');
     await expect(page.getByRole('textbox', { name: /^Minimum length/ }).inputValue()).resolves.toBe('12');
-    await page.getByText(/state wildlife agency/).first().waitFor();
+    await page
+      .getByText(/state wildlife agency/)
+      .first()
+      .waitFor();
 
     await page.getByRole('textbox', { name: /^Event name/ }).fill(EVENT);
     await page.getByRole('textbox', { name: /^Organiser/ }).fill('Test trail');
@@ -142,7 +151,13 @@ describe('the journal, as the demo angler', () => {
 
     await logCatchByKeyboard(page, { time: '07:10', weight: '3.45', length: '17', find: 'Long shell flat' });
     await logCatchByKeyboard(page, { time: '08:25', weight: '2.10', length: '15', find: 'Channel swing rock' });
-    await logCatchByKeyboard(page, { time: '09:40', weight: '4.02', length: '18.5', find: 'Grass point', fateKey: 'd' });
+    await logCatchByKeyboard(page, {
+      time: '09:40',
+      weight: '4.02',
+      length: '18.5',
+      find: 'Grass point',
+      fateKey: 'd',
+    });
 
     const table = page.getByRole('table', { name: 'Catches of the day' });
     await table.getByRole('row').filter({ hasText: '09:40' }).filter({ hasText: 'Dead' }).waitFor();
@@ -176,13 +191,21 @@ describe('the journal, as the demo angler', () => {
     await expectNoSeriousAxe(page, 'export');
     await screenshot(page, 'journal-export');
 
-    const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export journal (JSON)' }).click()]);
+    const [jsonDownload] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Export journal (JSON)' }).click(),
+    ]);
     const json = JSON.parse(readFileSync((await jsonDownload.path())!, 'utf8'));
     expect(json.format).toBe('shoalbook-journal');
     expect(json.lakes.map((l: { name: string }) => l.name)).toContain(LAKE);
-    expect(json.catches.filter((c: { eventId: string }) => c.eventId === new URL(eventUrl).pathname.split('/').pop())).toHaveLength(3);
+    expect(
+      json.catches.filter((c: { eventId: string }) => c.eventId === new URL(eventUrl).pathname.split('/').pop()),
+    ).toHaveLength(3);
 
-    const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export journal (CSV)' }).click()]);
+    const [csvDownload] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Export journal (CSV)' }).click(),
+    ]);
     const csv = readFileSync((await csvDownload.path())!, 'utf8');
     expect(csv).toContain('Long shell flat');
   });
@@ -217,7 +240,9 @@ describe('the journal, as the demo angler', () => {
     await expect(page.getByRole('form', { name: /Log a catch/ }).count()).resolves.toBe(0);
     await expect(page.getByRole('link', { name: 'Edit event' }).count()).resolves.toBe(0);
     await expect(page.getByRole('button', { name: /Delete the catch/ }).count()).resolves.toBe(0);
-    await expect(page.getByRole('navigation', { name: 'Crew sections' }).getByRole('link', { name: 'Files' }).count()).resolves.toBe(0);
+    await expect(
+      page.getByRole('navigation', { name: 'Crew sections' }).getByRole('link', { name: 'Files' }).count(),
+    ).resolves.toBe(0);
     await expectNoSeriousAxe(page, 'viewer competition day');
     await screenshot(page, 'journal-viewer-day');
   });

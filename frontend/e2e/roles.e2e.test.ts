@@ -66,7 +66,9 @@ describe('demo accounts and their roles', () => {
     for (const name of ['Wren Halvorsen', 'Milo Farrant', 'Ines Barlow (coach)']) {
       await page.getByRole('combobox', { name: `Role of ${name}` }).waitFor();
     }
-    await expect(page.getByRole('combobox', { name: 'Role of Ines Barlow (coach)' }).inputValue()).resolves.toBe('viewer');
+    await expect(page.getByRole('combobox', { name: 'Role of Ines Barlow (coach)' }).inputValue()).resolves.toBe(
+      'viewer',
+    );
     await page.getByRole('button', { name: 'Remove Milo Farrant from the crew' }).waitFor();
     await page.getByRole('button', { name: 'Remove Ines Barlow (coach) from the crew' }).waitFor();
     expect(await page.getByRole('button', { name: /^Remove Wren Halvorsen/ }).count()).toBe(0);
@@ -170,7 +172,13 @@ describe('demo accounts and their roles', () => {
 
     await page.getByRole('link', { name: 'Accounts' }).click();
     await page.getByRole('heading', { level: 1, name: 'Accounts' }).waitFor();
-    for (const email of ['owner@demo.test', 'angler@demo.test', 'viewer@demo.test', 'rival@demo.test', 'admin@demo.test']) {
+    for (const email of [
+      'owner@demo.test',
+      'angler@demo.test',
+      'viewer@demo.test',
+      'rival@demo.test',
+      'admin@demo.test',
+    ]) {
       await page.getByRole('cell', { name: email, exact: true }).waitFor();
     }
     await page.getByRole('button', { name: 'Disable the account of rival@demo.test' }).waitFor();

@@ -55,7 +55,9 @@ function portInUse(port) {
 
 function ping(p) {
   const { socket } = paths(p);
-  return capture('mariadb-admin', ['--no-defaults', `--socket=${socket}`, '-uroot', 'ping'], { timeout: 5000 }).status === 0;
+  return (
+    capture('mariadb-admin', ['--no-defaults', `--socket=${socket}`, '-uroot', 'ping'], { timeout: 5000 }).status === 0
+  );
 }
 
 /** Our server's pid, only if that process really runs on our data directory. */
@@ -95,7 +97,8 @@ function initialise(p) {
 export async function startMariadb(p) {
   ensureMariadbInstalled();
   const { socket, pidFile, errLog } = paths(p);
-  if (socket.length > 107) throw new Error(`socket path too long for MariaDB (${socket.length} > 107): move the repository to a shorter path`);
+  if (socket.length > 107)
+    throw new Error(`socket path too long for MariaDB (${socket.length} > 107): move the repository to a shorter path`);
   if (ourPid(p) && ping(p)) {
     await ensureDatabase(p);
     return { reused: true };
@@ -131,7 +134,8 @@ export async function startMariadb(p) {
   try {
     await waitFor(
       () => {
-        if (exited !== null) throw new Error(`MariaDB exited during start-up (code ${exited}). Its log:\n${tail(errLog)}`);
+        if (exited !== null)
+          throw new Error(`MariaDB exited during start-up (code ${exited}). Its log:\n${tail(errLog)}`);
         return ping(p);
       },
       { timeoutMs: 60000, what: 'MariaDB to answer' },

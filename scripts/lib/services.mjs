@@ -19,12 +19,18 @@ export function buildBackend() {
 
 /** Run the MikroORM migrations (never schema sync) with the compiled migrate script. */
 export function migrate(p) {
-  run(process.execPath, [join(BACKEND_DIST, 'database', 'migrate.js')], { cwd: join(ROOT, 'backend'), env: backendEnv(p) });
+  run(process.execPath, [join(BACKEND_DIST, 'database', 'migrate.js')], {
+    cwd: join(ROOT, 'backend'),
+    env: backendEnv(p),
+  });
 }
 
 /** Seed the demo data if the database is empty (the seeder checks). */
 export function seed(p, args = []) {
-  run(process.execPath, [join(BACKEND_DIST, 'database', 'seed.js'), ...args], { cwd: join(ROOT, 'backend'), env: backendEnv(p) });
+  run(process.execPath, [join(BACKEND_DIST, 'database', 'seed.js'), ...args], {
+    cwd: join(ROOT, 'backend'),
+    env: backendEnv(p),
+  });
 }
 
 /** Start MariaDB (or reuse a running one: `{ reused }`); with `fresh`, drop and recreate the database first. Then migrate. */
@@ -50,7 +56,8 @@ export function portOpen(port) {
 export async function startFakeSmtp(p, { clearOutbox = false } = {}) {
   if (clearOutbox) rmSync(p.outboxDir, { recursive: true, force: true });
   mkdirSync(p.outboxDir, { recursive: true });
-  if (await portOpen(p.smtpPort)) throw new Error(`port ${p.smtpPort} (fake SMTP) is already taken; stop the other program first`);
+  if (await portOpen(p.smtpPort))
+    throw new Error(`port ${p.smtpPort} (fake SMTP) is already taken; stop the other program first`);
   const child = spawn(process.execPath, [join(ROOT, 'scripts', 'fake-smtp.mjs'), String(p.smtpPort), p.outboxDir], {
     stdio: ['ignore', 'ignore', 'inherit'],
   });

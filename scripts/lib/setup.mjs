@@ -33,8 +33,16 @@ const BUILDS = [
   { ws: 'shared', inputs: ['shared/src', 'shared/tsconfig.json'], output: 'shared/dist/index.js' },
   { ws: 'analytics', inputs: ['analytics/src', 'shared/dist'], output: 'analytics/dist/index.js' },
   { ws: 'fixtures', inputs: ['fixtures/src', 'fixtures/files', 'shared/dist'], output: 'fixtures/dist/index.js' },
-  { ws: 'backend', inputs: ['backend/src', 'shared/dist', 'analytics/dist', 'fixtures/dist'], output: 'backend/dist/main.js' },
-  { ws: 'frontend', inputs: ['frontend/src', 'frontend/index.html', 'frontend/vite.config.ts', 'shared/dist', 'analytics/dist'], output: 'frontend/dist/index.html' },
+  {
+    ws: 'backend',
+    inputs: ['backend/src', 'shared/dist', 'analytics/dist', 'fixtures/dist'],
+    output: 'backend/dist/main.js',
+  },
+  {
+    ws: 'frontend',
+    inputs: ['frontend/src', 'frontend/index.html', 'frontend/vite.config.ts', 'shared/dist', 'analytics/dist'],
+    output: 'frontend/dist/index.html',
+  },
 ];
 
 function newestMtime(path) {

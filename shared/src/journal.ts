@@ -112,7 +112,12 @@ export interface CatchView {
   /** Name of the find in findId (null without one). */
   findName?: string | null;
   notes?: string;
-  entered?: { weight: EnteredWeight; length: EnteredLength | null; depth: EnteredDepth | null; waterTemp: EnteredTemperature | null };
+  entered?: {
+    weight: EnteredWeight;
+    length: EnteredLength | null;
+    depth: EnteredDepth | null;
+    waterTemp: EnteredTemperature | null;
+  };
   /** Sun and moon at caughtAt in the lake's time zone. */
   sky?: SkyContext | null;
   version?: number;
@@ -459,7 +464,11 @@ export interface JournalExport {
   /** Says the file holds exact positions: keep it private. */
   notice: string;
   lakes: LakeView[];
-  events: (EventView & { practiceDays: PracticeDayView[]; competitionDays: CompetitionDayView[]; weighIns: (OfficialWeighIn & { competitionDayId: string })[] })[];
+  events: (EventView & {
+    practiceDays: PracticeDayView[];
+    competitionDays: CompetitionDayView[];
+    weighIns: (OfficialWeighIn & { competitionDayId: string })[];
+  })[];
   finds: FindView[];
   catches: CatchView[];
 }

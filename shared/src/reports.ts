@@ -7,7 +7,12 @@ import type { Fate, FindKind, Species } from './taxonomy.js';
 /** Meteorological seasons of the northern hemisphere, from the event's first competition date (lake-local). */
 export const SEASONS = ['spring', 'summer', 'fall', 'winter'] as const;
 export type Season = (typeof SEASONS)[number];
-export const SEASON_LABELS: Record<Season, string> = { spring: 'Spring', summer: 'Summer', fall: 'Fall', winter: 'Winter' };
+export const SEASON_LABELS: Record<Season, string> = {
+  spring: 'Spring',
+  summer: 'Summer',
+  fall: 'Fall',
+  winter: 'Winter',
+};
 
 /**
  * Filters common to the report routes (query parameters). `season`, `year`, `from` and `to` select events by
@@ -24,7 +29,15 @@ export interface ReportFilters {
 }
 
 /** Groupings of the hit-rate report. */
-export const HIT_RATE_GROUPINGS = ['kind', 'subKind', 'depthBand', 'hardness', 'temperatureBand', 'solunarPeriod', 'timeOfDay'] as const;
+export const HIT_RATE_GROUPINGS = [
+  'kind',
+  'subKind',
+  'depthBand',
+  'hardness',
+  'temperatureBand',
+  'solunarPeriod',
+  'timeOfDay',
+] as const;
 export type HitRateGroupingKey = (typeof HIT_RATE_GROUPINGS)[number];
 /** Groupings whose unit is the catch, not the find: a find's catches fall in different periods. */
 export const CATCH_UNIT_GROUPINGS: readonly HitRateGroupingKey[] = ['solunarPeriod', 'timeOfDay'];
@@ -105,7 +118,14 @@ export interface HitRatesView {
   /** 'find' or 'catch': what one trial is (see HitRateGroupView). */
   unit: 'find' | 'catch';
   groups: HitRateGroupView[];
-  overall: { finds: number; findsFished: number; findsProducing: number; fishCount: number; weightLb: number; producing: Rate };
+  overall: {
+    finds: number;
+    findsFished: number;
+    findsProducing: number;
+    fishCount: number;
+    weightLb: number;
+    producing: Rate;
+  };
   /** Plain-words readings, e.g. "Hard bottom produced on 14 of 40 finds fished (35 %, 22–50 %)." */
   readings: string[];
   /** Events the figures cover. */
@@ -172,7 +192,13 @@ export interface RecapDay {
   grossLb: number;
   penaltyLb: number;
   netLb: number;
-  official: { grossLb: number | null; penaltyLb: number | null; officialLb: number | null; dayPlace: number | null; lateMinutes: number | null } | null;
+  official: {
+    grossLb: number | null;
+    penaltyLb: number | null;
+    officialLb: number | null;
+    dayPlace: number | null;
+    lateMinutes: number | null;
+  } | null;
   dayPlace: number | null;
 }
 
@@ -188,7 +214,14 @@ export interface EventRecapView {
   days: RecapDay[];
   /** officialLb: per day the official weight where recorded, else the computed net. */
   totals: { netLb: number; officialLb: number; finalPlace: number | null };
-  producingFinds: { findId: string; name: string; kind: FindKind; subKind: string; fishCount: number; weightLb: number }[];
+  producingFinds: {
+    findId: string;
+    name: string;
+    kind: FindKind;
+    subKind: string;
+    fishCount: number;
+    weightLb: number;
+  }[];
   /** Every fish by time; cumulativeBagLb = that day's best legal bag so far (the bag as it stood after the fish). */
   timeline: { catchId: string; caughtAt: string; weightLb: number; cumulativeBagLb: number; day: string }[];
   bigFish: ReportFish | null;
@@ -252,7 +285,16 @@ export interface FindMapView {
   lake: { id: string; name: string; lat: number; lon: number };
   /** True when positions are hidden from the caller (viewer, crew setting): xM/yM are null. */
   positionsHidden: boolean;
-  finds: { findId: string; name: string; xM: number | null; yM: number | null; kind: FindKind; outcome: FindOutcome; fishCount: number; weightLb: number }[];
+  finds: {
+    findId: string;
+    name: string;
+    xM: number | null;
+    yM: number | null;
+    kind: FindKind;
+    outcome: FindOutcome;
+    fishCount: number;
+    weightLb: number;
+  }[];
   catches: { catchId: string; findId: string | null; xM: number | null; yM: number | null; weightLb: number }[];
 }
 

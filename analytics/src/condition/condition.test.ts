@@ -9,9 +9,12 @@ describe('standardWeightG (Neumann, Guy & Willis 2012, Fisheries Techniques 3rd 
     ['largemouth', -5.528, 3.273, 150, 'Henson (1991)'],
     ['smallmouth', -5.329, 3.2, 150, 'Kolander et al. (1993)'],
     ['spotted', -5.392, 3.215, 100, 'Wiens et al. (1996)'],
-  ] as const)('%s uses log10 Ws = %f + %f log10 TL from %i mm (%s, recalled from memory)', (species, a, b, min, source) => {
-    expect(STANDARD_WEIGHT_EQUATIONS[species]).toEqual({ intercept: a, slope: b, minTotalLengthMm: min, source });
-  });
+  ] as const)(
+    '%s uses log10 Ws = %f + %f log10 TL from %i mm (%s, recalled from memory)',
+    (species, a, b, min, source) => {
+      expect(STANDARD_WEIGHT_EQUATIONS[species]).toEqual({ intercept: a, slope: b, minTotalLengthMm: min, source });
+    },
+  );
 
   // Hand-computed with bc(1): 10^(a + b·log10 TL).
   it.each([

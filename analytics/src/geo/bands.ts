@@ -59,7 +59,10 @@ export function temperatureBandLabels(edges: readonly number[] = DEFAULT_TEMPERA
  * @param depthFt depth in feet (≥ 0); `null`/`undefined` (not recorded) gives `null`
  * @param edges ascending upper edges in feet, default {@link DEFAULT_DEPTH_BAND_EDGES_FT}
  */
-export function depthBand(depthFt: number | null | undefined, edges: readonly number[] = DEFAULT_DEPTH_BAND_EDGES_FT): string | null {
+export function depthBand(
+  depthFt: number | null | undefined,
+  edges: readonly number[] = DEFAULT_DEPTH_BAND_EDGES_FT,
+): string | null {
   const labels = depthBandLabels(edges);
   if (depthFt === null || depthFt === undefined) return null;
   assertFinite('depthFt', depthFt);
@@ -73,7 +76,10 @@ export function depthBand(depthFt: number | null | undefined, edges: readonly nu
  * @param waterTempF water temperature in °F; `null`/`undefined` (not recorded) gives `null`
  * @param edges ascending edges in °F, default {@link DEFAULT_TEMPERATURE_BAND_EDGES_F}
  */
-export function temperatureBand(waterTempF: number | null | undefined, edges: readonly number[] = DEFAULT_TEMPERATURE_BAND_EDGES_F): string | null {
+export function temperatureBand(
+  waterTempF: number | null | undefined,
+  edges: readonly number[] = DEFAULT_TEMPERATURE_BAND_EDGES_F,
+): string | null {
   const labels = temperatureBandLabels(edges);
   if (waterTempF === null || waterTempF === undefined) return null;
   assertFinite('waterTempF', waterTempF);

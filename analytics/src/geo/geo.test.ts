@@ -6,11 +6,15 @@ import { distanceM, MEAN_EARTH_RADIUS_M } from './distance.js';
 import { nearestFind } from './nearest-find.js';
 import { beamFootprintM, coverage, doubleEchoDepth } from './sonar.js';
 
-const wgs84 = (a: { lat: number; lon: number }, b: { lat: number; lon: number }) => Geodesic.WGS84.Inverse(a.lat, a.lon, b.lat, b.lon).s12!;
+const wgs84 = (a: { lat: number; lon: number }, b: { lat: number; lon: number }) =>
+  Geodesic.WGS84.Inverse(a.lat, a.lon, b.lat, b.lon).s12!;
 
 describe('distanceM (great circle, R = 6,371,008.8 m)', () => {
   it('is within 0.5 % of the WGS 84 ellipsoid distance from geographiclib-geodesic (Karney 2013) between 20° and 60° latitude', () => {
-    const point = fc.record({ lat: fc.double({ min: 20, max: 60, noNaN: true }), lon: fc.double({ min: -180, max: 180, noNaN: true }) });
+    const point = fc.record({
+      lat: fc.double({ min: 20, max: 60, noNaN: true }),
+      lon: fc.double({ min: -180, max: 180, noNaN: true }),
+    });
     fc.assert(
       fc.property(point, point, (a, b) => {
         const reference = wgs84(a, b);
@@ -21,7 +25,10 @@ describe('distanceM (great circle, R = 6,371,008.8 m)', () => {
   });
 
   it('is within 0.6 % anywhere: the sphere is worst for short north–south steps at the equator, where the meridian radius is a(1 − e²) = 6,335,439 m', () => {
-    const point = fc.record({ lat: fc.double({ min: -90, max: 90, noNaN: true }), lon: fc.double({ min: -180, max: 180, noNaN: true }) });
+    const point = fc.record({
+      lat: fc.double({ min: -90, max: 90, noNaN: true }),
+      lon: fc.double({ min: -180, max: 180, noNaN: true }),
+    });
     fc.assert(
       fc.property(point, point, (a, b) => {
         const reference = wgs84(a, b);
@@ -33,7 +40,12 @@ describe('distanceM (great circle, R = 6,371,008.8 m)', () => {
 
   it('is within 0.5 % at lake scale (tens of metres to a few kilometres)', () => {
     const lake = { lat: 33.2, lon: -96.1 };
-    for (const [dLat, dLon] of [[0.0003, 0], [0, 0.0005], [0.002, 0.002], [0.03, -0.02]]) {
+    for (const [dLat, dLon] of [
+      [0.0003, 0],
+      [0, 0.0005],
+      [0.002, 0.002],
+      [0.03, -0.02],
+    ]) {
       const other = { lat: lake.lat + dLat, lon: lake.lon + dLon };
       expect(Math.abs(distanceM(lake, other) / wgs84(lake, other) - 1)).toBeLessThan(0.005);
     }

@@ -7,7 +7,8 @@ export const FT_PER_MILE = 5_280;
 
 function assertBeamAngle(beamAngleDeg: number): void {
   assertFinite('beamAngleDeg', beamAngleDeg);
-  if (!(beamAngleDeg > 0 && beamAngleDeg < 180)) throw new RangeError(`beamAngleDeg must be within (0°, 180°), got ${beamAngleDeg}`);
+  if (!(beamAngleDeg > 0 && beamAngleDeg < 180))
+    throw new RangeError(`beamAngleDeg must be within (0°, 180°), got ${beamAngleDeg}`);
 }
 
 /**

@@ -22,7 +22,9 @@ export function localDay(date: string, timeZone: string): LocalDay {
   }
   const start = DateTime.fromISO(date, { zone: timeZone });
   if (!start.isValid) {
-    throw new RangeError(`invalid date '${date}' or IANA time zone '${timeZone}': ${start.invalidExplanation ?? start.invalidReason}`);
+    throw new RangeError(
+      `invalid date '${date}' or IANA time zone '${timeZone}': ${start.invalidExplanation ?? start.invalidReason}`,
+    );
   }
   const startOfDay = start.startOf('day');
   return {

@@ -6,7 +6,8 @@ import { solunarPeriodAt } from './solunar.js';
 import { sunMoonDay, type SunMoonDay } from './sun-moon-day.js';
 
 const MINUTE = 60_000;
-const minutesBetween = (a: string | number, b: string | number) => Math.abs(new Date(a).getTime() - new Date(b).getTime()) / MINUTE;
+const minutesBetween = (a: string | number, b: string | number) =>
+  Math.abs(new Date(a).getTime() - new Date(b).getTime()) / MINUTE;
 
 // Invented lake positions spread over latitudes and zones (no real lake is meant).
 const places = [
@@ -18,7 +19,16 @@ const places = [
   ['southern hemisphere', -33.9, 151.2, 'Australia/Sydney'],
 ] as const;
 // Seasons, both daylight-saving changes in the US (2025-03-09, 2025-11-02) and solstices.
-const dates = ['2025-01-15', '2025-03-09', '2025-04-20', '2025-06-21', '2025-08-03', '2025-10-12', '2025-11-02', '2025-12-21'];
+const dates = [
+  '2025-01-15',
+  '2025-03-09',
+  '2025-04-20',
+  '2025-06-21',
+  '2025-08-03',
+  '2025-10-12',
+  '2025-11-02',
+  '2025-12-21',
+];
 
 function localWindow(date: string, timeZone: string) {
   const start = DateTime.fromISO(date, { zone: timeZone }).startOf('day');
@@ -37,53 +47,86 @@ function expectSameEvent(ours: string | null, ref: number | null, toleranceMin: 
 }
 
 describe('sunMoonDay against astronomy-engine 2.1.19 (latitudes, seasons, time zones)', () => {
-  it.each(places)('%s: sun and moon rise/set and twilight within 1 minute, illumination within 0.001', (_name, lat, lon, timeZone) => {
-    const observer = new Astronomy.Observer(lat, lon, 0);
-    for (const date of dates) {
-      const day = sunMoonDay(date, lat, lon, timeZone);
-      const w = localWindow(date, timeZone);
-      expectSameEvent(day.sunrise, reference(Astronomy.SearchRiseSet(Astronomy.Body.Sun, observer, +1, w.start, w.days), w.endMs), 1);
-      expectSameEvent(day.sunset, reference(Astronomy.SearchRiseSet(Astronomy.Body.Sun, observer, -1, w.start, w.days), w.endMs), 1);
-      expectSameEvent(day.civilDawn, reference(Astronomy.SearchAltitude(Astronomy.Body.Sun, observer, +1, w.start, w.days, -6), w.endMs), 1);
-      expectSameEvent(day.civilDusk, reference(Astronomy.SearchAltitude(Astronomy.Body.Sun, observer, -1, w.start, w.days, -6), w.endMs), 1);
-      expectSameEvent(day.moonrise, reference(Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, +1, w.start, w.days), w.endMs), 1);
-      expectSameEvent(day.moonset, reference(Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, -1, w.start, w.days), w.endMs), 1);
-      const noon = DateTime.fromISO(`${date}T12:00`, { zone: timeZone }).toJSDate();
-      expect(Math.abs(day.moonIllumination - Astronomy.Illumination(Astronomy.Body.Moon, noon).phase_fraction)).toBeLessThan(0.001);
-      // Phase: suncalc's comes from the elongation, astronomy-engine's from ecliptic longitudes.
-      let phaseGap = day.moonPhase - Astronomy.MoonPhase(noon) / 360;
-      phaseGap -= Math.round(phaseGap);
-      expect(Math.abs(phaseGap)).toBeLessThan(0.005);
-    }
-  });
+  it.each(places)(
+    '%s: sun and moon rise/set and twilight within 1 minute, illumination within 0.001',
+    (_name, lat, lon, timeZone) => {
+      const observer = new Astronomy.Observer(lat, lon, 0);
+      for (const date of dates) {
+        const day = sunMoonDay(date, lat, lon, timeZone);
+        const w = localWindow(date, timeZone);
+        expectSameEvent(
+          day.sunrise,
+          reference(Astronomy.SearchRiseSet(Astronomy.Body.Sun, observer, +1, w.start, w.days), w.endMs),
+          1,
+        );
+        expectSameEvent(
+          day.sunset,
+          reference(Astronomy.SearchRiseSet(Astronomy.Body.Sun, observer, -1, w.start, w.days), w.endMs),
+          1,
+        );
+        expectSameEvent(
+          day.civilDawn,
+          reference(Astronomy.SearchAltitude(Astronomy.Body.Sun, observer, +1, w.start, w.days, -6), w.endMs),
+          1,
+        );
+        expectSameEvent(
+          day.civilDusk,
+          reference(Astronomy.SearchAltitude(Astronomy.Body.Sun, observer, -1, w.start, w.days, -6), w.endMs),
+          1,
+        );
+        expectSameEvent(
+          day.moonrise,
+          reference(Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, +1, w.start, w.days), w.endMs),
+          1,
+        );
+        expectSameEvent(
+          day.moonset,
+          reference(Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, -1, w.start, w.days), w.endMs),
+          1,
+        );
+        const noon = DateTime.fromISO(`${date}T12:00`, { zone: timeZone }).toJSDate();
+        expect(
+          Math.abs(day.moonIllumination - Astronomy.Illumination(Astronomy.Body.Moon, noon).phase_fraction),
+        ).toBeLessThan(0.001);
+        // Phase: suncalc's comes from the elongation, astronomy-engine's from ecliptic longitudes.
+        let phaseGap = day.moonPhase - Astronomy.MoonPhase(noon) / 360;
+        phaseGap -= Math.round(phaseGap);
+        expect(Math.abs(phaseGap)).toBeLessThan(0.005);
+      }
+    },
+  );
 
-  it.each(places)('%s: moon transits are where suncalc’s moon azimuth crosses the meridian (within 1 minute)', (_name, lat, lon, timeZone) => {
-    // On the meridian the azimuth is 0° or 180°, so sin(azimuth) changes sign there; parallax acts
-    // in the vertical plane, so topocentric and geocentric transits coincide.
-    const sinAzimuth = (ms: number) => Math.sin((SunCalc.getMoonPosition(new Date(ms), lat, lon).azimuth * Math.PI) / 180);
-    const meridianCrossing = (near: number) => {
-      let lo = near - 30 * MINUTE;
-      let hi = near + 30 * MINUTE;
-      expect(Math.sign(sinAzimuth(lo))).not.toBe(Math.sign(sinAzimuth(hi)));
-      while (hi - lo > 500) {
-        const mid = (lo + hi) / 2;
-        if (Math.sign(sinAzimuth(mid)) === Math.sign(sinAzimuth(lo))) lo = mid;
-        else hi = mid;
+  it.each(places)(
+    '%s: moon transits are where suncalc’s moon azimuth crosses the meridian (within 1 minute)',
+    (_name, lat, lon, timeZone) => {
+      // On the meridian the azimuth is 0° or 180°, so sin(azimuth) changes sign there; parallax acts
+      // in the vertical plane, so topocentric and geocentric transits coincide.
+      const sinAzimuth = (ms: number) =>
+        Math.sin((SunCalc.getMoonPosition(new Date(ms), lat, lon).azimuth * Math.PI) / 180);
+      const meridianCrossing = (near: number) => {
+        let lo = near - 30 * MINUTE;
+        let hi = near + 30 * MINUTE;
+        expect(Math.sign(sinAzimuth(lo))).not.toBe(Math.sign(sinAzimuth(hi)));
+        while (hi - lo > 500) {
+          const mid = (lo + hi) / 2;
+          if (Math.sign(sinAzimuth(mid)) === Math.sign(sinAzimuth(lo))) lo = mid;
+          else hi = mid;
+        }
+        return (lo + hi) / 2;
+      };
+      for (const date of dates) {
+        const day = sunMoonDay(date, lat, lon, timeZone);
+        expect(day.moonUpperTransit ?? day.moonLowerTransit).not.toBeNull();
+        for (const transit of [day.moonUpperTransit, day.moonLowerTransit]) {
+          if (transit) expect(minutesBetween(transit, meridianCrossing(Date.parse(transit)))).toBeLessThan(1);
+        }
+        if (day.moonUpperTransit && day.moonLowerTransit) {
+          const altitude = (iso: string) => SunCalc.getMoonPosition(new Date(iso), lat, lon).altitude;
+          expect(altitude(day.moonUpperTransit)).toBeGreaterThan(altitude(day.moonLowerTransit));
+        }
       }
-      return (lo + hi) / 2;
-    };
-    for (const date of dates) {
-      const day = sunMoonDay(date, lat, lon, timeZone);
-      expect(day.moonUpperTransit ?? day.moonLowerTransit).not.toBeNull();
-      for (const transit of [day.moonUpperTransit, day.moonLowerTransit]) {
-        if (transit) expect(minutesBetween(transit, meridianCrossing(Date.parse(transit)))).toBeLessThan(1);
-      }
-      if (day.moonUpperTransit && day.moonLowerTransit) {
-        const altitude = (iso: string) => SunCalc.getMoonPosition(new Date(iso), lat, lon).altitude;
-        expect(altitude(day.moonUpperTransit)).toBeGreaterThan(altitude(day.moonLowerTransit));
-      }
-    }
-  });
+    },
+  );
 });
 
 describe('sunMoonDay against the USNO rise/set tables', () => {
@@ -110,13 +153,18 @@ describe('altitude conventions (checked with astronomy-engine’s unrefracted al
     return Astronomy.Horizon(time, observer, eq.ra, eq.dec).altitude;
   };
 
-  it.each(places)('%s: sunrise/sunset at −0.833° and civil twilight at −6° (sun’s centre)', (_name, lat, lon, timeZone) => {
-    for (const date of dates) {
-      const day = sunMoonDay(date, lat, lon, timeZone);
-      for (const iso of [day.sunrise!, day.sunset!]) expect(geometricSunAltitude(iso, lat, lon)).toBeCloseTo(-0.833, 1);
-      for (const iso of [day.civilDawn!, day.civilDusk!]) expect(geometricSunAltitude(iso, lat, lon)).toBeCloseTo(-6, 1);
-    }
-  });
+  it.each(places)(
+    '%s: sunrise/sunset at −0.833° and civil twilight at −6° (sun’s centre)',
+    (_name, lat, lon, timeZone) => {
+      for (const date of dates) {
+        const day = sunMoonDay(date, lat, lon, timeZone);
+        for (const iso of [day.sunrise!, day.sunset!])
+          expect(geometricSunAltitude(iso, lat, lon)).toBeCloseTo(-0.833, 1);
+        for (const iso of [day.civilDawn!, day.civilDusk!])
+          expect(geometricSunAltitude(iso, lat, lon)).toBeCloseTo(-6, 1);
+      }
+    },
+  );
 });
 
 describe('the lake’s local day', () => {
@@ -126,15 +174,27 @@ describe('the lake’s local day', () => {
     return local.toISODate() === day.date;
   };
 
-  it.each(places)('%s: every event falls on the local calendar date, including daylight-saving days', (_name, lat, lon, timeZone) => {
-    for (const date of dates) {
-      const day = sunMoonDay(date, lat, lon, timeZone);
-      for (const key of ['sunrise', 'sunset', 'civilDawn', 'civilDusk', 'moonrise', 'moonset', 'moonUpperTransit', 'moonLowerTransit'] as const) {
-        expect(within(day, day[key])).toBe(true);
+  it.each(places)(
+    '%s: every event falls on the local calendar date, including daylight-saving days',
+    (_name, lat, lon, timeZone) => {
+      for (const date of dates) {
+        const day = sunMoonDay(date, lat, lon, timeZone);
+        for (const key of [
+          'sunrise',
+          'sunset',
+          'civilDawn',
+          'civilDusk',
+          'moonrise',
+          'moonset',
+          'moonUpperTransit',
+          'moonLowerTransit',
+        ] as const) {
+          expect(within(day, day[key])).toBe(true);
+        }
+        for (const p of day.periods) expect(within(day, p.centre)).toBe(true);
       }
-      for (const p of day.periods) expect(within(day, p.centre)).toBe(true);
-    }
-  });
+    },
+  );
 
   it('gives ISO-8601 UTC instants', () => {
     const day = sunMoonDay('2025-06-21', 33.2, -96.1, 'America/Chicago');
@@ -145,7 +205,12 @@ describe('the lake’s local day', () => {
     const day = sunMoonDay('2025-06-21', 69.65, 18.96, 'Europe/Oslo');
     expect([day.sunrise, day.sunset]).toEqual([null, null]);
     const w = localWindow('2025-06-21', 'Europe/Oslo');
-    expect(reference(Astronomy.SearchRiseSet(Astronomy.Body.Sun, new Astronomy.Observer(69.65, 18.96, 0), +1, w.start, w.days), w.endMs)).toBeNull();
+    expect(
+      reference(
+        Astronomy.SearchRiseSet(Astronomy.Body.Sun, new Astronomy.Observer(69.65, 18.96, 0), +1, w.start, w.days),
+        w.endMs,
+      ),
+    ).toBeNull();
   });
 
   it('rejects bad dates, zones and positions', () => {
@@ -162,7 +227,11 @@ describe('solunar periods (major 2 h around transits, minor 1 h around rise and 
 
   it('centres major periods on the transits and minor periods on moonrise and moonset', () => {
     const day = sunMoonDay('2025-05-10', lat, lon, timeZone);
-    const centres = (kind: string) => day.periods.filter((p) => p.kind === kind).map((p) => p.centre).sort();
+    const centres = (kind: string) =>
+      day.periods
+        .filter((p) => p.kind === kind)
+        .map((p) => p.centre)
+        .sort();
     expect(centres('major')).toEqual([day.moonUpperTransit, day.moonLowerTransit].filter((x) => x !== null).sort());
     expect(centres('minor')).toEqual([day.moonrise, day.moonset].filter((x) => x !== null).sort());
     for (const p of day.periods) {
@@ -183,7 +252,9 @@ describe('solunar periods (major 2 h around transits, minor 1 h around rise and 
     const major = day.periods.find((p) => p.kind === 'major')!;
     expect(solunarPeriodAt(major.centre, lat, lon, timeZone)).toEqual(major);
     // Every 10 minutes of the day: found exactly when some period (of this day or a neighbour) holds it.
-    const all = [-1, 0, 1].flatMap((d) => sunMoonDay(DateTime.fromISO('2025-05-10').plus({ days: d }).toISODate()!, lat, lon, timeZone).periods);
+    const all = [-1, 0, 1].flatMap(
+      (d) => sunMoonDay(DateTime.fromISO('2025-05-10').plus({ days: d }).toISODate()!, lat, lon, timeZone).periods,
+    );
     for (let t = Date.parse('2025-05-10T05:00:00Z'); t < Date.parse('2025-05-11T05:00:00Z'); t += 10 * MINUTE) {
       const inside = all.filter((p) => Date.parse(p.start) <= t && t < Date.parse(p.end));
       const found = solunarPeriodAt(new Date(t).toISOString(), lat, lon, timeZone);

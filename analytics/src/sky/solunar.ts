@@ -35,7 +35,10 @@ export function assertPosition(lat: number, lon: number): void {
 function periodHours(options: SolunarOptions): { major: number; minor: number } {
   const major = options.majorHours ?? 2;
   const minor = options.minorHours ?? 1;
-  for (const [name, h] of [['majorHours', major], ['minorHours', minor]] as const) {
+  for (const [name, h] of [
+    ['majorHours', major],
+    ['minorHours', minor],
+  ] as const) {
     assertFinite(name, h);
     if (!(h > 0 && h <= 12)) throw new RangeError(`${name} must be within (0, 12], got ${h}`);
   }
@@ -58,7 +61,13 @@ export function periodsFromMoonEvents(events: MoonEvents, options: SolunarOption
     ...events.rises.map(make('minor', 'moonrise', minor)),
     ...events.sets.map(make('minor', 'moonset', minor)),
   ].sort((a, b) => a.startMs - b.startMs);
-  return periods.map((p) => ({ kind: p.kind, start: toIsoUtc(p.startMs), end: toIsoUtc(p.endMs), centre: toIsoUtc(p.centreMs), marker: p.marker }));
+  return periods.map((p) => ({
+    kind: p.kind,
+    start: toIsoUtc(p.startMs),
+    end: toIsoUtc(p.endMs),
+    centre: toIsoUtc(p.centreMs),
+    marker: p.marker,
+  }));
 }
 
 /**
@@ -72,13 +81,21 @@ export function periodsFromMoonEvents(events: MoonEvents, options: SolunarOption
  * @param timeZone the lake's IANA time zone (its local days)
  * @param options period lengths; defaults 2 h major, 1 h minor (common practice)
  */
-export function solunarPeriodAt(instant: string, lat: number, lon: number, timeZone: string, options: SolunarOptions = {}): SolunarPeriod | null {
+export function solunarPeriodAt(
+  instant: string,
+  lat: number,
+  lon: number,
+  timeZone: string,
+  options: SolunarOptions = {},
+): SolunarPeriod | null {
   const ms = parseInstant(instant);
   assertPosition(lat, lon);
   periodHours(options);
   const date = localDateOf(ms, timeZone);
   const candidates = [-1, 0, 1]
-    .flatMap((offset) => periodsFromMoonEvents(moonEvents(localDay(shiftDate(date, offset), timeZone), lat, lon), options))
+    .flatMap((offset) =>
+      periodsFromMoonEvents(moonEvents(localDay(shiftDate(date, offset), timeZone), lat, lon), options),
+    )
     .filter((p) => Date.parse(p.start) <= ms && ms < Date.parse(p.end));
   candidates.sort(
     (a, b) =>

@@ -64,7 +64,13 @@ const first = (values: number[]): string | null => (values.length ? toIsoUtc(val
  * @param timeZone the lake's IANA time zone, e.g. 'America/Chicago'
  * @param options solunar period lengths; defaults 2 h major, 1 h minor (common practice)
  */
-export function sunMoonDay(date: string, lat: number, lon: number, timeZone: string, options: SolunarOptions = {}): SunMoonDay {
+export function sunMoonDay(
+  date: string,
+  lat: number,
+  lon: number,
+  timeZone: string,
+  options: SolunarOptions = {},
+): SunMoonDay {
   assertPosition(lat, lon);
   const day = localDay(date, timeZone);
   const moon = moonEvents(day, lat, lon);

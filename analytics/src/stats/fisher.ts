@@ -15,13 +15,20 @@ import { assertCount } from './validate.js';
  */
 export function fisherExactTwoSided(table: readonly [readonly [number, number], readonly [number, number]]): number {
   const [[a, b], [c, d]] = table;
-  for (const [name, v] of [['a', a], ['b', b], ['c', c], ['d', d]] as const) assertCount(`table cell ${name}`, v);
+  for (const [name, v] of [
+    ['a', a],
+    ['b', b],
+    ['c', c],
+    ['d', d],
+  ] as const)
+    assertCount(`table cell ${name}`, v);
   const row1 = a + b;
   const row2 = c + d;
   const col1 = a + c;
   const n = row1 + row2;
   if (n === 0) return 1;
-  const logDenominator = logFactorial(n) - logFactorial(row1) - logFactorial(row2) - logFactorial(col1) - logFactorial(n - col1);
+  const logDenominator =
+    logFactorial(n) - logFactorial(row1) - logFactorial(row2) - logFactorial(col1) - logFactorial(n - col1);
   // log P(X = x) for the top-left cell x, margins fixed.
   const logP = (x: number) =>
     -logDenominator - logFactorial(x) - logFactorial(row1 - x) - logFactorial(col1 - x) - logFactorial(row2 - col1 + x);

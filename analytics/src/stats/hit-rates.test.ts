@@ -7,11 +7,58 @@ import { wilsonInterval } from './wilson.js';
 
 // Invented demo data: six finds on an invented lake, five catches.
 const finds: FindInput[] = [
-  { id: 'f1', kind: 'hard bottom', subKind: 'shell', depthFt: 14, hardness: 5, waterTempF: 71, eventId: 'e1', lakeId: 'l1' },
-  { id: 'f2', kind: 'hard bottom', subKind: 'rock', depthFt: 22, hardness: 4, waterTempF: 69, eventId: 'e1', lakeId: 'l1' },
-  { id: 'f3', kind: 'hard bottom', subKind: 'shell', depthFt: 9, hardness: 3, waterTempF: 72, eventId: 'e1', lakeId: 'l1', fished: true },
-  { id: 'f4', kind: 'vegetation', subKind: 'eelgrass', depthFt: 6, hardness: 1, waterTempF: 74, eventId: 'e1', lakeId: 'l1', fished: true },
-  { id: 'f5', kind: 'vegetation', subKind: 'hydrilla', depthFt: 4, hardness: 1, waterTempF: null, eventId: 'e1', lakeId: 'l1' },
+  {
+    id: 'f1',
+    kind: 'hard bottom',
+    subKind: 'shell',
+    depthFt: 14,
+    hardness: 5,
+    waterTempF: 71,
+    eventId: 'e1',
+    lakeId: 'l1',
+  },
+  {
+    id: 'f2',
+    kind: 'hard bottom',
+    subKind: 'rock',
+    depthFt: 22,
+    hardness: 4,
+    waterTempF: 69,
+    eventId: 'e1',
+    lakeId: 'l1',
+  },
+  {
+    id: 'f3',
+    kind: 'hard bottom',
+    subKind: 'shell',
+    depthFt: 9,
+    hardness: 3,
+    waterTempF: 72,
+    eventId: 'e1',
+    lakeId: 'l1',
+    fished: true,
+  },
+  {
+    id: 'f4',
+    kind: 'vegetation',
+    subKind: 'eelgrass',
+    depthFt: 6,
+    hardness: 1,
+    waterTempF: 74,
+    eventId: 'e1',
+    lakeId: 'l1',
+    fished: true,
+  },
+  {
+    id: 'f5',
+    kind: 'vegetation',
+    subKind: 'hydrilla',
+    depthFt: 4,
+    hardness: 1,
+    waterTempF: null,
+    eventId: 'e1',
+    lakeId: 'l1',
+  },
   { id: 'f6', kind: null, depthFt: null, hardness: null, eventId: 'e1', lakeId: 'l1' },
 ];
 const catches: CatchInput[] = [
@@ -47,7 +94,14 @@ describe('hitRates', () => {
     expect(groups.map((g) => g.key)).toEqual(['hard bottom', 'vegetation', null]);
     const [hard, veg, none] = groups;
     // hard bottom: f1 (2 catches, one weighed), f2 (1 released), f3 (fished, nothing)
-    expect([hard.finds, hard.findsFished, hard.findsWithFish, hard.findsWithWeighedFish, hard.fish, hard.weighedFish]).toEqual([3, 3, 2, 1, 3, 1]);
+    expect([
+      hard.finds,
+      hard.findsFished,
+      hard.findsWithFish,
+      hard.findsWithWeighedFish,
+      hard.fish,
+      hard.weighedFish,
+    ]).toEqual([3, 3, 2, 1, 3, 1]);
     expect(hard.fishWeightLb).toBe(8.5);
     expect(hard.weighedWeightLb).toBe(4.25);
     // vegetation: f4 (fished, one weighed), f5 (not fished)
@@ -58,7 +112,10 @@ describe('hitRates', () => {
 
   it('gives the Wilson interval and the shrunk rate of each group', () => {
     const groups = hitRates(finds, catches, { by: 'kind', confidence: 0.9 });
-    const expectedShrunk = shrinkRates(groups.map((g) => ({ key: g.key, successes: g.findsWithFish, trials: g.findsFished })), 0.9);
+    const expectedShrunk = shrinkRates(
+      groups.map((g) => ({ key: g.key, successes: g.findsWithFish, trials: g.findsFished })),
+      0.9,
+    );
     groups.forEach((g, i) => {
       const w = wilsonInterval(g.findsWithFish, g.findsFished, 0.9);
       expect([g.hitRate.lower, g.hitRate.upper]).toEqual([w.lower, w.upper]);
@@ -75,7 +132,10 @@ describe('hitRates', () => {
     expect(byDepth.find((g) => g.key === '10–15 ft')?.findsWithFish).toBe(1);
 
     const byFn = hitRates(finds, catches, { by: (f) => (f.hardness != null && f.hardness >= 4 ? 'hard' : 'soft') });
-    expect(byFn.map((g) => [g.key, g.finds])).toEqual([['hard', 2], ['soft', 4]]);
+    expect(byFn.map((g) => [g.key, g.finds])).toEqual([
+      ['hard', 2],
+      ['soft', 4],
+    ]);
   });
 
   it('numbers sort numerically (hardness grades)', () => {
@@ -89,14 +149,20 @@ describe('hitRates', () => {
   });
 
   it('property: agrees with a naive per-group count on random journals', () => {
-    const findArb = fc.record({ kind: fc.constantFrom('hard bottom', 'vegetation', 'bait', null), fished: fc.boolean() });
+    const findArb = fc.record({
+      kind: fc.constantFrom('hard bottom', 'vegetation', 'bait', null),
+      fished: fc.boolean(),
+    });
     const journalArb = fc.array(findArb, { minLength: 1, maxLength: 40 }).chain((fs) =>
       fc.tuple(
         fc.constant(fs.map((f, i) => ({ id: i, ...f }) as FindInput)),
         fc.array(
           fc.record({
             findId: fc.option(fc.integer({ min: 0, max: fs.length + 2 }), { nil: null }),
-            weightLb: fc.option(fc.integer({ min: 50, max: 900 }).map((h) => h / 100), { nil: null }),
+            weightLb: fc.option(
+              fc.integer({ min: 50, max: 900 }).map((h) => h / 100),
+              { nil: null },
+            ),
             fate: fc.constantFrom('weighed', 'culled', 'released', 'dead' as const),
           }),
           { maxLength: 120 },
@@ -111,7 +177,13 @@ describe('hitRates', () => {
         expect(got.length).toBe(expected.length);
         for (const e of expected) {
           const g = got.find((x) => x.key === e.key)!;
-          expect([g.finds, g.findsFished, g.findsWithFish, g.findsWithWeighedFish, g.fish]).toEqual([e.finds, e.findsFished, e.findsWithFish, e.findsWithWeighedFish, e.fish]);
+          expect([g.finds, g.findsFished, g.findsWithFish, g.findsWithWeighedFish, g.fish]).toEqual([
+            e.finds,
+            e.findsFished,
+            e.findsWithFish,
+            e.findsWithWeighedFish,
+            e.fish,
+          ]);
           expect(g.fishWeightLb).toBeCloseTo(e.fishWeightLb, 6);
         }
       }),

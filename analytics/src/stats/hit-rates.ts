@@ -1,5 +1,12 @@
 import * as aq from 'arquero';
-import { DEFAULT_DEPTH_BAND_EDGES_FT, DEFAULT_TEMPERATURE_BAND_EDGES_F, depthBand, depthBandLabels, temperatureBand, temperatureBandLabels } from '../geo/bands.js';
+import {
+  DEFAULT_DEPTH_BAND_EDGES_FT,
+  DEFAULT_TEMPERATURE_BAND_EDGES_F,
+  depthBand,
+  depthBandLabels,
+  temperatureBand,
+  temperatureBandLabels,
+} from '../geo/bands.js';
 import { shrinkRates, type GroupKey } from './shrinkage.js';
 import { assertConfidence } from './validate.js';
 
@@ -80,10 +87,7 @@ export interface HitRateGroup {
 
 /** How to group finds: a field name of the find, a derived band, or a function of the find. */
 export type HitRateGrouping<F extends FindInput = FindInput> =
-  | 'depthBand'
-  | 'temperatureBand'
-  | (keyof F & string)
-  | ((find: F) => GroupKey | undefined);
+  'depthBand' | 'temperatureBand' | (keyof F & string) | ((find: F) => GroupKey | undefined);
 
 export interface HitRateOptions<F extends FindInput = FindInput> {
   /**
@@ -110,7 +114,8 @@ function keyFunction<F extends FindInput>(options: HitRateOptions<F>): (find: F)
   }
   if (by === 'temperatureBand') {
     const edges = options.temperatureBandEdgesF ?? DEFAULT_TEMPERATURE_BAND_EDGES_F;
-    return (f) => ('temperatureBand' in f ? ((f['temperatureBand'] as GroupKey) ?? null) : temperatureBand(f.waterTempF, edges));
+    return (f) =>
+      'temperatureBand' in f ? ((f['temperatureBand'] as GroupKey) ?? null) : temperatureBand(f.waterTempF, edges);
   }
   return (f) => (f[by] as GroupKey | undefined) ?? null;
 }
@@ -147,7 +152,11 @@ function keyOrder<F extends FindInput>(options: HitRateOptions<F>): (a: GroupKey
  * @returns groups sorted by key (bands shallow→deep / cold→warm, numbers ascending, `null` last)
  * @throws RangeError on duplicate find ids or a negative or non-finite catch weight
  */
-export function hitRates<F extends FindInput>(finds: readonly F[], catches: readonly CatchInput[], options: HitRateOptions<F>): HitRateGroup[] {
+export function hitRates<F extends FindInput>(
+  finds: readonly F[],
+  catches: readonly CatchInput[],
+  options: HitRateOptions<F>,
+): HitRateGroup[] {
   const confidence = options.confidence ?? 0.95;
   assertConfidence(confidence);
   const keyOf = keyFunction(options);
@@ -211,9 +220,20 @@ export function hitRates<F extends FindInput>(finds: readonly F[], catches: read
   const order = keyOrder(options);
   rolled.sort((a, b) => order(a.key, b.key));
 
-  const hit = shrinkRates(rolled.map((g) => ({ key: g.key, successes: g.findsWithFish, trials: g.findsFished })), confidence);
-  const weighed = shrinkRates(rolled.map((g) => ({ key: g.key, successes: g.findsWithWeighedFish, trials: g.findsFished })), confidence);
-  const summary = (r: (typeof hit)[number]): RateSummary => ({ rate: r.rate, lower: r.lower, upper: r.upper, shrunk: r.shrunk });
+  const hit = shrinkRates(
+    rolled.map((g) => ({ key: g.key, successes: g.findsWithFish, trials: g.findsFished })),
+    confidence,
+  );
+  const weighed = shrinkRates(
+    rolled.map((g) => ({ key: g.key, successes: g.findsWithWeighedFish, trials: g.findsFished })),
+    confidence,
+  );
+  const summary = (r: (typeof hit)[number]): RateSummary => ({
+    rate: r.rate,
+    lower: r.lower,
+    upper: r.upper,
+    shrunk: r.shrunk,
+  });
   return rolled.map((g, i) => ({
     key: g.key,
     finds: g.finds,

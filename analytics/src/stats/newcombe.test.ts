@@ -4,7 +4,10 @@ import { describe, expect, it } from 'vitest';
 import { fisherExactTwoSided } from './fisher.js';
 import { compareProportions } from './newcombe.js';
 
-const count = (max: number) => fc.integer({ min: 0, max }).chain((n) => fc.record({ successes: fc.integer({ min: 0, max: n }), trials: fc.constant(n) }));
+const count = (max: number) =>
+  fc
+    .integer({ min: 0, max })
+    .chain((n) => fc.record({ successes: fc.integer({ min: 0, max: n }), trials: fc.constant(n) }));
 
 describe('compareProportions: Newcombe method 10 interval', () => {
   // Newcombe (1998), Statistics in Medicine 17:873–890, Table II, method 10 (hybrid score).
@@ -26,7 +29,10 @@ describe('compareProportions: Newcombe method 10 interval', () => {
   });
 
   it('56/70 vs 48/80 has difference 0.2000 (Newcombe 1998)', () => {
-    expect(compareProportions({ successes: 56, trials: 70 }, { successes: 48, trials: 80 }).difference).toBeCloseTo(0.2, 12);
+    expect(compareProportions({ successes: 56, trials: 70 }, { successes: 48, trials: 80 }).difference).toBeCloseTo(
+      0.2,
+      12,
+    );
   });
 
   it('says nothing when a group has no trials', () => {
@@ -45,7 +51,9 @@ describe('compareProportions: Newcombe method 10 interval', () => {
       fc.property(count(300), count(300), (a, b) => {
         fc.pre(a.trials > 0 && b.trials > 0);
         const r = compareProportions(a, b);
-        expect(-1 <= r.lower && r.lower <= r.difference + 1e-12 && r.difference <= r.upper + 1e-12 && r.upper <= 1).toBe(true);
+        expect(
+          -1 <= r.lower && r.lower <= r.difference + 1e-12 && r.difference <= r.upper + 1e-12 && r.upper <= 1,
+        ).toBe(true);
         expect(r.pValue >= 0 && r.pValue <= 1).toBe(true);
         const s = compareProportions(b, a);
         expect(s.lower).toBeCloseTo(-r.upper, 12);
@@ -58,12 +66,27 @@ describe('compareProportions: Newcombe method 10 interval', () => {
 
 describe("Fisher's exact test", () => {
   it('lady tasting tea [[3, 1], [1, 3]]: two-sided p = 0.4857 = 34/70 (Fisher 1935)', () => {
-    expect(fisherExactTwoSided([[3, 1], [1, 3]])).toBeCloseTo(34 / 70, 12);
-    expect(fisherExactTwoSided([[3, 1], [1, 3]])).toBeCloseTo(0.4857, 4);
+    expect(
+      fisherExactTwoSided([
+        [3, 1],
+        [1, 3],
+      ]),
+    ).toBeCloseTo(34 / 70, 12);
+    expect(
+      fisherExactTwoSided([
+        [3, 1],
+        [1, 3],
+      ]),
+    ).toBeCloseTo(0.4857, 4);
   });
 
   it('the perfect tea table [[4, 0], [0, 4]] has p = 2/70 (Fisher 1935)', () => {
-    expect(fisherExactTwoSided([[4, 0], [0, 4]])).toBeCloseTo(2 / 70, 12);
+    expect(
+      fisherExactTwoSided([
+        [4, 0],
+        [0, 4],
+      ]),
+    ).toBeCloseTo(2 / 70, 12);
   });
 
   it('matches the two-sided sum built from the @stdlib hypergeometric PMF', () => {
@@ -82,7 +105,10 @@ describe("Fisher's exact test", () => {
           const p = pmf(x);
           if (p <= observed * (1 + 1e-7)) expected += p;
         }
-        const actual = fisherExactTwoSided([[a, b], [c, d]]);
+        const actual = fisherExactTwoSided([
+          [a, b],
+          [c, d],
+        ]);
         expect(Math.abs(actual - Math.min(1, expected))).toBeLessThanOrEqual(1e-9 * Math.max(expected, 1e-300) + 1e-12);
       }),
     );

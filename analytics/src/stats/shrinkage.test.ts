@@ -5,7 +5,9 @@ import { fitBetaPrior, MAX_PRIOR_STRENGTH, shrinkRates } from './shrinkage.js';
 import { wilsonInterval } from './wilson.js';
 
 const groupsArb = fc.array(
-  fc.integer({ min: 0, max: 200 }).chain((n) => fc.record({ key: fc.string(), successes: fc.integer({ min: 0, max: n }), trials: fc.constant(n) })),
+  fc
+    .integer({ min: 0, max: 200 })
+    .chain((n) => fc.record({ key: fc.string(), successes: fc.integer({ min: 0, max: n }), trials: fc.constant(n) })),
   { minLength: 1, maxLength: 30 },
 );
 
@@ -36,7 +38,14 @@ describe('shrinkRates (empirical-Bayes beta-binomial)', () => {
       { key: 5, successes: 1, trials: 10 },
     ];
     const mean = 37 / 93;
-    const logLik = (m: number) => groups.reduce((s, g) => s + jStat.betaln(g.successes + mean * m, g.trials - g.successes + (1 - mean) * m) - jStat.betaln(mean * m, (1 - mean) * m), 0);
+    const logLik = (m: number) =>
+      groups.reduce(
+        (s, g) =>
+          s +
+          jStat.betaln(g.successes + mean * m, g.trials - g.successes + (1 - mean) * m) -
+          jStat.betaln(mean * m, (1 - mean) * m),
+        0,
+      );
     let best = 0;
     let bestValue = -Infinity;
     for (let m = 0.05; m < 1000; m *= 1.0005) {
@@ -67,7 +76,10 @@ describe('shrinkRates (empirical-Bayes beta-binomial)', () => {
   });
 
   it('keeps other fields, gives the Wilson interval of the raw rate, and the pooled rate to an empty group', () => {
-    const out = shrinkRates([...demo.map((g) => ({ ...g, label: `kind ${g.key}` })), { key: 'wood', successes: 0, trials: 0, label: 'none yet' }]);
+    const out = shrinkRates([
+      ...demo.map((g) => ({ ...g, label: `kind ${g.key}` })),
+      { key: 'wood', successes: 0, trials: 0, label: 'none yet' },
+    ]);
     const empty = out[out.length - 1];
     expect(empty.label).toBe('none yet');
     expect(empty.rate).toBeNaN();

@@ -59,7 +59,12 @@ export function fitBetaPrior(groups: readonly RateGroup[]): BetaPrior {
   const observed = groups.filter((g) => g.trials > 0);
   if (mean === 0 || mean === 1 || observed.length < 2) {
     // Every group shows the same rate (or there is one group): nothing to tell them apart.
-    return { mean, strength: MAX_PRIOR_STRENGTH, alpha: mean * MAX_PRIOR_STRENGTH, beta: (1 - mean) * MAX_PRIOR_STRENGTH };
+    return {
+      mean,
+      strength: MAX_PRIOR_STRENGTH,
+      alpha: mean * MAX_PRIOR_STRENGTH,
+      beta: (1 - mean) * MAX_PRIOR_STRENGTH,
+    };
   }
   const logLikelihood = (log10Strength: number): number => {
     const m = 10 ** log10Strength;

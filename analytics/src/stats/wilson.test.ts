@@ -66,12 +66,15 @@ describe('wilsonInterval', () => {
 
   it('property: a higher confidence level never narrows the interval', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 1000 }).chain((n) => fc.tuple(fc.integer({ min: 0, max: n }), fc.constant(n))), ([x, n]) => {
-        const narrow = wilsonInterval(x, n, 0.9);
-        const wide = wilsonInterval(x, n, 0.99);
-        expect(wide.lower).toBeLessThanOrEqual(narrow.lower);
-        expect(wide.upper).toBeGreaterThanOrEqual(narrow.upper);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 1000 }).chain((n) => fc.tuple(fc.integer({ min: 0, max: n }), fc.constant(n))),
+        ([x, n]) => {
+          const narrow = wilsonInterval(x, n, 0.9);
+          const wide = wilsonInterval(x, n, 0.99);
+          expect(wide.lower).toBeLessThanOrEqual(narrow.lower);
+          expect(wide.upper).toBeGreaterThanOrEqual(narrow.upper);
+        },
+      ),
     );
   });
 });

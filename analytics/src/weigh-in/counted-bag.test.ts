@@ -43,7 +43,13 @@ describe('countedBag', () => {
   });
 
   it('never reports a net below zero', () => {
-    const bag = countedBag([{ id: 1, weightLb: 0.5, lengthIn: 10 }, { id: 2, weightLb: 1, lengthIn: 13 }], { fishPerDay: 5, minLengthIn: 12, shortFishPenaltyLb: 2 });
+    const bag = countedBag(
+      [
+        { id: 1, weightLb: 0.5, lengthIn: 10 },
+        { id: 2, weightLb: 1, lengthIn: 13 },
+      ],
+      { fishPerDay: 5, minLengthIn: 12, shortFishPenaltyLb: 2 },
+    );
     expect(bag.grossLb).toBe(1);
     expect(bag.netLb).toBe(0);
   });
@@ -60,7 +66,10 @@ describe('countedBag', () => {
     fc.record({
       id: fc.integer({ min: 0, max: 1000 }),
       weightLb: fc.integer({ min: 0, max: 1200 }).map((h) => h / 100),
-      lengthIn: fc.option(fc.integer({ min: 80, max: 260 }).map((q) => q / 10), { nil: undefined }),
+      lengthIn: fc.option(
+        fc.integer({ min: 80, max: 260 }).map((q) => q / 10),
+        { nil: undefined },
+      ),
       dead: fc.boolean(),
     }),
     { selector: (f) => f.id, maxLength: 12 },
@@ -72,9 +81,12 @@ describe('countedBag', () => {
     shortFishPenaltyLb: fc.constantFrom(0, 0.5, 1),
   });
   const netOf = (chosen: BagFish[], all: BagFish[], rules: BagRules) => {
-    const short = all.filter((f) => rules.minLengthIn != null && f.lengthIn != null && f.lengthIn < rules.minLengthIn).length;
+    const short = all.filter(
+      (f) => rules.minLengthIn != null && f.lengthIn != null && f.lengthIn < rules.minLengthIn,
+    ).length;
     const gross = chosen.reduce((s, f) => s + f.weightLb, 0);
-    const penalty = chosen.filter((f) => f.dead).length * (rules.deadFishPenaltyLb ?? 0) + short * (rules.shortFishPenaltyLb ?? 0);
+    const penalty =
+      chosen.filter((f) => f.dead).length * (rules.deadFishPenaltyLb ?? 0) + short * (rules.shortFishPenaltyLb ?? 0);
     return Math.max(0, gross - penalty);
   };
 
@@ -85,7 +97,8 @@ describe('countedBag', () => {
         const byId = new Map<string | number, BagFish>(fish.map((f) => [f.id, f]));
         const counted = bag.counted.map((id) => byId.get(id)!);
         expect(counted.length).toBeLessThanOrEqual(rules.fishPerDay);
-        const legal = (f: BagFish) => rules.minLengthIn == null || f.lengthIn == null || f.lengthIn >= rules.minLengthIn;
+        const legal = (f: BagFish) =>
+          rules.minLengthIn == null || f.lengthIn == null || f.lengthIn >= rules.minLengthIn;
         expect(counted.every(legal)).toBe(true);
         expect(new Set([...bag.counted, ...bag.culled]).size).toBe(fish.length);
         const net = netOf(counted, fish, rules);
@@ -95,7 +108,8 @@ describe('countedBag', () => {
             const swapped = counted.map((f, j) => (j === i ? out : f));
             expect(netOf(swapped, fish, rules)).toBeLessThanOrEqual(net + 1e-9);
           }
-          if (counted.length < rules.fishPerDay) expect(netOf([...counted, out], fish, rules)).toBeLessThanOrEqual(net + 1e-9);
+          if (counted.length < rules.fishPerDay)
+            expect(netOf([...counted, out], fish, rules)).toBeLessThanOrEqual(net + 1e-9);
         }
       }),
     );
@@ -104,7 +118,9 @@ describe('countedBag', () => {
   it('property: the net equals the best over every allowed subset (brute force)', () => {
     fc.assert(
       fc.property(fishArb, rulesArb, (fish, rules) => {
-        const legal = fish.filter((f) => rules.minLengthIn == null || f.lengthIn == null || f.lengthIn >= rules.minLengthIn);
+        const legal = fish.filter(
+          (f) => rules.minLengthIn == null || f.lengthIn == null || f.lengthIn >= rules.minLengthIn,
+        );
         let best = netOf([], fish, rules);
         for (let mask = 1; mask < 1 << legal.length; mask++) {
           const subset = legal.filter((_, i) => mask & (1 << i));

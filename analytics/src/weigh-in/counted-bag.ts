@@ -75,7 +75,8 @@ export function countedBag(fish: readonly BagFish[], rules: BagRules): CountedBa
     if (f.lengthIn !== null && f.lengthIn !== undefined) assertNonNegative(`fish ${String(f.id)} lengthIn`, f.lengthIn);
   }
 
-  const isShort = (f: BagFish) => minLength !== null && f.lengthIn !== null && f.lengthIn !== undefined && f.lengthIn < minLength;
+  const isShort = (f: BagFish) =>
+    minLength !== null && f.lengthIn !== null && f.lengthIn !== undefined && f.lengthIn < minLength;
   const value = (f: BagFish) => f.weightLb - (f.dead ? deadPenalty : 0);
   const short = fish.filter(isShort);
   const candidates = fish

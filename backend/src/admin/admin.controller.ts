@@ -1,5 +1,15 @@
 import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
-import { ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiParam,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { AdminUserView } from '@shoalbook/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -29,8 +39,15 @@ export class AdminController {
   @ApiOkResponse({ type: AdminUserViewDto })
   @ApiBadRequestResponse({ type: ApiErrorDto })
   @ApiNotFoundResponse({ type: ApiErrorDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'An admin cannot disable or demote themselves (code self_lockout).' })
-  update(@CurrentUser() admin: User, @Param('userId') userId: string, @Body() dto: AdminUpdateUserDto): Promise<AdminUserView> {
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: 'An admin cannot disable or demote themselves (code self_lockout).',
+  })
+  update(
+    @CurrentUser() admin: User,
+    @Param('userId') userId: string,
+    @Body() dto: AdminUpdateUserDto,
+  ): Promise<AdminUserView> {
     return this.admin.update(admin.id, userId, dto);
   }
 }

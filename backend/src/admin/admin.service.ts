@@ -6,7 +6,14 @@ import { ApiException, ErrorCode } from '../common/errors/api-errors';
 import { User } from '../users/user.entity';
 
 function toAdminView(u: User): AdminUserView {
-  return { id: u.id, email: u.email, displayName: u.displayName, siteRole: u.siteRole, disabled: u.disabled, createdAt: u.createdAt.toISOString() };
+  return {
+    id: u.id,
+    email: u.email,
+    displayName: u.displayName,
+    siteRole: u.siteRole,
+    disabled: u.disabled,
+    createdAt: u.createdAt.toISOString(),
+  };
 }
 
 /** Account administration. Touches accounts only, never a crew's journal. */
@@ -25,7 +32,11 @@ export class AdminService {
   async update(adminId: string, userId: string, changes: AdminUpdateUserRequest): Promise<AdminUserView> {
     if (userId === adminId && (changes.disabled === true || changes.siteRole === 'user')) {
       // Keeps the site from locking out its own admin by a slip.
-      throw new ApiException(HttpStatus.CONFLICT, 'You cannot disable your own account or remove your own admin role.', ErrorCode.selfLockout);
+      throw new ApiException(
+        HttpStatus.CONFLICT,
+        'You cannot disable your own account or remove your own admin role.',
+        ErrorCode.selfLockout,
+      );
     }
     return this.em.transactional(async (em) => {
       const user = await em.findOne(User, { id: userId });

@@ -18,19 +18,32 @@ export class AccountDeletionService {
 
   /** @throws 400 wrong_password; 409 last_owner when a crew with other members would be left without an owner */
   async deleteAccount(user: User, password: string): Promise<void> {
-    if (!(await verifyPassword(user.passwordHash, password))) throw fieldError('password', 'The password is wrong.', ErrorCode.wrongPassword);
+    if (!(await verifyPassword(user.passwordHash, password)))
+      throw fieldError('password', 'The password is wrong.', ErrorCode.wrongPassword);
     await this.removal.run(async (tx, purge) => {
-      const memberships = await tx.find(Membership, { user: user.id }, { populate: ['crew'], lockMode: LockMode.PESSIMISTIC_WRITE });
+      const memberships = await tx.find(
+        Membership,
+        { user: user.id },
+        { populate: ['crew'], lockMode: LockMode.PESSIMISTIC_WRITE },
+      );
       const aloneIn: string[] = [];
       const lastOwnerOf: string[] = [];
       for (const m of memberships) {
-        const others = await tx.find(Membership, { crew: m.crew.id, user: { $ne: user.id } }, { lockMode: LockMode.PESSIMISTIC_WRITE });
+        const others = await tx.find(
+          Membership,
+          { crew: m.crew.id, user: { $ne: user.id } },
+          { lockMode: LockMode.PESSIMISTIC_WRITE },
+        );
         if (others.length === 0) aloneIn.push(m.crew.id);
         else if (m.role === 'owner' && !others.some((o) => o.role === 'owner')) lastOwnerOf.push(m.crew.name);
       }
       if (lastOwnerOf.length) {
         const names = lastOwnerOf.map((n) => `“${n}”`).join(', ');
-        throw new ApiException(HttpStatus.CONFLICT, `You are the last owner of ${names}. Make another member an owner, or delete the crew, first.`, ErrorCode.lastOwner);
+        throw new ApiException(
+          HttpStatus.CONFLICT,
+          `You are the last owner of ${names}. Make another member an owner, or delete the crew, first.`,
+          ErrorCode.lastOwner,
+        );
       }
       for (const crewId of aloneIn) await purge(crewId);
       await tx.nativeDelete(User, { id: user.id });

@@ -1,6 +1,18 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiAcceptedResponse, ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiForbiddenResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import {
+  ApiAcceptedResponse,
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiForbiddenResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { MeResponse } from '@shoalbook/shared';
 import { CsrfService } from '../common/csrf/csrf.service';
@@ -15,7 +27,16 @@ import { UsersService } from '../users/users.service';
 import { AccountDeletionService } from './account-deletion.service';
 import { AuthService } from './auth.service';
 import { SignUpCommand } from './commands/sign-up.command';
-import { ChangePasswordDto, CsrfResponseDto, DeleteAccountDto, MessageResponseDto, PasswordResetConfirmDto, PasswordResetRequestDto, SignInDto, SignUpDto } from './dto/auth.dto';
+import {
+  ChangePasswordDto,
+  CsrfResponseDto,
+  DeleteAccountDto,
+  MessageResponseDto,
+  PasswordResetConfirmDto,
+  PasswordResetRequestDto,
+  SignInDto,
+  SignUpDto,
+} from './dto/auth.dto';
 import { SessionsService } from './sessions.service';
 
 @ApiTags('auth')
@@ -34,7 +55,9 @@ export class AuthController {
 
   @Public()
   @Get('csrf')
-  @ApiOperation({ summary: 'A CSRF token for this browser and session (fetch again after sign-in, sign-up and sign-out)' })
+  @ApiOperation({
+    summary: 'A CSRF token for this browser and session (fetch again after sign-in, sign-up and sign-out)',
+  })
   @ApiOkResponse({ type: CsrfResponseDto })
   csrfToken(@Req() req: Request, @Res({ passthrough: true }) res: Response): CsrfResponseDto {
     return { csrfToken: this.csrf.issueToken(req, res) };
@@ -46,7 +69,11 @@ export class AuthController {
   @ApiOperation({ summary: 'Create an account and sign in' })
   @ApiCreatedResponse({ type: MeResponseDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'The e-mail address has an account (code email_taken).' })
-  async signUp(@Body() dto: SignUpDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<MeResponse> {
+  async signUp(
+    @Body() dto: SignUpDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<MeResponse> {
     const user = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName));
     await this.startSession(user, req, res);
     return this.users.me(user);
@@ -60,7 +87,11 @@ export class AuthController {
   @ApiOkResponse({ type: MeResponseDto })
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'E-mail or password is wrong.' })
   @ApiForbiddenResponse({ type: ApiErrorDto, description: 'The account is disabled.' })
-  async signIn(@Body() dto: SignInDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<MeResponse> {
+  async signIn(
+    @Body() dto: SignInDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<MeResponse> {
     const user = await this.auth.signIn(dto.email, dto.password);
     await this.startSession(user, req, res);
     return this.users.me(user);
@@ -102,8 +133,15 @@ export class AuthController {
   })
   @ApiNoContentResponse({ description: 'The account is gone and the session cookie cleared.' })
   @ApiUnauthorizedResponse({ type: ApiErrorDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'last_owner: make another member an owner (or delete the crew) first.' })
-  async deleteMe(@CurrentUser() user: User, @Body() dto: DeleteAccountDto, @Res({ passthrough: true }) res: Response): Promise<void> {
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: 'last_owner: make another member an owner (or delete the crew) first.',
+  })
+  async deleteMe(
+    @CurrentUser() user: User,
+    @Body() dto: DeleteAccountDto,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<void> {
     await this.accounts.deleteAccount(user, dto.password);
     this.sessions.clearCookie(res);
   }
@@ -125,7 +163,9 @@ export class AuthController {
   @ApiAcceptedResponse({ type: MessageResponseDto })
   async requestReset(@Body() dto: PasswordResetRequestDto): Promise<MessageResponseDto> {
     await this.auth.requestPasswordReset(dto.email);
-    return { message: 'If an account uses this address, a link to set a new password is on its way. It works for 30 minutes.' };
+    return {
+      message: 'If an account uses this address, a link to set a new password is on its way. It works for 30 minutes.',
+    };
   }
 
   @Public()

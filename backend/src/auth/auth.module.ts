@@ -14,7 +14,15 @@ import { SessionsService } from './sessions.service';
 @Module({
   imports: [UsersModule, CrewsModule],
   controllers: [AuthController],
-  providers: [AuthService, SessionsService, AccountDeletionService, ExpiredCredentialsCleanup, CsrfService, ...AUTH_COMMAND_HANDLERS, { provide: APP_GUARD, useClass: SessionGuard }],
+  providers: [
+    AuthService,
+    SessionsService,
+    AccountDeletionService,
+    ExpiredCredentialsCleanup,
+    CsrfService,
+    ...AUTH_COMMAND_HANDLERS,
+    { provide: APP_GUARD, useClass: SessionGuard },
+  ],
   exports: [SessionsService, CsrfService],
 })
 export class AuthModule {}

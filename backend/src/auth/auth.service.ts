@@ -35,13 +35,24 @@ export class AuthService {
     const user = await this.users.findByEmail(email);
     const ok = await verifyPassword(user?.passwordHash ?? (await decoyHash()), password);
     if (!user || !ok) throw new ApiException(HttpStatus.UNAUTHORIZED, WRONG_CREDENTIALS, ErrorCode.wrongCredentials);
-    if (user.disabled) throw new ApiException(HttpStatus.FORBIDDEN, 'This account is disabled. Ask the site admin.', ErrorCode.accountDisabled);
+    if (user.disabled)
+      throw new ApiException(
+        HttpStatus.FORBIDDEN,
+        'This account is disabled. Ask the site admin.',
+        ErrorCode.accountDisabled,
+      );
     return user;
   }
 
   /** Change the password and end the user's other sessions (the current one stays signed in). */
-  async changePassword(user: User, currentTokenHash: string, currentPassword: string, newPassword: string): Promise<void> {
-    if (!(await verifyPassword(user.passwordHash, currentPassword))) throw fieldError('currentPassword', 'The current password is wrong.', ErrorCode.wrongPassword);
+  async changePassword(
+    user: User,
+    currentTokenHash: string,
+    currentPassword: string,
+    newPassword: string,
+  ): Promise<void> {
+    if (!(await verifyPassword(user.passwordHash, currentPassword)))
+      throw fieldError('currentPassword', 'The current password is wrong.', ErrorCode.wrongPassword);
     const problem = passwordProblem(newPassword, { email: user.email });
     if (problem) throw fieldError('newPassword', problem);
     const passwordHash = await hashPassword(newPassword);
@@ -69,13 +80,26 @@ export class AuthService {
     await this.em.flush();
     const link = `${this.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
     const message = passwordResetMail({ displayName: user.displayName, link, validMinutes: RESET_TOKEN_MINUTES });
-    this.mail.send(user.email, message).catch((e: unknown) => this.logger.error(`password-reset e-mail failed: ${e instanceof Error ? e.message : String(e)}`));
+    this.mail
+      .send(user.email, message)
+      .catch((e: unknown) =>
+        this.logger.error(`password-reset e-mail failed: ${e instanceof Error ? e.message : String(e)}`),
+      );
   }
 
   /** Use a reset token once: set the password, end every session, void the user's other reset links. */
   async confirmPasswordReset(token: string, password: string): Promise<void> {
-    const invalid = () => new ApiException(HttpStatus.BAD_REQUEST, 'This reset link is not valid any more. Ask for a new one.', ErrorCode.tokenInvalid);
-    const found = await this.em.findOne(AuthToken, { tokenHash: hashToken(token), purpose: 'password_reset' }, { populate: ['user'] });
+    const invalid = () =>
+      new ApiException(
+        HttpStatus.BAD_REQUEST,
+        'This reset link is not valid any more. Ask for a new one.',
+        ErrorCode.tokenInvalid,
+      );
+    const found = await this.em.findOne(
+      AuthToken,
+      { tokenHash: hashToken(token), purpose: 'password_reset' },
+      { populate: ['user'] },
+    );
     if (!found || found.usedAt || found.expiresAt.getTime() <= Date.now() || found.user.disabled) throw invalid();
     const problem = passwordProblem(password, { email: found.user.email });
     if (problem) throw fieldError('password', problem);
@@ -84,7 +108,11 @@ export class AuthService {
       // The conditional update makes the token single-use even when two requests race.
       const claimed = await em.nativeUpdate(AuthToken, { id: found.id, usedAt: null }, { usedAt: new Date() });
       if (claimed !== 1) throw invalid();
-      await em.nativeUpdate(AuthToken, { user: found.user.id, purpose: 'password_reset', usedAt: null }, { usedAt: new Date() });
+      await em.nativeUpdate(
+        AuthToken,
+        { user: found.user.id, purpose: 'password_reset', usedAt: null },
+        { usedAt: new Date() },
+      );
       await em.nativeUpdate(User, { id: found.user.id }, { passwordHash });
       await this.sessions.endAllFor(found.user.id, undefined, em);
     });

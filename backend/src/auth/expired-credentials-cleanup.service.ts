@@ -31,7 +31,9 @@ export class ExpiredCredentialsCleanup implements OnApplicationBootstrap, OnModu
     const minutes = this.config.get('SESSION_CLEANUP_MINUTES');
     if (minutes <= 0) return;
     this.timer = setInterval(() => {
-      this.cleanup().catch((e: unknown) => this.logger.error(`cleanup failed: ${e instanceof Error ? e.message : String(e)}`));
+      this.cleanup().catch((e: unknown) =>
+        this.logger.error(`cleanup failed: ${e instanceof Error ? e.message : String(e)}`),
+      );
     }, minutes * 60_000);
     // A pending cleanup never keeps the process alive.
     this.timer.unref();
@@ -51,10 +53,15 @@ export class ExpiredCredentialsCleanup implements OnApplicationBootstrap, OnModu
   async cleanup(now: Date = new Date()): Promise<CleanupResult> {
     const em = this.orm.em.fork();
     const idleCutoff = new Date(now.getTime() - this.config.get('SESSION_IDLE_HOURS') * 3_600_000);
-    const sessions = await em.nativeDelete(Session, { $or: [{ expiresAt: { $lte: now } }, { lastSeenAt: { $lte: idleCutoff } }] });
-    const authTokens = await em.nativeDelete(AuthToken, { $or: [{ expiresAt: { $lte: now } }, { usedAt: { $ne: null } }] });
+    const sessions = await em.nativeDelete(Session, {
+      $or: [{ expiresAt: { $lte: now } }, { lastSeenAt: { $lte: idleCutoff } }],
+    });
+    const authTokens = await em.nativeDelete(AuthToken, {
+      $or: [{ expiresAt: { $lte: now } }, { usedAt: { $ne: null } }],
+    });
     const invites = await em.nativeDelete(Invite, { acceptedAt: null, expiresAt: { $lte: now } });
-    if (sessions + authTokens + invites > 0) this.logger.log(`removed ${sessions} session(s), ${authTokens} reset token(s), ${invites} expired invite(s)`);
+    if (sessions + authTokens + invites > 0)
+      this.logger.log(`removed ${sessions} session(s), ${authTokens} reset token(s), ${invites} expired invite(s)`);
     return { sessions, authTokens, invites };
   }
 }

@@ -23,8 +23,12 @@ export class SessionGuard implements CanActivate {
       req.authSession = session;
       req.user = session.user;
     }
-    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [context.getHandler(), context.getClass()]);
-    if (!session && !isPublic) throw new ApiException(HttpStatus.UNAUTHORIZED, 'Sign in first.', ErrorCode.unauthenticated);
+    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [
+      context.getHandler(),
+      context.getClass(),
+    ]);
+    if (!session && !isPublic)
+      throw new ApiException(HttpStatus.UNAUTHORIZED, 'Sign in first.', ErrorCode.unauthenticated);
     return true;
   }
 }

@@ -30,7 +30,13 @@ export class SessionsService {
   async create(user: User, em: EntityManager = this.em): Promise<string> {
     const token = randomToken(32);
     const now = new Date();
-    em.create(Session, { tokenHash: hashToken(token), user, createdAt: now, lastSeenAt: now, expiresAt: new Date(now.getTime() + this.absoluteMs) });
+    em.create(Session, {
+      tokenHash: hashToken(token),
+      user,
+      createdAt: now,
+      lastSeenAt: now,
+      expiresAt: new Date(now.getTime() + this.absoluteMs),
+    });
     await em.flush();
     return token;
   }
@@ -41,7 +47,11 @@ export class SessionsService {
     const session = await this.em.findOne(Session, { tokenHash: hashToken(token) }, { populate: ['user'] });
     if (!session) return null;
     const now = Date.now();
-    if (session.expiresAt.getTime() <= now || session.lastSeenAt.getTime() + this.idleMs <= now || session.user.disabled) {
+    if (
+      session.expiresAt.getTime() <= now ||
+      session.lastSeenAt.getTime() + this.idleMs <= now ||
+      session.user.disabled
+    ) {
       await this.em.nativeDelete(Session, { tokenHash: session.tokenHash });
       return null;
     }
@@ -57,7 +67,10 @@ export class SessionsService {
 
   /** End every session of a user, optionally keeping the one making the request. */
   async endAllFor(userId: string, keepTokenHash?: string, em: EntityManager = this.em): Promise<number> {
-    return em.nativeDelete(Session, keepTokenHash ? { user: userId, tokenHash: { $ne: keepTokenHash } } : { user: userId });
+    return em.nativeDelete(
+      Session,
+      keepTokenHash ? { user: userId, tokenHash: { $ne: keepTokenHash } } : { user: userId },
+    );
   }
 
   private cookieOptions(): CookieOptions {

@@ -4,7 +4,13 @@ import type { CompetitionDay } from '../events/competition-day.entity';
 import type { FieldProblems } from '../journal/journal-errors';
 import { isHhMm, localTimeOn, parseInstant } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
-import { MeasurementError, resolveDepth, resolveLength, resolveTemperature, resolveWeight } from '../measurements/measurements';
+import {
+  MeasurementError,
+  resolveDepth,
+  resolveLength,
+  resolveTemperature,
+  resolveWeight,
+} from '../measurements/measurements';
 import { assignMeasured, checkRange, RANGES, sentField } from '../measurements/ranges';
 import type { Catch } from './catch.entity';
 import { catchTimeProblem } from './catch-window';
@@ -24,12 +30,23 @@ export interface CatchContext {
  * Apply a log or update request to a catch. Problems go to `problems` beside the request's field
  * names; the caller throws them (or, in an import, reports them on the row).
  */
-export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCatchDto | UpdateCatchDto, problems: FieldProblems): Promise<void> {
+export async function applyCatchInput(
+  ctx: CatchContext,
+  c: Catch,
+  input: LogCatchDto | UpdateCatchDto,
+  problems: FieldProblems,
+): Promise<void> {
   const { lake, day } = ctx;
   if (input.caughtAt !== undefined) {
-    const at = isHhMm(input.caughtAt) ? localTimeOn(day.date, input.caughtAt, lake.timeZone) : parseInstant(input.caughtAt);
+    const at = isHhMm(input.caughtAt)
+      ? localTimeOn(day.date, input.caughtAt, lake.timeZone)
+      : parseInstant(input.caughtAt);
     const outside = at && catchTimeProblem(at, day, lake.timeZone);
-    if (!at) problems.add('caughtAt', 'Give the time as HH:MM (lake time) or an ISO-8601 date-time with a zone; that local time must exist on the day.');
+    if (!at)
+      problems.add(
+        'caughtAt',
+        'Give the time as HH:MM (lake time) or an ISO-8601 date-time with a zone; that local time must exist on the day.',
+      );
     else if (outside) problems.add('caughtAt', outside);
     else c.caughtAt = at;
   }
@@ -88,7 +105,8 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
   }
 
   if (input.photoId !== undefined) {
-    if (input.photoId !== null && !(await ctx.photoIds(input.photoId))) problems.add('photoId', 'No such photo in this crew.');
+    if (input.photoId !== null && !(await ctx.photoIds(input.photoId)))
+      problems.add('photoId', 'No such photo in this crew.');
     else c.photoId = input.photoId;
   }
   c.weightFlagged = flagWeight(c);
@@ -96,6 +114,13 @@ export async function applyCatchInput(ctx: CatchContext, c: Catch, input: LogCat
 
 /** Relative weight far from 100 for the length (analytics weightLooksWrong): flag, never change. */
 export function flagWeight(c: Catch): boolean {
-  if (c.species === 'other' || c.lengthIn === null || c.lengthIn === undefined || !(c.weightLb > 0) || !(c.lengthIn > 0)) return false;
+  if (
+    c.species === 'other' ||
+    c.lengthIn === null ||
+    c.lengthIn === undefined ||
+    !(c.weightLb > 0) ||
+    !(c.lengthIn > 0)
+  )
+    return false;
   return weightLooksWrong(c.species, units.inToMm(c.lengthIn), units.lbToKg(c.weightLb) * 1000) === true;
 }

@@ -11,7 +11,29 @@ import type { Fate, Species } from '@shoalbook/shared';
 @Index({ name: 'catches_crew_day_index', properties: ['crewId', 'competitionDayId'] })
 @Index({ name: 'catches_find_index', properties: ['findId'] })
 export class Catch {
-  [OptionalProps]?: 'findId' | 'attributionDistanceM' | 'lat' | 'lon' | 'lengthIn' | 'lengthValue' | 'lengthUnit' | 'weightOunces' | 'weightFlagged' | 'lure' | 'technique' | 'depthFt' | 'depthValue' | 'depthUnit' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'notes' | 'photoId' | 'version' | 'createdAt' | 'updatedAt';
+  [OptionalProps]?:
+    | 'findId'
+    | 'attributionDistanceM'
+    | 'lat'
+    | 'lon'
+    | 'lengthIn'
+    | 'lengthValue'
+    | 'lengthUnit'
+    | 'weightOunces'
+    | 'weightFlagged'
+    | 'lure'
+    | 'technique'
+    | 'depthFt'
+    | 'depthValue'
+    | 'depthUnit'
+    | 'waterTempF'
+    | 'waterTempValue'
+    | 'waterTempUnit'
+    | 'notes'
+    | 'photoId'
+    | 'version'
+    | 'createdAt'
+    | 'updatedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

@@ -1,7 +1,32 @@
-import { Body, Controller, Delete, Get, Header, HttpCode, Param, Patch, Post, Query, Req, Res, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  Header,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+  Req,
+  Res,
+  UseInterceptors,
+} from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import { EntityManager } from '@mikro-orm/mariadb';
-import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBody,
+  ApiConflictResponse,
+  ApiConsumes,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiProduces,
+  ApiTags,
+} from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { CatchImportPreview, CatchImportResult, CatchView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -15,12 +40,19 @@ import { UploadInterceptor } from '../imports/upload.interceptor';
 import { recordNotFound } from '../journal/journal-errors';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { CatchesService } from './catches.service';
-import { DeleteCatchCommand, ImportCatchesCommand, LogCatchCommand, UpdateCatchCommand } from './commands/catch.commands';
+import {
+  DeleteCatchCommand,
+  ImportCatchesCommand,
+  LogCatchCommand,
+  UpdateCatchCommand,
+} from './commands/catch.commands';
 import { CatchImportQueryDto, CatchListQueryDto, LogCatchDto, UpdateCatchDto } from './dto/catch.dto';
 import { CatchViewDto } from './dto/catch-view.dto';
 import { CatchImportPreviewDto, CatchImportResultDto } from '../imports/dto/import-view.dto';
 
-const UPLOAD_BODY = { schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } };
+const UPLOAD_BODY = {
+  schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] },
+};
 
 @ApiTags('catches')
 @ApiCookieAuth()
@@ -35,15 +67,25 @@ export class CatchesController {
 
   @Get()
   @ApiOperation({ summary: 'Catches, optionally of one event or competition day; X-Total-Count has the total' })
-  @ApiOkResponse({ type: [CatchViewDto], headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'catches matching the filter' } } })
-  async list(@CurrentCrew() access: CrewAccess, @Query() query: CatchListQueryDto, @Res({ passthrough: true }) res: Response): Promise<CatchView[]> {
+  @ApiOkResponse({
+    type: [CatchViewDto],
+    headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'catches matching the filter' } },
+  })
+  async list(
+    @CurrentCrew() access: CrewAccess,
+    @Query() query: CatchListQueryDto,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<CatchView[]> {
     const { views, total } = await this.catches.list(access, query);
     res.setHeader('X-Total-Count', String(total));
     return views;
   }
 
   @Post()
-  @ApiOperation({ summary: 'Log a catch; with lat/lon and no findId it is attributed to the nearest find within radiusM (default 50 m)' })
+  @ApiOperation({
+    summary:
+      'Log a catch; with lat/lon and no findId it is attributed to the nearest find within radiusM (default 50 m)',
+  })
   @ApiCreatedResponse({ type: CatchViewDto })
   create(@CurrentCrew() access: CrewAccess, @Body() dto: LogCatchDto): Promise<CatchView> {
     return this.commands.execute(new LogCatchCommand(access, dto));
@@ -65,7 +107,11 @@ export class CatchesController {
   @ApiBody(UPLOAD_BODY)
   @ApiOperation({ summary: 'Check a catch CSV row by row; nothing is written' })
   @ApiOkResponse({ type: CatchImportPreviewDto })
-  async preview(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: CatchImportQueryDto): Promise<CatchImportPreview> {
+  async preview(
+    @CurrentCrew() access: CrewAccess,
+    @Req() req: Request,
+    @Query() query: CatchImportQueryDto,
+  ): Promise<CatchImportPreview> {
     const event = await this.em.findOne(TournamentEvent, { id: query.eventId, crewId: access.crewId });
     if (!event) throw recordNotFound('event');
     const parsed = await readCatchCsvUpload(req.file!.buffer);
@@ -78,15 +124,24 @@ export class CatchesController {
   @UseInterceptors(UploadInterceptor(CSV_LIMITS.maxBytes, 'CSV file'))
   @ApiConsumes('multipart/form-data')
   @ApiBody(UPLOAD_BODY)
-  @ApiOperation({ summary: 'Import a catch CSV: every row in one transaction, or none if any row has an error (400 import_refused)' })
+  @ApiOperation({
+    summary: 'Import a catch CSV: every row in one transaction, or none if any row has an error (400 import_refused)',
+  })
   @ApiCreatedResponse({ type: CatchImportResultDto })
-  import(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: CatchImportQueryDto): Promise<CatchImportResult> {
+  import(
+    @CurrentCrew() access: CrewAccess,
+    @Req() req: Request,
+    @Query() query: CatchImportQueryDto,
+  ): Promise<CatchImportResult> {
     return this.commands.execute(new ImportCatchesCommand(access, query.eventId, req.file!.buffer));
   }
 
   @Get(':catchId')
   @ApiOkResponse({ type: CatchViewDto })
-  get(@CurrentCrew() access: CrewAccess, @Param('catchId', new RecordIdPipe('catch')) catchId: string): Promise<CatchView> {
+  get(
+    @CurrentCrew() access: CrewAccess,
+    @Param('catchId', new RecordIdPipe('catch')) catchId: string,
+  ): Promise<CatchView> {
     return this.catches.get(access, catchId);
   }
 
@@ -94,14 +149,21 @@ export class CatchesController {
   @ApiOperation({ summary: 'Change a catch; send the version you loaded' })
   @ApiOkResponse({ type: CatchViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
-  update(@CurrentCrew() access: CrewAccess, @Param('catchId', new RecordIdPipe('catch')) catchId: string, @Body() dto: UpdateCatchDto): Promise<CatchView> {
+  update(
+    @CurrentCrew() access: CrewAccess,
+    @Param('catchId', new RecordIdPipe('catch')) catchId: string,
+    @Body() dto: UpdateCatchDto,
+  ): Promise<CatchView> {
     return this.commands.execute(new UpdateCatchCommand(access, catchId, dto));
   }
 
   @Delete(':catchId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentCrew() access: CrewAccess, @Param('catchId', new RecordIdPipe('catch')) catchId: string): Promise<void> {
+  async remove(
+    @CurrentCrew() access: CrewAccess,
+    @Param('catchId', new RecordIdPipe('catch')) catchId: string,
+  ): Promise<void> {
     await this.commands.execute(new DeleteCatchCommand(access, catchId));
   }
 }

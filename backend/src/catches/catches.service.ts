@@ -23,13 +23,20 @@ export class CatchesService {
     private readonly sky: SkyService,
   ) {}
 
-  async list(access: CrewAccess, filter: { eventId?: string; competitionDayId?: string; limit?: number; offset?: number }): Promise<{ views: CatchView[]; total: number }> {
+  async list(
+    access: CrewAccess,
+    filter: { eventId?: string; competitionDayId?: string; limit?: number; offset?: number },
+  ): Promise<{ views: CatchView[]; total: number }> {
     const where = {
       crewId: access.crewId,
       ...(filter.eventId ? { eventId: filter.eventId } : {}),
       ...(filter.competitionDayId ? { competitionDayId: filter.competitionDayId } : {}),
     };
-    const [catches, total] = await this.em.findAndCount(Catch, where, { orderBy: { caughtAt: 'asc', id: 'asc' }, limit: filter.limit ?? 10_000, offset: filter.offset ?? 0 });
+    const [catches, total] = await this.em.findAndCount(Catch, where, {
+      orderBy: { caughtAt: 'asc', id: 'asc' },
+      limit: filter.limit ?? 10_000,
+      offset: filter.offset ?? 0,
+    });
     return { views: await this.views(access, catches), total };
   }
 
@@ -41,13 +48,29 @@ export class CatchesService {
 
   async views(access: CrewAccess, catches: Catch[], em: EntityManager = this.em): Promise<CatchView[]> {
     const crewId = access.crewId;
-    const ids = <K extends keyof Catch>(k: K) => [...new Set(catches.map((c) => c[k]).filter((v): v is NonNullable<Catch[K]> => !!v))] as string[];
-    const days = new Map((catches.length ? await em.find(CompetitionDay, { id: { $in: ids('competitionDayId') }, crewId }) : []).map((d) => [d.id, d]));
+    const ids = <K extends keyof Catch>(k: K) =>
+      [...new Set(catches.map((c) => c[k]).filter((v): v is NonNullable<Catch[K]> => !!v))] as string[];
+    const days = new Map(
+      (catches.length ? await em.find(CompetitionDay, { id: { $in: ids('competitionDayId') }, crewId }) : []).map(
+        (d) => [d.id, d],
+      ),
+    );
     const findIds = ids('findId');
-    const finds = new Map((findIds.length ? await em.find(Find, { id: { $in: findIds }, crewId }, { fields: ['id', 'name'] }) : []).map((f) => [f.id, f.name]));
-    const events = new Map((catches.length ? await em.find(TournamentEvent, { id: { $in: ids('eventId') }, crewId }) : []).map((e) => [e.id, e.lakeId]));
+    const finds = new Map(
+      (findIds.length ? await em.find(Find, { id: { $in: findIds }, crewId }, { fields: ['id', 'name'] }) : []).map(
+        (f) => [f.id, f.name],
+      ),
+    );
+    const events = new Map(
+      (catches.length ? await em.find(TournamentEvent, { id: { $in: ids('eventId') }, crewId }) : []).map((e) => [
+        e.id,
+        e.lakeId,
+      ]),
+    );
     const lakeIds = [...new Set(events.values())];
-    const lakes = new Map((lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId }) : []).map((l) => [l.id, l]));
+    const lakes = new Map(
+      (lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId }) : []).map((l) => [l.id, l]),
+    );
     const showPositions = canSeePositions(access);
     return catches.map((c) => {
       const lake = lakes.get(events.get(c.eventId)!)!;
@@ -63,7 +86,12 @@ export class CatchesService {
   /** The view of a catch just checked in `ctx`: the day, lake and find are already at hand, so nothing is read again. */
   async viewInContext(access: CrewAccess, c: Catch, ctx: CatchContext): Promise<CatchView> {
     const find = c.findId ? await ctx.finds.byId(c.findId) : undefined;
-    return catchView(c, { showPositions: canSeePositions(access), competitionDate: ctx.day.date, findName: find?.name ?? null, sky: this.sky.at(ctx.lake, c.caughtAt) });
+    return catchView(c, {
+      showPositions: canSeePositions(access),
+      competitionDate: ctx.day.date,
+      findName: find?.name ?? null,
+      sky: this.sky.at(ctx.lake, c.caughtAt),
+    });
   }
 
   /** The day, its event and lake, and the lake's finds looked up as needed: everything checking one catch on that day needs. */
@@ -76,9 +104,17 @@ export class CatchesService {
   }
 
   /** For an import: the event's lake and all its finds, loaded once for thousands of rows. */
-  async lakeContext(em: EntityManager, crewId: string, event: TournamentEvent): Promise<Omit<CatchContext, 'day'> & { lakeFinds: FindRef[] }> {
+  async lakeContext(
+    em: EntityManager,
+    crewId: string,
+    event: TournamentEvent,
+  ): Promise<Omit<CatchContext, 'day'> & { lakeFinds: FindRef[] }> {
     const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
-    const found = await em.find(Find, { crewId, lakeId: lake.id }, { fields: ['id', 'name', 'lat', 'lon'], orderBy: { id: 'asc' } });
+    const found = await em.find(
+      Find,
+      { crewId, lakeId: lake.id },
+      { fields: ['id', 'name', 'lat', 'lon'], orderBy: { id: 'asc' } },
+    );
     const lakeFinds = found.map((f) => ({ id: f.id, name: f.name, lat: f.lat, lon: f.lon }));
     return { lake, lakeFinds, finds: findsInMemory(lakeFinds), photoIds: this.photoIds(em, crewId) };
   }

@@ -17,7 +17,10 @@ describe('boundingBox', () => {
           const centre = { lat, lon };
           // A candidate anywhere in a box twice the size the radius could need, then kept only if within the radius.
           const span = (2 * radiusM) / 111_000;
-          const p = { lat: Math.max(-90, Math.min(90, lat + u * span)), lon: lon + (v * span) / Math.max(0.01, Math.cos((lat * Math.PI) / 180)) };
+          const p = {
+            lat: Math.max(-90, Math.min(90, lat + u * span)),
+            lon: lon + (v * span) / Math.max(0.01, Math.cos((lat * Math.PI) / 180)),
+          };
           fc.pre(p.lon > -180 && p.lon < 180 && distanceM(centre, p) <= radiusM);
           const b = boundingBox(centre, radiusM);
           expect(p.lat >= b.minLat && p.lat <= b.maxLat).toBe(true);
@@ -30,7 +33,7 @@ describe('boundingBox', () => {
   it('is small: about the radius either way, not the whole lake', () => {
     const b = boundingBox({ lat: 34.7, lon: -92.3 }, 50);
     expect((b.maxLat - b.minLat) * 111_195).toBeLessThan(110);
-    expect(((b.maxLon! - b.minLon!) * 111_195 * Math.cos((34.7 * Math.PI) / 180))).toBeLessThan(110);
+    expect((b.maxLon! - b.minLon!) * 111_195 * Math.cos((34.7 * Math.PI) / 180)).toBeLessThan(110);
   });
 
   it('drops the longitude bound across the antimeridian', () => {

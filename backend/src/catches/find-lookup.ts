@@ -24,7 +24,10 @@ const METRES_PER_DEGREE = 111_000;
 const MARGIN = 1.01;
 
 /** The box of latitudes and longitudes that holds every point within `radiusM`; no longitude bound near a pole or the antimeridian. */
-export function boundingBox(point: { lat: number; lon: number }, radiusM: number): { minLat: number; maxLat: number; minLon?: number; maxLon?: number } {
+export function boundingBox(
+  point: { lat: number; lon: number },
+  radiusM: number,
+): { minLat: number; maxLat: number; minLon?: number; maxLon?: number } {
   const dLat = (radiusM / METRES_PER_DEGREE) * MARGIN;
   const box = { minLat: point.lat - dLat, maxLat: point.lat + dLat };
   const cos = Math.cos((Math.min(89.9, Math.abs(point.lat) + dLat) * Math.PI) / 180);
@@ -40,7 +43,14 @@ export function findsInMemory(finds: readonly FindRef[]): FindLookup {
     byId: (id) => Promise.resolve(byId.get(id)),
     near: (point, radiusM) => {
       const b = boundingBox(point, radiusM);
-      return Promise.resolve(finds.filter((f) => f.lat >= b.minLat && f.lat <= b.maxLat && (b.minLon === undefined || (f.lon >= b.minLon && f.lon <= b.maxLon!))));
+      return Promise.resolve(
+        finds.filter(
+          (f) =>
+            f.lat >= b.minLat &&
+            f.lat <= b.maxLat &&
+            (b.minLon === undefined || (f.lon >= b.minLon && f.lon <= b.maxLon!)),
+        ),
+      );
     },
   };
 }
@@ -65,7 +75,11 @@ export function findsInDatabase(em: EntityManager, crewId: string, lakeId: strin
     near: async (point, radiusM) => {
       const b = boundingBox(point, radiusM);
       const lon = b.minLon === undefined ? {} : { lon: { $gte: b.minLon, $lte: b.maxLon! } };
-      const finds = await em.find(Find, { crewId, lakeId, lat: { $gte: b.minLat, $lte: b.maxLat }, ...lon }, { fields: [...fields], orderBy: { id: 'asc' } });
+      const finds = await em.find(
+        Find,
+        { crewId, lakeId, lat: { $gte: b.minLat, $lte: b.maxLat }, ...lon },
+        { fields: [...fields], orderBy: { id: 'asc' } },
+      );
       const refs = finds.map(ref);
       for (const f of refs) seen.set(f.id, f);
       return refs;

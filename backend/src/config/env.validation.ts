@@ -1,5 +1,16 @@
 import { plainToInstance, Type } from 'class-transformer';
-import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
+import {
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
 
 /** The variables the database scripts (migrate, seed) need; the server needs these and more. */
 export class DatabaseEnv {
@@ -46,7 +57,10 @@ export function validateEnvAs<T extends object>(schema: new () => T, raw: Record
   if (errors.length > 0) {
     const lines = errors.map((e) => {
       const value = raw[e.property];
-      const problem = value === undefined || value === '' ? 'is missing' : `is invalid (${Object.values(e.constraints ?? {}).join('; ')})`;
+      const problem =
+        value === undefined || value === ''
+          ? 'is missing'
+          : `is invalid (${Object.values(e.constraints ?? {}).join('; ')})`;
       return `  - ${e.property} ${problem}`;
     });
     throw new Error(`The server's environment is incomplete; see backend/.env.example:\n${lines.join('\n')}`);
@@ -54,7 +68,8 @@ export function validateEnvAs<T extends object>(schema: new () => T, raw: Record
   // Keep only the declared variables, so the rest of process.env never leaks into the typed config.
   const picked = {} as Record<string, unknown>;
   for (const key of new Set([...known, ...Object.keys(instance)])) {
-    if ((instance as Record<string, unknown>)[key] !== undefined) picked[key] = (instance as Record<string, unknown>)[key];
+    if ((instance as Record<string, unknown>)[key] !== undefined)
+      picked[key] = (instance as Record<string, unknown>)[key];
   }
   return Object.assign(new schema(), picked);
 }

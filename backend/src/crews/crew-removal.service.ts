@@ -21,7 +21,19 @@ import { Membership } from './membership.entity';
  * Tables with foreign keys among themselves, children first (the journal's references are RESTRICT, so
  * the order matters). Every other table with a crew_id column (the read models) is found at run time.
  */
-const ORDERED_ENTITIES = [Catch, WeighIn, Find, CompetitionDay, PracticeDay, TournamentEvent, Photo, Lake, JournalEvent, Invite, Membership];
+const ORDERED_ENTITIES = [
+  Catch,
+  WeighIn,
+  Find,
+  CompetitionDay,
+  PracticeDay,
+  TournamentEvent,
+  Photo,
+  Lake,
+  JournalEvent,
+  Invite,
+  Membership,
+];
 
 /** How long a removal waits for a running projection batch to finish (s). */
 const PROJECTION_LOCK_WAIT_S = 30;
@@ -54,9 +66,20 @@ export class CrewRemovalService {
         }),
       })),
     );
-    if (!outcome) throw new ApiException(HttpStatus.SERVICE_UNAVAILABLE, 'The reports are being rebuilt. Try again in a minute.', ErrorCode.dbUnavailable);
+    if (!outcome)
+      throw new ApiException(
+        HttpStatus.SERVICE_UNAVAILABLE,
+        'The reports are being rebuilt. Try again in a minute.',
+        ErrorCode.dbUnavailable,
+      );
     for (const key of storageKeys) {
-      await this.storage.delete(key).catch((e: unknown) => this.logger.error(`photo file ${key} of a removed crew stayed: ${e instanceof Error ? e.message : String(e)}`));
+      await this.storage
+        .delete(key)
+        .catch((e: unknown) =>
+          this.logger.error(
+            `photo file ${key} of a removed crew stayed: ${e instanceof Error ? e.message : String(e)}`,
+          ),
+        );
     }
     return outcome.value;
   }
@@ -83,10 +106,14 @@ async function purgeCrewRows(tx: EntityManager, crewId: string): Promise<string[
   const meta = tx.getMetadata();
   const crews = quoted(meta.get(Crew.name).tableName);
   if (!(await tx.execute(`SELECT id FROM ${crews} WHERE id = ? FOR UPDATE`, [crewId])).length) return [];
-  const photos: { storage_key: string }[] = await tx.execute(`SELECT storage_key FROM ${quoted(meta.get(Photo.name).tableName)} WHERE crew_id = ?`, [crewId]);
+  const photos: { storage_key: string }[] = await tx.execute(
+    `SELECT storage_key FROM ${quoted(meta.get(Photo.name).tableName)} WHERE crew_id = ?`,
+    [crewId],
+  );
   const ordered = ORDERED_ENTITIES.map((e) => meta.get(e.name).tableName);
   const rest = (await crewScopedTables(tx)).filter((t) => !ordered.includes(t));
-  for (const table of [...ordered, ...rest]) await tx.execute(`DELETE FROM ${quoted(table)} WHERE crew_id = ?`, [crewId]);
+  for (const table of [...ordered, ...rest])
+    await tx.execute(`DELETE FROM ${quoted(table)} WHERE crew_id = ?`, [crewId]);
   await tx.execute(`DELETE FROM ${crews} WHERE id = ?`, [crewId]);
   return photos.map((p) => p.storage_key);
 }

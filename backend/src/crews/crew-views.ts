@@ -9,9 +9,21 @@ export function toCrewView(crew: Crew, role: CrewRole): CrewView {
 
 /** Needs the membership's user loaded. */
 export function toMemberView(m: Membership): MemberView {
-  return { userId: m.user.id, email: m.user.email, displayName: m.user.displayName, role: m.role, joinedAt: m.joinedAt.toISOString() };
+  return {
+    userId: m.user.id,
+    email: m.user.email,
+    displayName: m.user.displayName,
+    role: m.role,
+    joinedAt: m.joinedAt.toISOString(),
+  };
 }
 
 export function toInviteView(i: Invite): InviteView {
-  return { id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() };
+  return {
+    id: i.id,
+    email: i.email,
+    role: i.role,
+    expiresAt: i.expiresAt.toISOString(),
+    createdAt: i.createdAt.toISOString(),
+  };
 }

@@ -1,6 +1,16 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Patch, Post } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBadRequestResponse, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiServiceUnavailableResponse, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiServiceUnavailableResponse,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { CrewView } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -76,7 +86,10 @@ export class CrewController {
       'Removes the crew, its memberships and invites, every journal record (lakes, events, days, finds, catches, weigh-ins, journal events), the report tables’ rows and the photo files. It cannot be undone: export the journal first if it is to be kept.',
   })
   @ApiNoContentResponse({ description: 'The crew and its data are gone.' })
-  @ApiBadRequestResponse({ type: ApiErrorDto, description: 'confirmName does not match the crew’s name (fieldErrors.confirmName); nothing was changed.' })
+  @ApiBadRequestResponse({
+    type: ApiErrorDto,
+    description: 'confirmName does not match the crew’s name (fieldErrors.confirmName); nothing was changed.',
+  })
   @ApiServiceUnavailableResponse({ type: ApiErrorDto, description: 'The report tables are being rebuilt; try again.' })
   async remove(@CurrentCrew() access: CrewAccess, @Body() dto: DeleteCrewDto): Promise<void> {
     await this.commands.execute(new DeleteCrewCommand(access.crewId, dto.confirmName));

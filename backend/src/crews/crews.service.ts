@@ -14,7 +14,11 @@ export class CrewsService {
   constructor(private readonly em: EntityManager) {}
 
   async myCrews(userId: string): Promise<CrewView[]> {
-    const memberships = await this.em.find(Membership, { user: userId }, { populate: ['crew'], orderBy: { joinedAt: 'asc', id: 'asc' } });
+    const memberships = await this.em.find(
+      Membership,
+      { user: userId },
+      { populate: ['crew'], orderBy: { joinedAt: 'asc', id: 'asc' } },
+    );
     return memberships.map((m) => toCrewView(m.crew, m.role));
   }
 
@@ -27,24 +31,38 @@ export class CrewsService {
   }
 
   async members(crewId: string): Promise<MemberView[]> {
-    const members = await this.em.find(Membership, { crew: crewId }, { populate: ['user'], orderBy: { joinedAt: 'asc', id: 'asc' } });
+    const members = await this.em.find(
+      Membership,
+      { crew: crewId },
+      { populate: ['user'], orderBy: { joinedAt: 'asc', id: 'asc' } },
+    );
     return members.map(toMemberView);
   }
 
   async pendingInvites(crewId: string): Promise<InviteView[]> {
-    const invites = await this.em.find(Invite, { crew: crewId, acceptedAt: null, expiresAt: { $gt: new Date() } }, { orderBy: { createdAt: 'desc', id: 'asc' } });
+    const invites = await this.em.find(
+      Invite,
+      { crew: crewId, acceptedAt: null, expiresAt: { $gt: new Date() } },
+      { orderBy: { createdAt: 'desc', id: 'asc' } },
+    );
     return invites.map(toInviteView);
   }
 
   async revokeInvite(crewId: string, inviteId: string): Promise<void> {
     const deleted = await this.em.nativeDelete(Invite, { id: inviteId, crew: crewId, acceptedAt: null });
-    if (deleted !== 1) throw new ApiException(HttpStatus.NOT_FOUND, 'No such pending invite in this crew.', ErrorCode.notFound);
+    if (deleted !== 1)
+      throw new ApiException(HttpStatus.NOT_FOUND, 'No such pending invite in this crew.', ErrorCode.notFound);
   }
 
   /** What the invite page shows before accepting; 404 token_invalid when unusable. */
   async preview(token: string): Promise<InvitePreview> {
     const invite = await findUsableInvite(this.em, token);
     if (!invite) throw inviteInvalid();
-    return { crewName: invite.crew.name, role: invite.role, email: invite.email, expiresAt: invite.expiresAt.toISOString() };
+    return {
+      crewName: invite.crew.name,
+      role: invite.role,
+      email: invite.email,
+      expiresAt: invite.expiresAt.toISOString(),
+    };
   }
 }

@@ -1,6 +1,19 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiForbiddenResponse, ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiForbiddenResponse,
+  ApiNoContentResponse,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiParam,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { InvitePreview, InviteView } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -12,7 +25,13 @@ import type { User } from '../users/user.entity';
 import { AcceptInviteCommand } from './commands/accept-invite.command';
 import { CreateInviteCommand } from './commands/create-invite.command';
 import { CrewsService } from './crews.service';
-import { AcceptInviteDto, AcceptInviteResponseDto, CreateInviteDto, InvitePreviewDto, InviteViewDto } from './dto/crew.dto';
+import {
+  AcceptInviteDto,
+  AcceptInviteResponseDto,
+  CreateInviteDto,
+  InvitePreviewDto,
+  InviteViewDto,
+} from './dto/crew.dto';
 
 /** An owner's view of the crew's invites. */
 @ApiTags('invites')
@@ -70,7 +89,10 @@ export class InvitesController {
   @ApiOkResponse({ type: AcceptInviteResponseDto })
   @ApiBadRequestResponse({ type: ApiErrorDto, description: 'Bad, expired or used token (code token_invalid).' })
   @ApiUnauthorizedResponse({ type: ApiErrorDto })
-  @ApiForbiddenResponse({ type: ApiErrorDto, description: 'Signed in with another address (code invite_email_mismatch).' })
+  @ApiForbiddenResponse({
+    type: ApiErrorDto,
+    description: 'Signed in with another address (code invite_email_mismatch).',
+  })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Already a member.' })
   accept(@CurrentUser() user: User, @Body() dto: AcceptInviteDto): Promise<AcceptInviteResponseDto> {
     return this.commands.execute(new AcceptInviteCommand(dto.token, user.id, user.email));

@@ -1,6 +1,16 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Patch } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBadRequestResponse, ApiConflictResponse, ApiCookieAuth, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiParam,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { MemberView } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -34,8 +44,15 @@ export class MembersController {
   @ApiOperation({ summary: 'Change a member’s role (owner)' })
   @ApiOkResponse({ type: MemberViewDto })
   @ApiBadRequestResponse({ type: ApiErrorDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'It would leave the crew without an owner (code last_owner).' })
-  changeRole(@CurrentCrew() access: CrewAccess, @Param('userId') userId: string, @Body() dto: ChangeRoleDto): Promise<MemberView> {
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: 'It would leave the crew without an owner (code last_owner).',
+  })
+  changeRole(
+    @CurrentCrew() access: CrewAccess,
+    @Param('userId') userId: string,
+    @Body() dto: ChangeRoleDto,
+  ): Promise<MemberView> {
     return this.commands.execute(new ChangeMemberRoleCommand(access.crewId, userId, dto.role));
   }
 

@@ -11,4 +11,13 @@ import { READ_MODEL_ENTITIES } from '../read-models';
  * Every entity, listed once. Features add theirs here (discovery by reflect-metadata needs the classes,
  * not folder globs, so the same list works under tsc, vitest and the CLI).
  */
-export const ENTITIES = [User, Session, AuthToken, Crew, Membership, Invite, ...JOURNAL_ENTITIES, ...READ_MODEL_ENTITIES];
+export const ENTITIES = [
+  User,
+  Session,
+  AuthToken,
+  Crew,
+  Membership,
+  Invite,
+  ...JOURNAL_ENTITIES,
+  ...READ_MODEL_ENTITIES,
+];

@@ -7,9 +7,14 @@ import { buildOrmConfig } from './mikro-orm.config';
 async function main(): Promise<void> {
   const orm = await MikroORM.init({ ...buildOrmConfig(validateEnvAs(DatabaseEnv, process.env)), debug: false });
   try {
-    if (!(await orm.isConnected())) throw new Error(`cannot reach the database at ${process.env.DB_HOST}:${process.env.DB_PORT}`);
+    if (!(await orm.isConnected()))
+      throw new Error(`cannot reach the database at ${process.env.DB_HOST}:${process.env.DB_PORT}`);
     const applied = await orm.getMigrator().up();
-    process.stdout.write(applied.length ? `applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}\n` : 'database schema is up to date\n');
+    process.stdout.write(
+      applied.length
+        ? `applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}\n`
+        : 'database schema is up to date\n',
+    );
   } finally {
     await orm.close(true);
   }

@@ -38,7 +38,15 @@ export class DevOutboxController {
     for (const name of names) {
       try {
         const m = JSON.parse(await readFile(join(dir, name), 'utf8')) as OutboxMessage;
-        messages.push({ id: m.id, receivedAt: m.receivedAt, from: m.from, to: m.to, subject: m.subject, text: m.text, html: m.html });
+        messages.push({
+          id: m.id,
+          receivedAt: m.receivedAt,
+          from: m.from,
+          to: m.to,
+          subject: m.subject,
+          text: m.text,
+          html: m.html,
+        });
       } catch {
         // A file still being written is skipped; the next poll shows it.
       }

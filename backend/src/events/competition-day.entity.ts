@@ -5,7 +5,8 @@ import { Entity, OptionalProps, PrimaryKey, Property, Unique } from '@mikro-orm/
 @Entity({ tableName: 'competition_days' })
 @Unique({ name: 'competition_days_event_date_unique', properties: ['eventId', 'date'] })
 export class CompetitionDay {
-  [OptionalProps]?: 'startTime' | 'checkInTime' | 'weatherNotes' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'version';
+  [OptionalProps]?:
+    'startTime' | 'checkInTime' | 'weatherNotes' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'version';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

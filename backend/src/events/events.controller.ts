@@ -1,6 +1,14 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import {
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+} from '@nestjs/swagger';
 import type { CompetitionDayView, EventView, PracticeDayView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -45,15 +53,25 @@ export class EventsController {
 
   @Get('events/:eventId')
   @ApiOkResponse({ type: EventViewDto })
-  async get(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventView> {
+  async get(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<EventView> {
     return eventView(await this.events.get(access.crewId, eventId));
   }
 
   @Patch('events/:eventId')
   @ApiOperation({ summary: 'Change an event; send the version you loaded' })
   @ApiOkResponse({ type: EventViewDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version, or day_in_use when a dropped date has finds or catches' })
-  update(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string, @Body() dto: UpdateEventDto): Promise<EventView> {
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: 'stale_version, or day_in_use when a dropped date has finds or catches',
+  })
+  update(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+    @Body() dto: UpdateEventDto,
+  ): Promise<EventView> {
     return this.commands.execute(new UpdateEventCommand(access, eventId, dto));
   }
 
@@ -61,13 +79,19 @@ export class EventsController {
   @HttpCode(204)
   @ApiNoContentResponse()
   @ApiConflictResponse({ type: ApiErrorDto, description: 'in_use: the event still has finds or catches' })
-  async remove(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<void> {
+  async remove(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<void> {
     await this.commands.execute(new DeleteEventCommand(access, eventId));
   }
 
   @Get('events/:eventId/practice-days')
   @ApiOkResponse({ type: [PracticeDayViewDto] })
-  async practiceDays(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<PracticeDayView[]> {
+  async practiceDays(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<PracticeDayView[]> {
     await this.events.get(access.crewId, eventId);
     return (await this.events.practiceDays(access.crewId, eventId)).map(practiceDayView);
   }
@@ -85,7 +109,10 @@ export class EventsController {
 
   @Get('events/:eventId/competition-days')
   @ApiOkResponse({ type: [CompetitionDayViewDto] })
-  async competitionDays(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<CompetitionDayView[]> {
+  async competitionDays(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<CompetitionDayView[]> {
     await this.events.get(access.crewId, eventId);
     return (await this.events.competitionDays(access.crewId, eventId)).map(competitionDayView);
   }

@@ -8,7 +8,22 @@ import { Entity, OptionalProps, Index, PrimaryKey, Property } from '@mikro-orm/c
 @Entity({ tableName: 'events' })
 @Index({ name: 'events_crew_lake_index', properties: ['crewId', 'lakeId'] })
 export class TournamentEvent {
-  [OptionalProps]?: 'organiser' | 'practiceDates' | 'competitionDates' | 'fishPerDay' | 'minLengthIn' | 'deadFishPenaltyLb' | 'shortFishPenaltyLb' | 'latePenaltyLbPerMinute' | 'entryFee' | 'payout' | 'finalPlace' | 'notes' | 'version' | 'createdAt' | 'updatedAt';
+  [OptionalProps]?:
+    | 'organiser'
+    | 'practiceDates'
+    | 'competitionDates'
+    | 'fishPerDay'
+    | 'minLengthIn'
+    | 'deadFishPenaltyLb'
+    | 'shortFishPenaltyLb'
+    | 'latePenaltyLbPerMinute'
+    | 'entryFee'
+    | 'payout'
+    | 'finalPlace'
+    | 'notes'
+    | 'version'
+    | 'createdAt'
+    | 'updatedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

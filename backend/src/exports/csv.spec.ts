@@ -5,7 +5,8 @@ import { csvCell, csvLine, neutraliseCell } from './csv';
 // OWASP "CSV Injection": cells beginning with = + - @ tab or carriage return must not be read as formulas.
 describe('CSV cells', () => {
   it('neutralises every formula lead character', () => {
-    for (const lead of ['=', '+', '-', '@', '\t', '\r']) expect(neutraliseCell(`${lead}HYPERLINK("x")`)).toBe(`'${lead}HYPERLINK("x")`);
+    for (const lead of ['=', '+', '-', '@', '\t', '\r'])
+      expect(neutraliseCell(`${lead}HYPERLINK("x")`)).toBe(`'${lead}HYPERLINK("x")`);
     expect(neutraliseCell('shell bed')).toBe('shell bed');
   });
 

@@ -21,19 +21,30 @@ export class ExportsController {
   @ApiOkResponse({ type: JournalExportDto })
   @Header('Cache-Control', 'no-store')
   async json(@CurrentCrew() access: CrewAccess, @Res({ passthrough: true }) res: Response): Promise<JournalExport> {
-    res.setHeader('Content-Disposition', `attachment; filename="shoalbook-journal-${new Date().toISOString().slice(0, 10)}.json"`);
+    res.setHeader(
+      'Content-Disposition',
+      `attachment; filename="shoalbook-journal-${new Date().toISOString().slice(0, 10)}.json"`,
+    );
     res.setHeader('X-Shoalbook-Notice', EXPORT_NOTICE);
     return this.exports.json(access);
   }
 
   @Get('export.csv')
   @ApiProduces('text/csv')
-  @ApiOperation({ summary: "The crew's whole journal as CSV, one row per record (contains positions; owner or angler)" })
-  @ApiOkResponse({ description: 'one row per record; cells that could start a formula are neutralised', schema: { type: 'string' } })
+  @ApiOperation({
+    summary: "The crew's whole journal as CSV, one row per record (contains positions; owner or angler)",
+  })
+  @ApiOkResponse({
+    description: 'one row per record; cells that could start a formula are neutralised',
+    schema: { type: 'string' },
+  })
   @Header('Cache-Control', 'no-store')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   async csv(@CurrentCrew() access: CrewAccess, @Res({ passthrough: true }) res: Response): Promise<string> {
-    res.setHeader('Content-Disposition', `attachment; filename="shoalbook-journal-${new Date().toISOString().slice(0, 10)}.csv"`);
+    res.setHeader(
+      'Content-Disposition',
+      `attachment; filename="shoalbook-journal-${new Date().toISOString().slice(0, 10)}.csv"`,
+    );
     res.setHeader('X-Shoalbook-Notice', EXPORT_NOTICE);
     return this.exports.csv(access);
   }

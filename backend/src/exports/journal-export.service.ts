@@ -21,10 +21,46 @@ export const EXPORT_NOTICE =
 
 /** Columns of the CSV export: one row per record, `record_type` says which kind. */
 const CSV_COLUMNS = [
-  'record_type', 'id', 'lake_id', 'event_id', 'day_id', 'date', 'name', 'time', 'lat', 'lon', 'kind', 'sub_kind', 'hardness',
-  'vegetation_density', 'bait_seen', 'fish_marked', 'frequency_khz', 'found_how', 'depth_ft', 'water_temp_f', 'find_id',
-  'attribution_distance_m', 'species', 'length_in', 'weight_lb', 'weight_entered', 'weight_flagged', 'lure', 'technique', 'fate',
-  'time_zone', 'region', 'organiser', 'rules', 'gross_lb', 'penalty_lb', 'official_lb', 'day_place', 'late_minutes', 'notes',
+  'record_type',
+  'id',
+  'lake_id',
+  'event_id',
+  'day_id',
+  'date',
+  'name',
+  'time',
+  'lat',
+  'lon',
+  'kind',
+  'sub_kind',
+  'hardness',
+  'vegetation_density',
+  'bait_seen',
+  'fish_marked',
+  'frequency_khz',
+  'found_how',
+  'depth_ft',
+  'water_temp_f',
+  'find_id',
+  'attribution_distance_m',
+  'species',
+  'length_in',
+  'weight_lb',
+  'weight_entered',
+  'weight_flagged',
+  'lure',
+  'technique',
+  'fate',
+  'time_zone',
+  'region',
+  'organiser',
+  'rules',
+  'gross_lb',
+  'penalty_lb',
+  'official_lb',
+  'day_place',
+  'late_minutes',
+  'notes',
 ] as const;
 type Column = (typeof CSV_COLUMNS)[number];
 
@@ -45,8 +81,14 @@ export class JournalExportService {
     const competitionDays = await this.em.find(CompetitionDay, { crewId }, { orderBy: { date: 'asc' } });
     const weighIns = await this.em.find(WeighIn, { crewId });
     const dayEvent = new Map(competitionDays.map((d) => [d.id, d.eventId]));
-    const finds = await this.finds.views(access, await this.em.find(Find, { crewId }, { orderBy: { markedAt: 'asc', id: 'asc' } }));
-    const catches = await this.catches.views(access, await this.em.find(Catch, { crewId }, { orderBy: { caughtAt: 'asc', id: 'asc' } }));
+    const finds = await this.finds.views(
+      access,
+      await this.em.find(Find, { crewId }, { orderBy: { markedAt: 'asc', id: 'asc' } }),
+    );
+    const catches = await this.catches.views(
+      access,
+      await this.em.find(Catch, { crewId }, { orderBy: { caughtAt: 'asc', id: 'asc' } }),
+    );
     return {
       format: 'shoalbook-journal',
       version: 1,
@@ -58,7 +100,9 @@ export class JournalExportService {
         ...eventView(e),
         practiceDays: practiceDays.filter((d) => d.eventId === e.id).map(practiceDayView),
         competitionDays: competitionDays.filter((d) => d.eventId === e.id).map(competitionDayView),
-        weighIns: weighIns.filter((w) => dayEvent.get(w.competitionDayId) === e.id).map((w) => ({ competitionDayId: w.competitionDayId, ...officialOf(w)! })),
+        weighIns: weighIns
+          .filter((w) => dayEvent.get(w.competitionDayId) === e.id)
+          .map((w) => ({ competitionDayId: w.competitionDayId, ...officialOf(w)! })),
       })),
       finds,
       catches,
@@ -70,15 +114,51 @@ export class JournalExportService {
     const lines = [CSV_COLUMNS.join(',')];
     const row = (values: Partial<Record<Column, unknown>>) => lines.push(csvLine(CSV_COLUMNS.map((c) => values[c])));
     row({ record_type: 'notice', notes: j.notice });
-    for (const l of j.lakes) row({ record_type: 'lake', id: l.id, name: l.name, region: l.region, time_zone: l.timeZone, lat: l.lat, lon: l.lon, notes: l.notes });
+    for (const l of j.lakes)
+      row({
+        record_type: 'lake',
+        id: l.id,
+        name: l.name,
+        region: l.region,
+        time_zone: l.timeZone,
+        lat: l.lat,
+        lon: l.lon,
+        notes: l.notes,
+      });
     for (const e of j.events) {
-      row({ record_type: 'event', id: e.id, lake_id: e.lakeId, name: e.name, organiser: e.organiser, rules: JSON.stringify(e.rules), notes: e.notes });
-      for (const d of e.practiceDays) row({ record_type: 'practice_day', id: d.id, event_id: e.id, date: d.date, water_temp_f: d.waterTempF, notes: d.notes });
+      row({
+        record_type: 'event',
+        id: e.id,
+        lake_id: e.lakeId,
+        name: e.name,
+        organiser: e.organiser,
+        rules: JSON.stringify(e.rules),
+        notes: e.notes,
+      });
+      for (const d of e.practiceDays)
+        row({
+          record_type: 'practice_day',
+          id: d.id,
+          event_id: e.id,
+          date: d.date,
+          water_temp_f: d.waterTempF,
+          notes: d.notes,
+        });
       for (const d of e.competitionDays) {
         const w = e.weighIns.find((x) => x.competitionDayId === d.id);
         row({
-          record_type: 'competition_day', id: d.id, event_id: e.id, date: d.date, time: d.startTime, water_temp_f: d.waterTempF, notes: d.weatherNotes,
-          gross_lb: w?.grossLb, penalty_lb: w?.penaltyLb, official_lb: w?.officialLb, day_place: w?.dayPlace, late_minutes: w?.lateMinutes,
+          record_type: 'competition_day',
+          id: d.id,
+          event_id: e.id,
+          date: d.date,
+          time: d.startTime,
+          water_temp_f: d.waterTempF,
+          notes: d.weatherNotes,
+          gross_lb: w?.grossLb,
+          penalty_lb: w?.penaltyLb,
+          official_lb: w?.officialLb,
+          day_place: w?.dayPlace,
+          late_minutes: w?.lateMinutes,
         });
       }
     }
@@ -90,18 +170,53 @@ export class JournalExportService {
 
 function findRow(f: FindView): Partial<Record<Column, unknown>> {
   return {
-    record_type: 'find', id: f.id, lake_id: f.lakeId, event_id: f.eventId, date: f.practiceDate, name: f.name, time: f.markedAt, lat: f.lat, lon: f.lon,
-    kind: f.kind, sub_kind: f.subKind, hardness: f.hardness, vegetation_density: f.vegetationDensity, bait_seen: f.baitSeen, fish_marked: f.fishMarked,
-    frequency_khz: f.frequencyKhz, found_how: f.foundHow, depth_ft: f.depthFt, water_temp_f: f.waterTempF, notes: f.notes,
+    record_type: 'find',
+    id: f.id,
+    lake_id: f.lakeId,
+    event_id: f.eventId,
+    date: f.practiceDate,
+    name: f.name,
+    time: f.markedAt,
+    lat: f.lat,
+    lon: f.lon,
+    kind: f.kind,
+    sub_kind: f.subKind,
+    hardness: f.hardness,
+    vegetation_density: f.vegetationDensity,
+    bait_seen: f.baitSeen,
+    fish_marked: f.fishMarked,
+    frequency_khz: f.frequencyKhz,
+    found_how: f.foundHow,
+    depth_ft: f.depthFt,
+    water_temp_f: f.waterTempF,
+    notes: f.notes,
   };
 }
 
 function catchRow(c: CatchView): Partial<Record<Column, unknown>> {
   const w = c.entered?.weight;
   return {
-    record_type: 'catch', id: c.id, event_id: c.eventId, day_id: c.competitionDayId, date: c.competitionDate, time: c.caughtAt, lat: c.lat, lon: c.lon,
-    find_id: c.findId, attribution_distance_m: c.attributionDistanceM, species: c.species, length_in: c.lengthIn, weight_lb: c.weightLb,
-    weight_entered: w ? (w.unit === 'lb-oz' ? `${w.value} lb ${w.ounces ?? 0} oz` : `${w.value} ${w.unit}`) : null, weight_flagged: c.weightFlagged,
-    lure: c.lure, technique: c.technique, depth_ft: c.depthFt, water_temp_f: c.waterTempF, fate: c.fate, name: c.findName, notes: c.notes,
+    record_type: 'catch',
+    id: c.id,
+    event_id: c.eventId,
+    day_id: c.competitionDayId,
+    date: c.competitionDate,
+    time: c.caughtAt,
+    lat: c.lat,
+    lon: c.lon,
+    find_id: c.findId,
+    attribution_distance_m: c.attributionDistanceM,
+    species: c.species,
+    length_in: c.lengthIn,
+    weight_lb: c.weightLb,
+    weight_entered: w ? (w.unit === 'lb-oz' ? `${w.value} lb ${w.ounces ?? 0} oz` : `${w.value} ${w.unit}`) : null,
+    weight_flagged: c.weightFlagged,
+    lure: c.lure,
+    technique: c.technique,
+    depth_ft: c.depthFt,
+    water_temp_f: c.waterTempF,
+    fate: c.fate,
+    name: c.findName,
+    notes: c.notes,
   };
 }

@@ -10,7 +10,29 @@ import type { FindKind, FindSource, FoundHow, VegetationDensity } from '@shoalbo
 @Index({ name: 'finds_crew_lake_index', properties: ['crewId', 'lakeId'] })
 @Index({ name: 'finds_crew_event_index', properties: ['crewId', 'eventId'] })
 export class Find {
-  [OptionalProps]?: 'eventId' | 'practiceDayId' | 'markedAt' | 'depthFt' | 'depthValue' | 'depthUnit' | 'subKind' | 'hardness' | 'vegetationDensity' | 'baitSeen' | 'fishMarked' | 'frequencyKhz' | 'foundHow' | 'waterTempF' | 'waterTempValue' | 'waterTempUnit' | 'notes' | 'photoId' | 'source' | 'version' | 'createdAt' | 'updatedAt';
+  [OptionalProps]?:
+    | 'eventId'
+    | 'practiceDayId'
+    | 'markedAt'
+    | 'depthFt'
+    | 'depthValue'
+    | 'depthUnit'
+    | 'subKind'
+    | 'hardness'
+    | 'vegetationDensity'
+    | 'baitSeen'
+    | 'fishMarked'
+    | 'frequencyKhz'
+    | 'foundHow'
+    | 'waterTempF'
+    | 'waterTempValue'
+    | 'waterTempUnit'
+    | 'notes'
+    | 'photoId'
+    | 'source'
+    | 'version'
+    | 'createdAt'
+    | 'updatedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

@@ -1,6 +1,30 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query, Req, Res, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+  Req,
+  Res,
+  UseInterceptors,
+} from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBody, ApiConflictResponse, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiPayloadTooLargeResponse, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBody,
+  ApiConflictResponse,
+  ApiConsumes,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiPayloadTooLargeResponse,
+  ApiTags,
+} from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { FindImportPreview, FindImportResult, FindView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -23,10 +47,15 @@ import { FindViewDto } from './dto/find-view.dto';
 import { FindImportPreviewDto, FindImportResultDto } from '../imports/dto/import-view.dto';
 import { FindsService } from './finds.service';
 
-const UPLOAD_BODY = { schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } };
+const UPLOAD_BODY = {
+  schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] },
+};
 
 function importOptions(query: FindImportOptionsDto, body: FindImportOptionsDto): FindImportOptionsDto {
-  const merged = { ...query, ...Object.fromEntries(Object.entries(body ?? {}).filter(([, v]) => v !== undefined)) } as FindImportOptionsDto;
+  const merged = {
+    ...query,
+    ...Object.fromEntries(Object.entries(body ?? {}).filter(([, v]) => v !== undefined)),
+  } as FindImportOptionsDto;
   if (!merged.lakeId) {
     const p = new FieldProblems();
     p.add('lakeId', 'Say which lake the waypoints belong to.');
@@ -47,9 +76,19 @@ export class FindsController {
   ) {}
 
   @Get()
-  @ApiOperation({ summary: 'Finds, optionally of one lake or event; X-Total-Count has the total; positions hidden from viewers unless allowed' })
-  @ApiOkResponse({ type: [FindViewDto], headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'finds matching the filter' } } })
-  async list(@CurrentCrew() access: CrewAccess, @Query() query: FindListQueryDto, @Res({ passthrough: true }) res: Response): Promise<FindView[]> {
+  @ApiOperation({
+    summary:
+      'Finds, optionally of one lake or event; X-Total-Count has the total; positions hidden from viewers unless allowed',
+  })
+  @ApiOkResponse({
+    type: [FindViewDto],
+    headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'finds matching the filter' } },
+  })
+  async list(
+    @CurrentCrew() access: CrewAccess,
+    @Query() query: FindListQueryDto,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<FindView[]> {
     const { views, total } = await this.finds.list(access, query);
     res.setHeader('X-Total-Count', String(total));
     return views;
@@ -70,11 +109,19 @@ export class FindsController {
   @ApiOperation({ summary: 'Check a GPX 1.1 file: per-waypoint errors and duplicates within 15 m; nothing is written' })
   @ApiOkResponse({ type: FindImportPreviewDto })
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto })
-  async preview(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: FindImportOptionsDto, @Body() body: FindImportOptionsDto): Promise<FindImportPreview> {
+  async preview(
+    @CurrentCrew() access: CrewAccess,
+    @Req() req: Request,
+    @Query() query: FindImportOptionsDto,
+    @Body() body: FindImportOptionsDto,
+  ): Promise<FindImportPreview> {
     const options = importOptions(query, body);
     const lake = await this.em.findOne(Lake, { id: options.lakeId!, crewId: access.crewId });
     if (!lake) throw unknownReference('lakeId', 'lake');
-    if (options.eventId && !(await this.em.count(TournamentEvent, { id: options.eventId, crewId: access.crewId, lakeId: lake.id }))) {
+    if (
+      options.eventId &&
+      !(await this.em.count(TournamentEvent, { id: options.eventId, crewId: access.crewId, lakeId: lake.id }))
+    ) {
       throw unknownReference('eventId', 'event on this lake');
     }
     const waypoints = await readGpxUpload(req.file!.buffer);
@@ -88,7 +135,12 @@ export class FindsController {
   @ApiOperation({ summary: 'Import a GPX 1.1 file as finds: all accepted rows in one transaction, or none' })
   @ApiCreatedResponse({ type: FindImportResultDto })
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto })
-  import(@CurrentCrew() access: CrewAccess, @Req() req: Request, @Query() query: FindImportOptionsDto, @Body() body: FindImportOptionsDto): Promise<FindImportResult> {
+  import(
+    @CurrentCrew() access: CrewAccess,
+    @Req() req: Request,
+    @Query() query: FindImportOptionsDto,
+    @Body() body: FindImportOptionsDto,
+  ): Promise<FindImportResult> {
     const options = importOptions(query, body);
     return this.commands.execute(
       new ImportFindsCommand(access, req.file!.buffer, {
@@ -111,14 +163,21 @@ export class FindsController {
   @ApiOperation({ summary: 'Change a find; send the version you loaded' })
   @ApiOkResponse({ type: FindViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
-  update(@CurrentCrew() access: CrewAccess, @Param('findId', new RecordIdPipe('find')) findId: string, @Body() dto: UpdateFindDto): Promise<FindView> {
+  update(
+    @CurrentCrew() access: CrewAccess,
+    @Param('findId', new RecordIdPipe('find')) findId: string,
+    @Body() dto: UpdateFindDto,
+  ): Promise<FindView> {
     return this.commands.execute(new UpdateFindCommand(access, findId, dto));
   }
 
   @Delete(':findId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentCrew() access: CrewAccess, @Param('findId', new RecordIdPipe('find')) findId: string): Promise<void> {
+  async remove(
+    @CurrentCrew() access: CrewAccess,
+    @Param('findId', new RecordIdPipe('find')) findId: string,
+  ): Promise<void> {
     await this.commands.execute(new DeleteFindCommand(access, findId));
   }
 }

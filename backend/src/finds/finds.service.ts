@@ -18,8 +18,15 @@ export class FindsService {
     private readonly sky: SkyService,
   ) {}
 
-  async list(access: CrewAccess, filter: { lakeId?: string; eventId?: string; limit?: number; offset?: number }): Promise<{ views: FindView[]; total: number }> {
-    const where = { crewId: access.crewId, ...(filter.lakeId ? { lakeId: filter.lakeId } : {}), ...(filter.eventId ? { eventId: filter.eventId } : {}) };
+  async list(
+    access: CrewAccess,
+    filter: { lakeId?: string; eventId?: string; limit?: number; offset?: number },
+  ): Promise<{ views: FindView[]; total: number }> {
+    const where = {
+      crewId: access.crewId,
+      ...(filter.lakeId ? { lakeId: filter.lakeId } : {}),
+      ...(filter.eventId ? { eventId: filter.eventId } : {}),
+    };
     const [finds, total] = await this.em.findAndCount(Find, where, {
       orderBy: { markedAt: 'asc', createdAt: 'asc', id: 'asc' },
       limit: filter.limit ?? 10_000,
@@ -38,8 +45,18 @@ export class FindsService {
   async views(access: CrewAccess, finds: Find[], em: EntityManager = this.em): Promise<FindView[]> {
     const lakeIds = [...new Set(finds.map((f) => f.lakeId))];
     const dayIds = [...new Set(finds.map((f) => f.practiceDayId).filter((id): id is string => !!id))];
-    const lakes = new Map((lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId: access.crewId }) : []).map((l) => [l.id, l]));
-    const days = new Map((dayIds.length ? await em.find(PracticeDay, { id: { $in: dayIds }, crewId: access.crewId }) : []).map((d) => [d.id, d.date]));
+    const lakes = new Map(
+      (lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId: access.crewId }) : []).map((l) => [
+        l.id,
+        l,
+      ]),
+    );
+    const days = new Map(
+      (dayIds.length ? await em.find(PracticeDay, { id: { $in: dayIds }, crewId: access.crewId }) : []).map((d) => [
+        d.id,
+        d.date,
+      ]),
+    );
     const showPositions = canSeePositions(access);
     return finds.map((f) => {
       const lake = lakes.get(f.lakeId)!;

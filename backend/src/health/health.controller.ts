@@ -23,11 +23,21 @@ export class HealthController {
   @ApiOperation({ summary: 'Liveness with a real database round trip' })
   @ApiOkResponse({ type: HealthResponseDto })
   @ApiServiceUnavailableResponse({ type: HealthResponseDto, description: 'The database does not answer.' })
-  async check(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<HealthResponse | (HealthResponse & object)> {
+  async check(
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<HealthResponse | (HealthResponse & object)> {
     if (await this.databaseAnswers()) return { status: 'ok', db: 'up' };
     res.status(HttpStatus.SERVICE_UNAVAILABLE);
     // Also carries the ApiError fields, so clients that only know the error shape read it too.
-    return { status: 'error', db: 'down', statusCode: 503, error: 'Service Unavailable', message: 'The database does not answer.', requestId: req.id } as HealthResponse;
+    return {
+      status: 'error',
+      db: 'down',
+      statusCode: 503,
+      error: 'Service Unavailable',
+      message: 'The database does not answer.',
+      requestId: req.id,
+    } as HealthResponse;
   }
 
   private async databaseAnswers(): Promise<boolean> {

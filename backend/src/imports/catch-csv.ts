@@ -45,24 +45,46 @@ export interface ParsedCsv {
 
 /** Parse the CSV text: a header with our columns (any order), one catch per line. */
 export function parseCatchCsv(text: string): ParsedCsv {
-  if (Buffer.byteLength(text, 'utf8') > CSV_LIMITS.maxBytes) throw new ImportFileError('file_too_large', 'The CSV file is larger than 5 MB.');
-  const result = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: 'greedy', transformHeader: (h) => h.trim().toLowerCase() });
+  if (Buffer.byteLength(text, 'utf8') > CSV_LIMITS.maxBytes)
+    throw new ImportFileError('file_too_large', 'The CSV file is larger than 5 MB.');
+  const result = Papa.parse<Record<string, string>>(text, {
+    header: true,
+    skipEmptyLines: 'greedy',
+    transformHeader: (h) => h.trim().toLowerCase(),
+  });
   const fatal = result.errors.find((e) => e.type === 'Quotes' || e.type === 'Delimiter');
-  if (fatal) throw new ImportFileError('malformed_file', `The CSV cannot be read: ${fatal.message}${fatal.row !== undefined ? ` (row ${fatal.row + 1})` : ''}.`);
+  if (fatal)
+    throw new ImportFileError(
+      'malformed_file',
+      `The CSV cannot be read: ${fatal.message}${fatal.row !== undefined ? ` (row ${fatal.row + 1})` : ''}.`,
+    );
   const header = result.meta.fields ?? [];
   const unknown = header.filter((h) => !(CATCH_CSV_COLUMNS as readonly string[]).includes(h));
-  if (unknown.length) throw new ImportFileError('malformed_file', `Unknown column(s): ${unknown.join(', ')}. Use the template's columns: ${CATCH_CSV_COLUMNS.join(', ')}.`);
+  if (unknown.length)
+    throw new ImportFileError(
+      'malformed_file',
+      `Unknown column(s): ${unknown.join(', ')}. Use the template's columns: ${CATCH_CSV_COLUMNS.join(', ')}.`,
+    );
   const missing = REQUIRED.filter((c) => !header.includes(c));
   if (missing.length) throw new ImportFileError('malformed_file', `Missing column(s): ${missing.join(', ')}.`);
   if (result.data.length === 0) throw new ImportFileError('empty_file', 'The CSV has a header but no catches.');
-  if (result.data.length > CSV_LIMITS.maxRows) throw new ImportFileError('too_many_rows', `The CSV has ${result.data.length} rows; at most ${CSV_LIMITS.maxRows} per import.`);
+  if (result.data.length > CSV_LIMITS.maxRows)
+    throw new ImportFileError(
+      'too_many_rows',
+      `The CSV has ${result.data.length} rows; at most ${CSV_LIMITS.maxRows} per import.`,
+    );
   return { rows: result.data };
 }
 
 const blank = (v: string | undefined) => v === undefined || v.trim() === '';
 
 /** One CSV row → the same request a form would send (checked by the same DTO and rules). */
-function rowToRequest(row: Record<string, string>, day: CompetitionDay | undefined, findId: string | undefined, problems: FieldProblems): Record<string, unknown> {
+function rowToRequest(
+  row: Record<string, string>,
+  day: CompetitionDay | undefined,
+  findId: string | undefined,
+  problems: FieldProblems,
+): Record<string, unknown> {
   const num = (column: string): number | undefined => {
     const raw = row[column];
     if (blank(raw)) return undefined;
@@ -119,30 +141,41 @@ export async function checkCatchRows(
 ): Promise<CheckedCatchRow[]> {
   const dayByDate = new Map(days.map((d) => [d.date, d]));
   const findsByName = new Map<string, string[]>();
-  for (const f of ctx.lakeFinds) findsByName.set(f.name.toLowerCase(), [...(findsByName.get(f.name.toLowerCase()) ?? []), f.id]);
+  for (const f of ctx.lakeFinds)
+    findsByName.set(f.name.toLowerCase(), [...(findsByName.get(f.name.toLowerCase()) ?? []), f.id]);
   const out: CheckedCatchRow[] = [];
   for (const [index, row] of parsed.rows.entries()) {
     const problems = new FieldProblems();
     const date = row.date?.trim() ?? '';
     const day = dayByDate.get(date);
-    if (!day) problems.add('date', `"${date.slice(0, 20)}" is not one of the event's competition days (${days.map((d) => d.date).join(', ')}).`);
+    if (!day)
+      problems.add(
+        'date',
+        `"${date.slice(0, 20)}" is not one of the event's competition days (${days.map((d) => d.date).join(', ')}).`,
+      );
     let findId: string | undefined;
     const findName = row.find_name?.trim();
     if (findName) {
       const ids = findsByName.get(findName.toLowerCase()) ?? [];
       if (ids.length === 0) problems.add('find_name', `No find named "${findName.slice(0, 60)}" on this lake.`);
-      else if (ids.length > 1) problems.add('find_name', `${ids.length} finds on this lake are named "${findName.slice(0, 60)}"; rename one, or use lat/lon.`);
+      else if (ids.length > 1)
+        problems.add(
+          'find_name',
+          `${ids.length} finds on this lake are named "${findName.slice(0, 60)}"; rename one, or use lat/lon.`,
+        );
       else findId = ids[0];
     }
     const dto = plainToInstance(LogCatchDto, rowToRequest(row, day, findId, problems));
     const validation = toFieldErrors(await validate(dto, { whitelist: true, forbidNonWhitelisted: true }));
-    for (const [field, messages] of Object.entries(validation)) if (field !== 'competitionDayId') messages.forEach((m) => problems.add(COLUMN_OF[field] ?? field, m));
+    for (const [field, messages] of Object.entries(validation))
+      if (field !== 'competitionDayId') messages.forEach((m) => problems.add(COLUMN_OF[field] ?? field, m));
     let record: Catch | null = null;
     if (day && problems.empty) {
       const c = Object.assign(new Catch(), { crewId, eventId, competitionDayId: day.id });
       const rowProblems = new FieldProblems();
       await applyCatchInput({ ...ctx, day }, c, dto, rowProblems);
-      for (const [field, messages] of Object.entries(rowProblems.errors)) messages.forEach((m) => problems.add(COLUMN_OF[field] ?? field, m));
+      for (const [field, messages] of Object.entries(rowProblems.errors))
+        messages.forEach((m) => problems.add(COLUMN_OF[field] ?? field, m));
       if (problems.empty) record = c;
     }
     out.push({
@@ -157,7 +190,9 @@ export async function checkCatchRows(
         findId: record?.findId ?? null,
         attributionDistanceM: record?.attributionDistanceM ?? null,
         weightFlagged: record?.weightFlagged ?? false,
-        errors: Object.entries(problems.errors).flatMap(([field, messages]) => messages.map((message) => ({ field, message }))),
+        errors: Object.entries(problems.errors).flatMap(([field, messages]) =>
+          messages.map((message) => ({ field, message })),
+        ),
       },
     });
   }
@@ -171,6 +206,26 @@ export function previewOf(rows: CheckedCatchRow[]): CatchImportPreview {
 
 /** The downloadable template: the header and one example row. */
 export function catchCsvTemplate(): string {
-  const example = ['2024-04-13', '07:45', 'largemouth', '3', 'lb-oz', '4', '18.5', 'in', 'weighed', 'jig', 'dragging', '14', 'ft', '64', 'F', '', '', '', 'first bite'];
+  const example = [
+    '2024-04-13',
+    '07:45',
+    'largemouth',
+    '3',
+    'lb-oz',
+    '4',
+    '18.5',
+    'in',
+    'weighed',
+    'jig',
+    'dragging',
+    '14',
+    'ft',
+    '64',
+    'F',
+    '',
+    '',
+    '',
+    'first bite',
+  ];
   return `${CATCH_CSV_COLUMNS.join(',')}\r\n${example.join(',')}\r\n`;
 }

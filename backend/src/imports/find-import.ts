@@ -11,17 +11,36 @@ import { DuplicateIndex } from './duplicate-index';
 import type { GpxWaypoint } from './gpx-parser';
 
 /** Rows of the preview: errors per waypoint, and duplicates of an existing find or an earlier row. */
-export async function previewFindImport(em: EntityManager, crewId: string, lake: Lake, waypoints: GpxWaypoint[]): Promise<FindImportPreview> {
+export async function previewFindImport(
+  em: EntityManager,
+  crewId: string,
+  lake: Lake,
+  waypoints: GpxWaypoint[],
+): Promise<FindImportPreview> {
   const existing = await em.find(Find, { crewId, lakeId: lake.id }, { fields: ['id', 'name', 'lat', 'lon'] });
   const index = new DuplicateIndex(DUPLICATE_FIND_RADIUS_M, lake.lat);
   for (const f of existing) index.add({ lat: f.lat, lon: f.lon, name: f.name, findId: f.id, rowIndex: null });
   const rows: FindImportRow[] = waypoints.map((w) => {
-    const row: FindImportRow = { index: w.index, name: w.name, lat: w.lat, lon: w.lon, markedAt: w.markedAt, depthFt: w.depthFt, error: w.error, duplicateOf: null };
+    const row: FindImportRow = {
+      index: w.index,
+      name: w.name,
+      lat: w.lat,
+      lon: w.lon,
+      markedAt: w.markedAt,
+      depthFt: w.depthFt,
+      error: w.error,
+      duplicateOf: null,
+    };
     if (w.error || w.lat === null || w.lon === null) return row;
     const near = index.nearest(w.lat, w.lon);
     if (near) {
       const p = near.point;
-      row.duplicateOf = { findId: p.findId, name: p.name, distanceM: Math.round(near.distanceM * 10) / 10, ...(p.rowIndex !== null ? { inFile: true, rowIndex: p.rowIndex } : {}) };
+      row.duplicateOf = {
+        findId: p.findId,
+        name: p.name,
+        distanceM: Math.round(near.distanceM * 10) / 10,
+        ...(p.rowIndex !== null ? { inFile: true, rowIndex: p.rowIndex } : {}),
+      };
     } else {
       index.add({ lat: w.lat, lon: w.lon, name: w.name, findId: null, rowIndex: w.index });
     }
@@ -86,6 +105,10 @@ export async function commitFindImport(
       }),
     );
   });
-  await insertRecordsBulk(tx, log, 'Find', finds, (f) => ({ type: 'FindAdded', aggregateType: 'find', aggregateId: f.id }));
+  await insertRecordsBulk(tx, log, 'Find', finds, (f) => ({
+    type: 'FindAdded',
+    aggregateType: 'find',
+    aggregateId: f.id,
+  }));
   return { imported: finds.length, skipped };
 }

@@ -23,13 +23,26 @@ describe('parseGpx', () => {
         <wpt lat="33.26" lon="-96.51"></wpt>`),
     );
     expect(rows).toHaveLength(2);
-    expect(rows[0]).toMatchObject({ index: 0, name: 'Shell flat', lat: 33.25, lon: -96.5, markedAt: '2024-04-12T14:03:00.000Z', depthM: 6.096, elevationM: 150.2, error: null });
+    expect(rows[0]).toMatchObject({
+      index: 0,
+      name: 'Shell flat',
+      lat: 33.25,
+      lon: -96.5,
+      markedAt: '2024-04-12T14:03:00.000Z',
+      depthM: 6.096,
+      elevationM: 150.2,
+      error: null,
+    });
     expect(rows[0].depthFt).toBeCloseTo(20, 9);
     expect(rows[1]).toMatchObject({ name: 'Waypoint 2', markedAt: null, depthFt: null, error: null });
   });
 
   it('reports bad waypoints on their row', () => {
-    const rows = parseGpx(gpx(`<wpt lat="95" lon="10"/><wpt lat="abc" lon="10"/><wpt lon="10"/><wpt lat="1" lon="2"><time>yesterday</time></wpt>`));
+    const rows = parseGpx(
+      gpx(
+        `<wpt lat="95" lon="10"/><wpt lat="abc" lon="10"/><wpt lon="10"/><wpt lat="1" lon="2"><time>yesterday</time></wpt>`,
+      ),
+    );
     expect(rows.map((r) => r.error)).toEqual([
       expect.stringContaining('lat 95 is out of range'),
       expect.stringContaining('is not a number'),

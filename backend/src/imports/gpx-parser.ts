@@ -3,7 +3,12 @@ import { units } from '@shoalbook/analytics';
 import { ImportFileError } from './import-error';
 
 /** Limits on a GPX upload (our choices: ample for a season's waypoints, small enough to parse in memory). */
-export const GPX_LIMITS = Object.freeze({ maxBytes: 20 * 1024 * 1024, maxDepth: 32, maxWaypoints: 50_000, maxNameLength: 120 });
+export const GPX_LIMITS = Object.freeze({
+  maxBytes: 20 * 1024 * 1024,
+  maxDepth: 32,
+  maxWaypoints: 50_000,
+  maxNameLength: 120,
+});
 
 /** One `<wpt>` of the file, checked; `error` says why it cannot be imported. */
 export interface GpxWaypoint {
@@ -79,7 +84,8 @@ function waypoint(wpt: Element, index: number): GpxWaypoint {
 
   let name = childText(wpt, 'name') ?? '';
   if (name === '') name = `Waypoint ${index + 1}`;
-  if (name.length > GPX_LIMITS.maxNameLength) errors.push(`The name is longer than ${GPX_LIMITS.maxNameLength} characters.`);
+  if (name.length > GPX_LIMITS.maxNameLength)
+    errors.push(`The name is longer than ${GPX_LIMITS.maxNameLength} characters.`);
 
   let markedAt: string | null = null;
   const time = childText(wpt, 'time');
@@ -119,9 +125,13 @@ function waypoint(wpt: Element, index: number): GpxWaypoint {
  * @throws ImportFileError for a problem with the whole file
  */
 export function parseGpx(text: string): GpxWaypoint[] {
-  if (Buffer.byteLength(text, 'utf8') > GPX_LIMITS.maxBytes) throw new ImportFileError('file_too_large', 'The GPX file is larger than 20 MB.');
+  if (Buffer.byteLength(text, 'utf8') > GPX_LIMITS.maxBytes)
+    throw new ImportFileError('file_too_large', 'The GPX file is larger than 20 MB.');
   if (/<!DOCTYPE/i.test(text) || /<!ENTITY/i.test(text)) {
-    throw new ImportFileError('dtd_refused', 'The file declares a DOCTYPE or entities; GPX files never need one, so it is refused.');
+    throw new ImportFileError(
+      'dtd_refused',
+      'The file declares a DOCTYPE or entities; GPX files never need one, so it is refused.',
+    );
   }
   let doc;
   try {
@@ -137,11 +147,23 @@ export function parseGpx(text: string): GpxWaypoint[] {
   }
   const root = doc.documentElement;
   if (!root || root.localName !== 'gpx' || !GPX_NAMESPACES.has(root.namespaceURI ?? '')) {
-    throw new ImportFileError('wrong_file_type', 'The file is XML but not GPX (the root must be <gpx> in the GPX 1.1 namespace).');
+    throw new ImportFileError(
+      'wrong_file_type',
+      'The file is XML but not GPX (the root must be <gpx> in the GPX 1.1 namespace).',
+    );
   }
-  if (treeDepth(root) > GPX_LIMITS.maxDepth) throw new ImportFileError('malformed_file', `The file nests elements deeper than ${GPX_LIMITS.maxDepth} levels.`);
+  if (treeDepth(root) > GPX_LIMITS.maxDepth)
+    throw new ImportFileError('malformed_file', `The file nests elements deeper than ${GPX_LIMITS.maxDepth} levels.`);
   const wpts = childElements(root).filter((c) => c.localName === 'wpt');
-  if (wpts.length > GPX_LIMITS.maxWaypoints) throw new ImportFileError('too_many_rows', `The file has ${wpts.length} waypoints; at most ${GPX_LIMITS.maxWaypoints} per import.`);
-  if (wpts.length === 0) throw new ImportFileError('empty_file', 'The GPX file has no waypoints (<wpt>); tracks and routes are not imported.');
+  if (wpts.length > GPX_LIMITS.maxWaypoints)
+    throw new ImportFileError(
+      'too_many_rows',
+      `The file has ${wpts.length} waypoints; at most ${GPX_LIMITS.maxWaypoints} per import.`,
+    );
+  if (wpts.length === 0)
+    throw new ImportFileError(
+      'empty_file',
+      'The GPX file has no waypoints (<wpt>); tracks and routes are not imported.',
+    );
   return wpts.map(waypoint);
 }

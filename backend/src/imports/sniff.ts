@@ -21,10 +21,14 @@ export async function assertTextFile(buffer: Buffer, expected: string): Promise<
   if (buffer.length === 0) throw new ImportFileError('empty_file', 'The file is empty.');
   const detected = await sniffType(buffer);
   if (detected && detected.ext !== 'xml') {
-    throw new ImportFileError('wrong_file_type', `The file's content is ${detected.mime} (${detected.ext}), not ${expected}.`);
+    throw new ImportFileError(
+      'wrong_file_type',
+      `The file's content is ${detected.mime} (${detected.ext}), not ${expected}.`,
+    );
   }
   if (buffer.includes(0)) throw new ImportFileError('wrong_file_type', `The file is binary, not ${expected}.`);
   const text = buffer.toString('utf8');
-  if (text.includes('\uFFFD')) throw new ImportFileError('wrong_file_type', `The file is not UTF-8 text, so it cannot be ${expected}.`);
+  if (text.includes('\uFFFD'))
+    throw new ImportFileError('wrong_file_type', `The file is not UTF-8 text, so it cannot be ${expected}.`);
   return text.replace(/^\uFEFF/, '');
 }

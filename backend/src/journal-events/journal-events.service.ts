@@ -31,7 +31,10 @@ export class JournalRecorder {
   }
 
   /** Rewrite the payloads of queued events of one type (e.g. to add an aggregate's parts) before they are written. */
-  replacePayloads(type: JournalChange['type'], rewrite: (aggregateId: string, payload: Record<string, unknown>) => Record<string, unknown>): void {
+  replacePayloads(
+    type: JournalChange['type'],
+    rewrite: (aggregateId: string, payload: Record<string, unknown>) => Record<string, unknown>,
+  ): void {
     for (const c of this.pending) if (c.type === type) c.payload = rewrite(c.aggregateId, c.payload);
   }
 
@@ -53,7 +56,9 @@ export class JournalRecorder {
         })),
       );
     }
-    this.appended.push(...this.pending.map(({ type, aggregateType, aggregateId }) => ({ type, aggregateType, aggregateId })));
+    this.appended.push(
+      ...this.pending.map(({ type, aggregateType, aggregateId }) => ({ type, aggregateType, aggregateId })),
+    );
     this.pending.length = 0;
   }
 
@@ -76,7 +81,11 @@ export class JournalEventsService {
    * Run `work` in a transaction with a recorder. Entities persisted on `tx` are flushed first, then the
    * recorded events are inserted, then the transaction commits; on any error nothing is written.
    */
-  async transaction<T>(crewId: string, actorId: string | null, work: (tx: EntityManager, journal: JournalRecorder) => Promise<T>): Promise<T> {
+  async transaction<T>(
+    crewId: string,
+    actorId: string | null,
+    work: (tx: EntityManager, journal: JournalRecorder) => Promise<T>,
+  ): Promise<T> {
     let recorder!: JournalRecorder;
     const result = await this.em.transactional(async (tx) => {
       recorder = new JournalRecorder(tx, crewId, actorId);

@@ -9,4 +9,14 @@ import { Photo } from '../photos/photo.entity';
 import { WeighIn } from '../weigh-ins/weigh-in.entity';
 
 /** The journal's entities, spread into the ORM's entity list. */
-export const JOURNAL_ENTITIES = [Lake, TournamentEvent, PracticeDay, CompetitionDay, Find, Catch, WeighIn, Photo, JournalEvent];
+export const JOURNAL_ENTITIES = [
+  Lake,
+  TournamentEvent,
+  PracticeDay,
+  CompetitionDay,
+  Find,
+  Catch,
+  WeighIn,
+  Photo,
+  JournalEvent,
+];

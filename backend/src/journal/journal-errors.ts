@@ -37,7 +37,10 @@ export function inUse(message: string, code: string = JournalErrorCode.inUse): A
 /** Several field messages at once. */
 export function fieldErrors(errors: Record<string, string[]>): ApiException {
   const fields = Object.keys(errors);
-  const message = fields.length === 1 ? `Check the field "${fields[0]}": ${errors[fields[0]!]![0]}` : `Check these fields: ${fields.join(', ')}.`;
+  const message =
+    fields.length === 1
+      ? `Check the field "${fields[0]}": ${errors[fields[0]!]![0]}`
+      : `Check these fields: ${fields.join(', ')}.`;
   return new ApiException(HttpStatus.BAD_REQUEST, message, ErrorCode.validation, errors);
 }
 

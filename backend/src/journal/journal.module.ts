@@ -29,7 +29,16 @@ import { WeighInsService } from '../weigh-ins/weigh-ins.service';
  */
 @Module({
   imports: [StorageModule],
-  controllers: [LakesController, EventsController, FindsController, CatchesController, WeighInsController, PhotosController, SkyController, ExportsController],
+  controllers: [
+    LakesController,
+    EventsController,
+    FindsController,
+    CatchesController,
+    WeighInsController,
+    PhotosController,
+    SkyController,
+    ExportsController,
+  ],
   providers: [
     JournalEventsService,
     SkyService,

@@ -1,6 +1,14 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiConflictResponse, ApiCookieAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import {
+  ApiConflictResponse,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+} from '@nestjs/swagger';
 import type { LakeView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -37,7 +45,10 @@ export class LakesController {
 
   @Get(':lakeId')
   @ApiOkResponse({ type: LakeViewDto })
-  async get(@CurrentCrew() access: CrewAccess, @Param('lakeId', new RecordIdPipe('lake')) lakeId: string): Promise<LakeView> {
+  async get(
+    @CurrentCrew() access: CrewAccess,
+    @Param('lakeId', new RecordIdPipe('lake')) lakeId: string,
+  ): Promise<LakeView> {
     return lakeView(await this.lakes.get(access.crewId, lakeId));
   }
 
@@ -45,7 +56,11 @@ export class LakesController {
   @ApiOperation({ summary: 'Change a lake; send the version you loaded' })
   @ApiOkResponse({ type: LakeViewDto })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version' })
-  update(@CurrentCrew() access: CrewAccess, @Param('lakeId', new RecordIdPipe('lake')) lakeId: string, @Body() dto: UpdateLakeDto): Promise<LakeView> {
+  update(
+    @CurrentCrew() access: CrewAccess,
+    @Param('lakeId', new RecordIdPipe('lake')) lakeId: string,
+    @Body() dto: UpdateLakeDto,
+  ): Promise<LakeView> {
     return this.commands.execute(new UpdateLakeCommand(access, lakeId, dto));
   }
 
@@ -54,7 +69,10 @@ export class LakesController {
   @ApiOperation({ summary: 'Delete a lake without events or finds' })
   @ApiNoContentResponse()
   @ApiConflictResponse({ type: ApiErrorDto, description: 'in_use: the lake still has events or finds' })
-  async remove(@CurrentCrew() access: CrewAccess, @Param('lakeId', new RecordIdPipe('lake')) lakeId: string): Promise<void> {
+  async remove(
+    @CurrentCrew() access: CrewAccess,
+    @Param('lakeId', new RecordIdPipe('lake')) lakeId: string,
+  ): Promise<void> {
     await this.commands.execute(new DeleteLakeCommand(access, lakeId));
   }
 }

@@ -23,7 +23,13 @@ export class MailService implements OnModuleDestroy {
   }
 
   async send(to: string, message: MailMessage): Promise<void> {
-    await this.transporter.sendMail({ from: this.config.get('MAIL_FROM'), to, subject: message.subject, text: message.text, html: message.html });
+    await this.transporter.sendMail({
+      from: this.config.get('MAIL_FROM'),
+      to,
+      subject: message.subject,
+      text: message.text,
+      html: message.html,
+    });
     this.logger.log(`sent "${message.subject}"`);
   }
 

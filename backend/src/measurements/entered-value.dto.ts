@@ -1,5 +1,14 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { DEPTH_UNITS, LENGTH_UNITS, TEMPERATURE_UNITS, WEIGHT_UNITS, type DepthUnit, type LengthUnit, type TemperatureUnit, type WeightUnit } from '@shoalbook/shared';
+import {
+  DEPTH_UNITS,
+  LENGTH_UNITS,
+  TEMPERATURE_UNITS,
+  WEIGHT_UNITS,
+  type DepthUnit,
+  type LengthUnit,
+  type TemperatureUnit,
+  type WeightUnit,
+} from '@shoalbook/shared';
 import { IsIn, IsNumber, Max, Min, ValidateIf } from 'class-validator';
 
 const finite = { allowNaN: false, allowInfinity: false };

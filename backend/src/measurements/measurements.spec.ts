@@ -4,7 +4,12 @@ import { MeasurementError, resolveDepth, resolveLength, resolveTemperature, reso
 // Exact factors from NIST SP 811 Appendix B / 16 CFR 500.19: 1 lb = 0.45359237 kg, 1 in = 25.4 mm, 1 ft = 0.3048 m.
 describe('measurements', () => {
   it('keeps what was typed and converts with exact factors', () => {
-    expect(resolveWeight(undefined, { value: 3, unit: 'lb-oz', ounces: 4 })).toEqual({ canonical: 3.25, value: 3, unit: 'lb-oz', ounces: 4 });
+    expect(resolveWeight(undefined, { value: 3, unit: 'lb-oz', ounces: 4 })).toEqual({
+      canonical: 3.25,
+      value: 3,
+      unit: 'lb-oz',
+      ounces: 4,
+    });
     const kg = resolveWeight(undefined, { value: 0.45359237, unit: 'kg' })!;
     expect(kg.canonical).toBeCloseTo(1, 12);
     expect(kg.value).toBe(0.45359237);

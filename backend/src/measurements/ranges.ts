@@ -15,12 +15,20 @@ export const RANGES = Object.freeze({
 });
 
 /** Report a value outside its range beside the field the client sent. */
-export function checkRange(problems: FieldProblems, field: string, range: (typeof RANGES)[keyof typeof RANGES], value: number | null | undefined): void {
+export function checkRange(
+  problems: FieldProblems,
+  field: string,
+  range: (typeof RANGES)[keyof typeof RANGES],
+  value: number | null | undefined,
+): void {
   if (value === null || value === undefined) return;
   const low = range.exclusiveMin ? value <= range.min : value < range.min;
   if (low || value > range.max) {
     const lower = range.exclusiveMin ? `more than ${range.min}` : `at least ${range.min}`;
-    problems.add(field, `The ${range.label} must be ${lower} and at most ${range.max} ${range.unit} (got ${Number(value.toFixed(3))} ${range.unit}).`);
+    problems.add(
+      field,
+      `The ${range.label} must be ${lower} and at most ${range.max} ${range.unit} (got ${Number(value.toFixed(3))} ${range.unit}).`,
+    );
   }
 }
 
@@ -32,7 +40,12 @@ export function sentField(input: object, canonicalField: string, enteredField: s
 type Measured = Record<string, unknown>;
 
 /** Write a resolved measurement onto the `<canonical>`, `<prefix>Value`, `<prefix>Unit` columns. */
-export function assignMeasured(target: object, canonicalKey: string, prefix: string, resolved: Resolved<string> | null | undefined): void {
+export function assignMeasured(
+  target: object,
+  canonicalKey: string,
+  prefix: string,
+  resolved: Resolved<string> | null | undefined,
+): void {
   if (resolved === undefined) return;
   const t = target as Measured;
   t[canonicalKey] = resolved?.canonical ?? null;

@@ -14,7 +14,9 @@ describe('photo processing under fuzzing (fast-check)', () => {
       [0x49, 0x49, 0x2a, 0x00],
       [],
     ].map((s) => Buffer.from(s));
-    const bytes = fc.tuple(fc.constantFrom(...signatures), fc.uint8Array({ maxLength: 300 })).map(([head, rest]) => Buffer.concat([head, Buffer.from(rest)]));
+    const bytes = fc
+      .tuple(fc.constantFrom(...signatures), fc.uint8Array({ maxLength: 300 }))
+      .map(([head, rest]) => Buffer.concat([head, Buffer.from(rest)]));
     await fc.assert(
       fc.asyncProperty(bytes, async (input) => {
         try {

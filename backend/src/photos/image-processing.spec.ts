@@ -5,7 +5,10 @@ import { PhotoRejected, processPhoto } from './image-processing';
 async function jpegWithGps(): Promise<Buffer> {
   return sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 40, g: 90, b: 120 } } })
     .jpeg()
-    .withExif({ IFD0: { Make: 'TestCam' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '30/1 0/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '95/1 0/1 0/1' } })
+    .withExif({
+      IFD0: { Make: 'TestCam' },
+      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '30/1 0/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '95/1 0/1 0/1' },
+    })
     .toBuffer();
 }
 

@@ -4,7 +4,15 @@ import sharp from 'sharp';
 /** Upload limits (our choices): 8 MB, and at most 40 megapixels so a small file cannot decode to gigabytes. */
 export const PHOTO_LIMITS = Object.freeze({ maxBytes: 8 * 1024 * 1024, maxPixels: 40_000_000, maxEdge: 2560 });
 
-const ACCEPTED = new Set(['image/jpeg', 'image/png', 'image/webp', 'image/gif', 'image/tiff', 'image/avif', 'image/heic']);
+const ACCEPTED = new Set([
+  'image/jpeg',
+  'image/png',
+  'image/webp',
+  'image/gif',
+  'image/tiff',
+  'image/avif',
+  'image/heic',
+]);
 
 export class PhotoRejected extends Error {}
 
@@ -24,7 +32,11 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
   if (input.length > PHOTO_LIMITS.maxBytes) throw new PhotoRejected('The image is larger than 8 MB.');
   const type = await sniffType(input);
   if (!type || !ACCEPTED.has(type.mime)) {
-    throw new PhotoRejected(type ? `The file's content is ${type.mime}, not an image we accept (JPEG, PNG, WebP, GIF, TIFF, AVIF, HEIC).` : 'The file is not an image.');
+    throw new PhotoRejected(
+      type
+        ? `The file's content is ${type.mime}, not an image we accept (JPEG, PNG, WebP, GIF, TIFF, AVIF, HEIC).`
+        : 'The file is not an image.',
+    );
   }
   try {
     const { data, info } = await sharp(input, { limitInputPixels: PHOTO_LIMITS.maxPixels, failOn: 'error' })

@@ -1,7 +1,16 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Controller, Get, Param, Post, Req, Res, StreamableFile, UseInterceptors } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
-import { ApiBody, ApiConsumes, ApiCookieAuth, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBody,
+  ApiConsumes,
+  ApiCookieAuth,
+  ApiCreatedResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiProduces,
+  ApiTags,
+} from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { PhotoView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
@@ -29,8 +38,12 @@ export class PhotosController {
   @Post()
   @UseInterceptors(UploadInterceptor(PHOTO_LIMITS.maxBytes, 'image'))
   @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
-  @ApiOperation({ summary: 'Upload a photo or sonar screenshot (images only, ≤ 8 MB); re-encoded, all metadata incl. GPS removed' })
+  @ApiBody({
+    schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] },
+  })
+  @ApiOperation({
+    summary: 'Upload a photo or sonar screenshot (images only, ≤ 8 MB); re-encoded, all metadata incl. GPS removed',
+  })
   @ApiCreatedResponse({ type: PhotoViewDto })
   upload(@CurrentCrew() access: CrewAccess, @Req() req: Request): Promise<PhotoView> {
     return this.commands.execute(new UploadPhotoCommand(access, req.file!.buffer));
@@ -40,7 +53,11 @@ export class PhotosController {
   @ApiProduces('image/jpeg')
   @ApiOperation({ summary: 'The image (crew members only)' })
   @ApiOkResponse({ description: 'the re-encoded image bytes', schema: { type: 'string', format: 'binary' } })
-  async get(@CurrentCrew() access: CrewAccess, @Param('photoId', new RecordIdPipe('photo')) photoId: string, @Res({ passthrough: true }) res: Response): Promise<StreamableFile> {
+  async get(
+    @CurrentCrew() access: CrewAccess,
+    @Param('photoId', new RecordIdPipe('photo')) photoId: string,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<StreamableFile> {
     const photo = await this.em.findOne(Photo, { id: photoId, crewId: access.crewId });
     const bytes = photo ? await this.storage.get(photo.storageKey) : null;
     if (!photo || !bytes) throw recordNotFound('photo');

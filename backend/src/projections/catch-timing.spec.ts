@@ -17,22 +17,30 @@ describe('CatchTimingCalculator', () => {
 
   it('finds the same solunar period as analytics solunarPeriodAt', () => {
     fc.assert(
-      fc.property(fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2027, 11, 31) }), fc.constantFrom(...places), (ms, place) => {
-        const expected = solunarPeriodAt(new Date(ms).toISOString(), place.lat, place.lon, place.timeZone);
-        expect(calc.timing(ms, place).solunarPeriod).toBe(expected ? expected.kind : 'none');
-      }),
+      fc.property(
+        fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2027, 11, 31) }),
+        fc.constantFrom(...places),
+        (ms, place) => {
+          const expected = solunarPeriodAt(new Date(ms).toISOString(), place.lat, place.lon, place.timeZone);
+          expect(calc.timing(ms, place).solunarPeriod).toBe(expected ? expected.kind : 'none');
+        },
+      ),
       { numRuns: 60, seed: 5 },
     );
   });
 
   it('gives the wall-clock minutes and local date that luxon gives, across DST changes', () => {
     fc.assert(
-      fc.property(fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2027, 11, 31) }), fc.constantFrom(...places), (ms, place) => {
-        const local = DateTime.fromMillis(ms, { zone: place.timeZone });
-        const t = calc.timing(ms, place);
-        expect(t.localDate).toBe(local.toISODate());
-        expect(t.localMinutes).toBe(local.hour * 60 + local.minute);
-      }),
+      fc.property(
+        fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2027, 11, 31) }),
+        fc.constantFrom(...places),
+        (ms, place) => {
+          const local = DateTime.fromMillis(ms, { zone: place.timeZone });
+          const t = calc.timing(ms, place);
+          expect(t.localDate).toBe(local.toISODate());
+          expect(t.localMinutes).toBe(local.hour * 60 + local.minute);
+        },
+      ),
       { numRuns: 300, seed: 7 },
     );
   });

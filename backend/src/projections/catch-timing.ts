@@ -72,7 +72,12 @@ export class CatchTimingCalculator {
       const d = sunMoonDay(date, place.lat, place.lon, place.timeZone);
       day = {
         sunriseMs: d.sunrise ? Date.parse(d.sunrise) : null,
-        periods: d.periods.map((p) => ({ kind: p.kind, startMs: Date.parse(p.start), endMs: Date.parse(p.end), centreMs: Date.parse(p.centre) })),
+        periods: d.periods.map((p) => ({
+          kind: p.kind,
+          startMs: Date.parse(p.start),
+          endMs: Date.parse(p.end),
+          centreMs: Date.parse(p.centre),
+        })),
       };
       if (this.days.size >= MAX_CACHED) this.days.clear();
       this.days.set(key, day);
@@ -87,7 +92,11 @@ export class CatchTimingCalculator {
     const key = `${place.lat}|${place.lon}|${place.timeZone}|${localDate}`;
     let triple = this.triples.get(key);
     if (!triple) {
-      triple = [this.skyDay(place, shiftDate(localDate, -1)), this.skyDay(place, localDate), this.skyDay(place, shiftDate(localDate, 1))];
+      triple = [
+        this.skyDay(place, shiftDate(localDate, -1)),
+        this.skyDay(place, localDate),
+        this.skyDay(place, shiftDate(localDate, 1)),
+      ];
       if (this.triples.size >= MAX_CACHED) this.triples.clear();
       this.triples.set(key, triple);
     }

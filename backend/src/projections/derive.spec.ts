@@ -34,11 +34,40 @@ type Of<A> = A extends fc.Arbitrary<infer T> ? T : never;
 
 function journal(finds: Of<typeof findArb>[], catches: Of<ReturnType<typeof catchArb>>[]): JournalRecord[] {
   let seq = 0;
-  const r = (type: string, aggregateType: string, payload: Record<string, unknown>): JournalRecord => ({ seq: ++seq, crewId: 'crew', type, aggregateType, aggregateId: String(payload.id), payload });
+  const r = (type: string, aggregateType: string, payload: Record<string, unknown>): JournalRecord => ({
+    seq: ++seq,
+    crewId: 'crew',
+    type,
+    aggregateType,
+    aggregateId: String(payload.id),
+    payload,
+  });
   return [
     r('LakeCreated', 'lake', { id: LAKE, name: 'Test', timeZone: 'America/Chicago', lat: 34.7, lon: -92.3 }),
-    ...EVENTS.map((id, i) => r('EventCreated', 'event', { id, lakeId: LAKE, name: `E${i}`, competitionDates: [`2026-10-0${i + 1}`], competitionDays: [{ id: `${id.slice(0, -2)}d${i}`, date: `2026-10-0${i + 1}` }] })),
-    ...finds.map((f, i) => r('FindAdded', 'find', { id: `find-${i}`, lakeId: LAKE, eventId: f.event === null ? null : EVENTS[f.event], name: `F${i}`, kind: f.kind, subKind: f.subKind, depthFt: f.depthFt, hardness: f.hardness, waterTempF: f.waterTempF, lat: 34.7, lon: -92.3 })),
+    ...EVENTS.map((id, i) =>
+      r('EventCreated', 'event', {
+        id,
+        lakeId: LAKE,
+        name: `E${i}`,
+        competitionDates: [`2026-10-0${i + 1}`],
+        competitionDays: [{ id: `${id.slice(0, -2)}d${i}`, date: `2026-10-0${i + 1}` }],
+      }),
+    ),
+    ...finds.map((f, i) =>
+      r('FindAdded', 'find', {
+        id: `find-${i}`,
+        lakeId: LAKE,
+        eventId: f.event === null ? null : EVENTS[f.event],
+        name: `F${i}`,
+        kind: f.kind,
+        subKind: f.subKind,
+        depthFt: f.depthFt,
+        hardness: f.hardness,
+        waterTempF: f.waterTempF,
+        lat: 34.7,
+        lon: -92.3,
+      }),
+    ),
     ...catches.map((c, i) =>
       r('CatchLogged', 'catch', {
         id: `catch-${i}`,
@@ -58,38 +87,75 @@ describe('derived rows against analytics hitRates', () => {
   it('sum to the same counts and weights per grouping', () => {
     fc.assert(
       fc.property(
-        fc.array(findArb, { minLength: 1, maxLength: 12 }).chain((finds) => fc.tuple(fc.constant(finds), fc.array(catchArb(finds.length), { maxLength: 30 }))),
+        fc
+          .array(findArb, { minLength: 1, maxLength: 12 })
+          .chain((finds) => fc.tuple(fc.constant(finds), fc.array(catchArb(finds.length), { maxLength: 30 }))),
         ([finds, catches]) => {
           const state = new ProjectionState(false);
           const applier = new JournalApplier(state);
           for (const e of journal(finds, catches)) applier.apply(e);
           const facts = [...state.catches.rows.values()];
-          const outcomes = [...state.finds.rows.values()].flatMap((f) => deriveOutcomes(f, facts.filter((c) => c.findId === f.id)));
-          const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomes.filter((o) => o.eventId === ev.id), catchGroupSums(facts.filter((c) => c.eventId === ev.id))));
+          const outcomes = [...state.finds.rows.values()].flatMap((f) =>
+            deriveOutcomes(
+              f,
+              facts.filter((c) => c.findId === f.id),
+            ),
+          );
+          const stats = [...state.events.rows.values()].flatMap((ev) =>
+            deriveGroupStats(
+              ev,
+              outcomes.filter((o) => o.eventId === ev.id),
+              catchGroupSums(facts.filter((c) => c.eventId === ev.id)),
+            ),
+          );
 
           // The reference: one analytics "find" per (find, event) fished, its catches keyed the same way.
           const pairs = outcomes.map((o) => {
             const f = state.finds.get(o.findId)!;
-            return { id: `${o.findId}|${o.eventId}`, kind: f.kind, subKind: f.subKind || null, depthFt: f.depthFt, hardness: f.hardness, waterTempF: f.waterTempF, fished: true };
+            return {
+              id: `${o.findId}|${o.eventId}`,
+              kind: f.kind,
+              subKind: f.subKind || null,
+              depthFt: f.depthFt,
+              hardness: f.hardness,
+              waterTempF: f.waterTempF,
+              fished: true,
+            };
           });
-          const refCatches = facts.map((c) => ({ id: c.id, findId: c.findId ? `${c.findId}|${c.eventId}` : null, weightLb: c.weightLb, fate: c.fate as 'weighed' }));
+          const refCatches = facts.map((c) => ({
+            id: c.id,
+            findId: c.findId ? `${c.findId}|${c.eventId}` : null,
+            weightLb: c.weightLb,
+            fate: c.fate as 'weighed',
+          }));
           for (const grouping of FIND_GROUPINGS) {
             const reference = hitRates(pairs, refCatches, { by: grouping });
             for (const g of reference) {
               const key = g.key === null ? '' : String(g.key);
               const mine = stats.filter((s) => s.grouping === grouping && s.groupKey === key);
-              const sum = (f: 'finds' | 'findsFished' | 'findsProducing' | 'findsWeighed' | 'fishCount' | 'weighedCount' | 'weightUlb') => mine.reduce((s, r) => s + r[f], 0);
-              expect([sum('finds'), sum('findsFished'), sum('findsProducing'), sum('findsWeighed'), sum('fishCount'), sum('weighedCount')]).toEqual([
-                g.finds,
-                g.findsFished,
-                g.findsWithFish,
-                g.findsWithWeighedFish,
-                g.fish,
-                g.weighedFish,
-              ]);
+              const sum = (
+                f:
+                  | 'finds'
+                  | 'findsFished'
+                  | 'findsProducing'
+                  | 'findsWeighed'
+                  | 'fishCount'
+                  | 'weighedCount'
+                  | 'weightUlb',
+              ) => mine.reduce((s, r) => s + r[f], 0);
+              expect([
+                sum('finds'),
+                sum('findsFished'),
+                sum('findsProducing'),
+                sum('findsWeighed'),
+                sum('fishCount'),
+                sum('weighedCount'),
+              ]).toEqual([g.finds, g.findsFished, g.findsWithFish, g.findsWithWeighedFish, g.fish, g.weighedFish]);
               expect(Math.abs(fromMicroLb(sum('weightUlb')) - g.fishWeightLb)).toBeLessThan(1e-5 * Math.max(1, g.fish));
             }
-            expect(new Set(stats.filter((s) => s.grouping === grouping).map((s) => s.groupKey)).size).toBe(reference.length);
+            expect(new Set(stats.filter((s) => s.grouping === grouping).map((s) => s.groupKey)).size).toBe(
+              reference.length,
+            );
           }
         },
       ),
@@ -98,7 +164,10 @@ describe('derived rows against analytics hitRates', () => {
   });
 
   it('end the same when an event is applied twice', () => {
-    const events = journal([{ kind: 'bait', subKind: '', depthFt: 12, hardness: null, waterTempF: 60, event: 0 }], [{ find: 0, event: 0, weightLb: 3.2, fate: 'weighed', minute: 5 }]);
+    const events = journal(
+      [{ kind: 'bait', subKind: '', depthFt: 12, hardness: null, waterTempF: 60, event: 0 }],
+      [{ find: 0, event: 0, weightLb: 3.2, fate: 'weighed', minute: 5 }],
+    );
     const once = new ProjectionState(false);
     const twice = new ProjectionState(false);
     const a = new JournalApplier(once);

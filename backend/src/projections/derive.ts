@@ -18,7 +18,9 @@ const safe = (band: () => string | null): string => {
 };
 
 /** Group keys of a find ('' = not recorded), with the bands of @shoalbook/analytics. */
-export function findKeys(find: FindRow): Pick<OutcomeRow, 'kind' | 'subKind' | 'depthBand' | 'hardness' | 'temperatureBand'> {
+export function findKeys(
+  find: FindRow,
+): Pick<OutcomeRow, 'kind' | 'subKind' | 'depthBand' | 'hardness' | 'temperatureBand'> {
   return {
     kind: find.kind,
     subKind: find.subKind,
@@ -62,7 +64,13 @@ export function outcomesFromSums(find: FindRow | undefined, sumsByEvent: Readonl
   if (find.eventId) events.add(find.eventId);
   const keys = findKeys(find);
   return [...events].sort().map((eventId) => {
-    const s = sumsByEvent.get(eventId) ?? { fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null };
+    const s = sumsByEvent.get(eventId) ?? {
+      fishCount: 0,
+      weighedCount: 0,
+      weightUlb: 0,
+      weighedWeightUlb: 0,
+      firstBiteAtMs: null,
+    };
     const practiced = find.eventId === eventId;
     return {
       findId: find.id,
@@ -108,7 +116,19 @@ export function catchGroupSums(catches: readonly CatchForStats[]): CatchGroupSum
       const key = c[grouping];
       const id = `${grouping}\u0000${key}`;
       let g = out.get(id);
-      if (!g) out.set(id, (g = { grouping, key, fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null }));
+      if (!g)
+        out.set(
+          id,
+          (g = {
+            grouping,
+            key,
+            fishCount: 0,
+            weighedCount: 0,
+            weightUlb: 0,
+            weighedWeightUlb: 0,
+            firstBiteAtMs: null,
+          }),
+        );
       g.fishCount++;
       g.weightUlb += c.weightUlb;
       if (c.fate === 'weighed') {
@@ -142,7 +162,11 @@ function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsR
  * An event's group statistics, recomputed from its outcome rows (find groupings) and the sums of its catch facts per
  * catch-grouping key. Sums are integer micro-pounds, so the result does not depend on the order of the inputs.
  */
-export function deriveGroupStats(event: EventRow | undefined, outcomes: readonly OutcomeRow[], catchGroups: readonly CatchGroupSums[]): GroupStatsRow[] {
+export function deriveGroupStats(
+  event: EventRow | undefined,
+  outcomes: readonly OutcomeRow[],
+  catchGroups: readonly CatchGroupSums[],
+): GroupStatsRow[] {
   if (!event) return [];
   const groups = new Map<string, GroupStatsRow>();
   const row = (grouping: string, key: string) => {

@@ -10,8 +10,14 @@ const UTC_PLACE = { lat: 0, lon: 0, timeZone: 'UTC' };
 
 const str = (v: unknown, fallback = ''): string => (typeof v === 'string' ? v : fallback);
 const strOrNull = (v: unknown): string | null => (typeof v === 'string' && v !== '' ? v : null);
-const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : null);
-const dates = (v: unknown): string[] => (Array.isArray(v) ? v.filter((d): d is string => typeof d === 'string').sort() : []);
+const num = (v: unknown): number | null =>
+  typeof v === 'number' && Number.isFinite(v)
+    ? v
+    : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v))
+      ? Number(v)
+      : null;
+const dates = (v: unknown): string[] =>
+  Array.isArray(v) ? v.filter((d): d is string => typeof d === 'string').sort() : [];
 
 /** Meteorological season of a lake-local date: Mar–May spring, Jun–Aug summer, Sep–Nov fall, Dec–Feb winter. */
 export function seasonOf(date: string): Season {
@@ -23,7 +29,14 @@ export function seasonOf(date: string): Season {
 }
 
 function lakeRow(crewId: string, p: Payload): LakeRow {
-  return { id: str(p.id), crewId, name: str(p.name), timeZone: str(p.timeZone, 'UTC'), lat: num(p.lat) ?? 0, lon: num(p.lon) ?? 0 };
+  return {
+    id: str(p.id),
+    crewId,
+    name: str(p.name),
+    timeZone: str(p.timeZone, 'UTC'),
+    lat: num(p.lat) ?? 0,
+    lon: num(p.lon) ?? 0,
+  };
 }
 
 function eventRow(crewId: string, p: Payload): EventRow {
@@ -122,7 +135,8 @@ export class JournalApplier {
     this.state.lakes.put(row.id, row);
     if (before && (before.timeZone !== row.timeZone || before.lat !== row.lat || before.lon !== row.lon)) {
       // Timing is computed in the lake's zone at its reference point: recompute its catches.
-      for (const c of [...this.state.catches.rows.values()]) if (c.lakeId === row.id) this.putCatchRow(this.deriveCatch(c, c));
+      for (const c of [...this.state.catches.rows.values()])
+        if (c.lakeId === row.id) this.putCatchRow(this.deriveCatch(c, c));
     }
   }
 
@@ -139,11 +153,23 @@ export class JournalApplier {
       const before = this.state.days.get(id);
       const day: DayRow = before
         ? { ...before, date: str(raw.date, before.date) }
-        : { id, crewId, eventId: row.id, date: str(raw.date), hasOfficial: false, officialGrossLb: null, officialPenaltyLb: null, officialLb: null, dayPlace: null, lateMinutes: null };
+        : {
+            id,
+            crewId,
+            eventId: row.id,
+            date: str(raw.date),
+            hasOfficial: false,
+            officialGrossLb: null,
+            officialPenaltyLb: null,
+            officialLb: null,
+            dayPlace: null,
+            lateMinutes: null,
+          };
       this.state.days.put(id, day);
     }
     // Dropped dates lose their day and its weigh-in (the journal refuses to drop a day with catches).
-    for (const d of [...this.state.days.rows.values()]) if (d.eventId === row.id && !kept.has(d.id)) this.state.days.delete(d.id);
+    for (const d of [...this.state.days.rows.values()])
+      if (d.eventId === row.id && !kept.has(d.id)) this.state.days.delete(d.id);
   }
 
   private deleteEvent(id: string): void {
@@ -170,7 +196,10 @@ export class JournalApplier {
   private putCatch(crewId: string, p: Payload): void {
     const caughtAtMs = Date.parse(str(p.caughtAt));
     const weightLb = num(p.weightLb) ?? 0;
-    const base: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'> = {
+    const base: Omit<
+      CatchRow,
+      'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'
+    > = {
       id: str(p.id),
       crewId,
       eventId: str(p.eventId),
@@ -191,7 +220,10 @@ export class JournalApplier {
   }
 
   /** The derived fields of a catch: its lake (through the event), its day's date and its timing. */
-  private deriveCatch(c: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'>, before?: CatchRow): CatchRow {
+  private deriveCatch(
+    c: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'>,
+    before?: CatchRow,
+  ): CatchRow {
     const event = this.state.events.get(c.eventId);
     const lakeId = event?.lakeId ?? before?.lakeId ?? '';
     const lake = this.state.lakes.get(lakeId);

@@ -62,7 +62,9 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
       return this.catchUp();
     });
     this.queued = run;
-    this.tail = run.catch((e: unknown) => this.logger.error(`catch-up failed: ${e instanceof Error ? e.stack : String(e)}`));
+    this.tail = run.catch((e: unknown) =>
+      this.logger.error(`catch-up failed: ${e instanceof Error ? e.stack : String(e)}`),
+    );
     return run;
   }
 
@@ -100,13 +102,19 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
     this.retryTimer.unref();
   }
 
-  private async applyBatch(): Promise<{ applied: number; fetched: number; lastSeq: number; waiting: boolean } | 'busy'> {
+  private async applyBatch(): Promise<
+    { applied: number; fetched: number; lastSeq: number; waiting: boolean } | 'busy'
+  > {
     const em = this.orm.em.fork();
     const result = await em.transactional((tx) =>
       withProjectionLock(tx, 0, async () => {
         const checkpoint = await readCheckpoint(tx);
         const records = await readJournal(tx, checkpoint, BATCH_SIZE);
-        const { usable, last, waiting } = this.gaps.contiguous(records, checkpoint, await settledGaps(tx, records, checkpoint));
+        const { usable, last, waiting } = this.gaps.contiguous(
+          records,
+          checkpoint,
+          await settledGaps(tx, records, checkpoint),
+        );
         if (usable.length) {
           const state = new ProjectionState(true);
           const store = new ReadModelStore(tx);

@@ -2,7 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { GapPolicy } from './journal-reader';
 import type { JournalRecord } from './journal-record';
 
-const rec = (seq: number): JournalRecord => ({ seq, crewId: 'c', type: 'FindAdded', aggregateType: 'find', aggregateId: `f${seq}`, payload: {} });
+const rec = (seq: number): JournalRecord => ({
+  seq,
+  crewId: 'c',
+  type: 'FindAdded',
+  aggregateType: 'find',
+  aggregateId: `f${seq}`,
+  payload: {},
+});
 
 describe('GapPolicy', () => {
   it('applies only the gap-free run after the checkpoint while a gap is young', () => {

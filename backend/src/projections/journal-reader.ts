@@ -24,12 +24,18 @@ export type SettledRanges = readonly (readonly [number, number])[];
  * removal) or rolled back, so the projector may pass them at once instead of waiting out the gap timeout. A
  * share-mode read waits for a transaction still inserting into the range; an empty answer means none will.
  */
-export async function settledGaps(em: EntityManager, records: readonly JournalRecord[], afterSeq: number): Promise<SettledRanges> {
+export async function settledGaps(
+  em: EntityManager,
+  records: readonly JournalRecord[],
+  afterSeq: number,
+): Promise<SettledRanges> {
   const settled: [number, number][] = [];
   let last = Math.floor(afterSeq);
   for (const r of records) {
     if (r.seq > last + 1) {
-      const rows: unknown[] = await em.execute(`SELECT seq FROM journal_event WHERE seq BETWEEN ${last + 1} AND ${r.seq - 1} LOCK IN SHARE MODE`);
+      const rows: unknown[] = await em.execute(
+        `SELECT seq FROM journal_event WHERE seq BETWEEN ${last + 1} AND ${r.seq - 1} LOCK IN SHARE MODE`,
+      );
       if (rows.length === 0) settled.push([last + 1, r.seq - 1]);
     }
     last = Math.max(last, r.seq);
@@ -52,7 +58,11 @@ export class GapPolicy {
   ) {}
 
   /** The usable prefix of `records` after `lastSeq`, the checkpoint it reaches, and whether a gap holds it back. */
-  contiguous(records: readonly JournalRecord[], lastSeq: number, settled: SettledRanges = []): { usable: JournalRecord[]; last: number; waiting: boolean } {
+  contiguous(
+    records: readonly JournalRecord[],
+    lastSeq: number,
+    settled: SettledRanges = [],
+  ): { usable: JournalRecord[]; last: number; waiting: boolean } {
     const usable: JournalRecord[] = [];
     let last = lastSeq;
     for (const r of records) {

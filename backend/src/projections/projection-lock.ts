@@ -6,8 +6,14 @@ export const JOURNAL_PROJECTION = 'journal';
 const LOCK_NAME = 'shoalbook.projections';
 
 /** Runs `work` holding the projection lock on the transaction's connection; null when it is busy after `waitSeconds`. */
-export async function withProjectionLock<T>(tx: EntityManager, waitSeconds: number, work: () => Promise<T>): Promise<T | null> {
-  const [row] = (await tx.execute(`SELECT GET_LOCK('${LOCK_NAME}', ${Math.max(0, Math.floor(waitSeconds))}) AS got`)) as { got: unknown }[];
+export async function withProjectionLock<T>(
+  tx: EntityManager,
+  waitSeconds: number,
+  work: () => Promise<T>,
+): Promise<T | null> {
+  const [row] = (await tx.execute(
+    `SELECT GET_LOCK('${LOCK_NAME}', ${Math.max(0, Math.floor(waitSeconds))}) AS got`,
+  )) as { got: unknown }[];
   if (Number(row?.got) !== 1) return null;
   try {
     return await work();
@@ -18,7 +24,9 @@ export async function withProjectionLock<T>(tx: EntityManager, waitSeconds: numb
 }
 
 export async function readCheckpoint(tx: EntityManager): Promise<number> {
-  const rows = (await tx.execute(`SELECT last_seq FROM projection_checkpoint WHERE name = '${JOURNAL_PROJECTION}'`)) as { last_seq: unknown }[];
+  const rows = (await tx.execute(
+    `SELECT last_seq FROM projection_checkpoint WHERE name = '${JOURNAL_PROJECTION}'`,
+  )) as { last_seq: unknown }[];
   return rows.length ? Number(rows[0]!.last_seq) : 0;
 }
 

@@ -4,16 +4,35 @@ import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
 import type { OutcomeRow } from './rows';
 import { fromDb, inList, insertChunks, type TableSpec } from './sql-values';
-import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAKE_TABLE, OUTCOME_TABLE } from './tables';
+import {
+  CATCH_TABLE,
+  DAY_TABLE,
+  EVENT_TABLE,
+  FIND_TABLE,
+  GROUP_STATS_TABLE,
+  LAKE_TABLE,
+  OUTCOME_TABLE,
+} from './tables';
 
 type Row = Record<string, unknown>;
 
 const str = (v: unknown): string | null => (typeof v === 'string' && v ? v : null);
-const instant = (v: unknown): number | null => (v === null || v === undefined ? null : v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`));
+const instant = (v: unknown): number | null =>
+  v === null || v === undefined
+    ? null
+    : v instanceof Date
+      ? v.getTime()
+      : Date.parse(`${String(v).replace(' ', 'T')}Z`);
 
 /** The same sums as derive.ts sumCatches, in SQL (integer micro-pounds: exact in any order). */
-const SUM_COLUMNS = "COUNT(*) AS fish_count, SUM(fate = 'weighed') AS weighed_count, SUM(weight_ulb) AS weight_ulb, SUM(IF(fate = 'weighed', weight_ulb, 0)) AS weighed_weight_ulb";
-const sumsOf = (r: Row) => ({ fishCount: Number(r.fish_count), weighedCount: Number(r.weighed_count), weightUlb: Number(r.weight_ulb), weighedWeightUlb: Number(r.weighed_weight_ulb) });
+const SUM_COLUMNS =
+  "COUNT(*) AS fish_count, SUM(fate = 'weighed') AS weighed_count, SUM(weight_ulb) AS weight_ulb, SUM(IF(fate = 'weighed', weight_ulb, 0)) AS weighed_weight_ulb";
+const sumsOf = (r: Row) => ({
+  fishCount: Number(r.fish_count),
+  weighedCount: Number(r.weighed_count),
+  weightUlb: Number(r.weight_ulb),
+  weighedWeightUlb: Number(r.weighed_weight_ulb),
+});
 
 /** `SELECT * FROM table WHERE …` as projector rows. */
 async function select<R>(tx: EntityManager, spec: TableSpec<R>, where: string): Promise<R[]> {
@@ -24,7 +43,11 @@ async function select<R>(tx: EntityManager, spec: TableSpec<R>, where: string): 
 }
 
 /** Write a state table's changes: delete the removed ids, upsert the rest. */
-async function writeChanges<R extends { id: string }>(tx: EntityManager, spec: TableSpec<R>, table: StateTable<R>): Promise<void> {
+async function writeChanges<R extends { id: string }>(
+  tx: EntityManager,
+  spec: TableSpec<R>,
+  table: StateTable<R>,
+): Promise<void> {
   const { upserts, deletes } = table.changes();
   if (deletes.length) await tx.execute(`DELETE FROM \`${spec.table}\` WHERE ${inList('id', deletes)}`);
   for (const sql of insertChunks(spec, upserts, true)) await tx.execute(sql);
@@ -87,7 +110,8 @@ export class ReadModelStore {
       lakeIds.add(ev.lakeId);
     }
     const dayWhere = [inList('id', dayIds), inList('event_id', eventsWithDays)].filter((w) => w !== 'FALSE');
-    for (const d of await select(tx, DAY_TABLE, dayWhere.length ? dayWhere.join(' OR ') : 'FALSE')) state.days.load(d.id, d);
+    for (const d of await select(tx, DAY_TABLE, dayWhere.length ? dayWhere.join(' OR ') : 'FALSE'))
+      state.days.load(d.id, d);
     for (const l of await select(tx, LAKE_TABLE, inList('id', lakeIds))) state.lakes.load(l.id, l);
   }
 
@@ -102,7 +126,9 @@ export class ReadModelStore {
     const dirtyFinds = [...state.dirtyFinds];
     const dirtyEvents = new Set(state.dirtyEvents);
     if (dirtyFinds.length) {
-      const old: Row[] = await tx.execute(`SELECT DISTINCT event_id FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
+      const old: Row[] = await tx.execute(
+        `SELECT DISTINCT event_id FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`,
+      );
       for (const r of old) dirtyEvents.add(String(r.event_id));
       const missing = dirtyFinds.filter((id) => !state.finds.rows.has(id) && !state.finds.changed.has(id));
       for (const f of await select(tx, FIND_TABLE, inList('id', missing))) state.finds.load(f.id, f);
@@ -116,7 +142,9 @@ export class ReadModelStore {
         if (!sums.has(findId)) sums.set(findId, new Map());
         sums.get(findId)!.set(String(r.event_id), { ...sumsOf(r), firstBiteAtMs: instant(r.first_bite) });
       }
-      const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) => outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map()));
+      const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) =>
+        outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map()),
+      );
       for (const o of outcomes) dirtyEvents.add(o.eventId);
       await tx.execute(`DELETE FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
       for (const sql of insertChunks(OUTCOME_TABLE, outcomes)) await tx.execute(sql);
@@ -129,16 +157,26 @@ export class ReadModelStore {
       const outcomes = await select(tx, OUTCOME_TABLE, inList('event_id', events));
       const groupRows: Row[] = await tx.execute(
         CATCH_GROUPINGS.map(
-          (g) => `SELECT event_id, '${g}' AS grouping_name, \`${g === 'solunarPeriod' ? 'solunar_period' : 'time_of_day'}\` AS group_key, ${SUM_COLUMNS}
+          (
+            g,
+          ) => `SELECT event_id, '${g}' AS grouping_name, \`${g === 'solunarPeriod' ? 'solunar_period' : 'time_of_day'}\` AS group_key, ${SUM_COLUMNS}
                     FROM rm_catch_fact WHERE ${inList('event_id', events)} GROUP BY event_id, group_key`,
         ).join(' UNION ALL '),
       );
       const catchesByEvent = groupBy(
-        groupRows.map((r) => ({ eventId: String(r.event_id), grouping: String(r.grouping_name) as CatchGroupSums['grouping'], key: String(r.group_key), ...sumsOf(r), firstBiteAtMs: null })),
+        groupRows.map((r) => ({
+          eventId: String(r.event_id),
+          grouping: String(r.grouping_name) as CatchGroupSums['grouping'],
+          key: String(r.group_key),
+          ...sumsOf(r),
+          firstBiteAtMs: null,
+        })),
         (c) => c.eventId,
       );
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
-      const stats = events.flatMap((id) => deriveGroupStats(state.events.get(id), outcomesByEvent.get(id) ?? [], catchesByEvent.get(id) ?? []));
+      const stats = events.flatMap((id) =>
+        deriveGroupStats(state.events.get(id), outcomesByEvent.get(id) ?? [], catchesByEvent.get(id) ?? []),
+      );
       await tx.execute(`DELETE FROM rm_group_stats WHERE ${inList('event_id', events)}`);
       for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);
     }

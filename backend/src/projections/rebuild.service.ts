@@ -11,7 +11,15 @@ import { JOURNAL_PROJECTION, withProjectionLock, writeCheckpoint } from './proje
 import { groupBy } from './read-model-store';
 import type { OutcomeRow } from './rows';
 import { insertSql, type TableSpec } from './sql-values';
-import { CATCH_TABLE, DAY_TABLE, EVENT_TABLE, FIND_TABLE, GROUP_STATS_TABLE, LAKE_TABLE, OUTCOME_TABLE } from './tables';
+import {
+  CATCH_TABLE,
+  DAY_TABLE,
+  EVENT_TABLE,
+  FIND_TABLE,
+  GROUP_STATS_TABLE,
+  LAKE_TABLE,
+  OUTCOME_TABLE,
+} from './tables';
 
 const READ_PAGE = 50_000;
 const WRITE_CHUNK = 2000;
@@ -38,11 +46,16 @@ export interface RebuildResult {
  * INSERTs, the rows and the checkpoint in one transaction. A crash midway leaves empty tables and checkpoint 0,
  * which the next catch-up fills again.
  */
-export async function rebuildReadModels(em: EntityManager, options: { gapTimeoutMs?: number; onProgress?: (p: RebuildProgress) => void } = {}): Promise<RebuildResult> {
+export async function rebuildReadModels(
+  em: EntityManager,
+  options: { gapTimeoutMs?: number; onProgress?: (p: RebuildProgress) => void } = {},
+): Promise<RebuildResult> {
   const started = Date.now();
   const result = await em.transactional((tx) =>
     withProjectionLock(tx, LOCK_WAIT_SECONDS, async () => {
-      const [maxRow] = (await tx.execute('SELECT COALESCE(MAX(seq), 0) AS max_seq FROM journal_event')) as { max_seq: unknown }[];
+      const [maxRow] = (await tx.execute('SELECT COALESCE(MAX(seq), 0) AS max_seq FROM journal_event')) as {
+        max_seq: unknown;
+      }[];
       const maxSeq = Number(maxRow?.max_seq ?? 0);
       const state = new ProjectionState(false);
       const applier = new JournalApplier(state);
@@ -65,10 +78,13 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
 
       const catchesByFind = groupBy(state.catches.rows.values(), (c) => c.findId);
       const outcomes: OutcomeRow[] = [];
-      for (const find of state.finds.rows.values()) outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? []));
+      for (const find of state.finds.rows.values())
+        outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? []));
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
       const catchesByEvent = groupBy<CatchForStats>(state.catches.rows.values(), (c) => c.eventId);
-      const stats = [...state.events.rows.values()].flatMap((ev) => deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchGroupSums(catchesByEvent.get(ev.id) ?? [])));
+      const stats = [...state.events.rows.values()].flatMap((ev) =>
+        deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchGroupSums(catchesByEvent.get(ev.id) ?? [])),
+      );
 
       options.onProgress?.({ seq: last, maxSeq, events, phase: 'write' });
       // TRUNCATE commits implicitly; the refill then runs in its own transaction, committed with the checkpoint.
@@ -80,7 +96,10 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       // Rows go in primary-key order: InnoDB then appends to its clustered index instead of splitting pages.
       const write = async <R>(spec: TableSpec<R>, rows: Iterable<R>) => {
         const keyOf = (r: R) => spec.key.map((k) => String(r[k])).join('\u0000');
-        const all = [...rows].map((r) => ({ r, k: keyOf(r) })).sort((a, b) => (a.k < b.k ? -1 : a.k > b.k ? 1 : 0)).map((x) => x.r);
+        const all = [...rows]
+          .map((r) => ({ r, k: keyOf(r) }))
+          .sort((a, b) => (a.k < b.k ? -1 : a.k > b.k ? 1 : 0))
+          .map((x) => x.r);
         for (let i = 0; i < all.length; i += WRITE_CHUNK) {
           const sql = insertSql(spec, all.slice(i, i + WRITE_CHUNK));
           await pending;
@@ -101,7 +120,8 @@ export async function rebuildReadModels(em: EntityManager, options: { gapTimeout
       return { events, lastSeq: last };
     }),
   );
-  if (!result) throw new ServiceUnavailableException('Another rebuild or catch-up holds the projections; try again in a minute.');
+  if (!result)
+    throw new ServiceUnavailableException('Another rebuild or catch-up holds the projections; try again in a minute.');
   return { ...result, durationMs: Date.now() - started };
 }
 
@@ -116,7 +136,9 @@ export class ProjectionRebuildService {
   ) {}
 
   async rebuild(): Promise<RebuildResult> {
-    const result = await this.projector.exclusive(() => rebuildReadModels(this.orm.em.fork(), { gapTimeoutMs: this.projector.gaps.timeoutMs }));
+    const result = await this.projector.exclusive(() =>
+      rebuildReadModels(this.orm.em.fork(), { gapTimeoutMs: this.projector.gaps.timeoutMs }),
+    );
     this.logger.log(`rebuilt the read models from ${result.events} journal events in ${result.durationMs} ms`);
     if (this.projector.enabled) void this.projector.requestCatchUp();
     return result;

@@ -21,7 +21,13 @@ async function databaseEnv(): Promise<Record<string, unknown>> {
 
 async function main(): Promise<void> {
   const orm = await MikroORM.init({ ...buildOrmConfig(validateEnvAs(DatabaseEnv, await databaseEnv())), debug: false });
-  const bar = new SingleBar({ format: 'Rebuilding read models |{bar}| {percentage}% | {value}/{total} seq | {events} events | {phase}', hideCursor: true }, Presets.shades_classic);
+  const bar = new SingleBar(
+    {
+      format: 'Rebuilding read models |{bar}| {percentage}% | {value}/{total} seq | {events} events | {phase}',
+      hideCursor: true,
+    },
+    Presets.shades_classic,
+  );
   let started = false;
   try {
     if (!(await orm.isConnected())) throw new Error('cannot reach the database');
@@ -36,7 +42,9 @@ async function main(): Promise<void> {
     });
     if (started) bar.stop();
     const rate = result.durationMs ? Math.round((result.events / result.durationMs) * 1000) : result.events;
-    process.stdout.write(`rebuilt the read models from ${result.events} journal events in ${result.durationMs} ms (${rate} events/s)\n`);
+    process.stdout.write(
+      `rebuilt the read models from ${result.events} journal events in ${result.durationMs} ms (${rate} events/s)\n`,
+    );
   } finally {
     if (started) bar.stop();
     await orm.close(true);

@@ -17,8 +17,19 @@ describe('SQL literals', () => {
   });
 
   it('builds a multi-row upsert that updates every non-key column', () => {
-    const spec = tableSpec<{ id: string; name: string; atMs: number }>('t', ['id'], { id: 'str', name: 'str', atMs: 'instant' });
-    const sql = insertSql(spec, [{ id: 'a', name: 'x', atMs: 0 }, { id: 'b', name: "y'", atMs: 1000 }], true);
+    const spec = tableSpec<{ id: string; name: string; atMs: number }>('t', ['id'], {
+      id: 'str',
+      name: 'str',
+      atMs: 'instant',
+    });
+    const sql = insertSql(
+      spec,
+      [
+        { id: 'a', name: 'x', atMs: 0 },
+        { id: 'b', name: "y'", atMs: 1000 },
+      ],
+      true,
+    );
     expect(sql).toBe(
       "INSERT INTO `t` (`id`, `name`, `at`) VALUES ('a','x','1970-01-01 00:00:00.000'),\n('b','y\\'','1970-01-01 00:00:01.000') ON DUPLICATE KEY UPDATE `name` = VALUES(`name`), `at` = VALUES(`at`)",
     );

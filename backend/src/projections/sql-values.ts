@@ -63,7 +63,11 @@ export interface TableSpec<R> {
 const snake = (name: string) => name.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 
 /** A table spec from `prop: kind` pairs; column names are the snake_case of the property (…Ms dropped for instants). */
-export function tableSpec<R>(table: string, key: readonly (keyof R & string)[], columns: Record<keyof R & string, ColumnKind>): TableSpec<R> {
+export function tableSpec<R>(
+  table: string,
+  key: readonly (keyof R & string)[],
+  columns: Record<keyof R & string, ColumnKind>,
+): TableSpec<R> {
   return {
     table,
     key,
@@ -78,10 +82,14 @@ export function tableSpec<R>(table: string, key: readonly (keyof R & string)[], 
 /** `INSERT INTO t (cols) VALUES (…),(…)` — with `upsert`, ON DUPLICATE KEY UPDATE of every non-key column. */
 export function insertSql<R>(spec: TableSpec<R>, rows: readonly R[], upsert = false): string {
   const cols = spec.columns.map((c) => `\`${c.column}\``).join(', ');
-  const tuples = rows.map((row) => `(${spec.columns.map((c) => sqlLiteral(row[c.prop], c.kind)).join(',')})`).join(',\n');
+  const tuples = rows
+    .map((row) => `(${spec.columns.map((c) => sqlLiteral(row[c.prop], c.kind)).join(',')})`)
+    .join(',\n');
   let sql = `INSERT INTO \`${spec.table}\` (${cols}) VALUES ${tuples}`;
   if (upsert) {
-    const updates = spec.columns.filter((c) => !spec.key.includes(c.prop)).map((c) => `\`${c.column}\` = VALUES(\`${c.column}\`)`);
+    const updates = spec.columns
+      .filter((c) => !spec.key.includes(c.prop))
+      .map((c) => `\`${c.column}\` = VALUES(\`${c.column}\`)`);
     sql += ` ON DUPLICATE KEY UPDATE ${updates.join(', ')}`;
   }
   return sql;
@@ -109,7 +117,8 @@ export function fromDb<R>(spec: TableSpec<R>, raw: Record<string, unknown>): R {
     else if (c.kind === 'num') row[c.prop] = Number(v);
     else if (c.kind === 'bool') row[c.prop] = v === true || Number(v) === 1;
     else if (c.kind === 'json') row[c.prop] = typeof v === 'string' ? JSON.parse(v) : v;
-    else if (c.kind === 'instant') row[c.prop] = v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`);
+    else if (c.kind === 'instant')
+      row[c.prop] = v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`);
     else row[c.prop] = String(v);
   }
   return row as R;

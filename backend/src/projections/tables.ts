@@ -3,7 +3,14 @@ import { tableSpec } from './sql-values';
 
 // Column lists of the read-model tables (the migration Migration20261220120000 creates them).
 
-export const LAKE_TABLE = tableSpec<LakeRow>('rm_lake', ['id'], { id: 'str', crewId: 'str', name: 'str', timeZone: 'str', lat: 'num', lon: 'num' });
+export const LAKE_TABLE = tableSpec<LakeRow>('rm_lake', ['id'], {
+  id: 'str',
+  crewId: 'str',
+  name: 'str',
+  timeZone: 'str',
+  lat: 'num',
+  lon: 'num',
+});
 
 export const EVENT_TABLE = tableSpec<EventRow>('rm_event', ['id'], {
   id: 'str',

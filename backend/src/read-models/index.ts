@@ -10,7 +10,24 @@ import { RmLake } from './rm-lake.entity';
 export { ProjectionCheckpoint, RmCatchFact, RmCompetitionDay, RmEvent, RmFind, RmFindOutcome, RmGroupStats, RmLake };
 
 /** The read-model entities (written only by projections, read only by query handlers). */
-export const READ_MODEL_ENTITIES = [RmLake, RmEvent, RmCompetitionDay, RmFind, RmCatchFact, RmFindOutcome, RmGroupStats, ProjectionCheckpoint];
+export const READ_MODEL_ENTITIES = [
+  RmLake,
+  RmEvent,
+  RmCompetitionDay,
+  RmFind,
+  RmCatchFact,
+  RmFindOutcome,
+  RmGroupStats,
+  ProjectionCheckpoint,
+];
 
 /** Tables a rebuild truncates and refills (the checkpoint is reset separately). */
-export const READ_MODEL_TABLES = ['rm_lake', 'rm_event', 'rm_competition_day', 'rm_find', 'rm_catch_fact', 'rm_find_outcome', 'rm_group_stats'] as const;
+export const READ_MODEL_TABLES = [
+  'rm_lake',
+  'rm_event',
+  'rm_competition_day',
+  'rm_find',
+  'rm_catch_fact',
+  'rm_find_outcome',
+  'rm_group_stats',
+] as const;

@@ -1,4 +1,11 @@
-import { FIND_KIND_LABELS, type FindKind, type HitRateGroupingKey, SEASON_LABELS, TIME_OF_DAY_LABELS, type TimeOfDayBand } from '@shoalbook/shared';
+import {
+  FIND_KIND_LABELS,
+  type FindKind,
+  type HitRateGroupingKey,
+  SEASON_LABELS,
+  TIME_OF_DAY_LABELS,
+  type TimeOfDayBand,
+} from '@shoalbook/shared';
 import type { ReportEventRef } from '@shoalbook/shared';
 
 const capitalise = (s: string) => (s ? s[0]!.toUpperCase() + s.slice(1) : s);

@@ -4,7 +4,8 @@ import type { Rate } from '@shoalbook/shared';
 export const percent = (x: number | null): string => (x === null ? '–' : `${Math.round(x * 100)} %`);
 
 /** "22–50 %". */
-export const interval = (r: { lower: number; upper: number }): string => `${Math.round(r.lower * 100)}–${Math.round(r.upper * 100)} %`;
+export const interval = (r: { lower: number; upper: number }): string =>
+  `${Math.round(r.lower * 100)}–${Math.round(r.upper * 100)} %`;
 
 export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 

@@ -10,13 +10,22 @@ const lb = (x: number) => `${x.toFixed(2)} lb`;
  * The recap e-mail: the key numbers and a link, in our own words. It never carries a position (no coordinates,
  * no find names, which anglers often name after landmarks): kinds of finds only.
  */
-export function recapMail(input: { crewName: string; senderName: string; recap: EventRecapView; link: string }): MailMessage {
+export function recapMail(input: {
+  crewName: string;
+  senderName: string;
+  recap: EventRecapView;
+  link: string;
+}): MailMessage {
   const { recap } = input;
   const kinds = new Map<string, number>();
   for (const f of recap.producingFinds) kinds.set(f.kind, (kinds.get(f.kind) ?? 0) + 1);
-  const kindText = [...kinds.entries()].map(([k, n]) => `${n} ${(FIND_KIND_LABELS as Record<string, string>)[k] ?? k}`.toLowerCase()).join(', ') || 'none yet';
+  const kindText =
+    [...kinds.entries()]
+      .map(([k, n]) => `${n} ${(FIND_KIND_LABELS as Record<string, string>)[k] ?? k}`.toLowerCase())
+      .join(', ') || 'none yet';
   const dayLines = recap.days.map(
-    (d) => `${d.date}: ${d.counted.length} fish counted, ${lb(d.netLb)} net${d.official?.officialLb != null ? ` (official ${lb(d.official.officialLb)})` : ''}${d.dayPlace ? `, place ${d.dayPlace}` : ''}`,
+    (d) =>
+      `${d.date}: ${d.counted.length} fish counted, ${lb(d.netLb)} net${d.official?.officialLb != null ? ` (official ${lb(d.official.officialLb)})` : ''}${d.dayPlace ? `, place ${d.dayPlace}` : ''}`,
   );
   const lines = [
     `Total: ${lb(recap.totals.officialLb)}${recap.totals.finalPlace ? `, final place ${recap.totals.finalPlace}` : ''}.`,
@@ -26,7 +35,13 @@ export function recapMail(input: { crewName: string; senderName: string; recap: 
     `Producing finds by kind: ${kindText}.`,
   ];
   const title = `${recap.event.name} on ${recap.event.lake.name}`;
-  const text = [`${input.senderName} shares the recap of ${title} from the crew "${input.crewName}".`, '', ...lines, '', `The full recap: ${input.link}`].join('\n');
+  const text = [
+    `${input.senderName} shares the recap of ${title} from the crew "${input.crewName}".`,
+    '',
+    ...lines,
+    '',
+    `The full recap: ${input.link}`,
+  ].join('\n');
   const html = htmlLayout([
     `${escapeHtml(input.senderName)} shares the recap of <strong>${escapeHtml(title)}</strong> from the crew <strong>${escapeHtml(input.crewName)}</strong>.`,
     lines.map(escapeHtml).join('<br>'),

@@ -13,9 +13,15 @@ export interface ReportCatch extends ReportFish {
   lon: number | null;
 }
 
-const instant = (v: unknown): number => (v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`));
+const instant = (v: unknown): number =>
+  v instanceof Date ? v.getTime() : Date.parse(`${String(v).replace(' ', 'T')}Z`);
 
-export async function selectCatches(em: EntityManager, where: string, params: unknown[], limit?: number): Promise<ReportCatch[]> {
+export async function selectCatches(
+  em: EntityManager,
+  where: string,
+  params: unknown[],
+  limit?: number,
+): Promise<ReportCatch[]> {
   const rows: Record<string, unknown>[] = await em.execute(
     `SELECT c.id, c.event_id, c.competition_day_id, c.day_date, c.find_id, c.caught_at, c.weight_lb, c.length_in, c.species, c.fate, c.lure,
             c.lat, c.lon, c.local_minutes, c.minutes_from_sunrise, c.solunar_period, f.name AS find_name
@@ -50,5 +56,16 @@ export async function selectCatches(em: EntityManager, where: string, params: un
 
 /** The public part of a catch (no position). */
 export function reportFish(c: ReportCatch): ReportFish {
-  return { catchId: c.catchId, caughtAt: c.caughtAt, weightLb: c.weightLb, lengthIn: c.lengthIn, species: c.species, fate: c.fate, findId: c.findId, findName: c.findName, lure: c.lure, day: c.day };
+  return {
+    catchId: c.catchId,
+    caughtAt: c.caughtAt,
+    weightLb: c.weightLb,
+    lengthIn: c.lengthIn,
+    species: c.species,
+    fate: c.fate,
+    findId: c.findId,
+    findName: c.findName,
+    lure: c.lure,
+    day: c.day,
+  };
 }

@@ -17,17 +17,22 @@ const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T)
 export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
   const parts = ['e.crew_id = ?'];
   const params: unknown[] = [crewId];
-  if (f.lakeId) parts.push('e.lake_id = ?'), params.push(f.lakeId);
-  if (f.eventId) parts.push('e.id = ?'), params.push(f.eventId);
-  if (f.season) parts.push('e.season = ?'), params.push(f.season);
-  if (f.year) parts.push('e.year = ?'), params.push(f.year);
-  if (f.from) parts.push('e.first_date >= ?'), params.push(f.from);
-  if (f.to) parts.push('e.first_date <= ?'), params.push(f.to);
+  if (f.lakeId) (parts.push('e.lake_id = ?'), params.push(f.lakeId));
+  if (f.eventId) (parts.push('e.id = ?'), params.push(f.eventId));
+  if (f.season) (parts.push('e.season = ?'), params.push(f.season));
+  if (f.year) (parts.push('e.year = ?'), params.push(f.year));
+  if (f.from) (parts.push('e.first_date >= ?'), params.push(f.from));
+  if (f.to) (parts.push('e.first_date <= ?'), params.push(f.to));
   return { sql: parts.join(' AND '), params };
 }
 
 /** The crew's events matching the filters, oldest first. */
-export async function selectEvents(em: EntityManager, crewId: string, f: ReportFilters, extra: { ids?: string[] } = {}): Promise<ReportEvent[]> {
+export async function selectEvents(
+  em: EntityManager,
+  crewId: string,
+  f: ReportFilters,
+  extra: { ids?: string[] } = {},
+): Promise<ReportEvent[]> {
   const where = eventWhere(crewId, f);
   let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place FROM rm_event e WHERE ${where.sql}`;
   const params = [...where.params];
@@ -61,9 +66,14 @@ export interface ReportLake {
 }
 
 export async function findLake(em: EntityManager, crewId: string, lakeId: string): Promise<ReportLake | null> {
-  const rows: Record<string, unknown>[] = await em.execute('SELECT id, name, time_zone, lat, lon FROM rm_lake WHERE crew_id = ? AND id = ?', [crewId, lakeId]);
+  const rows: Record<string, unknown>[] = await em.execute(
+    'SELECT id, name, time_zone, lat, lon FROM rm_lake WHERE crew_id = ? AND id = ?',
+    [crewId, lakeId],
+  );
   const r = rows[0];
-  return r ? { id: String(r.id), name: String(r.name), timeZone: String(r.time_zone), lat: Number(r.lat), lon: Number(r.lon) } : null;
+  return r
+    ? { id: String(r.id), name: String(r.name), timeZone: String(r.time_zone), lat: Number(r.lat), lon: Number(r.lon) }
+    : null;
 }
 
 /** "?,?,?" for an IN list. */

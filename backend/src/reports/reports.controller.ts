@@ -1,7 +1,16 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post, Query as QueryParams } from '@nestjs/common';
 import { CommandBus, QueryBus } from '@nestjs/cqrs';
 import { ApiAcceptedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import type { EventFindsView, EventRecapView, FindMapView, HitRatesView, LakeComparisonView, RecapEmailResult, ReportFilters, TimingView } from '@shoalbook/shared';
+import type {
+  EventFindsView,
+  EventRecapView,
+  FindMapView,
+  HitRatesView,
+  LakeComparisonView,
+  RecapEmailResult,
+  ReportFilters,
+  TimingView,
+} from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiException, ErrorCode, fieldError } from '../common/errors/api-errors';
 import type { CrewAccess } from '../common/request-context';
@@ -14,7 +23,13 @@ import { FindMapViewDto } from './dto/find-map-view.dto';
 import { HitRatesViewDto } from './dto/hit-rates-view.dto';
 import { LakeComparisonViewDto } from './dto/lake-comparison-view.dto';
 import { RecapEmailResultDto } from './dto/recap-email-result.dto';
-import { FindMapQueryDto, HitRatesQueryDto, LakeComparisonQueryDto, RecapEmailDto, ReportFiltersDto } from './dto/report-filters.dto';
+import {
+  FindMapQueryDto,
+  HitRatesQueryDto,
+  LakeComparisonQueryDto,
+  RecapEmailDto,
+  ReportFiltersDto,
+} from './dto/report-filters.dto';
 import { TimingViewDto } from './dto/timing-view.dto';
 import { GetEventFindsQuery } from './queries/event-finds.query';
 import { GetEventRecapQuery } from './queries/event-recap.query';
@@ -28,7 +43,8 @@ function filtersOf(q: ReportFiltersDto): ReportFilters {
   return { lakeId, eventId, season, year, from, to };
 }
 
-const notFound = (what: string) => new ApiException(HttpStatus.NOT_FOUND, `No such ${what} in this crew.`, ErrorCode.notFound);
+const notFound = (what: string) =>
+  new ApiException(HttpStatus.NOT_FOUND, `No such ${what} in this crew.`, ErrorCode.notFound);
 
 /** The reports: any member reads; the recap e-mail needs an owner or angler. Every query reads only read models. */
 @ApiTags('reports')
@@ -50,15 +66,23 @@ export class ReportsController {
   @Get('lake-comparison')
   @ApiOperation({ summary: 'One grouping side by side for the events on one lake, with the differences.' })
   @ApiOkResponse({ type: LakeComparisonViewDto })
-  lakeComparison(@CurrentCrew() access: CrewAccess, @QueryParams() q: LakeComparisonQueryDto): Promise<LakeComparisonView> {
+  lakeComparison(
+    @CurrentCrew() access: CrewAccess,
+    @QueryParams() q: LakeComparisonQueryDto,
+  ): Promise<LakeComparisonView> {
     if (!q.lakeId) throw fieldError('lakeId', 'Choose a lake to compare its events.');
-    return this.queries.execute(new GetLakeComparisonQuery(access.crewId, q.lakeId, q.by ?? 'kind', filtersOf(q), q.eventIds));
+    return this.queries.execute(
+      new GetLakeComparisonQuery(access.crewId, q.lakeId, q.by ?? 'kind', filtersOf(q), q.eventIds),
+    );
   }
 
   @Get('events/:eventId/recap')
   @ApiOperation({ summary: 'The event recap: bags by day, standings, producing finds, weight timeline, big fish.' })
   @ApiOkResponse({ type: EventRecapViewDto })
-  async recap(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventRecapView> {
+  async recap(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<EventRecapView> {
     const recap = await this.queries.execute(new GetEventRecapQuery(access.crewId, eventId));
     if (!recap) throw notFound('event');
     return recap;
@@ -67,7 +91,10 @@ export class ReportsController {
   @Get('events/:eventId/finds')
   @ApiOperation({ summary: 'Every find of the event with its outcome, and the share that paid off.' })
   @ApiOkResponse({ type: EventFindsViewDto })
-  async eventFinds(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<EventFindsView> {
+  async eventFinds(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<EventFindsView> {
     const finds = await this.queries.execute(new GetEventFindsQuery(access.crewId, eventId));
     if (!finds) throw notFound('event');
     return finds;
@@ -81,20 +108,30 @@ export class ReportsController {
   }
 
   @Get('find-map')
-  @ApiOperation({ summary: 'A lake’s finds and catches in metres from its reference point (hidden from viewers unless allowed).' })
+  @ApiOperation({
+    summary: 'A lake’s finds and catches in metres from its reference point (hidden from viewers unless allowed).',
+  })
   @ApiOkResponse({ type: FindMapViewDto })
   async findMap(@CurrentCrew() access: CrewAccess, @QueryParams() q: FindMapQueryDto): Promise<FindMapView> {
     if (!q.lakeId) throw fieldError('lakeId', 'Choose a lake to see its finds on the map.');
-    const map = await this.queries.execute(new GetFindMapQuery(access.crewId, q.lakeId, filtersOf(q), canSeePositions(access)));
+    const map = await this.queries.execute(
+      new GetFindMapQuery(access.crewId, q.lakeId, filtersOf(q), canSeePositions(access)),
+    );
     if (!map) throw notFound('lake');
     return map;
   }
 
   @Post('events/:eventId/recap-email')
   @HttpCode(202)
-  @ApiOperation({ summary: 'E-mail the recap (key numbers and a link, never positions) to chosen members of this crew.' })
+  @ApiOperation({
+    summary: 'E-mail the recap (key numbers and a link, never positions) to chosen members of this crew.',
+  })
   @ApiAcceptedResponse({ type: RecapEmailResultDto })
-  recapEmail(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string, @Body() body: RecapEmailDto): Promise<RecapEmailResult> {
+  recapEmail(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+    @Body() body: RecapEmailDto,
+  ): Promise<RecapEmailResult> {
     return this.commands.execute(new SendRecapEmailCommand(access, eventId, body.userIds));
   }
 }

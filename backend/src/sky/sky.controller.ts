@@ -12,7 +12,9 @@ import { SkyService } from './sky.service';
 
 export class SkyQueryDto {
   @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
-  @ApiProperty({ example: '2024-04-12' }) @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Write the date as YYYY-MM-DD.' }) date: string;
+  @ApiProperty({ example: '2024-04-12' })
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Write the date as YYYY-MM-DD.' })
+  date: string;
 }
 
 @ApiTags('sky')

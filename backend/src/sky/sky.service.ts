@@ -65,7 +65,8 @@ export class SkyService {
       .filter((p) => Date.parse(p.start) <= ms && ms < Date.parse(p.end))
       .sort(
         (a, b) =>
-          (a.kind === b.kind ? 0 : a.kind === 'major' ? -1 : 1) || Math.abs(Date.parse(a.centre) - ms) - Math.abs(Date.parse(b.centre) - ms),
+          (a.kind === b.kind ? 0 : a.kind === 'major' ? -1 : 1) ||
+          Math.abs(Date.parse(a.centre) - ms) - Math.abs(Date.parse(b.centre) - ms),
       );
     const period = containing[0] ?? null;
     return {

@@ -4,7 +4,13 @@ import { LocalDiskStorage } from './local-disk-storage';
 import { StorageService } from './storage.service';
 
 @Module({
-  providers: [{ provide: StorageService, inject: [AppConfig], useFactory: (config: AppConfig) => new LocalDiskStorage(config.get('UPLOAD_DIR')) }],
+  providers: [
+    {
+      provide: StorageService,
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => new LocalDiskStorage(config.get('UPLOAD_DIR')),
+    },
+  ],
   exports: [StorageService],
 })
 export class StorageModule {}

@@ -19,7 +19,11 @@ export class UsersService {
 
   /** GET /auth/me: the account and its crews, oldest membership first. */
   async me(user: User): Promise<MeResponse> {
-    const memberships = await this.em.find(Membership, { user: user.id }, { populate: ['crew'], orderBy: { joinedAt: 'asc', id: 'asc' } });
+    const memberships = await this.em.find(
+      Membership,
+      { user: user.id },
+      { populate: ['crew'], orderBy: { joinedAt: 'asc', id: 'asc' } },
+    );
     return {
       user: toUserView(user),
       crews: memberships.map((m) => ({ crewId: m.crew.id, crewName: m.crew.name, role: m.role })),

@@ -13,7 +13,9 @@ const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
  */
 export function computeDayBag(catches: Catch[], event: TournamentEvent, lateMinutes: number | null): ComputedBag {
   const isShort = (c: Catch) => event.minLengthIn !== null && c.lengthIn !== null && c.lengthIn < event.minLengthIn;
-  const atScale = catches.filter((c) => c.fate === 'weighed' || c.fate === 'dead' || (c.fate === 'culled' && !isShort(c)));
+  const atScale = catches.filter(
+    (c) => c.fate === 'weighed' || c.fate === 'dead' || (c.fate === 'culled' && !isShort(c)),
+  );
   const bag = countedBag(
     atScale.map((c) => ({ id: c.id, weightLb: c.weightLb, lengthIn: c.lengthIn, dead: c.fate === 'dead' })),
     {

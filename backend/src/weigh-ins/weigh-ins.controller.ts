@@ -22,16 +22,27 @@ export class WeighInsController {
   ) {}
 
   @Get('events/:eventId/weigh-ins')
-  @ApiOperation({ summary: "Each competition day's computed bag (event rules) beside the official figures, and the event totals" })
+  @ApiOperation({
+    summary: "Each competition day's computed bag (event rules) beside the official figures, and the event totals",
+  })
   @ApiOkResponse({ type: WeighInsViewDto })
-  list(@CurrentCrew() access: CrewAccess, @Param('eventId', new RecordIdPipe('event')) eventId: string): Promise<WeighInsView> {
+  list(
+    @CurrentCrew() access: CrewAccess,
+    @Param('eventId', new RecordIdPipe('event')) eventId: string,
+  ): Promise<WeighInsView> {
     return this.weighIns.forEvent(access, eventId);
   }
 
   @Put('competition-days/:dayId/weigh-in')
-  @ApiOperation({ summary: "Record a day's official weigh-in figures (they override the computed ones in the totals); send the version you loaded, none for the first recording" })
+  @ApiOperation({
+    summary:
+      "Record a day's official weigh-in figures (they override the computed ones in the totals); send the version you loaded, none for the first recording",
+  })
   @ApiOkResponse({ type: RecordedWeighInDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'stale_version: recorded or changed by someone else since you loaded it' })
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: 'stale_version: recorded or changed by someone else since you loaded it',
+  })
   record(
     @CurrentCrew() access: CrewAccess,
     @Param('dayId', new RecordIdPipe('competition day')) dayId: string,

@@ -13,7 +13,16 @@ import { WeighIn } from './weigh-in.entity';
 export type VersionedWeighIn = OfficialWeighIn & { version: number };
 
 export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
-  return w ? { grossLb: w.grossLb, penaltyLb: w.penaltyLb, officialLb: w.officialLb, dayPlace: w.dayPlace, lateMinutes: w.lateMinutes, version: w.version } : null;
+  return w
+    ? {
+        grossLb: w.grossLb,
+        penaltyLb: w.penaltyLb,
+        officialLb: w.officialLb,
+        dayPlace: w.dayPlace,
+        lateMinutes: w.lateMinutes,
+        version: w.version,
+      }
+    : null;
 }
 
 const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
@@ -31,8 +40,19 @@ export class WeighInsService {
     const event = await this.events.get(access.crewId, eventId);
     const days = await this.em.find(CompetitionDay, { crewId: access.crewId, eventId }, { orderBy: { date: 'asc' } });
     const dayIds = days.map((d) => d.id);
-    const catches = dayIds.length ? await this.em.find(Catch, { crewId: access.crewId, competitionDayId: { $in: dayIds } }, { orderBy: { caughtAt: 'asc', id: 'asc' } }) : [];
-    const weighIns = new Map((dayIds.length ? await this.em.find(WeighIn, { crewId: access.crewId, competitionDayId: { $in: dayIds } }) : []).map((w) => [w.competitionDayId, w]));
+    const catches = dayIds.length
+      ? await this.em.find(
+          Catch,
+          { crewId: access.crewId, competitionDayId: { $in: dayIds } },
+          { orderBy: { caughtAt: 'asc', id: 'asc' } },
+        )
+      : [];
+    const weighIns = new Map(
+      (dayIds.length
+        ? await this.em.find(WeighIn, { crewId: access.crewId, competitionDayId: { $in: dayIds } })
+        : []
+      ).map((w) => [w.competitionDayId, w]),
+    );
     const views = new Map((await this.catches.views(access, catches)).map((v) => [v.id, v]));
     let computedNetLb = 0;
     let officialLb = 0;
@@ -42,8 +62,17 @@ export class WeighInsService {
       const computed = computeDayBag(dayCatches, event, official?.lateMinutes ?? null);
       computedNetLb += computed.netLb;
       officialLb += official?.officialLb ?? computed.netLb;
-      return { competitionDayId: day.id, date: day.date, computed, official, catches: dayCatches.map((c) => views.get(c.id)!) };
+      return {
+        competitionDayId: day.id,
+        date: day.date,
+        computed,
+        official,
+        catches: dayCatches.map((c) => views.get(c.id)!),
+      };
     });
-    return { days: out, totals: { computedNetLb: clean(computedNetLb), officialLb: clean(officialLb), finalPlace: event.finalPlace } };
+    return {
+      days: out,
+      totals: { computedNetLb: clean(computedNetLb), officialLb: clean(officialLb), finalPlace: event.finalPlace },
+    };
   }
 }

@@ -14,10 +14,31 @@ export type Actor = (typeof ACTORS)[number];
 export type Outcome = 'passed' | 'anon' | 'forbidden' | 'hidden';
 export type Expectation = Record<Actor, Outcome>;
 
-const everyone: Expectation = { anonymous: 'passed', nonMember: 'passed', viewer: 'passed', angler: 'passed', owner: 'passed', admin: 'passed' };
+const everyone: Expectation = {
+  anonymous: 'passed',
+  nonMember: 'passed',
+  viewer: 'passed',
+  angler: 'passed',
+  owner: 'passed',
+  admin: 'passed',
+};
 const signedIn: Expectation = { ...everyone, anonymous: 'anon' };
-const adminOnly: Expectation = { anonymous: 'anon', nonMember: 'forbidden', viewer: 'forbidden', angler: 'forbidden', owner: 'forbidden', admin: 'passed' };
-const crewRead: Expectation = { anonymous: 'anon', nonMember: 'hidden', admin: 'hidden', viewer: 'passed', angler: 'passed', owner: 'passed' };
+const adminOnly: Expectation = {
+  anonymous: 'anon',
+  nonMember: 'forbidden',
+  viewer: 'forbidden',
+  angler: 'forbidden',
+  owner: 'forbidden',
+  admin: 'passed',
+};
+const crewRead: Expectation = {
+  anonymous: 'anon',
+  nonMember: 'hidden',
+  admin: 'hidden',
+  viewer: 'passed',
+  angler: 'passed',
+  owner: 'passed',
+};
 const crewWrite: Expectation = { ...crewRead, viewer: 'forbidden' };
 const crewOwner: Expectation = { ...crewWrite, angler: 'forbidden' };
 

@@ -4,7 +4,10 @@ import Ajv from 'ajv';
 type Schema = Record<string, unknown>;
 
 export interface OpenApiDocument {
-  paths: Record<string, Record<string, { responses: Record<string, { content?: Record<string, { schema?: Schema }> }> }>>;
+  paths: Record<
+    string,
+    Record<string, { responses: Record<string, { content?: Record<string, { schema?: Schema }> }> }>
+  >;
   components: { schemas: Record<string, Schema> };
 }
 
@@ -22,7 +25,8 @@ export function toJsonSchema(schema: unknown): unknown {
   for (const [k, v] of Object.entries(schema as Schema)) {
     if (k === 'nullable') continue;
     if (k === '$ref' && typeof v === 'string') out[k] = v.replace('#/components/schemas/', `${DOC_ID}#/definitions/`);
-    else if (k === 'properties') out[k] = Object.fromEntries(Object.entries(v as Schema).map(([p, s]) => [p, toJsonSchema(s)]));
+    else if (k === 'properties')
+      out[k] = Object.fromEntries(Object.entries(v as Schema).map(([p, s]) => [p, toJsonSchema(s)]));
     else if (k === 'enum' || k === 'required' || k === 'example') out[k] = v;
     else out[k] = toJsonSchema(v);
   }
@@ -31,15 +35,23 @@ export function toJsonSchema(schema: unknown): unknown {
 }
 
 /** `check(method, path template, status, body)` → the problems of one answer (empty when it matches its schema). */
-export function responseValidator(doc: OpenApiDocument): (method: string, path: string, status: number, body: unknown) => string[] {
+export function responseValidator(
+  doc: OpenApiDocument,
+): (method: string, path: string, status: number, body: unknown) => string[] {
   const ajv = new Ajv({ allErrors: true, format: 'full' });
-  const definitions = Object.fromEntries(Object.entries(doc.components.schemas).map(([name, s]) => [name, toJsonSchema(s)]));
+  const definitions = Object.fromEntries(
+    Object.entries(doc.components.schemas).map(([name, s]) => [name, toJsonSchema(s)]),
+  );
   ajv.addSchema({ $id: DOC_ID, definitions });
   return (method, path, status, body) => {
-    const schema = doc.paths[path]?.[method.toLowerCase()]?.responses[String(status)]?.content?.['application/json']?.schema;
+    const schema =
+      doc.paths[path]?.[method.toLowerCase()]?.responses[String(status)]?.content?.['application/json']?.schema;
     if (!schema) return [`${method.toUpperCase()} ${path} ${status}: no JSON response schema in the document`];
     const validate = ajv.compile(toJsonSchema(schema) as object);
     if (validate(body)) return [];
-    return (validate.errors ?? []).map((e) => `${method.toUpperCase()} ${path} ${status}: body${e.dataPath} ${e.message}${e.params && 'additionalProperty' in e.params ? ` (${String(e.params.additionalProperty)})` : ''}`);
+    return (validate.errors ?? []).map(
+      (e) =>
+        `${method.toUpperCase()} ${path} ${status}: body${e.dataPath} ${e.message}${e.params && 'additionalProperty' in e.params ? ` (${String(e.params.additionalProperty)})` : ''}`,
+    );
   };
 }

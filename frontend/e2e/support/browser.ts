@@ -88,7 +88,9 @@ export async function seriousAxeViolations(page: Page): Promise<string[]> {
   });
   await page.evaluate(AXE_SOURCE);
   const violations = (await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: unknown[] }> } }).axe;
+    const axe = (
+      window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: unknown[] }> } }
+    ).axe;
     const result = await axe.run(document, { resultTypes: ['violations'] });
     return result.violations;
   })) as AxeViolation[];

@@ -38,7 +38,9 @@ export async function waitForMail(address: string, subject: RegExp, timeoutMs = 
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const found = readOutbox()
-      .filter((m) => m.envelopeTo.map((a) => a.toLowerCase()).includes(address.toLowerCase()) && subject.test(m.subject))
+      .filter(
+        (m) => m.envelopeTo.map((a) => a.toLowerCase()).includes(address.toLowerCase()) && subject.test(m.subject),
+      )
       .sort((a, b) => b.receivedAt.localeCompare(a.receivedAt))[0];
     if (found) return found;
     if (Date.now() > deadline) throw new Error(`no mail to ${address} matching ${subject} within ${timeoutMs} ms`);

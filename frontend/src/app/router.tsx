@@ -19,8 +19,16 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       HydrateFallback: RootHydrateFallback,
       ErrorBoundary: RootErrorBoundary,
       children: [
-        { path: paths.signIn.path, loader: redirectIfSignedIn(queryClient), lazy: () => import('./routes/auth/sign-in') },
-        { path: paths.signUp.path, loader: redirectIfSignedIn(queryClient), lazy: () => import('./routes/auth/sign-up') },
+        {
+          path: paths.signIn.path,
+          loader: redirectIfSignedIn(queryClient),
+          lazy: () => import('./routes/auth/sign-in'),
+        },
+        {
+          path: paths.signUp.path,
+          loader: redirectIfSignedIn(queryClient),
+          lazy: () => import('./routes/auth/sign-up'),
+        },
         { path: paths.resetPassword.path, lazy: () => import('./routes/auth/reset-password') },
         { path: paths.invite.path, lazy: () => import('./routes/invite') },
         { path: paths.devOutbox.path, lazy: () => import('./routes/dev-outbox') },

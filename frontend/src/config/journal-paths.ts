@@ -9,7 +9,10 @@ export const journalPaths = {
   lakes: { path: 'lakes', href: (crewId: string) => `${crew(crewId)}/lakes` },
   newLake: { path: 'lakes/new', href: (crewId: string) => `${crew(crewId)}/lakes/new` },
   lake: { path: 'lakes/:lakeId', href: (crewId: string, lakeId: string) => `${crew(crewId)}/lakes/${id(lakeId)}` },
-  editLake: { path: 'lakes/:lakeId/edit', href: (crewId: string, lakeId: string) => `${crew(crewId)}/lakes/${id(lakeId)}/edit` },
+  editLake: {
+    path: 'lakes/:lakeId/edit',
+    href: (crewId: string, lakeId: string) => `${crew(crewId)}/lakes/${id(lakeId)}/edit`,
+  },
   events: { path: 'events', href: (crewId: string) => `${crew(crewId)}/events` },
   newEvent: {
     path: 'events/new',
@@ -20,7 +23,10 @@ export const journalPaths = {
     href: (crewId: string, eventId: string, section?: EventSection) =>
       `${crew(crewId)}/events/${id(eventId)}${section && section !== 'overview' ? `?section=${section}` : ''}`,
   },
-  editEvent: { path: 'events/:eventId/edit', href: (crewId: string, eventId: string) => `${crew(crewId)}/events/${id(eventId)}/edit` },
+  editEvent: {
+    path: 'events/:eventId/edit',
+    href: (crewId: string, eventId: string) => `${crew(crewId)}/events/${id(eventId)}/edit`,
+  },
   finds: { path: 'finds', href: (crewId: string) => `${crew(crewId)}/finds` },
   newFind: {
     path: 'finds/new',
@@ -30,9 +36,15 @@ export const journalPaths = {
     },
   },
   find: { path: 'finds/:findId', href: (crewId: string, findId: string) => `${crew(crewId)}/finds/${id(findId)}` },
-  editFind: { path: 'finds/:findId/edit', href: (crewId: string, findId: string) => `${crew(crewId)}/finds/${id(findId)}/edit` },
+  editFind: {
+    path: 'finds/:findId/edit',
+    href: (crewId: string, findId: string) => `${crew(crewId)}/finds/${id(findId)}/edit`,
+  },
   catches: { path: 'catches', href: (crewId: string) => `${crew(crewId)}/catches` },
-  catch: { path: 'catches/:catchId', href: (crewId: string, catchId: string) => `${crew(crewId)}/catches/${id(catchId)}` },
+  catch: {
+    path: 'catches/:catchId',
+    href: (crewId: string, catchId: string) => `${crew(crewId)}/catches/${id(catchId)}`,
+  },
   import: {
     path: 'import',
     href: (crewId: string, params: { kind?: 'gpx' | 'csv'; lakeId?: string; eventId?: string } = {}) => {

@@ -5,12 +5,21 @@ import { ApiClient, ApiRequestError } from './api-client';
 const csrf = (token: string) => ({ status: 200, body: { csrfToken: token } });
 const csrfRefused = {
   status: 403,
-  body: { statusCode: 403, error: 'Forbidden', message: 'The security token expired. Try again.', code: 'csrf_invalid', requestId: 'r-1' },
+  body: {
+    statusCode: 403,
+    error: 'Forbidden',
+    message: 'The security token expired. Try again.',
+    code: 'csrf_invalid',
+    requestId: 'r-1',
+  },
 };
 
 describe('ApiClient', () => {
   it('sends the CSRF token from /auth/csrf on writes, with the session cookie', async () => {
-    const net = fakeNetwork({ 'GET /api/auth/csrf': csrf('tok-A'), 'POST /api/crews': { status: 201, body: { id: 'c1' } } });
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf('tok-A'),
+      'POST /api/crews': { status: 201, body: { id: 'c1' } },
+    });
     const client = new ApiClient(net.fetch);
 
     await expect(client.post('/crews', { name: 'Dawn Patrol' })).resolves.toEqual({ id: 'c1' });
@@ -31,7 +40,10 @@ describe('ApiClient', () => {
   });
 
   it('reuses one token for several writes', async () => {
-    const net = fakeNetwork({ 'GET /api/auth/csrf': csrf('tok-A'), 'DELETE /api/crews/c1/invites/i1': { status: 204 } });
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf('tok-A'),
+      'DELETE /api/crews/c1/invites/i1': { status: 204 },
+    });
     const client = new ApiClient(net.fetch);
     await client.delete('/crews/c1/invites/i1');
     await client.delete('/crews/c1/invites/i1');
@@ -74,7 +86,10 @@ describe('ApiClient', () => {
       },
     });
     const client = new ApiClient(net.fetch);
-    await expect(client.post('/crews/c1/invites', {})).rejects.toMatchObject({ statusCode: 403, message: 'Only owners can invite.' });
+    await expect(client.post('/crews/c1/invites', {})).rejects.toMatchObject({
+      statusCode: 403,
+      message: 'Only owners can invite.',
+    });
     expect(net.to('POST /api/crews/c1/invites')).toHaveLength(1);
     expect(net.to('GET /api/auth/csrf')).toHaveLength(1);
   });
@@ -88,7 +103,10 @@ describe('ApiClient', () => {
           statusCode: 400,
           error: 'Bad Request',
           message: 'Some fields need attention.',
-          fieldErrors: { email: ['Enter a valid e-mail address.'], password: ['Use at least 10 characters.', 'Too common.'] },
+          fieldErrors: {
+            email: ['Enter a valid e-mail address.'],
+            password: ['Use at least 10 characters.', 'Too common.'],
+          },
           requestId: 'req-77',
         },
       },
@@ -97,7 +115,12 @@ describe('ApiClient', () => {
     const error = (await client.post('/auth/sign-up', {}).catch((e: unknown) => e)) as ApiRequestError;
 
     expect(error).toBeInstanceOf(ApiRequestError);
-    expect(error).toMatchObject({ statusCode: 400, error: 'Bad Request', message: 'Some fields need attention.', requestId: 'req-77' });
+    expect(error).toMatchObject({
+      statusCode: 400,
+      error: 'Bad Request',
+      message: 'Some fields need attention.',
+      requestId: 'req-77',
+    });
     expect(error.messagesFor('email')).toEqual(['Enter a valid e-mail address.']);
     expect(error.messagesFor('password')).toEqual(['Use at least 10 characters.', 'Too common.']);
     expect(error.messagesFor('displayName')).toEqual([]);
@@ -115,7 +138,10 @@ describe('ApiClient', () => {
 
   it('ignores malformed fieldErrors rather than trusting them', async () => {
     const net = fakeNetwork({
-      'GET /api/crews': { status: 400, body: { statusCode: 400, error: 'Bad Request', message: 'No.', fieldErrors: { name: 'not a list' } } },
+      'GET /api/crews': {
+        status: 400,
+        body: { statusCode: 400, error: 'Bad Request', message: 'No.', fieldErrors: { name: 'not a list' } },
+      },
     });
     const client = new ApiClient(net.fetch);
     const error = (await client.get('/crews').catch((e: unknown) => e)) as ApiRequestError;

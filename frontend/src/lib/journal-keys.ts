@@ -16,7 +16,12 @@ export const journalKeys = {
   allFinds: (crewId: string) => ['crew', crewId, 'finds'] as const,
   find: (crewId: string, findId: string) => ['crew', crewId, 'find', findId] as const,
   catches: (crewId: string, filter: { eventId?: string; competitionDayId?: string } = {}) =>
-    ['crew', crewId, 'catches', { eventId: filter.eventId ?? null, competitionDayId: filter.competitionDayId ?? null }] as const,
+    [
+      'crew',
+      crewId,
+      'catches',
+      { eventId: filter.eventId ?? null, competitionDayId: filter.competitionDayId ?? null },
+    ] as const,
   allCatches: (crewId: string) => ['crew', crewId, 'catches'] as const,
   weighIns: (crewId: string, eventId: string) => ['crew', crewId, 'weigh-ins', eventId] as const,
   allWeighIns: (crewId: string) => ['crew', crewId, 'weigh-ins'] as const,
@@ -31,7 +36,8 @@ export function crewApiPath(crewId: string, rest: string): string {
 /** A query string from the defined values only ("?lakeId=…&eventId=…" or ""). */
 export function queryString(params: Record<string, string | number | boolean | undefined | null>): string {
   const search = new URLSearchParams();
-  for (const [key, value] of Object.entries(params)) if (value !== undefined && value !== null && value !== '') search.set(key, String(value));
+  for (const [key, value] of Object.entries(params))
+    if (value !== undefined && value !== null && value !== '') search.set(key, String(value));
   const text = search.toString();
   return text ? `?${text}` : '';
 }

@@ -6,7 +6,12 @@
 /** "HH:MM" of an instant in a time zone (24-hour clock). */
 export function clockTime(instant: Date | string, timeZone: string): string {
   const date = typeof instant === 'string' ? new Date(instant) : instant;
-  const parts = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).formatToParts(date);
+  const parts = new Intl.DateTimeFormat('en-GB', {
+    timeZone,
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }).formatToParts(date);
   const hour = parts.find((p) => p.type === 'hour')?.value ?? '00';
   const minute = parts.find((p) => p.type === 'minute')?.value ?? '00';
   return `${hour}:${minute}`;
@@ -26,9 +31,13 @@ export function clockOrDash(instant: string | null | undefined, timeZone: string
 /** A local date for people: "Sat 12 Apr 2025". Dates are calendar days, so no zone shift. */
 export function dayLabel(isoDate: string): string {
   const [y, m, d] = isoDate.split('-').map(Number);
-  return new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' }).format(
-    new Date(Date.UTC(y, m - 1, d)),
-  );
+  return new Intl.DateTimeFormat('en-GB', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }).format(new Date(Date.UTC(y, m - 1, d)));
 }
 
 /** A "HH:MM" 24-hour clock time, as typed into the catch form. */

@@ -142,12 +142,18 @@ export function parseWeight(text: string, unit: WeightUnit): Parsed<WeightEntry>
     return { ok: true, entry: { value: whole, unit, ounces } };
   }
   const value = readNumber(raw.replace(/\s*(lbs?|kg)$/i, ''));
-  if (value === null) return { ok: false, error: unit === 'kg' ? 'Type kilograms like 1.56.' : 'Type pounds like 3.45.' };
+  if (value === null)
+    return { ok: false, error: unit === 'kg' ? 'Type kilograms like 1.56.' : 'Type pounds like 3.45.' };
   if (value < 0) return { ok: false, error: 'A weight cannot be negative.' };
   return { ok: true, entry: { value, unit } };
 }
 
-function parseMeasure<U extends string>(text: string, unit: U, what: string, allowNegative = false): Parsed<{ value: number; unit: U }> {
+function parseMeasure<U extends string>(
+  text: string,
+  unit: U,
+  what: string,
+  allowNegative = false,
+): Parsed<{ value: number; unit: U }> {
   const value = readNumber(text.replace(/\s*(in|mm|ft|m|°?[fc])$/i, ''));
   if (value === null) return { ok: false, error: `Type the ${what} as a number.` };
   if (!allowNegative && value < 0) return { ok: false, error: `The ${what} cannot be negative.` };

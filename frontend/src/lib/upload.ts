@@ -43,7 +43,8 @@ function send<T>(path: string, file: File, token: string, options: UploadOptions
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.setRequestHeader(CSRF_HEADER, token);
     xhr.upload.onprogress = (event) => {
-      if (event.lengthComputable) options.onProgress?.({ phase: 'uploading', percent: Math.round((event.loaded / event.total) * 100) });
+      if (event.lengthComputable)
+        options.onProgress?.({ phase: 'uploading', percent: Math.round((event.loaded / event.total) * 100) });
     };
     xhr.upload.onload = () => options.onProgress?.({ phase: 'processing', percent: 100 });
     xhr.onload = () => {
@@ -56,7 +57,8 @@ function send<T>(path: string, file: File, token: string, options: UploadOptions
         new ApiRequestError({
           statusCode: 0,
           error: 'Network Error',
-          message: 'The file could not be sent: Shoalbook could not reach its server. Check the connection and try again.',
+          message:
+            'The file could not be sent: Shoalbook could not reach its server. Check the connection and try again.',
         }),
       );
     xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));

@@ -23,7 +23,9 @@ export function fakeNetwork(routes: Record<string, Handler | Reply | Reply[]>) {
 
   const fetchImpl = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     const url = new URL(String(input), 'http://shoalbook.test');
-    const headers = Object.fromEntries(Object.entries((init.headers ?? {}) as Record<string, string>).map(([k, v]) => [k.toLowerCase(), v]));
+    const headers = Object.fromEntries(
+      Object.entries((init.headers ?? {}) as Record<string, string>).map(([k, v]) => [k.toLowerCase(), v]),
+    );
     const request: SeenRequest = {
       method: init.method ?? 'GET',
       path: url.pathname,

@@ -14,10 +14,12 @@ export class AdminUserViewDto implements AdminUserView {
 
 export class AdminUpdateUserDto implements AdminUpdateUserRequest {
   @ApiPropertyOptional({ description: 'Disabling ends every session of the account.' })
-  @IsOmittable() @IsBoolean({ message: 'Use true or false.' })
+  @IsOmittable()
+  @IsBoolean({ message: 'Use true or false.' })
   disabled?: boolean;
 
   @ApiPropertyOptional({ enum: SITE_ROLES })
-  @IsOmittable() @IsIn(SITE_ROLES, { message: `The site role is one of ${SITE_ROLES.join(', ')}.` })
+  @IsOmittable()
+  @IsIn(SITE_ROLES, { message: `The site role is one of ${SITE_ROLES.join(', ')}.` })
   siteRole?: SiteRole;
 }

@@ -1,6 +1,13 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, MaxLength, MinLength } from 'class-validator';
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, type PasswordResetConfirm, type PasswordResetRequest, type SignInRequest, type SignUpRequest } from '@shoalbook/shared';
+import {
+  PASSWORD_MAX_LENGTH,
+  PASSWORD_MIN_LENGTH,
+  type PasswordResetConfirm,
+  type PasswordResetRequest,
+  type SignInRequest,
+  type SignUpRequest,
+} from '@shoalbook/shared';
 import { NormaliseEmail, Trim } from '../../common/dto/common-transforms';
 
 const EMAIL_MAX = 254;
@@ -24,27 +31,36 @@ export class SignUpDto implements SignUpRequest {
   @ApiProperty({ example: 'new.angler@example.test', maxLength: EMAIL_MAX }) @Email() email: string;
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH }) @NewPassword() password: string;
   @ApiProperty({ maxLength: 80 })
-  @Trim() @IsString({ message: 'Enter a name.' }) @IsNotEmpty({ message: 'Enter a name.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
+  @Trim()
+  @IsString({ message: 'Enter a name.' })
+  @IsNotEmpty({ message: 'Enter a name.' })
+  @MaxLength(80, { message: 'Use at most 80 characters.' })
   displayName: string;
 }
 
 export class SignInDto implements SignInRequest {
   @ApiProperty({ example: 'angler@demo.test' }) @Email() email: string;
   @ApiProperty()
-  @IsString({ message: 'Enter your password.' }) @IsNotEmpty({ message: 'Enter your password.' }) @MaxLength(PASSWORD_MAX_LENGTH, { message: `Use at most ${PASSWORD_MAX_LENGTH} characters.` })
+  @IsString({ message: 'Enter your password.' })
+  @IsNotEmpty({ message: 'Enter your password.' })
+  @MaxLength(PASSWORD_MAX_LENGTH, { message: `Use at most ${PASSWORD_MAX_LENGTH} characters.` })
   password: string;
 }
 
 export class ChangePasswordDto {
   @ApiProperty()
-  @IsString({ message: 'Enter your current password.' }) @IsNotEmpty({ message: 'Enter your current password.' }) @MaxLength(PASSWORD_MAX_LENGTH)
+  @IsString({ message: 'Enter your current password.' })
+  @IsNotEmpty({ message: 'Enter your current password.' })
+  @MaxLength(PASSWORD_MAX_LENGTH)
   currentPassword: string;
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH }) @NewPassword() newPassword: string;
 }
 
 export class DeleteAccountDto {
   @ApiProperty({ description: 'The current password, to confirm.' })
-  @IsString({ message: 'Enter your password to confirm.' }) @IsNotEmpty({ message: 'Enter your password to confirm.' }) @MaxLength(PASSWORD_MAX_LENGTH)
+  @IsString({ message: 'Enter your password to confirm.' })
+  @IsNotEmpty({ message: 'Enter your password to confirm.' })
+  @MaxLength(PASSWORD_MAX_LENGTH)
   password: string;
 }
 
@@ -54,13 +70,16 @@ export class PasswordResetRequestDto implements PasswordResetRequest {
 
 export class PasswordResetConfirmDto implements PasswordResetConfirm {
   @ApiProperty({ description: 'The token from the e-mailed link.' })
-  @IsString({ message: 'The link is incomplete.' }) @IsNotEmpty({ message: 'The link is incomplete.' }) @MaxLength(200, { message: 'The link is not valid.' })
+  @IsString({ message: 'The link is incomplete.' })
+  @IsNotEmpty({ message: 'The link is incomplete.' })
+  @MaxLength(200, { message: 'The link is not valid.' })
   token: string;
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH }) @NewPassword() password: string;
 }
 
 export class CsrfResponseDto {
-  @ApiProperty({ description: 'Send it back in the x-csrf-token header of every POST/PUT/PATCH/DELETE.' }) csrfToken: string;
+  @ApiProperty({ description: 'Send it back in the x-csrf-token header of every POST/PUT/PATCH/DELETE.' })
+  csrfToken: string;
 }
 
 export class MessageResponseDto {

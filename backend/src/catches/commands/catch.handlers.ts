@@ -18,13 +18,22 @@ export class LogCatchHandler implements ICommandHandler<LogCatchCommand> {
   async execute({ access, input }: LogCatchCommand): Promise<CatchView> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
       const ctx = await this.catches.context(tx, access.crewId, input.competitionDayId);
-      const c = Object.assign(new Catch(), { crewId: access.crewId, eventId: ctx.event.id, competitionDayId: ctx.day.id });
+      const c = Object.assign(new Catch(), {
+        crewId: access.crewId,
+        eventId: ctx.event.id,
+        competitionDayId: ctx.day.id,
+      });
       const problems = new FieldProblems();
       await applyCatchInput(ctx, c, input, problems);
       problems.throwIfAny();
       tx.persist(c);
       await tx.flush();
-      log.record({ type: 'CatchLogged', aggregateType: 'catch', aggregateId: c.id, payload: recordState(tx, 'Catch', c) });
+      log.record({
+        type: 'CatchLogged',
+        aggregateType: 'catch',
+        aggregateId: c.id,
+        payload: recordState(tx, 'Catch', c),
+      });
       return this.catches.viewInContext(access, c, ctx);
     });
   }
@@ -47,7 +56,12 @@ export class UpdateCatchHandler implements ICommandHandler<UpdateCatchCommand> {
       await applyCatchInput(ctx, c, input, problems);
       problems.throwIfAny();
       await tx.flush();
-      log.record({ type: 'CatchUpdated', aggregateType: 'catch', aggregateId: c.id, payload: recordState(tx, 'Catch', c) });
+      log.record({
+        type: 'CatchUpdated',
+        aggregateType: 'catch',
+        aggregateId: c.id,
+        payload: recordState(tx, 'Catch', c),
+      });
       return this.catches.viewInContext(access, c, ctx);
     });
   }

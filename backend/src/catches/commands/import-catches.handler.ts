@@ -34,7 +34,8 @@ export class ImportCatchesHandler implements ICommandHandler<ImportCatchesComman
       const bad = rows.filter((r) => r.preview.errors.length);
       if (bad.length) {
         const fieldErrors: Record<string, string[]> = {};
-        for (const r of bad) for (const e of r.preview.errors) (fieldErrors[`line ${r.preview.line}: ${e.field}`] ??= []).push(e.message);
+        for (const r of bad)
+          for (const e of r.preview.errors) (fieldErrors[`line ${r.preview.line}: ${e.field}`] ??= []).push(e.message);
         throw new ApiException(
           HttpStatus.BAD_REQUEST,
           `${bad.length} of ${rows.length} row(s) have errors; nothing was imported. Fix them and import the file again.`,
@@ -43,7 +44,11 @@ export class ImportCatchesHandler implements ICommandHandler<ImportCatchesComman
         );
       }
       const records = rows.map((r) => r.record!);
-      await insertRecordsBulk(tx, log, 'Catch', records, (c) => ({ type: 'CatchLogged', aggregateType: 'catch', aggregateId: c.id }));
+      await insertRecordsBulk(tx, log, 'Catch', records, (c) => ({
+        type: 'CatchLogged',
+        aggregateType: 'catch',
+        aggregateId: c.id,
+      }));
       return { imported: records.length, errors: [] };
     });
   }

@@ -1,6 +1,11 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { FATES, SPECIES, type CatchView, type Fate, type Species } from '@shoalbook/shared';
-import { EnteredDepthDto, EnteredLengthDto, EnteredTemperatureDto, EnteredWeightDto } from '../../measurements/entered-value.dto';
+import {
+  EnteredDepthDto,
+  EnteredLengthDto,
+  EnteredTemperatureDto,
+  EnteredWeightDto,
+} from '../../measurements/entered-value.dto';
 import { SkyContextDto } from '../../sky/dto/sky-view.dto';
 
 const nullableNumber = { type: Number, nullable: true } as const;
@@ -22,7 +27,8 @@ export class CatchViewDto implements CatchView {
   @ApiProperty({ format: 'date-time' }) caughtAt: string;
   @ApiProperty(nullableId) findId: string | null;
   @ApiProperty({ type: String, nullable: true }) findName: string | null;
-  @ApiProperty({ ...nullableNumber, description: 'm, when attributed from coordinates' }) attributionDistanceM: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'm, when attributed from coordinates' }) attributionDistanceM:
+    number | null;
   @ApiProperty({ ...nullableNumber, description: 'null when hidden' }) lat: number | null;
   @ApiProperty({ ...nullableNumber, description: 'null when hidden' }) lon: number | null;
   @ApiProperty({ enum: SPECIES }) species: Species;
@@ -35,7 +41,8 @@ export class CatchViewDto implements CatchView {
   @ApiProperty({ enum: FATES }) fate: Fate;
   @ApiProperty() notes: string;
   @ApiProperty(nullableId) photoId: string | null;
-  @ApiProperty({ description: 'weight looks implausible for the length (flagged, never changed)' }) weightFlagged: boolean;
+  @ApiProperty({ description: 'weight looks implausible for the length (flagged, never changed)' })
+  weightFlagged: boolean;
   @ApiProperty({ type: CatchEnteredViewDto }) entered: CatchEnteredViewDto;
   @ApiProperty({ type: SkyContextDto, nullable: true }) sky: SkyContextDto | null;
   @ApiProperty() version: number;

@@ -1,8 +1,26 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { FATES, SPECIES, type Fate, type LogCatchRequest, type Species } from '@shoalbook/shared';
-import { IsIn, IsInt, IsNotEmpty, IsNumber, IsObject, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
-import { EnteredDepthDto, EnteredLengthDto, EnteredTemperatureDto, EnteredWeightDto } from '../../measurements/entered-value.dto';
+import {
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import {
+  EnteredDepthDto,
+  EnteredLengthDto,
+  EnteredTemperatureDto,
+  EnteredWeightDto,
+} from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { IsOmittable } from '../../common/dto/omittable';
 
@@ -16,22 +34,58 @@ export class LogCatchDto implements LogCatchRequest {
   @MaxLength(40)
   caughtAt: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() findId?: string | null;
-  @ApiPropertyOptional({ nullable: true, minimum: -90, maximum: 90 }) @IsOptional() @IsNumber(finite) @Min(-90) @Max(90) lat?: number | null;
-  @ApiPropertyOptional({ nullable: true, minimum: -180, maximum: 180 }) @IsOptional() @IsNumber(finite) @Min(-180) @Max(180) lon?: number | null;
-  @ApiPropertyOptional({ default: 50, description: 'attribution radius, m' }) @IsOmittable() @IsNumber(finite) @Min(1) @Max(1000) radiusM?: number;
+  @ApiPropertyOptional({ nullable: true, minimum: -90, maximum: 90 })
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(-90)
+  @Max(90)
+  lat?: number | null;
+  @ApiPropertyOptional({ nullable: true, minimum: -180, maximum: 180 })
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(-180)
+  @Max(180)
+  lon?: number | null;
+  @ApiPropertyOptional({ default: 50, description: 'attribution radius, m' })
+  @IsOmittable()
+  @IsNumber(finite)
+  @Min(1)
+  @Max(1000)
+  radiusM?: number;
   @ApiProperty({ enum: SPECIES }) @IsIn([...SPECIES]) species: Species;
-  @ApiPropertyOptional({ nullable: true, description: 'inches' }) @IsOptional() @IsNumber(finite) lengthIn?: number | null;
-  @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredLengthDto) length?: EnteredLengthDto | null;
-  @ApiPropertyOptional({ description: 'decimal pounds (or give weight)' }) @IsOmittable() @IsNumber(finite) weightLb?: number;
-  @ApiPropertyOptional({ type: EnteredWeightDto }) @IsOmittable() @IsObject() @ValidateNested() @Type(() => EnteredWeightDto) weight?: EnteredWeightDto;
+  @ApiPropertyOptional({ nullable: true, description: 'inches' }) @IsOptional() @IsNumber(finite) lengthIn?:
+    number | null;
+  @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredLengthDto)
+  length?: EnteredLengthDto | null;
+  @ApiPropertyOptional({ description: 'decimal pounds (or give weight)' })
+  @IsOmittable()
+  @IsNumber(finite)
+  weightLb?: number;
+  @ApiPropertyOptional({ type: EnteredWeightDto })
+  @IsOmittable()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredWeightDto)
+  weight?: EnteredWeightDto;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) lure?: string;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) technique?: string;
   @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
-  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredDepthDto)
+  depth?: EnteredDepthDto | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
+    number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
-  @IsObject() @ValidateNested()
+  @IsObject()
+  @ValidateNested()
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty({ enum: FATES }) @IsIn([...FATES]) fate: Fate;
@@ -40,7 +94,9 @@ export class LogCatchDto implements LogCatchRequest {
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
-export class UpdateCatchDto extends PartialType(OmitType(LogCatchDto, ['competitionDayId'] as const), { skipNullProperties: false }) {
+export class UpdateCatchDto extends PartialType(OmitType(LogCatchDto, ['competitionDayId'] as const), {
+  skipNullProperties: false,
+}) {
   @ApiProperty() @IsInt() @Min(1) version: number;
 }
 

@@ -33,7 +33,14 @@ export function createCsrfProtection(secret: string, secureCookies: boolean): Cs
     issueToken: (req, res) => generateCsrfToken(req, res),
     middleware: (req: Request, res: Response, next: NextFunction) => {
       if (SAFE_METHODS.has(req.method) || validateRequest(req)) return next();
-      sendApiError(req, res, new ForbiddenException({ message: 'The security token is missing or out of date. Reload the page and try again.', code: ErrorCode.csrfInvalid }));
+      sendApiError(
+        req,
+        res,
+        new ForbiddenException({
+          message: 'The security token is missing or out of date. Reload the page and try again.',
+          code: ErrorCode.csrfInvalid,
+        }),
+      );
     },
   };
 }

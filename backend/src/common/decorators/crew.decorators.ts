@@ -1,4 +1,11 @@
-import { applyDecorators, createParamDecorator, type ExecutionContext, InternalServerErrorException, SetMetadata, UseGuards } from '@nestjs/common';
+import {
+  applyDecorators,
+  createParamDecorator,
+  type ExecutionContext,
+  InternalServerErrorException,
+  SetMetadata,
+  UseGuards,
+} from '@nestjs/common';
 import { ApiForbiddenResponse, ApiNotFoundResponse, ApiParam } from '@nestjs/swagger';
 import type { Request } from 'express';
 import type { CrewRole } from '@shoalbook/shared';
@@ -8,7 +15,6 @@ import type { CrewAccess } from '../request-context';
 import { CREW_ACCESS_KEY, type CrewAccessRule } from './crew-access-rule';
 
 export { CREW_ACCESS_KEY, type CrewAccessRule };
-
 
 /**
  * Put on every controller whose routes live under `/crews/:crewId/...`: the guard loads the caller's
@@ -25,7 +31,10 @@ export function CrewRoute(): ClassDecorator & MethodDecorator {
 }
 
 /** The least crew role a route needs, overriding the read/write default of @CrewRoute. */
-export function CrewRoles(role: CrewRole, options: Omit<CrewAccessRule, 'role'> = {}): ClassDecorator & MethodDecorator {
+export function CrewRoles(
+  role: CrewRole,
+  options: Omit<CrewAccessRule, 'role'> = {},
+): ClassDecorator & MethodDecorator {
   return SetMetadata(CREW_ACCESS_KEY, { role, ...options } satisfies CrewAccessRule);
 }
 

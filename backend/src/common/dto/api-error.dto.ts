@@ -7,7 +7,11 @@ export class ApiErrorDto implements ApiError {
   @ApiProperty({ example: 'Bad Request' }) error: string;
   @ApiProperty({ example: 'Check the field "email": Enter a valid e-mail address.' }) message: string;
   @ApiPropertyOptional({ example: 'validation_failed' }) code?: string;
-  @ApiPropertyOptional({ type: 'object', additionalProperties: { type: 'array', items: { type: 'string' } }, example: { email: ['Enter a valid e-mail address.'] } })
+  @ApiPropertyOptional({
+    type: 'object',
+    additionalProperties: { type: 'array', items: { type: 'string' } },
+    example: { email: ['Enter a valid e-mail address.'] },
+  })
   fieldErrors?: Record<string, string[]>;
   @ApiProperty({ format: 'uuid' }) requestId?: string;
 }

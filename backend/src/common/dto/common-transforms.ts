@@ -5,4 +5,5 @@ export const NormaliseEmail = (): PropertyDecorator =>
   Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim().toLowerCase() : value));
 
 /** Trim free text (names) before validation. */
-export const Trim = (): PropertyDecorator => Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value));
+export const Trim = (): PropertyDecorator =>
+  Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value));

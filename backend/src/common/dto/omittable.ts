@@ -5,4 +5,5 @@ import { ValidateIf } from 'class-validator';
  * check). Use instead of @IsOptional() on fields whose column is NOT NULL: @IsOptional() lets null
  * through to the database, which then fails with a 500.
  */
-export const IsOmittable = (): PropertyDecorator => ValidateIf((_object: object, value: unknown) => value !== undefined);
+export const IsOmittable = (): PropertyDecorator =>
+  ValidateIf((_object: object, value: unknown) => value !== undefined);

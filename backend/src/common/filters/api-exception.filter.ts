@@ -13,7 +13,13 @@ const DEFAULT_CODES: Record<number, string> = {
   429: ErrorCode.rateLimited,
 };
 
-const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ETIMEDOUT', 'EHOSTUNREACH', 'ER_GET_CONNECTION_TIMEOUT', 'ER_CONNECTION_TIMEOUT']);
+const UNREACHABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ETIMEDOUT',
+  'EHOSTUNREACH',
+  'ER_GET_CONNECTION_TIMEOUT',
+  'ER_CONNECTION_TIMEOUT',
+]);
 
 function isDatabaseUnreachable(e: unknown): boolean {
   if (e instanceof ConnectionException) return true;
@@ -45,10 +51,20 @@ export function toApiError(exception: unknown): Omit<ApiError, 'requestId'> {
   }
   // Two writers passed the version check at once; the second UPDATE matched no row.
   if (exception instanceof OptimisticLockError) {
-    return { statusCode: 409, error: STATUS_CODES[409]!, message: 'This record was changed by someone else a moment ago. Reload it and apply your change again.', code: 'stale_version' };
+    return {
+      statusCode: 409,
+      error: STATUS_CODES[409]!,
+      message: 'This record was changed by someone else a moment ago. Reload it and apply your change again.',
+      code: 'stale_version',
+    };
   }
   if (isDatabaseUnreachable(exception)) {
-    return { statusCode: 503, error: STATUS_CODES[503]!, message: 'The database is not answering. Try again in a moment.', code: ErrorCode.dbUnavailable };
+    return {
+      statusCode: 503,
+      error: STATUS_CODES[503]!,
+      message: 'The database is not answering. Try again in a moment.',
+      code: ErrorCode.dbUnavailable,
+    };
   }
   return {
     statusCode: HttpStatus.INTERNAL_SERVER_ERROR,
@@ -65,7 +81,10 @@ export function sendApiError(req: Request, res: Response, exception: unknown): v
   const error: ApiError = { ...toApiError(exception), requestId: req.id };
   const where = `${req.method} ${req.originalUrl} → ${error.statusCode} [${req.id}]`;
   if (error.statusCode >= 500) {
-    logger.error(`${where}: ${exception instanceof Error ? exception.message : String(exception)}`, exception instanceof Error ? exception.stack : undefined);
+    logger.error(
+      `${where}: ${exception instanceof Error ? exception.message : String(exception)}`,
+      exception instanceof Error ? exception.stack : undefined,
+    );
   } else {
     logger.verbose(`${where}: ${error.message}`);
   }

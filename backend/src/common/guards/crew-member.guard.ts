@@ -35,7 +35,10 @@ export class CrewMemberGuard implements CanActivate {
     const membership = await this.em.findOne(Membership, { crew: crewId, user: user.id }, { populate: ['crew'] });
     if (!membership) throw crewNotFound();
 
-    const rule = this.reflector.getAllAndOverride<CrewAccessRule | undefined>(CREW_ACCESS_KEY, [context.getHandler(), context.getClass()]);
+    const rule = this.reflector.getAllAndOverride<CrewAccessRule | undefined>(CREW_ACCESS_KEY, [
+      context.getHandler(),
+      context.getClass(),
+    ]);
     const needed = rule?.role ?? (READ_METHODS.has(req.method) ? 'viewer' : 'angler');
     const actingOnSelf = rule?.orSelf !== undefined && req.params[rule.orSelf] === user.id;
     if (!roleAtLeast(membership.role, needed) && !actingOnSelf) {

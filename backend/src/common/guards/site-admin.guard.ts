@@ -1,4 +1,12 @@
-import { applyDecorators, type CanActivate, type ExecutionContext, HttpStatus, Injectable, UnauthorizedException, UseGuards } from '@nestjs/common';
+import {
+  applyDecorators,
+  type CanActivate,
+  type ExecutionContext,
+  HttpStatus,
+  Injectable,
+  UnauthorizedException,
+  UseGuards,
+} from '@nestjs/common';
 import { ApiForbiddenResponse } from '@nestjs/swagger';
 import type { Request } from 'express';
 import { ApiErrorDto } from '../dto/api-error.dto';
@@ -10,11 +18,15 @@ export class SiteAdminGuard implements CanActivate {
   canActivate(context: ExecutionContext): boolean {
     const user = context.switchToHttp().getRequest<Request>().user;
     if (!user) throw new UnauthorizedException('Sign in first.');
-    if (user.siteRole !== 'admin') throw new ApiException(HttpStatus.FORBIDDEN, 'Only site admins can do this.', ErrorCode.forbidden);
+    if (user.siteRole !== 'admin')
+      throw new ApiException(HttpStatus.FORBIDDEN, 'Only site admins can do this.', ErrorCode.forbidden);
     return true;
   }
 }
 
 /** Restrict a controller or route to site admins. */
 export const SiteAdminOnly = (): ClassDecorator & MethodDecorator =>
-  applyDecorators(UseGuards(SiteAdminGuard), ApiForbiddenResponse({ type: ApiErrorDto, description: 'Not a site admin.' }));
+  applyDecorators(
+    UseGuards(SiteAdminGuard),
+    ApiForbiddenResponse({ type: ApiErrorDto, description: 'Not a site admin.' }),
+  );

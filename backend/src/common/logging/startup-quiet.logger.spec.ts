@@ -31,6 +31,8 @@ describe('StartupQuietLogger', () => {
 
   it('prints the chatter again with LOG_STARTUP=verbose', () => {
     process.env.LOG_STARTUP = 'verbose';
-    expect(printed((l) => l.log('Mapped {/api/health, GET} route', 'RouterExplorer'))).toContain('Mapped {/api/health, GET} route');
+    expect(printed((l) => l.log('Mapped {/api/health, GET} route', 'RouterExplorer'))).toContain(
+      'Mapped {/api/health, GET} route',
+    );
   });
 });

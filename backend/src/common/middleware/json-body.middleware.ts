@@ -8,7 +8,8 @@ export const JSON_BODY_LIMIT = '64kb';
 
 function bodyError(err: unknown, limit: string): unknown {
   const type = (err as { type?: string }).type;
-  if (type === 'entity.parse.failed') return new ApiException(HttpStatus.BAD_REQUEST, 'The request body is not valid JSON.', ErrorCode.invalidJson);
+  if (type === 'entity.parse.failed')
+    return new ApiException(HttpStatus.BAD_REQUEST, 'The request body is not valid JSON.', ErrorCode.invalidJson);
   if (type === 'entity.too.large') return new PayloadTooLargeException(`The request body is larger than ${limit}.`);
   const status = (err as { status?: number }).status;
   if (status && status >= 400 && status < 500) return new HttpException('The request body could not be read.', status);

@@ -7,7 +7,9 @@ export function toFieldErrors(errors: ValidationError[], prefix = ''): Record<st
   for (const e of errors) {
     const path = prefix ? `${prefix}.${e.property}` : e.property;
     const constraints = e.constraints ?? {};
-    const messages = Object.entries(constraints).map(([name, msg]) => (name === 'whitelistValidation' ? 'This field is not accepted.' : msg));
+    const messages = Object.entries(constraints).map(([name, msg]) =>
+      name === 'whitelistValidation' ? 'This field is not accepted.' : msg,
+    );
     if (messages.length) out[path] = messages;
     if (e.children?.length) Object.assign(out, toFieldErrors(e.children, path));
   }
@@ -26,14 +28,21 @@ export class ApiValidationPipe extends ValidationPipe {
       exceptionFactory: (errors) => {
         const fieldErrors = toFieldErrors(errors);
         const fields = Object.keys(fieldErrors);
-        const message = fields.length === 1 ? `Check the field "${fields[0]}": ${fieldErrors[fields[0]!]![0]}` : `Check these fields: ${fields.join(', ')}.`;
+        const message =
+          fields.length === 1
+            ? `Check the field "${fields[0]}": ${fieldErrors[fields[0]!]![0]}`
+            : `Check these fields: ${fields.join(', ')}.`;
         return new ApiException(HttpStatus.BAD_REQUEST, message, ErrorCode.validation, fieldErrors);
       },
     });
   }
 
   override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
-    if (metadata.type === 'body' && value !== undefined && (value === null || typeof value !== 'object' || Array.isArray(value))) {
+    if (
+      metadata.type === 'body' &&
+      value !== undefined &&
+      (value === null || typeof value !== 'object' || Array.isArray(value))
+    ) {
       throw new ApiException(HttpStatus.BAD_REQUEST, 'The request body must be a JSON object.', ErrorCode.validation);
     }
     return super.transform(value, metadata);

@@ -35,4 +35,7 @@ export class AuthThrottlerGuard extends ThrottlerGuard {}
 
 /** Rate-limit a sign-in, sign-up, reset or invite route (429 when over the limit). */
 export const AuthThrottle = (): MethodDecorator & ClassDecorator =>
-  applyDecorators(UseGuards(AuthThrottlerGuard), ApiTooManyRequestsResponse({ type: ApiErrorDto, description: 'Too many attempts.' }));
+  applyDecorators(
+    UseGuards(AuthThrottlerGuard),
+    ApiTooManyRequestsResponse({ type: ApiErrorDto, description: 'Too many attempts.' }),
+  );

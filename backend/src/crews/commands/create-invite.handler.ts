@@ -30,10 +30,18 @@ export class CreateInviteHandler implements ICommandHandler<CreateInviteCommand>
   async execute({ crewId, invitedByUserId, email, role }: CreateInviteCommand): Promise<InviteView> {
     const alreadyMember = await this.em.count(Membership, { crew: crewId, user: { email } });
     if (alreadyMember) {
-      throw new ApiException(HttpStatus.CONFLICT, 'This person is already a member of the crew.', ErrorCode.alreadyMember, { email: ['Already a member.'] });
+      throw new ApiException(
+        HttpStatus.CONFLICT,
+        'This person is already a member of the crew.',
+        ErrorCode.alreadyMember,
+        { email: ['Already a member.'] },
+      );
     }
     const token = randomToken(32);
-    const [crew, inviter] = await Promise.all([this.em.findOneOrFail(Crew, { id: crewId }), this.em.findOneOrFail(User, { id: invitedByUserId })]);
+    const [crew, inviter] = await Promise.all([
+      this.em.findOneOrFail(Crew, { id: crewId }),
+      this.em.findOneOrFail(User, { id: invitedByUserId }),
+    ]);
     const invite = await this.em.transactional(async (em) => {
       // A new invite replaces a pending one to the same address, so only the newest link works.
       await em.nativeDelete(Invite, { crew: crewId, email, acceptedAt: null });
@@ -49,10 +57,23 @@ export class CreateInviteHandler implements ICommandHandler<CreateInviteCommand>
       const link = `${this.config.appUrl}/invite?token=${encodeURIComponent(token)}`;
       try {
         // Sent inside the transaction: if the mail cannot go, the invite is not kept either.
-        await this.mail.send(email, inviteMail({ crewName: crew.name, inviterName: inviter.displayName, role, link, expiresAt: created.expiresAt }));
+        await this.mail.send(
+          email,
+          inviteMail({
+            crewName: crew.name,
+            inviterName: inviter.displayName,
+            role,
+            link,
+            expiresAt: created.expiresAt,
+          }),
+        );
       } catch (e) {
         this.logger.error(`invite e-mail failed: ${e instanceof Error ? e.message : String(e)}`);
-        throw new ApiException(HttpStatus.SERVICE_UNAVAILABLE, 'The invite e-mail could not be sent. Try again in a moment.', ErrorCode.mailFailed);
+        throw new ApiException(
+          HttpStatus.SERVICE_UNAVAILABLE,
+          'The invite e-mail could not be sent. Try again in a moment.',
+          ErrorCode.mailFailed,
+        );
       }
       return created;
     });

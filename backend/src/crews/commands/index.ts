@@ -5,4 +5,11 @@ import { CreateInviteHandler } from './create-invite.handler';
 import { DeleteCrewHandler } from './delete-crew.handler';
 import { RemoveMemberHandler } from './remove-member.handler';
 
-export const CREW_COMMAND_HANDLERS = [CreateCrewHandler, ChangeMemberRoleHandler, RemoveMemberHandler, CreateInviteHandler, AcceptInviteHandler, DeleteCrewHandler];
+export const CREW_COMMAND_HANDLERS = [
+  CreateCrewHandler,
+  ChangeMemberRoleHandler,
+  RemoveMemberHandler,
+  CreateInviteHandler,
+  AcceptInviteHandler,
+  DeleteCrewHandler,
+];

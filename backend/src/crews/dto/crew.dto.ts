@@ -1,12 +1,28 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsEmail, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
-import { CREW_ROLES, type ChangeRoleRequest, type CreateCrewRequest, type CreateInviteRequest, type CrewRole, type CrewView, type InvitePreview, type InviteView, type MemberView, type UpdateCrewRequest } from '@shoalbook/shared';
+import {
+  CREW_ROLES,
+  type ChangeRoleRequest,
+  type CreateCrewRequest,
+  type CreateInviteRequest,
+  type CrewRole,
+  type CrewView,
+  type InvitePreview,
+  type InviteView,
+  type MemberView,
+  type UpdateCrewRequest,
+} from '@shoalbook/shared';
 import { NormaliseEmail, Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
 
 const roleMessage = { message: `The role is one of ${CREW_ROLES.join(', ')}.` };
 const nameRules = (target: object, key: string | symbol) =>
-  [Trim(), IsString({ message: 'Enter a name.' }), IsNotEmpty({ message: 'Enter a name.' }), MaxLength(80, { message: 'Use at most 80 characters.' })].forEach((d) => d(target, key));
+  [
+    Trim(),
+    IsString({ message: 'Enter a name.' }),
+    IsNotEmpty({ message: 'Enter a name.' }),
+    MaxLength(80, { message: 'Use at most 80 characters.' }),
+  ].forEach((d) => d(target, key));
 
 export class CreateCrewDto implements CreateCrewRequest {
   @ApiProperty({ maxLength: 80, example: 'Spring Practice Crew' }) @(nameRules as PropertyDecorator) name: string;
@@ -15,13 +31,17 @@ export class CreateCrewDto implements CreateCrewRequest {
 export class UpdateCrewDto implements UpdateCrewRequest {
   @ApiPropertyOptional({ maxLength: 80 }) @IsOmittable() @(nameRules as PropertyDecorator) name?: string;
   @ApiPropertyOptional({ description: 'Whether viewers see exact positions.' })
-  @IsOmittable() @IsBoolean({ message: 'Use true or false.' })
+  @IsOmittable()
+  @IsBoolean({ message: 'Use true or false.' })
   viewersSeePositions?: boolean;
 }
 
 export class DeleteCrewDto {
   @ApiProperty({ maxLength: 80, description: 'The crew’s name, typed again to confirm the deletion.' })
-  @Trim() @IsString({ message: 'Type the crew’s name to confirm.' }) @IsNotEmpty({ message: 'Type the crew’s name to confirm.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
+  @Trim()
+  @IsString({ message: 'Type the crew’s name to confirm.' })
+  @IsNotEmpty({ message: 'Type the crew’s name to confirm.' })
+  @MaxLength(80, { message: 'Use at most 80 characters.' })
   confirmName: string;
 }
 
@@ -31,14 +51,19 @@ export class ChangeRoleDto implements ChangeRoleRequest {
 
 export class CreateInviteDto implements CreateInviteRequest {
   @ApiProperty({ example: 'coach@example.test', maxLength: 254 })
-  @NormaliseEmail() @IsString({ message: 'Enter an e-mail address.' }) @MaxLength(254, { message: 'Use at most 254 characters.' }) @IsEmail({}, { message: 'Enter a valid e-mail address.' })
+  @NormaliseEmail()
+  @IsString({ message: 'Enter an e-mail address.' })
+  @MaxLength(254, { message: 'Use at most 254 characters.' })
+  @IsEmail({}, { message: 'Enter a valid e-mail address.' })
   email: string;
   @ApiProperty({ enum: CREW_ROLES }) @IsIn(CREW_ROLES, roleMessage) role: CrewRole;
 }
 
 export class AcceptInviteDto {
   @ApiProperty({ description: 'The token from the e-mailed link.' })
-  @IsString({ message: 'The link is incomplete.' }) @IsNotEmpty({ message: 'The link is incomplete.' }) @MaxLength(200, { message: 'The link is not valid.' })
+  @IsString({ message: 'The link is incomplete.' })
+  @IsNotEmpty({ message: 'The link is incomplete.' })
+  @MaxLength(200, { message: 'The link is not valid.' })
   token: string;
 }
 

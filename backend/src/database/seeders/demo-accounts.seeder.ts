@@ -14,7 +14,12 @@ export class DemoAccountsSeeder extends Seeder {
     context.users ??= {};
     context.crews ??= {};
     for (const account of DEMO_ACCOUNTS) {
-      const user = em.create(User, { email: account.email, displayName: account.displayName, passwordHash, siteRole: account.siteRole });
+      const user = em.create(User, {
+        email: account.email,
+        displayName: account.displayName,
+        passwordHash,
+        siteRole: account.siteRole,
+      });
       context.users[account.email] = user;
       if (!account.crew) continue;
       const crew = (context.crews[account.crew.name] ??= em.create(Crew, { name: account.crew.name }));

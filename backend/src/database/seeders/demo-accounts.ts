@@ -16,9 +16,29 @@ export interface DemoAccount {
 
 /** Invented people; the e-mail addresses use the reserved `.test` domain. */
 export const DEMO_ACCOUNTS: readonly DemoAccount[] = [
-  { email: 'owner@demo.test', displayName: 'Wren Halvorsen', siteRole: 'user', crew: { name: DEMO_CREW_NAME, role: 'owner' } },
-  { email: 'angler@demo.test', displayName: 'Milo Farrant', siteRole: 'user', crew: { name: DEMO_CREW_NAME, role: 'angler' } },
-  { email: 'viewer@demo.test', displayName: 'Ines Barlow (coach)', siteRole: 'user', crew: { name: DEMO_CREW_NAME, role: 'viewer' } },
+  {
+    email: 'owner@demo.test',
+    displayName: 'Wren Halvorsen',
+    siteRole: 'user',
+    crew: { name: DEMO_CREW_NAME, role: 'owner' },
+  },
+  {
+    email: 'angler@demo.test',
+    displayName: 'Milo Farrant',
+    siteRole: 'user',
+    crew: { name: DEMO_CREW_NAME, role: 'angler' },
+  },
+  {
+    email: 'viewer@demo.test',
+    displayName: 'Ines Barlow (coach)',
+    siteRole: 'user',
+    crew: { name: DEMO_CREW_NAME, role: 'viewer' },
+  },
   { email: 'admin@demo.test', displayName: 'Site Admin', siteRole: 'admin' },
-  { email: 'rival@demo.test', displayName: 'Rory Castellan', siteRole: 'user', crew: { name: RIVAL_CREW_NAME, role: 'owner' } },
+  {
+    email: 'rival@demo.test',
+    displayName: 'Rory Castellan',
+    siteRole: 'user',
+    crew: { name: RIVAL_CREW_NAME, role: 'owner' },
+  },
 ];

@@ -35,68 +35,184 @@ export class JournalDemoSeeder extends Seeder {
     const j = demoJournal();
     // Fresh ids, so the demo can be loaded for more than one crew (tests) without key clashes.
     const ids = new Map<string, string>();
-    const id = (fixtureId: string): string => ids.get(fixtureId) ?? (ids.set(fixtureId, randomUUID()), ids.get(fixtureId)!);
+    const id = (fixtureId: string): string =>
+      ids.get(fixtureId) ?? (ids.set(fixtureId, randomUUID()), ids.get(fixtureId)!);
     const idOrNull = (fixtureId: string | null): string | null => (fixtureId === null ? null : id(fixtureId));
     const now = new Date();
     const stamp = { createdAt: now, updatedAt: now };
 
     await sql.transactional(async (tx) => {
       const log = new JournalRecorder(tx, crew.id, owner?.id ?? null);
-      const lakes = j.lakes.map((l) => Object.assign(new Lake(), { ...stamp, id: id(l.id), crewId: crew.id, name: l.name, region: l.region, timeZone: l.timeZone, lat: l.lat, lon: l.lon, areaAcres: l.areaAcres, notes: l.notes }));
-      await insertRecordsBulk(tx, log, 'Lake', lakes, (l) => ({ type: 'LakeCreated', aggregateType: 'lake', aggregateId: l.id }));
+      const lakes = j.lakes.map((l) =>
+        Object.assign(new Lake(), {
+          ...stamp,
+          id: id(l.id),
+          crewId: crew.id,
+          name: l.name,
+          region: l.region,
+          timeZone: l.timeZone,
+          lat: l.lat,
+          lon: l.lon,
+          areaAcres: l.areaAcres,
+          notes: l.notes,
+        }),
+      );
+      await insertRecordsBulk(tx, log, 'Lake', lakes, (l) => ({
+        type: 'LakeCreated',
+        aggregateType: 'lake',
+        aggregateId: l.id,
+      }));
 
       const events = j.events.map((e) =>
         Object.assign(new TournamentEvent(), {
-          ...stamp, id: id(e.id), crewId: crew.id, lakeId: id(e.lakeId), name: e.name, organiser: e.organiser, practiceDates: e.practiceDates, competitionDates: e.competitionDates,
-          ...e.rules, entryFee: e.entryFee, payout: e.payout, finalPlace: e.finalPlace, notes: e.notes,
+          ...stamp,
+          id: id(e.id),
+          crewId: crew.id,
+          lakeId: id(e.lakeId),
+          name: e.name,
+          organiser: e.organiser,
+          practiceDates: e.practiceDates,
+          competitionDates: e.competitionDates,
+          ...e.rules,
+          entryFee: e.entryFee,
+          payout: e.payout,
+          finalPlace: e.finalPlace,
+          notes: e.notes,
         }),
       );
-      const practiceDays = j.events.flatMap((e) => e.practiceDates.map((date) => Object.assign(new PracticeDay(), { crewId: crew.id, eventId: id(e.id), date })));
+      const practiceDays = j.events.flatMap((e) =>
+        e.practiceDates.map((date) => Object.assign(new PracticeDay(), { crewId: crew.id, eventId: id(e.id), date })),
+      );
       const competitionDays = j.competitionDays.map((d) =>
-        Object.assign(new CompetitionDay(), { id: id(d.id), crewId: crew.id, eventId: id(d.eventId), date: d.date, startTime: d.startLocal, checkInTime: d.checkInLocal, weatherNotes: d.weatherNotes, waterTempF: d.waterTempF, waterTempValue: d.waterTempF, waterTempUnit: 'F' }),
+        Object.assign(new CompetitionDay(), {
+          id: id(d.id),
+          crewId: crew.id,
+          eventId: id(d.eventId),
+          date: d.date,
+          startTime: d.startLocal,
+          checkInTime: d.checkInLocal,
+          weatherNotes: d.weatherNotes,
+          waterTempF: d.waterTempF,
+          waterTempValue: d.waterTempF,
+          waterTempUnit: 'F',
+        }),
       );
       // Days belong to their event's EventCreated payload, so they are inserted without events of their own.
-      await insertRecordsBulk(tx, log, 'TournamentEvent', events, (e) => ({ type: 'EventCreated', aggregateType: 'event', aggregateId: e.id }));
+      await insertRecordsBulk(tx, log, 'TournamentEvent', events, (e) => ({
+        type: 'EventCreated',
+        aggregateType: 'event',
+        aggregateId: e.id,
+      }));
       await insertRecordsBulk(tx, log, 'PracticeDay', practiceDays, null);
       await insertRecordsBulk(tx, log, 'CompetitionDay', competitionDays, null);
       // Replace the event payloads queued above with ones that carry their days, like the API's EventCreated.
       log.replacePayloads('EventCreated', (aggregateId, payload) => ({
         ...payload,
-        practiceDays: practiceDays.filter((d) => d.eventId === aggregateId).map((d) => recordState(tx, 'PracticeDay', d)),
-        competitionDays: competitionDays.filter((d) => d.eventId === aggregateId).map((d) => recordState(tx, 'CompetitionDay', d)),
+        practiceDays: practiceDays
+          .filter((d) => d.eventId === aggregateId)
+          .map((d) => recordState(tx, 'PracticeDay', d)),
+        competitionDays: competitionDays
+          .filter((d) => d.eventId === aggregateId)
+          .map((d) => recordState(tx, 'CompetitionDay', d)),
       }));
 
       const practiceDayId = new Map(practiceDays.map((d) => [`${d.eventId}|${d.date}`, d.id]));
       const finds = j.finds.map((f) =>
         Object.assign(new Find(), {
-          ...stamp, id: id(f.id), crewId: crew.id, lakeId: id(f.lakeId), eventId: idOrNull(f.eventId), practiceDayId: f.eventId && f.practiceDate ? (practiceDayId.get(`${id(f.eventId)}|${f.practiceDate}`) ?? null) : null,
-          name: f.name, markedAt: f.markedAt ? new Date(f.markedAt) : null, lat: f.lat, lon: f.lon,
-          depthFt: f.depthFt, depthValue: f.depthFt, depthUnit: f.depthFt === null ? null : 'ft', kind: f.kind, subKind: f.subKind, hardness: f.hardness,
-          vegetationDensity: f.vegetationDensity, baitSeen: f.baitSeen, fishMarked: f.fishMarked, frequencyKhz: f.frequencyKhz, foundHow: f.foundHow,
-          waterTempF: f.waterTempF, waterTempValue: f.waterTempF, waterTempUnit: f.waterTempF === null ? null : 'F', notes: f.notes, source: 'demo',
+          ...stamp,
+          id: id(f.id),
+          crewId: crew.id,
+          lakeId: id(f.lakeId),
+          eventId: idOrNull(f.eventId),
+          practiceDayId:
+            f.eventId && f.practiceDate ? (practiceDayId.get(`${id(f.eventId)}|${f.practiceDate}`) ?? null) : null,
+          name: f.name,
+          markedAt: f.markedAt ? new Date(f.markedAt) : null,
+          lat: f.lat,
+          lon: f.lon,
+          depthFt: f.depthFt,
+          depthValue: f.depthFt,
+          depthUnit: f.depthFt === null ? null : 'ft',
+          kind: f.kind,
+          subKind: f.subKind,
+          hardness: f.hardness,
+          vegetationDensity: f.vegetationDensity,
+          baitSeen: f.baitSeen,
+          fishMarked: f.fishMarked,
+          frequencyKhz: f.frequencyKhz,
+          foundHow: f.foundHow,
+          waterTempF: f.waterTempF,
+          waterTempValue: f.waterTempF,
+          waterTempUnit: f.waterTempF === null ? null : 'F',
+          notes: f.notes,
+          source: 'demo',
         }),
       );
-      await insertRecordsBulk(tx, log, 'Find', finds, (f) => ({ type: 'FindAdded', aggregateType: 'find', aggregateId: f.id }));
+      await insertRecordsBulk(tx, log, 'Find', finds, (f) => ({
+        type: 'FindAdded',
+        aggregateType: 'find',
+        aggregateId: f.id,
+      }));
 
       const dayId = new Map(competitionDays.map((d) => [`${d.eventId}|${d.date}`, d.id]));
       const catches = j.catches.map((c) => {
         const row = Object.assign(new Catch(), {
-          ...stamp, id: id(c.id), crewId: crew.id, eventId: id(c.eventId), competitionDayId: dayId.get(`${id(c.eventId)}|${c.competitionDate}`)!, caughtAt: new Date(c.caughtAt),
-          findId: idOrNull(c.findId), attributionDistanceM: c.attributionDistanceM, lat: c.lat, lon: c.lon, species: c.species,
-          lengthIn: c.lengthIn, lengthValue: c.lengthIn, lengthUnit: c.lengthIn === null ? null : 'in',
-          weightLb: c.weightLb, weightValue: c.weightLb, weightUnit: 'lb', weightOunces: null, lure: c.lure, technique: c.technique,
-          depthFt: c.depthFt, depthValue: c.depthFt, depthUnit: c.depthFt === null ? null : 'ft',
-          waterTempF: c.waterTempF, waterTempValue: c.waterTempF, waterTempUnit: c.waterTempF === null ? null : 'F', fate: c.fate, notes: c.notes ?? '',
+          ...stamp,
+          id: id(c.id),
+          crewId: crew.id,
+          eventId: id(c.eventId),
+          competitionDayId: dayId.get(`${id(c.eventId)}|${c.competitionDate}`)!,
+          caughtAt: new Date(c.caughtAt),
+          findId: idOrNull(c.findId),
+          attributionDistanceM: c.attributionDistanceM,
+          lat: c.lat,
+          lon: c.lon,
+          species: c.species,
+          lengthIn: c.lengthIn,
+          lengthValue: c.lengthIn,
+          lengthUnit: c.lengthIn === null ? null : 'in',
+          weightLb: c.weightLb,
+          weightValue: c.weightLb,
+          weightUnit: 'lb',
+          weightOunces: null,
+          lure: c.lure,
+          technique: c.technique,
+          depthFt: c.depthFt,
+          depthValue: c.depthFt,
+          depthUnit: c.depthFt === null ? null : 'ft',
+          waterTempF: c.waterTempF,
+          waterTempValue: c.waterTempF,
+          waterTempUnit: c.waterTempF === null ? null : 'F',
+          fate: c.fate,
+          notes: c.notes ?? '',
         });
         row.weightFlagged = flagWeight(row);
         return row;
       });
-      await insertRecordsBulk(tx, log, 'Catch', catches, (c) => ({ type: 'CatchLogged', aggregateType: 'catch', aggregateId: c.id }));
+      await insertRecordsBulk(tx, log, 'Catch', catches, (c) => ({
+        type: 'CatchLogged',
+        aggregateType: 'catch',
+        aggregateId: c.id,
+      }));
 
       const weighIns = j.weighIns.map((w) =>
-        Object.assign(new WeighIn(), { id: id(w.id), crewId: crew.id, competitionDayId: dayId.get(`${id(w.eventId)}|${w.competitionDate}`)!, grossLb: w.grossLb, penaltyLb: w.penaltiesLb, officialLb: w.officialLb, dayPlace: w.dayPlace, lateMinutes: w.lateMinutes, updatedAt: now }),
+        Object.assign(new WeighIn(), {
+          id: id(w.id),
+          crewId: crew.id,
+          competitionDayId: dayId.get(`${id(w.eventId)}|${w.competitionDate}`)!,
+          grossLb: w.grossLb,
+          penaltyLb: w.penaltiesLb,
+          officialLb: w.officialLb,
+          dayPlace: w.dayPlace,
+          lateMinutes: w.lateMinutes,
+          updatedAt: now,
+        }),
       );
-      await insertRecordsBulk(tx, log, 'WeighIn', weighIns, (w) => ({ type: 'WeighInRecorded', aggregateType: 'weighIn', aggregateId: w.id }));
+      await insertRecordsBulk(tx, log, 'WeighIn', weighIns, (w) => ({
+        type: 'WeighInRecorded',
+        aggregateType: 'weighIn',
+        aggregateId: w.id,
+      }));
       log.replacePayloads('WeighInRecorded', (aggregateId, payload) => {
         const w = weighIns.find((x) => x.id === aggregateId)!;
         const day = competitionDays.find((d) => d.id === w.competitionDayId)!;

@@ -17,7 +17,10 @@ import { TournamentEvent } from '../tournament-event.entity';
 import { UpdateCompetitionDayCommand, UpdatePracticeDayCommand } from './event.commands';
 import type { UpdatePracticeDayDto } from '../dto/day.dto';
 
-function applyWaterTemp(day: PracticeDay | CompetitionDay, input: Pick<UpdatePracticeDayDto, 'waterTemp' | 'waterTempF'>): void {
+function applyWaterTemp(
+  day: PracticeDay | CompetitionDay,
+  input: Pick<UpdatePracticeDayDto, 'waterTemp' | 'waterTempF'>,
+): void {
   const problems = new FieldProblems();
   try {
     const temp = resolveTemperature(input.waterTempF, input.waterTemp);
@@ -45,12 +48,21 @@ async function checkDayWindow(tx: EntityManager, crewId: string, day: Competitio
   }
   const event = await tx.findOneOrFail(TournamentEvent, { id: day.eventId, crewId });
   const lake = await tx.findOneOrFail(Lake, { id: event.lakeId, crewId });
-  const catches = await tx.find(Catch, { crewId, competitionDayId: day.id }, { fields: ['id', 'caughtAt'], orderBy: { caughtAt: 'asc' } });
-  const outside = catches.filter((c) => catchTimeProblem(c.caughtAt, day, lake.timeZone) !== null).map((c) => DateTime.fromJSDate(c.caughtAt, { zone: lake.timeZone }).toFormat('HH:mm'));
+  const catches = await tx.find(
+    Catch,
+    { crewId, competitionDayId: day.id },
+    { fields: ['id', 'caughtAt'], orderBy: { caughtAt: 'asc' } },
+  );
+  const outside = catches
+    .filter((c) => catchTimeProblem(c.caughtAt, day, lake.timeZone) !== null)
+    .map((c) => DateTime.fromJSDate(c.caughtAt, { zone: lake.timeZone }).toFormat('HH:mm'));
   if (outside.length) {
     const listed = `${outside.slice(0, 5).join(', ')}${outside.length > 5 ? ', …' : ''}`;
     const field = day.startTime && outside[0]! < day.startTime ? 'startTime' : 'checkInTime';
-    problems.add(field, `${outside.length} catch(es) logged on this day fall outside the new window (at ${listed}, lake time); change their times first.`);
+    problems.add(
+      field,
+      `${outside.length} catch(es) logged on this day fall outside the new window (at ${listed}, lake time); change their times first.`,
+    );
   }
   problems.throwIfAny();
 }
@@ -67,7 +79,12 @@ export class UpdatePracticeDayHandler implements ICommandHandler<UpdatePracticeD
       if (input.notes !== undefined) day.notes = input.notes;
       applyWaterTemp(day, input);
       await tx.flush();
-      log.record({ type: 'PracticeDayUpdated', aggregateType: 'practiceDay', aggregateId: day.id, payload: recordState(tx, 'PracticeDay', day) });
+      log.record({
+        type: 'PracticeDayUpdated',
+        aggregateType: 'practiceDay',
+        aggregateId: day.id,
+        payload: recordState(tx, 'PracticeDay', day),
+      });
       return practiceDayView(day);
     });
   }
@@ -84,11 +101,17 @@ export class UpdateCompetitionDayHandler implements ICommandHandler<UpdateCompet
       assertVersion('competition day', input.version, day.version);
       if (input.startTime !== undefined) day.startTime = input.startTime;
       if (input.checkInTime !== undefined) day.checkInTime = input.checkInTime;
-      if (input.startTime !== undefined || input.checkInTime !== undefined) await checkDayWindow(tx, access.crewId, day);
+      if (input.startTime !== undefined || input.checkInTime !== undefined)
+        await checkDayWindow(tx, access.crewId, day);
       if (input.weatherNotes !== undefined) day.weatherNotes = input.weatherNotes;
       applyWaterTemp(day, input);
       await tx.flush();
-      log.record({ type: 'CompetitionDayUpdated', aggregateType: 'competitionDay', aggregateId: day.id, payload: recordState(tx, 'CompetitionDay', day) });
+      log.record({
+        type: 'CompetitionDayUpdated',
+        aggregateType: 'competitionDay',
+        aggregateId: day.id,
+        payload: recordState(tx, 'CompetitionDay', day),
+      });
       return competitionDayView(day);
     });
   }

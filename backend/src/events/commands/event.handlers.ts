@@ -5,7 +5,14 @@ import { Catch } from '../../catches/catch.entity';
 import { Find } from '../../finds/find.entity';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
-import { assertVersion, FieldProblems, inUse, JournalErrorCode, recordNotFound, unknownReference } from '../../journal/journal-errors';
+import {
+  assertVersion,
+  FieldProblems,
+  inUse,
+  JournalErrorCode,
+  recordNotFound,
+  unknownReference,
+} from '../../journal/journal-errors';
 import { Lake } from '../../lakes/lake.entity';
 import { WeighIn } from '../../weigh-ins/weigh-in.entity';
 import { CompetitionDay } from '../competition-day.entity';
@@ -21,7 +28,8 @@ function checkDates(practice: string[], competition: string[]): void {
   const problems = new FieldProblems();
   if (competition.length === 0) problems.add('competitionDates', 'An event needs at least one competition day.');
   const both = practice.filter((d) => competition.includes(d));
-  if (both.length) problems.add('practiceDates', `A date cannot be both a practice and a competition day: ${both.join(', ')}.`);
+  if (both.length)
+    problems.add('practiceDates', `A date cannot be both a practice and a competition day: ${both.join(', ')}.`);
   problems.throwIfAny();
 }
 
@@ -75,7 +83,12 @@ export class CreateEventHandler implements ICommandHandler<CreateEventCommand> {
       for (const date of practice) tx.create(PracticeDay, { crewId: access.crewId, eventId: event.id, date });
       for (const date of competition) tx.create(CompetitionDay, { crewId: access.crewId, eventId: event.id, date });
       await tx.flush();
-      log.record({ type: 'EventCreated', aggregateType: 'event', aggregateId: event.id, payload: await eventState(tx, event) });
+      log.record({
+        type: 'EventCreated',
+        aggregateType: 'event',
+        aggregateId: event.id,
+        payload: await eventState(tx, event),
+      });
       return eventView(event);
     });
   }
@@ -94,8 +107,12 @@ export class UpdateEventHandler implements ICommandHandler<UpdateEventCommand> {
       const competition = sorted(input.competitionDates ?? event.competitionDates);
       checkDates(practice, competition);
 
-      await reconcileDays(tx, access.crewId, event, PracticeDay, practice, (dayIds) => tx.count(Find, { practiceDayId: { $in: dayIds } }));
-      await reconcileDays(tx, access.crewId, event, CompetitionDay, competition, (dayIds) => tx.count(Catch, { competitionDayId: { $in: dayIds } }));
+      await reconcileDays(tx, access.crewId, event, PracticeDay, practice, (dayIds) =>
+        tx.count(Find, { practiceDayId: { $in: dayIds } }),
+      );
+      await reconcileDays(tx, access.crewId, event, CompetitionDay, competition, (dayIds) =>
+        tx.count(Catch, { competitionDayId: { $in: dayIds } }),
+      );
 
       if (input.name !== undefined) event.name = input.name;
       if (input.organiser !== undefined) event.organiser = input.organiser;
@@ -109,7 +126,12 @@ export class UpdateEventHandler implements ICommandHandler<UpdateEventCommand> {
       // A change to the days alone still bumps the event's version, so the journal sees one new state.
       event.updatedAt = new Date();
       await tx.flush();
-      log.record({ type: 'EventUpdated', aggregateType: 'event', aggregateId: event.id, payload: await eventState(tx, event) });
+      log.record({
+        type: 'EventUpdated',
+        aggregateType: 'event',
+        aggregateId: event.id,
+        payload: await eventState(tx, event),
+      });
       return eventView(event);
     });
   }
@@ -134,10 +156,13 @@ async function reconcileDays(
         JournalErrorCode.dayInUse,
       );
     }
-    if (entity === CompetitionDay) await tx.nativeDelete(WeighIn, { competitionDayId: { $in: dropped.map((d) => d.id) } });
+    if (entity === CompetitionDay)
+      await tx.nativeDelete(WeighIn, { competitionDayId: { $in: dropped.map((d) => d.id) } });
     for (const d of dropped) tx.remove(d);
   }
-  for (const date of dates) if (!existing.some((d) => d.date === date)) tx.create(entity as typeof PracticeDay, { crewId, eventId: event.id, date });
+  for (const date of dates)
+    if (!existing.some((d) => d.date === date))
+      tx.create(entity as typeof PracticeDay, { crewId, eventId: event.id, date });
 }
 
 @CommandHandler(DeleteEventCommand)
@@ -150,7 +175,8 @@ export class DeleteEventHandler implements ICommandHandler<DeleteEventCommand> {
       if (!event) throw recordNotFound('event');
       const finds = await tx.count(Find, { crewId: access.crewId, eventId });
       const catches = await tx.count(Catch, { crewId: access.crewId, eventId });
-      if (finds || catches) throw inUse(`The event still has ${finds} find(s) and ${catches} catch(es); delete those first.`);
+      if (finds || catches)
+        throw inUse(`The event still has ${finds} find(s) and ${catches} catch(es); delete those first.`);
       const dayIds = (await tx.find(CompetitionDay, { eventId })).map((d) => d.id);
       if (dayIds.length) await tx.nativeDelete(WeighIn, { competitionDayId: { $in: dayIds } });
       await tx.nativeDelete(PracticeDay, { eventId });

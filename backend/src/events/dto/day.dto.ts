@@ -1,7 +1,17 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import type { UpdateCompetitionDayRequest, UpdatePracticeDayRequest } from '@shoalbook/shared';
-import { IsInt, IsNumber, IsObject, IsOptional, IsString, Matches, MaxLength, Min, ValidateNested } from 'class-validator';
+import {
+  IsInt,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  Matches,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { IsOmittable } from '../../common/dto/omittable';
 
@@ -10,8 +20,14 @@ const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 export class UpdatePracticeDayDto implements UpdatePracticeDayRequest {
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
-  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
+    number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredTemperatureDto)
+  waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty() @IsInt() @Min(1) version: number;
 }
 
@@ -25,7 +41,13 @@ export class UpdateCompetitionDayDto implements UpdateCompetitionDayRequest {
   @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
   checkInTime?: string | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) weatherNotes?: string;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
-  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredTemperatureDto) waterTemp?: EnteredTemperatureDto | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
+    number | null;
+  @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredTemperatureDto)
+  waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty() @IsInt() @Min(1) version: number;
 }

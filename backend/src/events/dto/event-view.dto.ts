@@ -44,7 +44,8 @@ export class CompetitionDayViewDto implements CompetitionDayView {
   @ApiProperty({ format: 'uuid' }) id: string;
   @ApiProperty({ format: 'uuid' }) eventId: string;
   @ApiProperty({ example: '2024-04-12' }) date: string;
-  @ApiProperty({ type: String, nullable: true, example: '06:30', description: 'lake-local HH:MM' }) startTime: string | null;
+  @ApiProperty({ type: String, nullable: true, example: '06:30', description: 'lake-local HH:MM' }) startTime:
+    string | null;
   @ApiProperty({ type: String, nullable: true, example: '15:00' }) checkInTime: string | null;
   @ApiProperty() weatherNotes: string;
   @ApiProperty({ type: Number, nullable: true, description: '°F' }) waterTempF: number | null;

@@ -28,7 +28,11 @@ const finite = { allowNaN: false, allowInfinity: false };
 @ValidatorConstraint({ name: 'calendarDates' })
 export class CalendarDatesConstraint implements ValidatorConstraintInterface {
   validate(value: unknown): boolean {
-    return Array.isArray(value) && value.every((d) => typeof d === 'string' && isCalendarDate(d)) && new Set(value).size === value.length;
+    return (
+      Array.isArray(value) &&
+      value.every((d) => typeof d === 'string' && isCalendarDate(d)) &&
+      new Set(value).size === value.length
+    );
   }
   defaultMessage(): string {
     return 'Give distinct calendar dates written YYYY-MM-DD.';
@@ -37,7 +41,12 @@ export class CalendarDatesConstraint implements ValidatorConstraintInterface {
 
 /** The event's rules; every field optional on input, defaults are common practice (5 fish, 12 in). */
 export class EventRulesDto implements Partial<EventRules> {
-  @ApiPropertyOptional({ default: 5, minimum: 1, maximum: 10 }) @IsOmittable() @IsInt() @Min(1) @Max(10) fishPerDay?: number;
+  @ApiPropertyOptional({ default: 5, minimum: 1, maximum: 10 })
+  @IsOmittable()
+  @IsInt()
+  @Min(1)
+  @Max(10)
+  fishPerDay?: number;
   @ApiPropertyOptional({ default: 12, nullable: true, description: 'inches; null = no minimum' })
   @IsOptional()
   @IsNumber(finite)
@@ -46,7 +55,12 @@ export class EventRulesDto implements Partial<EventRules> {
   minLengthIn?: number | null;
   @ApiPropertyOptional({ default: 0.25 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) deadFishPenaltyLb?: number;
   @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) shortFishPenaltyLb?: number;
-  @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) latePenaltyLbPerMinute?: number;
+  @ApiPropertyOptional({ default: 1 })
+  @IsOmittable()
+  @IsNumber(finite)
+  @Min(0)
+  @Max(20)
+  latePenaltyLbPerMinute?: number;
 }
 
 export class CreateEventDto implements CreateEventRequest {
@@ -64,15 +78,24 @@ export class CreateEventDto implements CreateEventRequest {
   @ArrayMaxSize(7)
   @Validate(CalendarDatesConstraint)
   competitionDates: string[];
-  @ApiPropertyOptional({ type: EventRulesDto }) @IsOmittable() @IsObject() @ValidateNested() @Type(() => EventRulesDto) rules?: EventRulesDto;
-  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?: number | null;
-  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?: number | null;
+  @ApiPropertyOptional({ type: EventRulesDto })
+  @IsOmittable()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EventRulesDto)
+  rules?: EventRulesDto;
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?:
+    number | null;
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?:
+    number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
-export class UpdateEventDto extends PartialType(OmitType(CreateEventDto, ['lakeId'] as const), { skipNullProperties: false }) {
+export class UpdateEventDto extends PartialType(OmitType(CreateEventDto, ['lakeId'] as const), {
+  skipNullProperties: false,
+}) {
   @ApiProperty({ description: 'The version the change is based on' }) @IsInt() @Min(1) version: number;
 }
 

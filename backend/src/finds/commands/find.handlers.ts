@@ -21,10 +21,23 @@ export class AddFindHandler implements ICommandHandler<AddFindCommand> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
       const lake = await tx.findOne(Lake, { id: input.lakeId, crewId: access.crewId });
       if (!lake) throw unknownReference('lakeId', 'lake');
-      const find = tx.create(Find, { crewId: access.crewId, lakeId: lake.id, name: input.name, lat: input.lat, lon: input.lon, kind: input.kind, source: 'form' });
+      const find = tx.create(Find, {
+        crewId: access.crewId,
+        lakeId: lake.id,
+        name: input.name,
+        lat: input.lat,
+        lon: input.lon,
+        kind: input.kind,
+        source: 'form',
+      });
       await applyFindInput(tx, access.crewId, lake, find, input);
       await tx.flush();
-      log.record({ type: 'FindAdded', aggregateType: 'find', aggregateId: find.id, payload: recordState(tx, 'Find', find) });
+      log.record({
+        type: 'FindAdded',
+        aggregateType: 'find',
+        aggregateId: find.id,
+        payload: recordState(tx, 'Find', find),
+      });
       return (await this.finds.views(access, [find], tx))[0]!;
     });
   }
@@ -45,7 +58,12 @@ export class UpdateFindHandler implements ICommandHandler<UpdateFindCommand> {
       const lake = await tx.findOneOrFail(Lake, { id: find.lakeId, crewId: access.crewId });
       await applyFindInput(tx, access.crewId, lake, find, input);
       await tx.flush();
-      log.record({ type: 'FindUpdated', aggregateType: 'find', aggregateId: find.id, payload: recordState(tx, 'Find', find) });
+      log.record({
+        type: 'FindUpdated',
+        aggregateType: 'find',
+        aggregateId: find.id,
+        payload: recordState(tx, 'Find', find),
+      });
       return (await this.finds.views(access, [find], tx))[0]!;
     });
   }
@@ -65,7 +83,13 @@ export class DeleteFindHandler implements ICommandHandler<DeleteFindCommand> {
         c.attributionDistanceM = null;
       }
       await tx.flush();
-      for (const c of catches) log.record({ type: 'CatchUpdated', aggregateType: 'catch', aggregateId: c.id, payload: recordState(tx, 'Catch', c) });
+      for (const c of catches)
+        log.record({
+          type: 'CatchUpdated',
+          aggregateType: 'catch',
+          aggregateId: c.id,
+          payload: recordState(tx, 'Catch', c),
+        });
       tx.remove(find);
       log.record({ type: 'FindDeleted', aggregateType: 'find', aggregateId: find.id, payload: { id: find.id } });
     });

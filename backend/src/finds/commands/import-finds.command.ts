@@ -7,7 +7,13 @@ export class ImportFindsCommand extends Command<FindImportResult> {
   constructor(
     readonly access: CrewAccess,
     readonly file: Buffer,
-    readonly options: { lakeId: string; eventId: string | null; kind: FindKind; subKind: string; skipDuplicates: boolean },
+    readonly options: {
+      lakeId: string;
+      eventId: string | null;
+      kind: FindKind;
+      subKind: string;
+      skipDuplicates: boolean;
+    },
   ) {
     super();
   }

@@ -23,7 +23,9 @@ export class ImportFindsHandler implements ICommandHandler<ImportFindsCommand> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
       const lake = await tx.findOne(Lake, { id: options.lakeId, crewId: access.crewId });
       if (!lake) throw unknownReference('lakeId', 'lake');
-      const event = options.eventId ? await tx.findOne(TournamentEvent, { id: options.eventId, crewId: access.crewId, lakeId: lake.id }) : null;
+      const event = options.eventId
+        ? await tx.findOne(TournamentEvent, { id: options.eventId, crewId: access.crewId, lakeId: lake.id })
+        : null;
       if (options.eventId && !event) throw unknownReference('eventId', 'event on this lake');
       const preview = await previewFindImport(tx, access.crewId, lake, waypoints);
       const { imported, skipped } = await commitFindImport(tx, log, access.crewId, lake, waypoints, preview, {

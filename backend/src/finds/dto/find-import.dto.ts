@@ -11,7 +11,9 @@ export class FindImportOptionsDto {
   @ApiPropertyOptional({ default: '' }) @IsOptional() @IsString() @MaxLength(40) subKind?: string;
   @ApiPropertyOptional({ default: true })
   @IsOptional()
-  @Transform(({ value }: { value: unknown }) => (value === 'true' || value === '1' ? true : value === 'false' || value === '0' ? false : value))
+  @Transform(({ value }: { value: unknown }) =>
+    value === 'true' || value === '1' ? true : value === 'false' || value === '0' ? false : value,
+  )
   @IsBoolean()
   skipDuplicates?: boolean;
 }

@@ -1,5 +1,16 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { FIND_KINDS, FIND_SOURCES, FOUND_HOW, VEGETATION_DENSITIES, type FindKind, type FindSource, type FindView, type FoundHow, type HardnessGrade, type VegetationDensity } from '@shoalbook/shared';
+import {
+  FIND_KINDS,
+  FIND_SOURCES,
+  FOUND_HOW,
+  VEGETATION_DENSITIES,
+  type FindKind,
+  type FindSource,
+  type FindView,
+  type FoundHow,
+  type HardnessGrade,
+  type VegetationDensity,
+} from '@shoalbook/shared';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { SkyContextDto } from '../../sky/dto/sky-view.dto';
 
@@ -34,6 +45,7 @@ export class FindViewDto implements FindView {
   @ApiProperty({ type: String, format: 'uuid', nullable: true }) photoId: string | null;
   @ApiProperty({ enum: FIND_SOURCES }) source: FindSource;
   @ApiProperty({ type: FindEnteredViewDto }) entered: FindEnteredViewDto;
-  @ApiPropertyOptional({ type: SkyContextDto, nullable: true, description: 'null when markedAt is unknown' }) sky: SkyContextDto | null;
+  @ApiPropertyOptional({ type: SkyContextDto, nullable: true, description: 'null when markedAt is unknown' })
+  sky: SkyContextDto | null;
   @ApiProperty() version: number;
 }

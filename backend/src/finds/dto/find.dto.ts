@@ -1,7 +1,31 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { FIND_KINDS, FOUND_HOW, VEGETATION_DENSITIES, type AddFindRequest, type FindKind, type FoundHow, type HardnessGrade, type VegetationDensity } from '@shoalbook/shared';
-import { IsBoolean, IsIn, IsInt, IsNotEmpty, IsNumber, IsObject, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import {
+  FIND_KINDS,
+  FOUND_HOW,
+  VEGETATION_DENSITIES,
+  type AddFindRequest,
+  type FindKind,
+  type FoundHow,
+  type HardnessGrade,
+  type VegetationDensity,
+} from '@shoalbook/shared';
+import {
+  IsBoolean,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
@@ -25,19 +49,47 @@ export class AddFindDto implements AddFindRequest {
   @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
   @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
   @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
-  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true }) @IsOptional() @IsObject() @ValidateNested() @Type(() => EnteredDepthDto) depth?: EnteredDepthDto | null;
+  @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => EnteredDepthDto)
+  depth?: EnteredDepthDto | null;
   @ApiProperty({ enum: FIND_KINDS }) @IsIn([...FIND_KINDS]) kind: FindKind;
-  @ApiPropertyOptional({ description: 'one of the sub-kinds of the kind (FIND_SUB_KINDS), or empty' }) @IsOptional() @IsString() @MaxLength(40) subKind?: string;
-  @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 5 }) @IsOptional() @IsInt() @Min(1) @Max(5) hardness?: HardnessGrade | null;
-  @ApiPropertyOptional({ enum: VEGETATION_DENSITIES, nullable: true }) @IsOptional() @IsIn([...VEGETATION_DENSITIES]) vegetationDensity?: VegetationDensity | null;
+  @ApiPropertyOptional({ description: 'one of the sub-kinds of the kind (FIND_SUB_KINDS), or empty' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(40)
+  subKind?: string;
+  @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 5 })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(5)
+  hardness?: HardnessGrade | null;
+  @ApiPropertyOptional({ enum: VEGETATION_DENSITIES, nullable: true })
+  @IsOptional()
+  @IsIn([...VEGETATION_DENSITIES])
+  vegetationDensity?: VegetationDensity | null;
   @ApiPropertyOptional() @IsOptional() @IsBoolean() baitSeen?: boolean;
-  @ApiPropertyOptional({ nullable: true, minimum: 0 }) @IsOptional() @IsInt() @Min(0) @Max(10_000) fishMarked?: number | null;
-  @ApiPropertyOptional({ nullable: true, description: 'kHz' }) @IsOptional() @IsNumber(finite) @Min(10) @Max(3000) frequencyKhz?: number | null;
-  @ApiPropertyOptional({ enum: FOUND_HOW, nullable: true }) @IsOptional() @IsIn([...FOUND_HOW]) foundHow?: FoundHow | null;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?: number | null;
+  @ApiPropertyOptional({ nullable: true, minimum: 0 }) @IsOptional() @IsInt() @Min(0) @Max(10_000) fishMarked?:
+    number | null;
+  @ApiPropertyOptional({ nullable: true, description: 'kHz' })
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(10)
+  @Max(3000)
+  frequencyKhz?: number | null;
+  @ApiPropertyOptional({ enum: FOUND_HOW, nullable: true })
+  @IsOptional()
+  @IsIn([...FOUND_HOW])
+  foundHow?: FoundHow | null;
+  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
+    number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
-  @IsObject() @ValidateNested()
+  @IsObject()
+  @ValidateNested()
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
@@ -45,7 +97,9 @@ export class AddFindDto implements AddFindRequest {
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
-export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const), { skipNullProperties: false }) {
+export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const), {
+  skipNullProperties: false,
+}) {
   @ApiProperty() @IsInt() @Min(1) version: number;
 }
 

@@ -1,5 +1,14 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import type { CatchImportPreview, CatchImportResult, CatchImportRow, DuplicateOf, FindImportPreview, FindImportResult, FindImportRow, ImportRowError } from '@shoalbook/shared';
+import type {
+  CatchImportPreview,
+  CatchImportResult,
+  CatchImportRow,
+  DuplicateOf,
+  FindImportPreview,
+  FindImportResult,
+  FindImportRow,
+  ImportRowError,
+} from '@shoalbook/shared';
 
 const nullableNumber = { type: Number, nullable: true } as const;
 

@@ -27,7 +27,12 @@ export class CreateLakeHandler implements ICommandHandler<CreateLakeCommand> {
         notes: input.notes ?? '',
       });
       await tx.flush();
-      log.record({ type: 'LakeCreated', aggregateType: 'lake', aggregateId: lake.id, payload: recordState(tx, 'Lake', lake) });
+      log.record({
+        type: 'LakeCreated',
+        aggregateType: 'lake',
+        aggregateId: lake.id,
+        payload: recordState(tx, 'Lake', lake),
+      });
       return lakeView(lake);
     });
   }
@@ -49,7 +54,12 @@ export class UpdateLakeHandler implements ICommandHandler<UpdateLakeCommand> {
         else (lake as unknown as Record<string, unknown>)[key] = value;
       }
       await tx.flush();
-      log.record({ type: 'LakeUpdated', aggregateType: 'lake', aggregateId: lake.id, payload: recordState(tx, 'Lake', lake) });
+      log.record({
+        type: 'LakeUpdated',
+        aggregateType: 'lake',
+        aggregateId: lake.id,
+        payload: recordState(tx, 'Lake', lake),
+      });
       return lakeView(lake);
     });
   }
@@ -61,11 +71,16 @@ export class DeleteLakeHandler implements ICommandHandler<DeleteLakeCommand> {
 
   async execute({ access, lakeId }: DeleteLakeCommand): Promise<void> {
     await this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
-      const lake = await tx.findOne(Lake, { id: lakeId, crewId: access.crewId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
+      const lake = await tx.findOne(
+        Lake,
+        { id: lakeId, crewId: access.crewId },
+        { lockMode: LockMode.PESSIMISTIC_WRITE },
+      );
       if (!lake) throw recordNotFound('lake');
       const events = await tx.count(TournamentEvent, { crewId: access.crewId, lakeId });
       const finds = await tx.count(Find, { crewId: access.crewId, lakeId });
-      if (events || finds) throw inUse(`The lake still has ${events} event(s) and ${finds} find(s); delete those first.`);
+      if (events || finds)
+        throw inUse(`The lake still has ${events} event(s) and ${finds} find(s); delete those first.`);
       tx.remove(lake);
       log.record({ type: 'LakeDeleted', aggregateType: 'lake', aggregateId: lake.id, payload: { id: lake.id } });
     });

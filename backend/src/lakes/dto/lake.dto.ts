@@ -1,6 +1,18 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import type { CreateLakeRequest, LakeView } from '@shoalbook/shared';
-import { IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, Max, MaxLength, Min, Validate, ValidatorConstraint, type ValidatorConstraintInterface } from 'class-validator';
+import {
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsOptional,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  Validate,
+  ValidatorConstraint,
+  type ValidatorConstraintInterface,
+} from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { isIanaZone } from '../../journal/local-time';
 
@@ -22,7 +34,12 @@ export class CreateLakeDto implements CreateLakeRequest {
   @ApiProperty({ example: 'America/Chicago' }) @IsString() @Validate(IanaZoneConstraint) timeZone: string;
   @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
   @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
-  @ApiPropertyOptional({ nullable: true, minimum: 0 }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) areaAcres?: number | null;
+  @ApiPropertyOptional({ nullable: true, minimum: 0 })
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0)
+  @Max(10_000_000)
+  areaAcres?: number | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
 }
 

@@ -9,7 +9,13 @@ const ROLE_WORDS: Record<CrewRole, string> = {
 };
 
 /** The e-mail that carries a crew invite link. */
-export function inviteMail(input: { crewName: string; inviterName: string; role: CrewRole; link: string; expiresAt: Date }): MailMessage {
+export function inviteMail(input: {
+  crewName: string;
+  inviterName: string;
+  role: CrewRole;
+  link: string;
+  expiresAt: Date;
+}): MailMessage {
   const until = input.expiresAt.toUTCString();
   const text = [
     `${input.inviterName} invites you to join the crew "${input.crewName}" on Shoalbook as ${ROLE_WORDS[input.role]}.`,

@@ -26,7 +26,10 @@ export class UploadPhotoHandler implements ICommandHandler<UploadPhotoCommand> {
     try {
       processed = await processPhoto(bytes);
     } catch (e) {
-      if (e instanceof PhotoRejected) throw new ApiException(HttpStatus.BAD_REQUEST, e.message, JournalErrorCode.wrongFileType, { file: [e.message] });
+      if (e instanceof PhotoRejected)
+        throw new ApiException(HttpStatus.BAD_REQUEST, e.message, JournalErrorCode.wrongFileType, {
+          file: [e.message],
+        });
       throw e;
     }
     const key = await this.storage.put(processed.bytes);

@@ -28,11 +28,20 @@ export class SendRecapEmailHandler implements ICommandHandler<SendRecapEmailComm
     if (!wanted.length) throw fieldError('userIds', 'Choose at least one crew member to send the recap to.');
     const recap = await this.queries.execute(new GetEventRecapQuery(access.crewId, eventId));
     if (!recap) throw new ApiException(HttpStatus.NOT_FOUND, 'No such event in this crew.', ErrorCode.notFound);
-    const members = await this.em.find(Membership, { crew: access.crewId, user: { $in: wanted } }, { populate: ['user'] });
+    const members = await this.em.find(
+      Membership,
+      { crew: access.crewId, user: { $in: wanted } },
+      { populate: ['user'] },
+    );
     if (members.length !== wanted.length) throw fieldError('userIds', 'The recap goes only to members of this crew.');
     const sender = await this.em.findOne(User, { id: access.userId });
     const link = `${this.config.appUrl}/crews/${access.crewId}/reports/events/${eventId}`;
-    const message = recapMail({ crewName: access.crew.name, senderName: sender?.displayName ?? 'A crew member', recap, link });
+    const message = recapMail({
+      crewName: access.crew.name,
+      senderName: sender?.displayName ?? 'A crew member',
+      recap,
+      link,
+    });
     let sent = 0;
     for (const m of members) {
       try {
@@ -42,7 +51,12 @@ export class SendRecapEmailHandler implements ICommandHandler<SendRecapEmailComm
         this.logger.error(`recap to a member failed: ${e instanceof Error ? e.message : String(e)}`);
       }
     }
-    if (sent === 0) throw new ApiException(HttpStatus.BAD_GATEWAY, 'The recap could not be sent; try again later.', ErrorCode.mailFailed);
+    if (sent === 0)
+      throw new ApiException(
+        HttpStatus.BAD_GATEWAY,
+        'The recap could not be sent; try again later.',
+        ErrorCode.mailFailed,
+      );
     return { sent };
   }
 }

@@ -1,5 +1,12 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { FIND_KINDS, FIND_OUTCOMES, type EventFindsView, type FindKind, type FindOutcome, type PaidOffFindView } from '@shoalbook/shared';
+import {
+  FIND_KINDS,
+  FIND_OUTCOMES,
+  type EventFindsView,
+  type FindKind,
+  type FindOutcome,
+  type PaidOffFindView,
+} from '@shoalbook/shared';
 import { RateDto } from './rate-view.dto';
 
 const nullableNumber = { type: Number, nullable: true } as const;
@@ -12,7 +19,8 @@ export class PaidOffFindViewDto implements PaidOffFindView {
   @ApiProperty({ ...nullableNumber, description: 'feet' }) depthFt: number | null;
   @ApiProperty({ type: 'integer', nullable: true, minimum: 1, maximum: 5 }) hardness: number | null;
   @ApiProperty({ ...nullableNumber, description: '°F' }) waterTempF: number | null;
-  @ApiProperty({ description: 'marked in this event’s practice (false: an older find that produced here)' }) practiced: boolean;
+  @ApiProperty({ description: 'marked in this event’s practice (false: an older find that produced here)' })
+  practiced: boolean;
   @ApiProperty() fished: boolean;
   @ApiProperty({ type: 'integer', minimum: 0 }) fishCount: number;
   @ApiProperty({ type: 'integer', minimum: 0 }) weighedCount: number;

@@ -1,5 +1,15 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { FATES, FIND_KINDS, SPECIES, type EventRecapView, type Fate, type FindKind, type RecapDay, type ReportFish, type Species } from '@shoalbook/shared';
+import {
+  FATES,
+  FIND_KINDS,
+  SPECIES,
+  type EventRecapView,
+  type Fate,
+  type FindKind,
+  type RecapDay,
+  type ReportFish,
+  type Species,
+} from '@shoalbook/shared';
 import { EventRulesViewDto } from '../../events/dto/event-view.dto';
 import { RateDto } from './rate-view.dto';
 
@@ -35,12 +45,14 @@ export class RecapOfficialDto implements NonNullable<RecapDay['official']> {
 export class RecapDayDto implements RecapDay {
   @ApiProperty({ format: 'uuid' }) competitionDayId: string;
   @ApiProperty(date) date: string;
-  @ApiProperty({ type: [ReportFishDto], description: 'the bag under the event’s rules, heaviest first' }) counted: ReportFishDto[];
+  @ApiProperty({ type: [ReportFishDto], description: 'the bag under the event’s rules, heaviest first' })
+  counted: ReportFishDto[];
   @ApiProperty({ type: [ReportFishDto] }) culled: ReportFishDto[];
   @ApiProperty({ description: 'lb' }) grossLb: number;
   @ApiProperty({ description: 'lb' }) penaltyLb: number;
   @ApiProperty({ description: 'lb' }) netLb: number;
-  @ApiProperty({ type: RecapOfficialDto, nullable: true, description: 'the organiser’s figures, when recorded' }) official: RecapOfficialDto | null;
+  @ApiProperty({ type: RecapOfficialDto, nullable: true, description: 'the organiser’s figures, when recorded' })
+  official: RecapOfficialDto | null;
   @ApiProperty({ type: 'integer', nullable: true }) dayPlace: number | null;
 }
 
@@ -66,7 +78,8 @@ export class RecapEventDto implements Omit<Recap['event'], 'rules'> {
 
 export class RecapTotalsDto implements RecapTotals {
   @ApiProperty({ description: 'lb' }) netLb: number;
-  @ApiProperty({ description: 'lb: per day the official weight where recorded, else the computed net' }) officialLb: number;
+  @ApiProperty({ description: 'lb: per day the official weight where recorded, else the computed net' })
+  officialLb: number;
   @ApiProperty({ type: 'integer', nullable: true }) finalPlace: number | null;
 }
 
@@ -95,7 +108,9 @@ export class EventRecapViewDto implements Recap {
   @ApiProperty({ type: [TimelinePointDto], description: 'every fish by time' }) timeline: TimelinePointDto[];
   @ApiProperty({ type: ReportFishDto, nullable: true }) bigFish: ReportFishDto | null;
   @ApiProperty({ type: 'integer', minimum: 0 }) findsFished: number;
-  @ApiProperty({ type: 'integer', minimum: 0, description: 'finds marked in the event’s practice' }) findsPracticed: number;
-  @ApiProperty({ type: RateDto, description: 'practice finds that produced a fish / practice finds' }) shareOfPracticePaidOff: RateDto;
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'finds marked in the event’s practice' })
+  findsPracticed: number;
+  @ApiProperty({ type: RateDto, description: 'practice finds that produced a fish / practice finds' })
+  shareOfPracticePaidOff: RateDto;
   @ApiProperty({ type: [String] }) readings: string[];
 }

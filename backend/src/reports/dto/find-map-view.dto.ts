@@ -5,7 +5,12 @@ type MapLake = FindMapView['lake'];
 type MapFind = FindMapView['finds'][number];
 type MapCatch = FindMapView['catches'][number];
 
-const metres = (axis: string) => ({ type: Number, nullable: true, description: `m ${axis} of the lake’s reference point; null when positions are hidden` }) as const;
+const metres = (axis: string) =>
+  ({
+    type: Number,
+    nullable: true,
+    description: `m ${axis} of the lake’s reference point; null when positions are hidden`,
+  }) as const;
 
 export class FindMapLakeDto implements MapLake {
   @ApiProperty({ format: 'uuid' }) id: string;
@@ -28,7 +33,11 @@ export class MapFindDto implements MapFind {
 export class MapCatchDto implements MapCatch {
   @ApiProperty({ format: 'uuid' }) catchId: string;
   @ApiProperty({ type: String, format: 'uuid', nullable: true }) findId: string | null;
-  @ApiProperty({ ...metres('east'), description: 'm east; the find’s position when the catch has none; null when hidden or unknown' }) xM: number | null;
+  @ApiProperty({
+    ...metres('east'),
+    description: 'm east; the find’s position when the catch has none; null when hidden or unknown',
+  })
+  xM: number | null;
   @ApiProperty({ ...metres('north'), description: 'm north; as xM' }) yM: number | null;
   @ApiProperty({ description: 'lb' }) weightLb: number;
 }

@@ -1,11 +1,17 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { HIT_RATE_GROUPINGS, type HitRateGroupingKey, type HitRateGroupView, type HitRatesView } from '@shoalbook/shared';
+import {
+  HIT_RATE_GROUPINGS,
+  type HitRateGroupingKey,
+  type HitRateGroupView,
+  type HitRatesView,
+} from '@shoalbook/shared';
 import { RateDto } from './rate-view.dto';
 
 const count = { type: 'integer', minimum: 0 } as const;
 
 export class HitRateGroupViewDto implements HitRateGroupView {
-  @ApiProperty({ type: String, nullable: true, description: 'null = not recorded (no depth, no hardness grade …)' }) key: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'null = not recorded (no depth, no hardness grade …)' })
+  key: string | null;
   @ApiProperty() label: string;
   @ApiProperty(count) finds: number;
   @ApiProperty(count) findsFished: number;
@@ -14,7 +20,11 @@ export class HitRateGroupViewDto implements HitRateGroupView {
   @ApiProperty(count) fishCount: number;
   @ApiProperty(count) weighedCount: number;
   @ApiProperty({ minimum: 0, description: 'lb' }) weightLb: number;
-  @ApiProperty({ type: RateDto, description: 'finds with a fish / finds fished; for the catch groupings the share of the fish' }) producing: RateDto;
+  @ApiProperty({
+    type: RateDto,
+    description: 'finds with a fish / finds fished; for the catch groupings the share of the fish',
+  })
+  producing: RateDto;
   @ApiProperty({ type: RateDto }) weighed: RateDto;
   @ApiProperty({ type: RateDto }) shareOfFish: RateDto;
   @ApiProperty({ type: 'integer', minimum: 1, description: '1 = best by the shrunk rate' }) rank: number;

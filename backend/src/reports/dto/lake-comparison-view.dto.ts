@@ -1,5 +1,12 @@
 import { ApiExtraModels, ApiProperty, getSchemaPath } from '@nestjs/swagger';
-import { HIT_RATE_GROUPINGS, SEASONS, type HitRateGroupingKey, type LakeComparisonView, type ReportEventRef, type Season } from '@shoalbook/shared';
+import {
+  HIT_RATE_GROUPINGS,
+  SEASONS,
+  type HitRateGroupingKey,
+  type LakeComparisonView,
+  type ReportEventRef,
+  type Season,
+} from '@shoalbook/shared';
 import { EventRateDto } from './rate-view.dto';
 
 type Comparison = LakeComparisonView['comparisons'][number];
@@ -13,7 +20,13 @@ export class ReportLakeRefDto {
 export class ReportEventRefDto implements ReportEventRef {
   @ApiProperty({ format: 'uuid' }) id: string;
   @ApiProperty() name: string;
-  @ApiProperty({ type: String, nullable: true, example: '2025-10-10', description: 'first competition date (lake-local)' }) firstDate: string | null;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    example: '2025-10-10',
+    description: 'first competition date (lake-local)',
+  })
+  firstDate: string | null;
   @ApiProperty({ enum: SEASONS, nullable: true }) season: Season | null;
   @ApiProperty({ type: 'integer', nullable: true }) year: number | null;
 }
@@ -22,7 +35,12 @@ export class ReportEventRefDto implements ReportEventRef {
 export class ComparisonGroupDto implements ComparisonGroup {
   @ApiProperty({ type: String, nullable: true }) key: string | null;
   @ApiProperty() label: string;
-  @ApiProperty({ type: 'object', additionalProperties: { $ref: getSchemaPath(EventRateDto) }, description: 'keyed by event id' }) perEvent: Record<string, EventRateDto>;
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: { $ref: getSchemaPath(EventRateDto) },
+    description: 'keyed by event id',
+  })
+  perEvent: Record<string, EventRateDto>;
 }
 
 const share = { minimum: -1, maximum: 1 } as const;
@@ -32,7 +50,13 @@ export class EventComparisonDto implements Comparison {
   @ApiProperty() label: string;
   @ApiProperty({ format: 'uuid', description: 'the later event' }) a: string;
   @ApiProperty({ format: 'uuid', description: 'the earlier event' }) b: string;
-  @ApiProperty({ type: Number, nullable: true, ...share, description: 'rate a − rate b; null when either was not fished' }) difference: number | null;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    ...share,
+    description: 'rate a − rate b; null when either was not fished',
+  })
+  difference: number | null;
   @ApiProperty({ ...share, description: 'Newcombe hybrid score interval' }) lower: number;
   @ApiProperty(share) upper: number;
   @ApiProperty({ minimum: 0, maximum: 1, description: 'Fisher exact, two-sided' }) pValue: number;

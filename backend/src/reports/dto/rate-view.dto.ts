@@ -7,10 +7,17 @@ const fraction = { minimum: 0, maximum: 1 } as const;
 export class RateDto implements Rate {
   @ApiProperty({ type: 'integer', minimum: 0 }) successes: number;
   @ApiProperty({ type: 'integer', minimum: 0 }) trials: number;
-  @ApiProperty({ type: Number, nullable: true, ...fraction, description: 'successes / trials; null when trials = 0' }) rate: number | null;
+  @ApiProperty({ type: Number, nullable: true, ...fraction, description: 'successes / trials; null when trials = 0' })
+  rate: number | null;
   @ApiProperty({ ...fraction, description: 'Wilson 95 % interval' }) lower: number;
   @ApiProperty(fraction) upper: number;
-  @ApiProperty({ type: Number, nullable: true, ...fraction, description: 'shrunk toward the rate over the groups shown; null without any trials at all' }) shrunk: number | null;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    ...fraction,
+    description: 'shrunk toward the rate over the groups shown; null without any trials at all',
+  })
+  shrunk: number | null;
 }
 
 export class EventRateDto extends RateDto implements EventRate {

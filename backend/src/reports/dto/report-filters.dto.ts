@@ -51,7 +51,14 @@ export class HitRatesQueryDto extends ReportFiltersDto {
 export class LakeComparisonQueryDto extends HitRatesQueryDto {
   @ApiPropertyOptional({ description: 'Comma-separated event ids (default: every event on the lake)' })
   @IsOptional()
-  @Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.split(',').map((s) => s.trim()).filter(Boolean) : value))
+  @Transform(({ value }: { value: unknown }) =>
+    typeof value === 'string'
+      ? value
+          .split(',')
+          .map((s) => s.trim())
+          .filter(Boolean)
+      : value,
+  )
   @IsArray()
   @ArrayMaxSize(50)
   @IsUUID('all', { each: true })
@@ -61,7 +68,12 @@ export class LakeComparisonQueryDto extends HitRatesQueryDto {
 export class FindMapQueryDto extends ReportFiltersDto {}
 
 export class RecapEmailDto {
-  @ApiProperty({ type: [String], format: 'uuid', maxItems: 100, description: 'members of this crew to send the recap to' })
+  @ApiProperty({
+    type: [String],
+    format: 'uuid',
+    maxItems: 100,
+    description: 'members of this crew to send the recap to',
+  })
   @IsArray()
   @ArrayMaxSize(100)
   @IsUUID('all', { each: true })

@@ -6,9 +6,21 @@ type HourFigures = TimingView['byHour'][number];
 export class TimingCatchDto implements TimingCatch {
   @ApiProperty({ format: 'uuid' }) catchId: string;
   @ApiProperty({ format: 'date-time' }) caughtAt: string;
-  @ApiProperty({ type: 'integer', minimum: 0, maximum: 1439, description: 'minutes after local midnight (lake’s wall clock)' }) localMinutes: number;
-  @ApiProperty({ type: 'integer', nullable: true, description: 'minutes after the day’s sunrise (negative before it); null when the sun does not rise' }) minutesFromSunrise: number | null;
-  @ApiProperty({ enum: ['major', 'minor'], nullable: true, description: 'null: in neither period' }) solunarPeriod: 'major' | 'minor' | null;
+  @ApiProperty({
+    type: 'integer',
+    minimum: 0,
+    maximum: 1439,
+    description: 'minutes after local midnight (lake’s wall clock)',
+  })
+  localMinutes: number;
+  @ApiProperty({
+    type: 'integer',
+    nullable: true,
+    description: 'minutes after the day’s sunrise (negative before it); null when the sun does not rise',
+  })
+  minutesFromSunrise: number | null;
+  @ApiProperty({ enum: ['major', 'minor'], nullable: true, description: 'null: in neither period' }) solunarPeriod:
+    'major' | 'minor' | null;
   @ApiProperty({ description: 'lb' }) weightLb: number;
   @ApiProperty({ enum: FATES }) fate: Fate;
   @ApiProperty({ format: 'uuid' }) eventId: string;

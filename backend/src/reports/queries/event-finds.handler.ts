@@ -40,7 +40,12 @@ export class GetEventFindsHandler implements IQueryHandler<GetEventFindsQuery, E
         practiced: isTrue(r.practiced),
         ...base,
         weightLb: fromMicroLb(Number(r.weight_ulb)),
-        firstBiteAt: bite === null || bite === undefined ? null : new Date(bite instanceof Date ? bite.getTime() : Date.parse(`${String(bite).replace(' ', 'T')}Z`)).toISOString(),
+        firstBiteAt:
+          bite === null || bite === undefined
+            ? null
+            : new Date(
+                bite instanceof Date ? bite.getTime() : Date.parse(`${String(bite).replace(' ', 'T')}Z`),
+              ).toISOString(),
         outcome: outcomeOf(base),
       };
     });

@@ -29,9 +29,16 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
 
     const days: RecapDay[] = dayRows.map((d) => {
       const mine = catches.filter((c) => c.competitionDayId === d.id);
-      const official = Number(d.has_official) === 1 || d.has_official === true
-        ? { grossLb: n(d.official_gross_lb), penaltyLb: n(d.official_penalty_lb), officialLb: n(d.official_lb), dayPlace: n(d.day_place), lateMinutes: n(d.late_minutes) }
-        : null;
+      const official =
+        Number(d.has_official) === 1 || d.has_official === true
+          ? {
+              grossLb: n(d.official_gross_lb),
+              penaltyLb: n(d.official_penalty_lb),
+              officialLb: n(d.official_lb),
+              dayPlace: n(d.day_place),
+              lateMinutes: n(d.late_minutes),
+            }
+          : null;
       const bag = dayBag(mine, event.rules, official?.lateMinutes ?? null);
       const counted = new Set(bag.counted);
       return {
@@ -52,7 +59,13 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
       const mine = catches.filter((c) => c.competitionDayId === d.id);
       for (let i = 0; i < mine.length; i++) {
         const c = mine[i]!;
-        timeline.push({ catchId: c.catchId, caughtAt: c.caughtAt, weightLb: c.weightLb, cumulativeBagLb: dayBag(mine.slice(0, i + 1), event.rules, null).grossLb, day: c.day });
+        timeline.push({
+          catchId: c.catchId,
+          caughtAt: c.caughtAt,
+          weightLb: c.weightLb,
+          cumulativeBagLb: dayBag(mine.slice(0, i + 1), event.rules, null).grossLb,
+          day: c.day,
+        });
       }
     }
 
@@ -66,25 +79,48 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
     const practiced = outcomes.filter((o) => isTrue(o.practiced));
     const producingFinds = outcomes
       .filter((o) => Number(o.fish_count) > 0)
-      .map((o) => ({ findId: String(o.find_id), name: String(o.name), kind: String(o.kind) as FindKind, subKind: String(o.sub_kind), fishCount: Number(o.fish_count), weightLb: fromMicroLb(Number(o.weight_ulb)) }))
+      .map((o) => ({
+        findId: String(o.find_id),
+        name: String(o.name),
+        kind: String(o.kind) as FindKind,
+        subKind: String(o.sub_kind),
+        fishCount: Number(o.fish_count),
+        weightLb: fromMicroLb(Number(o.weight_ulb)),
+      }))
       .sort((a, b) => b.weightLb - a.weightLb || b.fishCount - a.fishCount || a.name.localeCompare(b.name));
     const share = singleRate(practiced.filter((o) => Number(o.fish_count) > 0).length, practiced.length);
-    const big = catches.reduce<(typeof catches)[number] | null>((best, c) => (!best || c.weightLb > best.weightLb ? c : best), null);
+    const big = catches.reduce<(typeof catches)[number] | null>(
+      (best, c) => (!best || c.weightLb > best.weightLb ? c : best),
+      null,
+    );
 
     const netLb = clean(days.reduce((s, d) => s + d.netLb, 0));
     const officialLb = clean(days.reduce((s, d) => s + (d.official?.officialLb ?? d.netLb), 0));
     const readings: string[] = [];
-    if (!catches.length) readings.push('No catches logged for this event yet: log the competition-day catches to see the bags and which finds produced.');
+    if (!catches.length)
+      readings.push(
+        'No catches logged for this event yet: log the competition-day catches to see the bags and which finds produced.',
+      );
     else {
-      readings.push(`${plural(catches.length, 'fish', 'fish')} caught over ${plural(days.length, 'day')}; ${netLb.toFixed(2)} lb counted after penalties.`);
-      if (practiced.length) readings.push(`${share.successes} of ${plural(practiced.length, 'practice find')} produced a fish (${percent(share.rate)}).`);
-      if (big) readings.push(`Big fish: ${big.weightLb.toFixed(2)} lb${big.findName ? ` from ${big.findName}` : ''} on ${big.day}.`);
+      readings.push(
+        `${plural(catches.length, 'fish', 'fish')} caught over ${plural(days.length, 'day')}; ${netLb.toFixed(2)} lb counted after penalties.`,
+      );
+      if (practiced.length)
+        readings.push(
+          `${share.successes} of ${plural(practiced.length, 'practice find')} produced a fish (${percent(share.rate)}).`,
+        );
+      if (big)
+        readings.push(
+          `Big fish: ${big.weightLb.toFixed(2)} lb${big.findName ? ` from ${big.findName}` : ''} on ${big.day}.`,
+        );
     }
     return {
       event: {
         id: event.id,
         name: event.name,
-        lake: lake ? { id: lake.id, name: lake.name, timeZone: lake.timeZone } : { id: event.lakeId, name: '', timeZone: 'UTC' },
+        lake: lake
+          ? { id: lake.id, name: lake.name, timeZone: lake.timeZone }
+          : { id: event.lakeId, name: '', timeZone: 'UTC' },
         dates: { practice: event.practiceDates, competition: event.competitionDates },
         rules: event.rules,
         finalPlace: event.finalPlace,

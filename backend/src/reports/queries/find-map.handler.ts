@@ -14,7 +14,10 @@ const RAD = Math.PI / 180;
  * a lake's few kilometres the error is far below a boat length.
  */
 export function localMetres(lat: number, lon: number, refLat: number, refLon: number): { xM: number; yM: number } {
-  return { xM: (lon - refLon) * RAD * MEAN_EARTH_RADIUS_M * Math.cos(refLat * RAD), yM: (lat - refLat) * RAD * MEAN_EARTH_RADIUS_M };
+  return {
+    xM: (lon - refLon) * RAD * MEAN_EARTH_RADIUS_M * Math.cos(refLat * RAD),
+    yM: (lat - refLat) * RAD * MEAN_EARTH_RADIUS_M,
+  };
 }
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
@@ -41,7 +44,8 @@ export class GetFindMapHandler implements IQueryHandler<GetFindMapQuery, FindMap
       [...where.params, crewId, lakeId],
     );
     const positions = new Map<string, { lat: number; lon: number }>();
-    const place = (lat: number | null, lon: number | null) => (showPositions && lat !== null && lon !== null ? localMetres(lat, lon, lake.lat, lake.lon) : null);
+    const place = (lat: number | null, lon: number | null) =>
+      showPositions && lat !== null && lon !== null ? localMetres(lat, lon, lake.lat, lake.lon) : null;
     const findViews = finds.map((f) => {
       positions.set(String(f.id), { lat: Number(f.lat), lon: Number(f.lon) });
       const p = place(Number(f.lat), Number(f.lon));
@@ -51,7 +55,11 @@ export class GetFindMapHandler implements IQueryHandler<GetFindMapQuery, FindMap
         xM: p ? round1(p.xM) : null,
         yM: p ? round1(p.yM) : null,
         kind: String(f.kind) as FindKind,
-        outcome: outcomeOf({ fished: Number(f.fished) > 0, fishCount: Number(f.fish_count), weighedCount: Number(f.weighed_count) }),
+        outcome: outcomeOf({
+          fished: Number(f.fished) > 0,
+          fishCount: Number(f.fish_count),
+          weighedCount: Number(f.weighed_count),
+        }),
         fishCount: Number(f.fish_count),
         weightLb: fromMicroLb(Number(f.weight_ulb)),
       };
@@ -66,9 +74,20 @@ export class GetFindMapHandler implements IQueryHandler<GetFindMapQuery, FindMap
       finds: findViews,
       catches: catches.map((c) => {
         // A catch without its own position is drawn at its find.
-        const own = c.lat !== null && c.lon !== null ? { lat: Number(c.lat), lon: Number(c.lon) } : c.find_id ? positions.get(String(c.find_id)) : undefined;
+        const own =
+          c.lat !== null && c.lon !== null
+            ? { lat: Number(c.lat), lon: Number(c.lon) }
+            : c.find_id
+              ? positions.get(String(c.find_id))
+              : undefined;
         const p = own ? place(own.lat, own.lon) : null;
-        return { catchId: String(c.id), findId: (c.find_id as string | null) ?? null, xM: p ? round1(p.xM) : null, yM: p ? round1(p.yM) : null, weightLb: Number(c.weight_lb) };
+        return {
+          catchId: String(c.id),
+          findId: (c.find_id as string | null) ?? null,
+          xM: p ? round1(p.xM) : null,
+          yM: p ? round1(p.yM) : null,
+          weightLb: Number(c.weight_lb),
+        };
       }),
     };
   }

@@ -27,7 +27,16 @@ interface Sums {
 
 /** Sort order of keys: bands shallow→deep / cold→warm, numbers ascending, not recorded last. */
 function keyOrder(by: string): (a: string, b: string) => number {
-  const bands = by === 'depthBand' ? depthBandLabels() : by === 'temperatureBand' ? temperatureBandLabels() : by === 'timeOfDay' ? ['early', 'morning', 'midday', 'afternoon', 'late'] : by === 'solunarPeriod' ? ['major', 'minor', 'none'] : null;
+  const bands =
+    by === 'depthBand'
+      ? depthBandLabels()
+      : by === 'temperatureBand'
+        ? temperatureBandLabels()
+        : by === 'timeOfDay'
+          ? ['early', 'morning', 'midday', 'afternoon', 'late']
+          : by === 'solunarPeriod'
+            ? ['major', 'minor', 'none']
+            : null;
   return (a, b) => {
     if (a === b) return 0;
     if (a === '') return 1;
@@ -115,15 +124,23 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
     const byRank = [...views].sort((a, b) => a.rank - b.rank);
     const readings: string[] = [];
     if (catchUnit) {
-      if (allFish === 0) readings.push('No catches logged for these events yet: log competition-day catches to see when the fish bit.');
+      if (allFish === 0)
+        readings.push('No catches logged for these events yet: log competition-day catches to see when the fish bit.');
       for (const v of byRank) readings.push(catchShareReading(v.label, v.shareOfFish));
     } else {
-      if (overall.findsFished === 0) readings.push('No finds fished yet: add practice finds to an event and log the catches to see which kinds paid off.');
+      if (overall.findsFished === 0)
+        readings.push(
+          'No finds fished yet: add practice finds to an event and log the catches to see which kinds paid off.',
+        );
       else readings.push(findRateReading('Overall, the practice', overall.producing));
       for (const v of byRank.filter((g) => g.findsFished > 0)) readings.push(findRateReading(v.label, v.producing));
-      for (const v of byRank.filter((g) => g.findsFished > 0 && g.findsFished < SMALL_SAMPLE_FINDS)) readings.push(smallSampleReading(v.label, v.findsFished));
-      const adjusted = byRank.filter((g) => g.findsFished > 0 && g.producing.shrunk !== null).map((g) => g.producing.shrunk!);
-      if (adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < NO_SPREAD) readings.push(noSpreadReading(GROUPING_PLURALS[by] ?? 'the groups', adjusted[0]!));
+      for (const v of byRank.filter((g) => g.findsFished > 0 && g.findsFished < SMALL_SAMPLE_FINDS))
+        readings.push(smallSampleReading(v.label, v.findsFished));
+      const adjusted = byRank
+        .filter((g) => g.findsFished > 0 && g.producing.shrunk !== null)
+        .map((g) => g.producing.shrunk!);
+      if (adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < NO_SPREAD)
+        readings.push(noSpreadReading(GROUPING_PLURALS[by] ?? 'the groups', adjusted[0]!));
     }
     return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount };
   }

@@ -5,4 +5,11 @@ import { GetHitRatesHandler } from './hit-rates.handler';
 import { GetLakeComparisonHandler } from './lake-comparison.handler';
 import { GetTimingHandler } from './timing.handler';
 
-export const REPORT_QUERY_HANDLERS = [GetHitRatesHandler, GetLakeComparisonHandler, GetEventRecapHandler, GetEventFindsHandler, GetTimingHandler, GetFindMapHandler];
+export const REPORT_QUERY_HANDLERS = [
+  GetHitRatesHandler,
+  GetLakeComparisonHandler,
+  GetEventRecapHandler,
+  GetEventFindsHandler,
+  GetTimingHandler,
+  GetFindMapHandler,
+];

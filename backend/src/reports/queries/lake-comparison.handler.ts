@@ -31,10 +31,19 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
 
   async execute({ crewId, lakeId, by, filters, eventIds }: GetLakeComparisonQuery): Promise<LakeComparisonView> {
     // Side by side on two pooled connections: a report is read on every filter change.
-    const [lake, events] = await Promise.all([findLake(this.em, crewId, lakeId), selectEvents(this.em, crewId, { ...filters, lakeId }, { ids: eventIds })]);
+    const [lake, events] = await Promise.all([
+      findLake(this.em, crewId, lakeId),
+      selectEvents(this.em, crewId, { ...filters, lakeId }, { ids: eventIds }),
+    ]);
     if (!lake) throw new ApiException(HttpStatus.NOT_FOUND, 'No such lake in this crew.', ErrorCode.notFound);
     const refs = events.map(({ id, name, firstDate, season, year }) => ({ id, name, firstDate, season, year }));
-    const view: LakeComparisonView = { lake: { id: lake.id, name: lake.name }, by, events: refs, groups: [], comparisons: [] };
+    const view: LakeComparisonView = {
+      lake: { id: lake.id, name: lake.name },
+      by,
+      events: refs,
+      groups: [],
+      comparisons: [],
+    };
     if (!events.length) return view;
 
     const catchUnit = CATCH_UNIT_GROUPINGS.includes(by);
@@ -43,22 +52,29 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
         WHERE crew_id = ? AND grouping = ? AND event_id IN (${placeholders(events.length)})`,
       [crewId, by, ...events.map((e) => e.id)],
     );
-    const keys = [...new Set(rows.map((r) => String(r.group_key)))].sort((a, b) => (a === '' ? 1 : b === '' ? -1 : a.localeCompare(b, 'en', { numeric: true })));
+    const keys = [...new Set(rows.map((r) => String(r.group_key)))].sort((a, b) =>
+      a === '' ? 1 : b === '' ? -1 : a.localeCompare(b, 'en', { numeric: true }),
+    );
     const cell = new Map<string, { successes: number; trials: number }>();
     const fishByEvent = new Map<string, number>();
-    for (const r of rows) fishByEvent.set(String(r.event_id), (fishByEvent.get(String(r.event_id)) ?? 0) + Number(r.fish_count));
+    for (const r of rows)
+      fishByEvent.set(String(r.event_id), (fishByEvent.get(String(r.event_id)) ?? 0) + Number(r.fish_count));
     for (const r of rows) {
       const successes = catchUnit ? Number(r.fish_count) : Number(r.finds_producing);
       const trials = catchUnit ? (fishByEvent.get(String(r.event_id)) ?? 0) : Number(r.finds_fished);
       cell.set(`${String(r.event_id)}|${String(r.group_key)}`, { successes, trials });
     }
-    const count = (eventId: string, key: string) => cell.get(`${eventId}|${key}`) ?? { successes: 0, trials: catchUnit ? (fishByEvent.get(eventId) ?? 0) : 0 };
+    const count = (eventId: string, key: string) =>
+      cell.get(`${eventId}|${key}`) ?? { successes: 0, trials: catchUnit ? (fishByEvent.get(eventId) ?? 0) : 0 };
 
     // Shrinkage within each event, toward that event's pooled rate.
     const perEventRates = new Map<string, Map<string, EventRate>>();
     for (const e of events) {
       const rates = groupRates(keys.map((k) => count(e.id, k)));
-      perEventRates.set(e.id, new Map(keys.map((k, i) => [k, { ...rates[i]!, findsFished: catchUnit ? 0 : rates[i]!.trials }])));
+      perEventRates.set(
+        e.id,
+        new Map(keys.map((k, i) => [k, { ...rates[i]!, findsFished: catchUnit ? 0 : rates[i]!.trials }])),
+      );
     }
     view.groups = keys.map((k) => ({
       key: k === '' ? null : k,
@@ -91,7 +107,9 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
           reading =
             `${label} ${verb} in ${la} than in ${lb}: ${percent(rateA)} against ${percent(rateB)} ${unit} ` +
             `(${differenceText(cmp.difference, cmp.lower, cmp.upper)}); ` +
-            (moreThanChance ? `more than chance (${pValueText(cmp.pValue)}).` : `could well be chance (${pValueText(cmp.pValue)}).`);
+            (moreThanChance
+              ? `more than chance (${pValueText(cmp.pValue)}).`
+              : `could well be chance (${pValueText(cmp.pValue)}).`);
         }
         view.comparisons.push({
           key: k === '' ? null : k,

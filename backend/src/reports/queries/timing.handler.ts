@@ -34,7 +34,11 @@ export class GetTimingHandler implements IQueryHandler<GetTimingQuery, TimingVie
         eventId: c.eventId,
         day: c.day,
       })),
-      byHour: hours.map((h) => ({ hour: Number(h.hour), fishCount: Number(h.fish), weightLb: fromMicroLb(Number(h.weight_ulb)) })),
+      byHour: hours.map((h) => ({
+        hour: Number(h.hour),
+        fishCount: Number(h.fish),
+        weightLb: fromMicroLb(Number(h.weight_ulb)),
+      })),
     };
   }
 }

@@ -8,28 +8,39 @@ import { IsOmittable } from '../../common/dto/omittable';
 /** Any subset of the unit preferences; the rest stay as they are. */
 export class UpdateUnitsDto implements Partial<UnitPreferences> {
   @ApiPropertyOptional({ enum: WEIGHT_UNITS })
-  @IsOmittable() @IsIn(WEIGHT_UNITS, { message: `Weight is one of ${WEIGHT_UNITS.join(', ')}.` })
+  @IsOmittable()
+  @IsIn(WEIGHT_UNITS, { message: `Weight is one of ${WEIGHT_UNITS.join(', ')}.` })
   weight?: UnitPreferences['weight'];
 
   @ApiPropertyOptional({ enum: LENGTH_UNITS })
-  @IsOmittable() @IsIn(LENGTH_UNITS, { message: `Length is one of ${LENGTH_UNITS.join(', ')}.` })
+  @IsOmittable()
+  @IsIn(LENGTH_UNITS, { message: `Length is one of ${LENGTH_UNITS.join(', ')}.` })
   length?: UnitPreferences['length'];
 
   @ApiPropertyOptional({ enum: DEPTH_UNITS })
-  @IsOmittable() @IsIn(DEPTH_UNITS, { message: `Depth is one of ${DEPTH_UNITS.join(', ')}.` })
+  @IsOmittable()
+  @IsIn(DEPTH_UNITS, { message: `Depth is one of ${DEPTH_UNITS.join(', ')}.` })
   depth?: UnitPreferences['depth'];
 
   @ApiPropertyOptional({ enum: TEMPERATURE_UNITS })
-  @IsOmittable() @IsIn(TEMPERATURE_UNITS, { message: `Temperature is one of ${TEMPERATURE_UNITS.join(', ')}.` })
+  @IsOmittable()
+  @IsIn(TEMPERATURE_UNITS, { message: `Temperature is one of ${TEMPERATURE_UNITS.join(', ')}.` })
   temperature?: UnitPreferences['temperature'];
 }
 
 export class UpdateMeDto {
   @ApiPropertyOptional({ maxLength: 80 })
-  @IsOmittable() @Trim() @IsString({ message: 'Enter a name.' }) @IsNotEmpty({ message: 'Enter a name.' }) @MaxLength(80, { message: 'Use at most 80 characters.' })
+  @IsOmittable()
+  @Trim()
+  @IsString({ message: 'Enter a name.' })
+  @IsNotEmpty({ message: 'Enter a name.' })
+  @MaxLength(80, { message: 'Use at most 80 characters.' })
   displayName?: string;
 
   @ApiPropertyOptional({ type: UpdateUnitsDto })
-  @IsOmittable() @IsObject() @ValidateNested() @Type(() => UpdateUnitsDto)
+  @IsOmittable()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => UpdateUnitsDto)
   units?: UpdateUnitsDto;
 }

@@ -1,5 +1,18 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { CREW_ROLES, type CrewRole, DEPTH_UNITS, LENGTH_UNITS, type MeResponse, type MembershipView, SITE_ROLES, type SiteRole, TEMPERATURE_UNITS, type UnitPreferences, type UserView, WEIGHT_UNITS } from '@shoalbook/shared';
+import {
+  CREW_ROLES,
+  type CrewRole,
+  DEPTH_UNITS,
+  LENGTH_UNITS,
+  type MeResponse,
+  type MembershipView,
+  SITE_ROLES,
+  type SiteRole,
+  TEMPERATURE_UNITS,
+  type UnitPreferences,
+  type UserView,
+  WEIGHT_UNITS,
+} from '@shoalbook/shared';
 
 export class UnitPreferencesDto implements UnitPreferences {
   @ApiProperty({ enum: WEIGHT_UNITS }) weight: UnitPreferences['weight'];

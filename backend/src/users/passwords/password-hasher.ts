@@ -4,7 +4,12 @@ import { Algorithm, hash, verify } from '@node-rs/argon2';
  * argon2id parameters: OWASP Password Storage Cheat Sheet's minimum is m=19 MiB (19456 KiB), t=2, p=1;
  * we use that memory with one more pass.
  */
-export const ARGON2_OPTIONS = { algorithm: Algorithm.Argon2id, memoryCost: 19456, timeCost: 3, parallelism: 1 } as const;
+export const ARGON2_OPTIONS = {
+  algorithm: Algorithm.Argon2id,
+  memoryCost: 19456,
+  timeCost: 3,
+  parallelism: 1,
+} as const;
 
 /** Hash a password into a PHC string (`$argon2id$v=19$m=19456,t=3,p=1$…`). */
 export function hashPassword(password: string): Promise<string> {

@@ -25,7 +25,9 @@ describe('passwordProblem', () => {
 
   it('refuses one repeated character and the account e-mail', () => {
     expect(passwordProblem('aaaaaaaaaaaa')).toMatch(/repeated/);
-    expect(passwordProblem('Longname.Angler@example.test', { email: 'longname.angler@example.test' })).toMatch(/e-mail/);
+    expect(passwordProblem('Longname.Angler@example.test', { email: 'longname.angler@example.test' })).toMatch(
+      /e-mail/,
+    );
     expect(passwordProblem('longnameangler', { email: 'LongNameAngler@example.test' })).toMatch(/e-mail/);
   });
 });

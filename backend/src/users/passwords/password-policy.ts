@@ -13,6 +13,7 @@ export function passwordProblem(password: string, context: { email?: string } = 
   if (COMMON_PASSWORDS.has(lower)) return 'This password is too common; choose another.';
   if (/^(.)\1*$/u.test(password)) return 'A password of one repeated character is too easy to guess.';
   const email = context.email?.trim().toLowerCase();
-  if (email && (lower === email || lower === email.split('@')[0])) return 'Do not use your e-mail address as the password.';
+  if (email && (lower === email || lower === email.split('@')[0]))
+    return 'Do not use your e-mail address as the password.';
   return null;
 }

@@ -43,10 +43,16 @@ export function Component() {
               description="The outbox exists only while Shoalbook runs in development mode. In production, mail goes to real inboxes."
             />
           ) : (
-            <ErrorState error={outbox.error} title="The outbox could not be read" onRetry={() => void outbox.refetch()} />
+            <ErrorState
+              error={outbox.error}
+              title="The outbox could not be read"
+              onRetry={() => void outbox.refetch()}
+            />
           )
         ) : outbox.data.length === 0 ? (
-          <EmptyState title="No mail yet">Send an invite or ask for a password reset, then refresh this page.</EmptyState>
+          <EmptyState title="No mail yet">
+            Send an invite or ask for a password reset, then refresh this page.
+          </EmptyState>
         ) : (
           <OutboxList messages={outbox.data} />
         )}

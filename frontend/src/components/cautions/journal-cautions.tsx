@@ -19,9 +19,9 @@ function Caution({ icon, title, children }: { icon: 'info' | 'alert'; title: str
 export function RulesCaution() {
   return (
     <Caution icon="info" title="Rules differ">
-      Five fish and 12 inches are only where most events start. Bag and length limits change from state to
-      state, from one water body to the next and between events: the event&rsquo;s own rules and the state
-      wildlife agency&rsquo;s current regulations decide, not this form.
+      Five fish and 12 inches are only where most events start. Bag and length limits change from state to state, from
+      one water body to the next and between events: the event&rsquo;s own rules and the state wildlife agency&rsquo;s
+      current regulations decide, not this form.
     </Caution>
   );
 }
@@ -30,9 +30,9 @@ export function RulesCaution() {
 export function OnPlaneCaution() {
   return (
     <Caution icon="alert" title="Searching at speed">
-      Reading the sonar while running on plane means a life jacket on and the engine cut-off link clipped
-      on before the hull comes up. Mark the spot and look at the screen later, keep to local boating law,
-      and head in when lightning is near.
+      Reading the sonar while running on plane means a life jacket on and the engine cut-off link clipped on before the
+      hull comes up. Mark the spot and look at the screen later, keep to local boating law, and head in when lightning
+      is near.
     </Caution>
   );
 }
@@ -41,8 +41,8 @@ export function OnPlaneCaution() {
 export function FishCareCaution() {
   return (
     <Caution icon="info" title="Fish first">
-      Get the fish into an aerated, cool livewell before you type; log it between casts. Released fish go
-      back quickly, with wet hands.
+      Get the fish into an aerated, cool livewell before you type; log it between casts. Released fish go back quickly,
+      with wet hands.
     </Caution>
   );
 }
@@ -51,8 +51,8 @@ export function FishCareCaution() {
 export function PositionsFileCaution() {
   return (
     <Caution icon="alert" title="Positions inside">
-      The file holds the position of every find and catch. Keep it to your crew: a leaked waypoint list
-      cannot be taken back.
+      The file holds the position of every find and catch. Keep it to your crew: a leaked waypoint list cannot be taken
+      back.
     </Caution>
   );
 }

@@ -58,7 +58,8 @@ const textIncludes: FilterFn<unknown> = (row, columnId, filter: string) => {
   return value !== null && value !== undefined && String(value).toLowerCase().includes(filter.toLowerCase());
 };
 
-const exactValue: FilterFn<unknown> = (row, columnId, filter: string) => !filter || String(row.getValue(columnId)) === filter;
+const exactValue: FilterFn<unknown> = (row, columnId, filter: string) =>
+  !filter || String(row.getValue(columnId)) === filter;
 
 /**
  * A sortable, filterable table with a column chooser that renders only the rows in view, so a lake's
@@ -135,7 +136,10 @@ export function DataTable<T>({
           return (
             <FormControl key={column.id}>
               <FormControl.Label>{label}</FormControl.Label>
-              <Select value={(column.getFilterValue() as string) ?? ''} onChange={(e) => column.setFilterValue(e.target.value || undefined)}>
+              <Select
+                value={(column.getFilterValue() as string) ?? ''}
+                onChange={(e) => column.setFilterValue(e.target.value || undefined)}
+              >
                 <Select.Option value="">All</Select.Option>
                 {column.columnDef.meta!.filterOptions!.map((o) => (
                   <Select.Option key={o.value} value={o.value}>
@@ -172,7 +176,14 @@ export function DataTable<T>({
       <Text as="p" size="small" className={styles.count} aria-live="polite">
         {rows.length === data.length ? `${data.length} rows` : `${rows.length} of ${data.length} rows match`}
       </Text>
-      <div ref={scrollRef} className={styles.scroller} style={{ maxHeight: height }} tabIndex={0} aria-label={`${caption}, scrollable`} role="region">
+      <div
+        ref={scrollRef}
+        className={styles.scroller}
+        style={{ maxHeight: height }}
+        tabIndex={0}
+        aria-label={`${caption}, scrollable`}
+        role="region"
+      >
         <table className={styles.table} aria-rowcount={rows.length + 1}>
           <caption className={styles.caption}>{caption}</caption>
           <thead>
@@ -189,9 +200,17 @@ export function DataTable<T>({
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                     >
                       {header.column.getCanSort() ? (
-                        <button type="button" className={styles.sortButton} onClick={header.column.getToggleSortingHandler()}>
+                        <button
+                          type="button"
+                          className={styles.sortButton}
+                          onClick={header.column.getToggleSortingHandler()}
+                        >
                           {flexRender(header.column.columnDef.header, header.getContext())}
-                          {sorted === 'asc' ? <TriangleUpIcon aria-hidden /> : sorted === 'desc' ? <TriangleDownIcon aria-hidden /> : null}
+                          {sorted === 'asc' ? (
+                            <TriangleUpIcon aria-hidden />
+                          ) : sorted === 'desc' ? (
+                            <TriangleDownIcon aria-hidden />
+                          ) : null}
                         </button>
                       ) : (
                         flexRender(header.column.columnDef.header, header.getContext())
@@ -211,7 +230,12 @@ export function DataTable<T>({
             {items.map((item) => {
               const row = rows[item.index] as Row<T>;
               return (
-                <tr key={row.id} aria-rowindex={item.index + 2} style={{ height: rowHeight }} className={rowClassName?.(row.original)}>
+                <tr
+                  key={row.id}
+                  aria-rowindex={item.index + 2}
+                  style={{ height: rowHeight }}
+                  className={rowClassName?.(row.original)}
+                >
                   {row.getVisibleCells().map((cell) => (
                     <td key={cell.id} className={cell.column.columnDef.meta?.numeric ? styles.numeric : undefined}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}

@@ -41,7 +41,12 @@ function ErrorDescription({ error }: { error: unknown }) {
   return (
     <>
       {message}
-      {requestId ? <Text as="span" size="small"> (reference {requestId})</Text> : null}
+      {requestId ? (
+        <Text as="span" size="small">
+          {' '}
+          (reference {requestId})
+        </Text>
+      ) : null}
     </>
   );
 }

@@ -8,7 +8,8 @@ import { ApiRequestError } from '../../lib/api-client';
 export function FormError({ error, title = 'That did not go through' }: { error: unknown; title?: string }) {
   if (!error) return null;
   const message = error instanceof Error ? error.message : 'Something went wrong.';
-  const hasFieldErrors = error instanceof ApiRequestError && error.fieldErrors && Object.keys(error.fieldErrors).length > 0;
+  const hasFieldErrors =
+    error instanceof ApiRequestError && error.fieldErrors && Object.keys(error.fieldErrors).length > 0;
   return (
     <Banner
       variant="critical"

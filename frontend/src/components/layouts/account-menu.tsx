@@ -4,7 +4,15 @@ import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '../../config/paths';
 
 /** The signed-in person's menu: their account page and sign-out. */
-export function AccountMenu({ displayName, email, onSignOut }: { displayName: string; email: string; onSignOut: () => void }) {
+export function AccountMenu({
+  displayName,
+  email,
+  onSignOut,
+}: {
+  displayName: string;
+  email: string;
+  onSignOut: () => void;
+}) {
   return (
     <ActionMenu>
       <ActionMenu.Button leadingVisual={PersonIcon} aria-label={`Account menu for ${displayName}`}>

@@ -18,7 +18,15 @@ export interface AppShellProps {
 }
 
 /** The frame of every signed-in screen: header (mark, crew switcher, links, account menu), content, cautions. */
-export function AppShell({ displayName, email, isSiteAdmin, crews, currentCrewId, onSignOut, children }: AppShellProps) {
+export function AppShell({
+  displayName,
+  email,
+  isSiteAdmin,
+  crews,
+  currentCrewId,
+  onSignOut,
+  children,
+}: AppShellProps) {
   return (
     <div className={styles.shell}>
       <a href="#main" className={styles.skipLink}>
@@ -33,7 +41,10 @@ export function AppShell({ displayName, email, isSiteAdmin, crews, currentCrewId
           <nav aria-label="Main" className={styles.nav}>
             <CrewSwitcher crews={crews} currentCrewId={currentCrewId} />
             {isSiteAdmin ? (
-              <NavLink to={paths.admin.href()} className={({ isActive }) => (isActive ? `${styles.navLink} ${styles.active}` : styles.navLink)}>
+              <NavLink
+                to={paths.admin.href()}
+                className={({ isActive }) => (isActive ? `${styles.navLink} ${styles.active}` : styles.navLink)}
+              >
                 Accounts
               </NavLink>
             ) : null}

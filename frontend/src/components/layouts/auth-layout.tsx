@@ -7,7 +7,17 @@ import { paths } from '../../config/paths';
 import styles from './auth-layout.module.css';
 
 /** The frame of the signed-out screens: the mark, one card with a title and a form, and the cautions. */
-export function AuthLayout({ title, lead, children, footer }: { title: string; lead?: ReactNode; children: ReactNode; footer?: ReactNode }) {
+export function AuthLayout({
+  title,
+  lead,
+  children,
+  footer,
+}: {
+  title: string;
+  lead?: ReactNode;
+  children: ReactNode;
+  footer?: ReactNode;
+}) {
   return (
     <div className={styles.page}>
       <main className={styles.main}>

@@ -16,7 +16,10 @@ export function CrewSwitcher({ crews, currentCrewId }: { crews: CrewChoice[]; cu
   const current = crews.find((c) => c.id === currentCrewId);
   return (
     <ActionMenu>
-      <ActionMenu.Button leadingVisual={PeopleIcon} aria-label={current ? `${current.name}: switch crew` : 'Crews: choose a crew'}>
+      <ActionMenu.Button
+        leadingVisual={PeopleIcon}
+        aria-label={current ? `${current.name}: switch crew` : 'Crews: choose a crew'}
+      >
         {current ? current.name : 'Crews'}
       </ActionMenu.Button>
       <ActionMenu.Overlay width="medium">

@@ -4,7 +4,16 @@
  * owns the eighth of the cycle centred on it.
  */
 export function moonPhaseName(phase: number): string {
-  const names = ['New moon', 'Waxing crescent', 'First quarter', 'Waxing gibbous', 'Full moon', 'Waning gibbous', 'Last quarter', 'Waning crescent'];
+  const names = [
+    'New moon',
+    'Waxing crescent',
+    'First quarter',
+    'Waxing gibbous',
+    'Full moon',
+    'Waning gibbous',
+    'Last quarter',
+    'Waning crescent',
+  ];
   const wrapped = ((phase % 1) + 1) % 1;
   return names[Math.floor(wrapped * 8 + 0.5) % 8];
 }

@@ -4,4 +4,12 @@ export { CatchFacts, CatchSide } from './components/catch-detail';
 export { CatchesTable } from './components/catches-table';
 export { catchName } from './components/catch-names';
 export { findOptionLabel } from './components/catch-values';
-export { useCatches, useCatch, useLogCatch, useUpdateCatch, useDeleteCatch, type CatchInput, type CatchChanges } from './api/catches-api';
+export {
+  useCatches,
+  useCatch,
+  useLogCatch,
+  useUpdateCatch,
+  useDeleteCatch,
+  type CatchInput,
+  type CatchChanges,
+} from './api/catches-api';

@@ -3,4 +3,12 @@ export { EventForm } from './components/event-form';
 export { EventSummary } from './components/event-summary';
 export { CompetitionDayForm } from './components/competition-day-form';
 export { PracticeDaysPanel } from './components/practice-days-panel';
-export { useEvent, useEvents, useEventDays, useDeleteEvent, eventQuery, eventsQuery, type EventInput } from './api/events-api';
+export {
+  useEvent,
+  useEvents,
+  useEventDays,
+  useDeleteEvent,
+  eventQuery,
+  eventsQuery,
+  type EventInput,
+} from './api/events-api';

@@ -24,8 +24,8 @@ export function Component() {
             Units
           </Heading>
           <Text as="p" className={styles.sectionLead}>
-            How weights, lengths, depths and temperatures are shown to you. What was entered is stored as entered,
-            so switching back and forth never rounds anything away.
+            How weights, lengths, depths and temperatures are shown to you. What was entered is stored as entered, so
+            switching back and forth never rounds anything away.
           </Text>
           <UnitsForm units={me.user.units} />
         </section>

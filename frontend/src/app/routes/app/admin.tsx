@@ -15,7 +15,11 @@ export function Component() {
     return (
       <>
         <PageHeader title="Accounts" />
-        <Banner variant="warning" title="For site administrators only" description="Your account cannot manage other accounts." />
+        <Banner
+          variant="warning"
+          title="For site administrators only"
+          description="Your account cannot manage other accounts."
+        />
       </>
     );
   }
@@ -45,7 +49,11 @@ function AccountsAdmin({ ownUserId }: { ownUserId: string }) {
       {accounts.isPending ? (
         <LoadingState label="Loading accounts…" />
       ) : accounts.isError ? (
-        <ErrorState error={accounts.error} title="Accounts could not be loaded" onRetry={() => void accounts.refetch()} />
+        <ErrorState
+          error={accounts.error}
+          title="Accounts could not be loaded"
+          onRetry={() => void accounts.refetch()}
+        />
       ) : accounts.data.length === 0 ? (
         <EmptyState title="No accounts yet" />
       ) : (

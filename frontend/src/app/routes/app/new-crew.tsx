@@ -19,7 +19,8 @@ export function Component() {
       />
       {first ? (
         <Text as="p" className={styles.note}>
-          Were you invited to someone else&rsquo;s crew? Open the link in that e-mail instead; it brings you straight in.
+          Were you invited to someone else&rsquo;s crew? Open the link in that e-mail instead; it brings you straight
+          in.
         </Text>
       ) : null}
       <CreateCrewForm onCreated={(crew) => navigate(paths.crew.href(crew.id))} />

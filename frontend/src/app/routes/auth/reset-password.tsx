@@ -19,7 +19,9 @@ export function Component() {
     <AuthLayout
       title={done ? 'Password changed' : title}
       lead={
-        token || done ? undefined : <p>Enter the e-mail you sign in with and we will send you a link to choose a new password.</p>
+        token || done ? undefined : (
+          <p>Enter the e-mail you sign in with and we will send you a link to choose a new password.</p>
+        )
       }
       footer={
         <Text>

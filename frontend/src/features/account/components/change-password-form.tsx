@@ -31,7 +31,12 @@ export function ChangePasswordForm() {
       }}
     >
       {mutation.isSuccess ? (
-        <Banner variant="success" layout="compact" title="Password changed" description="Other devices were signed out." />
+        <Banner
+          variant="success"
+          layout="compact"
+          title="Password changed"
+          description="Other devices were signed out."
+        />
       ) : null}
       <FormError error={mutation.error} title="The password was not changed" />
       <TextField

@@ -27,7 +27,10 @@ describe('UnitsForm', () => {
   it('sends the whole set of choices and takes the server’s answer as the new state', async () => {
     const net = fakeNetwork({
       'GET /api/auth/csrf': { status: 200, body: { csrfToken: 'tok-u' } },
-      'PATCH /api/auth/me': (req: SeenRequest) => ({ status: 200, body: meWith((req.body as { units: UnitPreferences }).units) }),
+      'PATCH /api/auth/me': (req: SeenRequest) => ({
+        status: 200,
+        body: meWith((req.body as { units: UnitPreferences }).units),
+      }),
     }).install();
     const { queryClient } = renderWithApp(<UnitsForm units={start} />);
 
@@ -62,7 +65,9 @@ describe('UnitsForm', () => {
 
     // Primer joins a group's validation message to the group's accessible name, so it is announced with it.
     await waitFor(() =>
-      expect(screen.getByRole('group', { name: /^Water depth/ })).toHaveAccessibleName(/^Water depth\s*Depth must be ft or m\.$/),
+      expect(screen.getByRole('group', { name: /^Water depth/ })).toHaveAccessibleName(
+        /^Water depth\s*Depth must be ft or m\.$/,
+      ),
     );
     expect(screen.getByRole('group', { name: /^Weight/ })).toHaveAccessibleName('Weight');
     expect(screen.getAllByText('Depth must be ft or m.').length).toBeGreaterThan(0);

@@ -19,7 +19,9 @@ import styles from './account-forms.module.css';
 type UnitKind = keyof UnitPreferences;
 
 /** Choices per kind, in the words shown to people, with the example that makes each unambiguous. */
-const UNIT_CHOICES: { [K in UnitKind]: { legend: string; options: { value: UnitPreferences[K]; label: string; example: string }[] } } = {
+const UNIT_CHOICES: {
+  [K in UnitKind]: { legend: string; options: { value: UnitPreferences[K]; label: string; example: string }[] };
+} = {
   weight: {
     legend: 'Weight',
     options: [
@@ -73,7 +75,10 @@ export function UnitsForm({ units }: { units: UnitPreferences }) {
       <FormError error={mutation.error} title="Units were not saved" />
       <div className={styles.unitGrid}>
         {KINDS.map((kind) => {
-          const messages = [...fieldMessages(mutation.error, `units.${kind}`), ...fieldMessages(mutation.error, 'units')];
+          const messages = [
+            ...fieldMessages(mutation.error, `units.${kind}`),
+            ...fieldMessages(mutation.error, 'units'),
+          ];
           return (
             <RadioGroup
               key={kind}
@@ -92,7 +97,9 @@ export function UnitsForm({ units }: { units: UnitPreferences }) {
                   </FormControl.Label>
                 </FormControl>
               ))}
-              {messages.length ? <RadioGroup.Validation variant="error">{messages.join(' ')}</RadioGroup.Validation> : null}
+              {messages.length ? (
+                <RadioGroup.Validation variant="error">{messages.join(' ')}</RadioGroup.Validation>
+              ) : null}
             </RadioGroup>
           );
         })}

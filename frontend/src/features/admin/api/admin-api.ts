@@ -19,6 +19,9 @@ export const accountsQuery = queryOptions({
 });
 
 /** PATCH /api/admin/users/:userId: disabling ends that person's sessions at once. */
-export function updateAccountStatus(userId: string, body: { disabled?: boolean; siteRole?: SiteRole }): Promise<AdminAccountRow> {
+export function updateAccountStatus(
+  userId: string,
+  body: { disabled?: boolean; siteRole?: SiteRole },
+): Promise<AdminAccountRow> {
   return api.patch<AdminAccountRow>(`/admin/users/${encodeURIComponent(userId)}`, body);
 }

@@ -1,5 +1,12 @@
 import { Button, Label, Text } from '@primer/react';
-import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import type { AdminAccountRow } from '../api/admin-api';
 import tableStyles from '../../../components/table/table.module.css';
@@ -24,7 +31,10 @@ export function AccountsTable({
   const columns = useMemo(
     () => [
       column.accessor('displayName', { header: 'Name' }),
-      column.accessor('email', { header: 'E-mail', cell: (i) => <span className={tableStyles.wrapAnywhere}>{i.getValue()}</span> }),
+      column.accessor('email', {
+        header: 'E-mail',
+        cell: (i) => <span className={tableStyles.wrapAnywhere}>{i.getValue()}</span>,
+      }),
       column.accessor('siteRole', {
         header: 'Site role',
         cell: (i) => (i.getValue() === 'admin' ? <Label variant="accent">Admin</Label> : <Text>User</Text>),
@@ -32,7 +42,8 @@ export function AccountsTable({
       column.accessor('createdAt', { header: 'Joined', cell: (i) => dateFormat.format(new Date(i.getValue())) }),
       column.accessor('disabled', {
         header: 'Status',
-        cell: (i) => (i.getValue() ? <Label variant="danger">Disabled</Label> : <Label variant="success">Active</Label>),
+        cell: (i) =>
+          i.getValue() ? <Label variant="danger">Disabled</Label> : <Label variant="success">Active</Label>,
       }),
       column.display({
         id: 'actions',
@@ -82,7 +93,11 @@ export function AccountsTable({
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                   >
                     {sortable ? (
-                      <button type="button" className={styles.sortButton} onClick={header.column.getToggleSortingHandler()}>
+                      <button
+                        type="button"
+                        className={styles.sortButton}
+                        onClick={header.column.getToggleSortingHandler()}
+                      >
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <span aria-hidden="true">{sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}</span>
                       </button>

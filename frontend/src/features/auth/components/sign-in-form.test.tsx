@@ -19,7 +19,10 @@ describe('SignInForm', () => {
           statusCode: 400,
           error: 'Bad Request',
           message: 'Some fields need attention.',
-          fieldErrors: { email: ['Enter an e-mail address like name@example.com.'], password: ['Enter your password.'] },
+          fieldErrors: {
+            email: ['Enter an e-mail address like name@example.com.'],
+            password: ['Enter your password.'],
+          },
           requestId: 'q1',
         },
       },
@@ -61,7 +64,13 @@ describe('SignInForm', () => {
 
   it('on success remembers who signed in and hands the answer on', async () => {
     const me: MeResponse = {
-      user: { id: 'u1', email: 'owner@demo.test', displayName: 'Owner', siteRole: 'user', units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } },
+      user: {
+        id: 'u1',
+        email: 'owner@demo.test',
+        displayName: 'Owner',
+        siteRole: 'user',
+        units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' },
+      },
       crews: [{ crewId: 'c1', crewName: 'Morning Shift', role: 'owner' }],
     };
     const net = fakeNetwork({

@@ -9,7 +9,13 @@ import { rememberSignedIn } from '../../../lib/auth';
 import { signIn } from '../api/auth-api';
 
 /** E-mail and password; server messages appear beside the fields they concern. */
-export function SignInForm({ onSignedIn, defaultEmail = '' }: { onSignedIn: (me: MeResponse) => void; defaultEmail?: string }) {
+export function SignInForm({
+  onSignedIn,
+  defaultEmail = '',
+}: {
+  onSignedIn: (me: MeResponse) => void;
+  defaultEmail?: string;
+}) {
   const queryClient = useQueryClient();
   const [email, setEmail] = useState(defaultEmail);
   const [password, setPassword] = useState('');

@@ -9,7 +9,13 @@ import { rememberSignedIn } from '../../../lib/auth';
 import { signUp } from '../api/auth-api';
 
 /** Name, e-mail and password for a new account; the server checks them and signs the person in. */
-export function SignUpForm({ onSignedUp, defaultEmail = '' }: { onSignedUp: (me: MeResponse) => void; defaultEmail?: string }) {
+export function SignUpForm({
+  onSignedUp,
+  defaultEmail = '',
+}: {
+  onSignedUp: (me: MeResponse) => void;
+  defaultEmail?: string;
+}) {
   const queryClient = useQueryClient();
   const [displayName, setDisplayName] = useState('');
   const [email, setEmail] = useState(defaultEmail);

@@ -31,7 +31,10 @@ export interface CatchInput {
  * Body of PATCH /catches/:catchId: only what changed (an unchanged weight is not re-sent, so what was typed
  * stays exactly as typed), plus the version the form was loaded with (409 "stale_version" when outdated).
  */
-export type CatchChanges = Partial<Omit<CatchInput, 'competitionDayId' | 'findId'>> & { findId?: string | null; version: number };
+export type CatchChanges = Partial<Omit<CatchInput, 'competitionDayId' | 'findId'>> & {
+  findId?: string | null;
+  version: number;
+};
 
 const catchPath = (crewId: string, catchId: string) => crewApiPath(crewId, `/catches/${encodeURIComponent(catchId)}`);
 const catchKey = (crewId: string, catchId: string) => [...journalKeys.allCatches(crewId), 'one', catchId] as const;

@@ -6,7 +6,17 @@ import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
 import { renderWithApp } from '../../../testing/render';
 import { CatchEntryForm } from './catch-entry-form';
 
-const lake: LakeView = { id: 'l1', name: 'Test Reservoir', region: 'Test', timeZone: 'America/Chicago', lat: 34.5, lon: -86.2, areaAcres: null, notes: '', version: 1 };
+const lake: LakeView = {
+  id: 'l1',
+  name: 'Test Reservoir',
+  region: 'Test',
+  timeZone: 'America/Chicago',
+  lat: 34.5,
+  lon: -86.2,
+  areaAcres: null,
+  notes: '',
+  version: 1,
+};
 const find = (id: string, name: string): FindView => ({
   id,
   lakeId: 'l1',
@@ -38,7 +48,13 @@ const csrf = { status: 200, body: { csrfToken: 'tok' } };
 
 /** The server's answer to a logged catch, built from what was sent (as the real one is). */
 function savedCatch(request: SeenRequest, extra: Partial<CatchView> = {}): CatchView {
-  const body = request.body as { caughtAt: string; species: CatchView['species']; findId?: string; fate: CatchView['fate']; weight: { value: number; ounces?: number } };
+  const body = request.body as {
+    caughtAt: string;
+    species: CatchView['species'];
+    findId?: string;
+    fate: CatchView['fate'];
+    weight: { value: number; ounces?: number };
+  };
   const [hh, mm] = body.caughtAt.split(':').map(Number);
   return {
     id: `c-${hh}${mm}`,
@@ -107,7 +123,9 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
       waterTemp: null,
       fate: 'weighed',
     });
-    expect(await screen.findByText(/Logged 3 lb 7\.0 oz largemouth at 07:42, from North shell bar/)).toBeInTheDocument();
+    expect(
+      await screen.findByText(/Logged 3 lb 7\.0 oz largemouth at 07:42, from North shell bar/),
+    ).toBeInTheDocument();
     expect(screen.getByRole('textbox', { name: /weight/i })).toHaveValue('');
     expect(screen.getByRole('combobox', { name: /find/i })).toHaveValue('');
     expect(time).toHaveFocus();
@@ -194,7 +212,14 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
       'GET /api/auth/csrf': csrf,
       'POST /api/crews/c1/catches': (request) => ({
         status: 201,
-        body: savedCatch(request, { findId: 'f2', findName: 'Rock pile', attributionDistanceM: 23.4, lat: 34.5001, lon: -86.2002, weightFlagged: true }),
+        body: savedCatch(request, {
+          findId: 'f2',
+          findName: 'Rock pile',
+          attributionDistanceM: 23.4,
+          lat: 34.5001,
+          lon: -86.2002,
+          weightFlagged: true,
+        }),
       }),
     }).install();
     const user = userEvent.setup();

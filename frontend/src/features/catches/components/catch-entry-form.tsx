@@ -134,10 +134,15 @@ export function CatchEntryForm({
   const findName = (id: string | null) => finds.find((f) => f.id === id)?.name ?? 'a find';
 
   const serverMessages = (field: string) =>
-    log.error instanceof ApiRequestError ? SERVER_FIELDS[field].flatMap((name) => log.error instanceof ApiRequestError ? log.error.messagesFor(name) : []) : [];
+    log.error instanceof ApiRequestError
+      ? SERVER_FIELDS[field].flatMap((name) =>
+          log.error instanceof ApiRequestError ? log.error.messagesFor(name) : [],
+        )
+      : [];
   const messages = (field: string) => [...(errors[field] ? [errors[field]] : []), ...serverMessages(field)];
 
-  const set = (key: keyof Values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
+  const set = (key: keyof Values) => (e: { target: { value: string } }) =>
+    setValues((v) => ({ ...v, [key]: e.target.value }));
 
   const build = (): { input?: CatchInput; errors: Record<string, string> } => {
     const found: Record<string, string> = {};
@@ -260,7 +265,12 @@ export function CatchEntryForm({
         {field(
           'species',
           'Species',
-          <Select name="species" value={values.species} onChange={(e) => setValues((v) => ({ ...v, species: e.target.value as Species }))} validationStatus={status('species')}>
+          <Select
+            name="species"
+            value={values.species}
+            onChange={(e) => setValues((v) => ({ ...v, species: e.target.value as Species }))}
+            validationStatus={status('species')}
+          >
             {SPECIES.map((s) => (
               <Select.Option key={s} value={s}>
                 {SPECIES_LABELS[s]}
@@ -285,7 +295,15 @@ export function CatchEntryForm({
         {field(
           'length',
           `Length (${UNIT_SIGNS[prefs.length]})`,
-          <TextInput name="length" value={values.length} onChange={set('length')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('length')} />,
+          <TextInput
+            name="length"
+            value={values.length}
+            onChange={set('length')}
+            inputMode="decimal"
+            autoComplete="off"
+            className={styles.short}
+            validationStatus={status('length')}
+          />,
           'Optional',
         )}
       </div>
@@ -295,12 +313,26 @@ export function CatchEntryForm({
             {field(
               'lat',
               'Latitude',
-              <TextInput name="lat" value={values.lat} onChange={set('lat')} inputMode="decimal" autoComplete="off" validationStatus={status('lat')} />,
+              <TextInput
+                name="lat"
+                value={values.lat}
+                onChange={set('lat')}
+                inputMode="decimal"
+                autoComplete="off"
+                validationStatus={status('lat')}
+              />,
             )}
             {field(
               'lon',
               'Longitude',
-              <TextInput name="lon" value={values.lon} onChange={set('lon')} inputMode="decimal" autoComplete="off" validationStatus={status('lon')} />,
+              <TextInput
+                name="lon"
+                value={values.lon}
+                onChange={set('lon')}
+                inputMode="decimal"
+                autoComplete="off"
+                validationStatus={status('lon')}
+              />,
               'Matched to the nearest find within 50 m',
             )}
           </>
@@ -308,8 +340,18 @@ export function CatchEntryForm({
           field(
             'find',
             'Find (type to filter)',
-            <TextInput name="find" value={values.find} onChange={set('find')} list={listId} autoComplete="off" block validationStatus={status('find')} />,
-            finds.length ? 'Optional: the practice find it came from' : 'No finds on this lake yet; leave it empty or use coordinates',
+            <TextInput
+              name="find"
+              value={values.find}
+              onChange={set('find')}
+              list={listId}
+              autoComplete="off"
+              block
+              validationStatus={status('find')}
+            />,
+            finds.length
+              ? 'Optional: the practice find it came from'
+              : 'No finds on this lake yet; leave it empty or use coordinates',
           )
         )}
         <FormControl>
@@ -319,7 +361,12 @@ export function CatchEntryForm({
         {field(
           'fate',
           'Fate',
-          <Select name="fate" value={values.fate} onChange={(e) => setValues((v) => ({ ...v, fate: e.target.value as Fate }))} validationStatus={status('fate')}>
+          <Select
+            name="fate"
+            value={values.fate}
+            onChange={(e) => setValues((v) => ({ ...v, fate: e.target.value as Fate }))}
+            validationStatus={status('fate')}
+          >
             {FATES.map((f) => (
               <Select.Option key={f} value={f}>
                 {FATE_LABELS[f]}
@@ -329,17 +376,53 @@ export function CatchEntryForm({
         )}
       </div>
       <div className={styles.row}>
-        {field('lure', 'Lure', <TextInput name="lure" value={values.lure} onChange={set('lure')} autoComplete="off" validationStatus={status('lure')} />)}
-        {field('technique', 'Technique', <TextInput name="technique" value={values.technique} onChange={set('technique')} autoComplete="off" validationStatus={status('technique')} />)}
+        {field(
+          'lure',
+          'Lure',
+          <TextInput
+            name="lure"
+            value={values.lure}
+            onChange={set('lure')}
+            autoComplete="off"
+            validationStatus={status('lure')}
+          />,
+        )}
+        {field(
+          'technique',
+          'Technique',
+          <TextInput
+            name="technique"
+            value={values.technique}
+            onChange={set('technique')}
+            autoComplete="off"
+            validationStatus={status('technique')}
+          />,
+        )}
         {field(
           'depth',
           `Depth (${UNIT_SIGNS[prefs.depth]})`,
-          <TextInput name="depth" value={values.depth} onChange={set('depth')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('depth')} />,
+          <TextInput
+            name="depth"
+            value={values.depth}
+            onChange={set('depth')}
+            inputMode="decimal"
+            autoComplete="off"
+            className={styles.short}
+            validationStatus={status('depth')}
+          />,
         )}
         {field(
           'waterTemp',
           `Water (${UNIT_SIGNS[prefs.temperature]})`,
-          <TextInput name="waterTemp" value={values.waterTemp} onChange={set('waterTemp')} inputMode="decimal" autoComplete="off" className={styles.short} validationStatus={status('waterTemp')} />,
+          <TextInput
+            name="waterTemp"
+            value={values.waterTemp}
+            onChange={set('waterTemp')}
+            inputMode="decimal"
+            autoComplete="off"
+            className={styles.short}
+            validationStatus={status('waterTemp')}
+          />,
         )}
       </div>
       <PhotoField
@@ -367,7 +450,8 @@ export function CatchEntryForm({
         {logged ? (
           <>
             <Text>
-              Logged {formatWeight(logged.weightLb, prefs.weight)} {SPECIES_LABELS[logged.species].toLowerCase()} at {clockTime(logged.caughtAt, lake.timeZone)}
+              Logged {formatWeight(logged.weightLb, prefs.weight)} {SPECIES_LABELS[logged.species].toLowerCase()} at{' '}
+              {clockTime(logged.caughtAt, lake.timeZone)}
               {logged.findId
                 ? logged.attributionDistanceM !== null
                   ? `, attributed to ${logged.findName ?? findName(logged.findId)} (${Math.round(logged.attributionDistanceM)} m away)`
@@ -377,7 +461,9 @@ export function CatchEntryForm({
                   : ''}
               .
             </Text>{' '}
-            {logged.weightFlagged ? <Label variant="attention">Check this weight: it does not fit the length</Label> : null}
+            {logged.weightFlagged ? (
+              <Label variant="attention">Check this weight: it does not fit the length</Label>
+            ) : null}
           </>
         ) : null}
       </div>

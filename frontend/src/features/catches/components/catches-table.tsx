@@ -83,7 +83,7 @@ export function CatchesTable({
         meta: { numeric: true },
         cell: (info) => formatLength(info.row.original.lengthIn, prefs.length),
       }),
-      column.accessor((c) => (c.findId ? findNames.get(c.findId) ?? 'Find' : ''), {
+      column.accessor((c) => (c.findId ? (findNames.get(c.findId) ?? 'Find') : ''), {
         id: 'find',
         header: 'Find',
         cell: (info) => {
@@ -132,7 +132,14 @@ export function CatchesTable({
                 const name = catchName(c, prefs, timeZone);
                 return (
                   <span className={styles.rowActions}>
-                    <IconButton as={Link} to={journalPaths.catch.href(crewId, c.id)} icon={PencilIcon} size="small" variant="invisible" aria-label={`Edit ${name}`} />
+                    <IconButton
+                      as={Link}
+                      to={journalPaths.catch.href(crewId, c.id)}
+                      icon={PencilIcon}
+                      size="small"
+                      variant="invisible"
+                      aria-label={`Edit ${name}`}
+                    />
                     <DeleteRecordButton
                       compact
                       record={name}
@@ -151,7 +158,9 @@ export function CatchesTable({
   if (catches.length === 0) {
     return (
       <EmptyState title="No catches logged yet">
-        {canWrite ? 'Log each fish with the form above: time, weight and the find it came from.' : 'Catches appear here once an angler logs them.'}
+        {canWrite
+          ? 'Log each fish with the form above: time, weight and the find it came from.'
+          : 'Catches appear here once an angler logs them.'}
       </EmptyState>
     );
   }

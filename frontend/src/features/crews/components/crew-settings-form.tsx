@@ -53,8 +53,8 @@ export function CrewSettingsForm({ crew }: { crew: CrewView }) {
             Viewers see exact positions
           </Heading>
           <Text as="p" id="viewers-positions-caption" className={styles.caption}>
-            When off, viewers (a coach or sponsor) see finds and catches without their coordinates. Turn it on only
-            for people you would hand your waypoints to.
+            When off, viewers (a coach or sponsor) see finds and catches without their coordinates. Turn it on only for
+            people you would hand your waypoints to.
           </Text>
         </div>
         <ToggleSwitch

@@ -31,9 +31,7 @@ export function LeaveCrew({
   });
   return (
     <div>
-      <Text as="p">
-        Leaving removes your access to this crew&rsquo;s journal. An owner can invite you back later.
-      </Text>
+      <Text as="p">Leaving removes your access to this crew&rsquo;s journal. An owner can invite you back later.</Text>
       <FormError error={mutation.error} title="Could not leave the crew" />
       <Button variant="danger" onClick={() => setConfirming(true)} loading={mutation.isPending}>
         Leave this crew

@@ -19,7 +19,8 @@ export interface EventInput {
   notes: string;
 }
 
-const eventPath = (crewId: string, eventId: string, rest = '') => crewApiPath(crewId, `/events/${encodeURIComponent(eventId)}${rest}`);
+const eventPath = (crewId: string, eventId: string, rest = '') =>
+  crewApiPath(crewId, `/events/${encodeURIComponent(eventId)}${rest}`);
 
 export const eventsQuery = (crewId: string, lakeId?: string) =>
   queryOptions({
@@ -87,8 +88,17 @@ export function useDeleteEvent(crewId: string) {
 export function useUpdateCompetitionDay(crewId: string, eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ dayId, ...body }: { dayId: string; version: number; startTime?: string | null; checkInTime?: string | null; weatherNotes?: string; waterTemp?: TemperatureEntry | null }) =>
-      api.patch<CompetitionDayView>(crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}`), body),
+    mutationFn: ({
+      dayId,
+      ...body
+    }: {
+      dayId: string;
+      version: number;
+      startTime?: string | null;
+      checkInTime?: string | null;
+      weatherNotes?: string;
+      waterTemp?: TemperatureEntry | null;
+    }) => api.patch<CompetitionDayView>(crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}`), body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
   });
 }
@@ -97,8 +107,15 @@ export function useUpdateCompetitionDay(crewId: string, eventId: string) {
 export function useUpdatePracticeDay(crewId: string, eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ dayId, ...body }: { dayId: string; version: number; notes?: string; waterTemp?: TemperatureEntry | null }) =>
-      api.patch<PracticeDayView>(crewApiPath(crewId, `/practice-days/${encodeURIComponent(dayId)}`), body),
+    mutationFn: ({
+      dayId,
+      ...body
+    }: {
+      dayId: string;
+      version: number;
+      notes?: string;
+      waterTemp?: TemperatureEntry | null;
+    }) => api.patch<PracticeDayView>(crewApiPath(crewId, `/practice-days/${encodeURIComponent(dayId)}`), body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
   });
 }

@@ -11,7 +11,17 @@ import { useUpdateCompetitionDay } from '../api/events-api';
 import styles from './event-form.module.css';
 
 /** Start and check-in times (lake clock), weather and water temperature of one competition day. */
-export function CompetitionDayForm({ crewId, eventId, day, prefs }: { crewId: string; eventId: string; day: CompetitionDayView; prefs: UnitPreferences }) {
+export function CompetitionDayForm({
+  crewId,
+  eventId,
+  day,
+  prefs,
+}: {
+  crewId: string;
+  eventId: string;
+  day: CompetitionDayView;
+  prefs: UnitPreferences;
+}) {
   const [values, setValues] = useState({
     startTime: day.startTime ?? '',
     checkInTime: day.checkInTime ?? '',
@@ -45,14 +55,24 @@ export function CompetitionDayForm({ crewId, eventId, day, prefs }: { crewId: st
       { onSuccess: () => setSaved(true) },
     );
   };
-  const f = (key: keyof typeof values, name: string = key) => ({ name, value: values[key], onChange: set(key), serverError: update.error, clientError: errors[name] });
+  const f = (key: keyof typeof values, name: string = key) => ({
+    name,
+    value: values[key],
+    onChange: set(key),
+    serverError: update.error,
+    clientError: errors[name],
+  });
   return (
     <FormStack onSubmit={submit} label={`Competition day ${dayLabel(day.date)}`}>
       <FormError error={update.error} />
       <div className={styles.pair}>
         <TextField label="Start (lake time)" placeholder="06:15" inputMode="numeric" {...f('startTime')} />
         <TextField label="Check-in (lake time)" placeholder="15:00" inputMode="numeric" {...f('checkInTime')} />
-        <TextField label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`} inputMode="decimal" {...f('waterTemp', 'waterTemp')} />
+        <TextField
+          label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`}
+          inputMode="decimal"
+          {...f('waterTemp', 'waterTemp')}
+        />
       </div>
       <TextField label="Weather" placeholder="Wind, sky, front, pressure" {...f('weatherNotes')} />
       <FormActions>

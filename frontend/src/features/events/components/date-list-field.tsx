@@ -39,7 +39,11 @@ export function DateListField({
         <div key={index} className={styles.dateRow}>
           <FormControl>
             <FormControl.Label visuallyHidden>{`${label}: day ${index + 1}`}</FormControl.Label>
-            <TextInput type="date" value={date} onChange={(e) => onChange(dates.map((d, i) => (i === index ? e.target.value : d)))} />
+            <TextInput
+              type="date"
+              value={date}
+              onChange={(e) => onChange(dates.map((d, i) => (i === index ? e.target.value : d)))}
+            />
           </FormControl>
           <IconButton
             icon={XIcon}
@@ -49,7 +53,11 @@ export function DateListField({
           />
         </div>
       ))}
-      <Button leadingVisual={PlusIcon} size="small" onClick={() => onChange([...dates, dates.length ? nextDate(dates[dates.length - 1]) : firstDefault])}>
+      <Button
+        leadingVisual={PlusIcon}
+        size="small"
+        onClick={() => onChange([...dates, dates.length ? nextDate(dates[dates.length - 1]) : firstDefault])}
+      >
         Add a day
       </Button>
       {messages.length ? (

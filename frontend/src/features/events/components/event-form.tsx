@@ -43,7 +43,11 @@ type Errors = Partial<Record<string, string>>;
 const today = () => new Date().toISOString().slice(0, 10);
 
 /** Form values of an event (or of a new one, with the common-practice rules prefilled). */
-export function initialEventValues(event: EventView | undefined, lakeId: string, prefs: UnitPreferences): EventFormValues {
+export function initialEventValues(
+  event: EventView | undefined,
+  lakeId: string,
+  prefs: UnitPreferences,
+): EventFormValues {
   const rules = event?.rules ?? DEFAULT_EVENT_RULES;
   return {
     lakeId: event?.lakeId ?? lakeId,
@@ -70,7 +74,8 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
   if (!v.name.trim()) errors.name = 'Give the event a name.';
   if (v.competitionDates.length === 0) errors.competitionDates = 'Add at least one competition day.';
   const fish = readNumber(v.fishPerDay);
-  if (fish === null || !Number.isInteger(fish) || fish < 1 || fish > 20) errors['rules.fishPerDay'] = 'A whole number of fish, 1 to 20.';
+  if (fish === null || !Number.isInteger(fish) || fish < 1 || fish > 20)
+    errors['rules.fishPerDay'] = 'A whole number of fish, 1 to 20.';
   const minLength = v.minLength.trim() ? parseLength(v.minLength, prefs.length) : null;
   if (minLength && !minLength.ok) errors['rules.minLengthIn'] = minLength.error;
   const penalty = (text: string, key: string) => {
@@ -90,7 +95,8 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
   const entryFee = money(v.entryFee, 'entryFee');
   const payout = money(v.payout, 'payout');
   const place = v.finalPlace.trim() ? readNumber(v.finalPlace) : null;
-  if (v.finalPlace.trim() && (place === null || !Number.isInteger(place) || place < 1)) errors.finalPlace = 'A place is a whole number from 1.';
+  if (v.finalPlace.trim() && (place === null || !Number.isInteger(place) || place < 1))
+    errors.finalPlace = 'A place is a whole number from 1.';
   const allDates = [...v.practiceDates, ...v.competitionDates];
   if (allDates.some((d) => !/^\d{4}-\d{2}-\d{2}$/.test(d))) errors.competitionDates = 'Every day needs a full date.';
   if (new Set(allDates).size !== allDates.length) errors.competitionDates = 'A date appears twice.';
@@ -138,7 +144,8 @@ export function EventForm({
   const [values, setValues] = useState(() => initialEventValues(event, lakeId || lakes[0]?.id || '', prefs));
   const [errors, setErrors] = useState<Errors>({});
   const save = useSaveEvent(crewId, event?.id);
-  const set = (key: keyof EventFormValues) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
+  const set = (key: keyof EventFormValues) => (e: { target: { value: string } }) =>
+    setValues((v) => ({ ...v, [key]: e.target.value }));
   const field = (key: keyof EventFormValues, serverName: string = key) => ({
     name: serverName,
     value: values[key] as string,
@@ -156,17 +163,32 @@ export function EventForm({
 
   return (
     <FormStack onSubmit={submit} label={event ? `Edit ${event.name}` : 'New event'}>
-      <FormError error={save.error} title={isApiError(save.error, 409, 'day_in_use') ? 'The dates were not changed: a day you removed still has records' : undefined} />
+      <FormError
+        error={save.error}
+        title={
+          isApiError(save.error, 409, 'day_in_use')
+            ? 'The dates were not changed: a day you removed still has records'
+            : undefined
+        }
+      />
       <FormControl required>
         <FormControl.Label>Lake</FormControl.Label>
-        <Select name="lakeId" value={values.lakeId} onChange={set('lakeId')} block validationStatus={lakeMessages.length ? 'error' : undefined}>
+        <Select
+          name="lakeId"
+          value={values.lakeId}
+          onChange={set('lakeId')}
+          block
+          validationStatus={lakeMessages.length ? 'error' : undefined}
+        >
           {lakes.map((lake) => (
             <Select.Option key={lake.id} value={lake.id}>
               {lake.name}
             </Select.Option>
           ))}
         </Select>
-        {lakeMessages.length ? <FormControl.Validation variant="error">{lakeMessages.join(' ')}</FormControl.Validation> : null}
+        {lakeMessages.length ? (
+          <FormControl.Validation variant="error">{lakeMessages.join(' ')}</FormControl.Validation>
+        ) : null}
       </FormControl>
       <TextField label="Event name" required autoComplete="off" {...field('name')} />
       <TextField label="Organiser" caption="Club, trail or circuit, in your words." {...field('organiser')} />
@@ -175,7 +197,10 @@ export function EventForm({
         caption="The days you pre-fish; finds can be tied to them."
         dates={values.practiceDates}
         onChange={(practiceDates) => setValues((v) => ({ ...v, practiceDates }))}
-        messages={[...(errors.practiceDates ? [errors.practiceDates] : []), ...fieldMessages(save.error, 'practiceDates')]}
+        messages={[
+          ...(errors.practiceDates ? [errors.practiceDates] : []),
+          ...fieldMessages(save.error, 'practiceDates'),
+        ]}
         firstDefault={today()}
       />
       <DateListField
@@ -183,7 +208,10 @@ export function EventForm({
         caption="Each gets its own catches and weigh-in."
         dates={values.competitionDates}
         onChange={(competitionDates) => setValues((v) => ({ ...v, competitionDates }))}
-        messages={[...(errors.competitionDates ? [errors.competitionDates] : []), ...fieldMessages(save.error, 'competitionDates')]}
+        messages={[
+          ...(errors.competitionDates ? [errors.competitionDates] : []),
+          ...fieldMessages(save.error, 'competitionDates'),
+        ]}
         firstDefault={values.practiceDates.length ? values.practiceDates[values.practiceDates.length - 1] : today()}
       />
       <fieldset className={styles.fieldset}>
@@ -197,8 +225,16 @@ export function EventForm({
             caption="Leave empty when the event sets none."
             {...field('minLength', 'rules.minLengthIn')}
           />
-          <TextField label={`Dead-fish penalty (${wSign})`} caption={weightHint(prefs.weight)} {...field('deadFishPenalty', 'rules.deadFishPenaltyLb')} />
-          <TextField label={`Short-fish penalty (${wSign})`} caption={weightHint(prefs.weight)} {...field('shortFishPenalty', 'rules.shortFishPenaltyLb')} />
+          <TextField
+            label={`Dead-fish penalty (${wSign})`}
+            caption={weightHint(prefs.weight)}
+            {...field('deadFishPenalty', 'rules.deadFishPenaltyLb')}
+          />
+          <TextField
+            label={`Short-fish penalty (${wSign})`}
+            caption={weightHint(prefs.weight)}
+            {...field('shortFishPenalty', 'rules.shortFishPenaltyLb')}
+          />
           <TextField
             label={`Late penalty per minute (${wSign})`}
             caption="Taken off for each minute late at check-in."
@@ -209,7 +245,12 @@ export function EventForm({
       <div className={styles.pair}>
         <TextField label="Entry fee" inputMode="decimal" {...field('entryFee')} />
         <TextField label="Payout won" inputMode="decimal" {...field('payout')} />
-        <TextField label="Final place" inputMode="numeric" caption="Fill in after the last weigh-in." {...field('finalPlace')} />
+        <TextField
+          label="Final place"
+          inputMode="numeric"
+          caption="Fill in after the last weigh-in."
+          {...field('finalPlace')}
+        />
       </div>
       <FormControl>
         <FormControl.Label>Notes</FormControl.Label>

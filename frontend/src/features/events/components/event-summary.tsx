@@ -5,10 +5,19 @@ import { dayLabel } from '../../../lib/lake-time';
 import { formatLength, formatWeight } from '../../../lib/units';
 import styles from './event-summary.module.css';
 
-const money = (n: number | null) => (n === null ? '—' : n.toLocaleString('en-US', { minimumFractionDigits: 0, maximumFractionDigits: 2 }));
+const money = (n: number | null) =>
+  n === null ? '—' : n.toLocaleString('en-US', { minimumFractionDigits: 0, maximumFractionDigits: 2 });
 
 /** The event at a glance: where, when, under which rules, and how it ended. */
-export function EventSummary({ event, lake, prefs }: { event: EventView; lake: LakeView | undefined; prefs: UnitPreferences }) {
+export function EventSummary({
+  event,
+  lake,
+  prefs,
+}: {
+  event: EventView;
+  lake: LakeView | undefined;
+  prefs: UnitPreferences;
+}) {
   const r = event.rules;
   return (
     <div className={styles.summary}>

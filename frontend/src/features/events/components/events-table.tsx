@@ -12,7 +12,17 @@ import { useEvents } from '../api/events-api';
 const column = createColumnHelper<EventView>();
 
 /** Events of one lake (or of every lake), newest first, sortable and filterable. */
-export function EventsTable({ crewId, lakeId, lakes, canWrite }: { crewId: string; lakeId?: string; lakes: LakeView[]; canWrite: boolean }) {
+export function EventsTable({
+  crewId,
+  lakeId,
+  lakes,
+  canWrite,
+}: {
+  crewId: string;
+  lakeId?: string;
+  lakes: LakeView[];
+  canWrite: boolean;
+}) {
   const events = useEvents(crewId, lakeId);
   const lakeNames = useMemo(() => new Map(lakes.map((l) => [l.id, l.name])), [lakes]);
   const columns = useMemo(
@@ -42,8 +52,17 @@ export function EventsTable({ crewId, lakeId, lakes, canWrite }: { crewId: strin
         meta: lakeId ? undefined : { filterOptions: lakes.map((l) => ({ value: l.name, label: l.name })) },
       }),
       column.accessor('organiser', { header: 'Organiser' }),
-      column.accessor((e) => e.practiceDates.length, { id: 'practice', header: 'Practice days', meta: { numeric: true } }),
-      column.accessor('finalPlace', { header: 'Final place', meta: { numeric: true }, cell: (info) => info.getValue() ?? '—', sortUndefined: 'last' }),
+      column.accessor((e) => e.practiceDates.length, {
+        id: 'practice',
+        header: 'Practice days',
+        meta: { numeric: true },
+      }),
+      column.accessor('finalPlace', {
+        header: 'Final place',
+        meta: { numeric: true },
+        cell: (info) => info.getValue() ?? '—',
+        sortUndefined: 'last',
+      }),
     ],
     [crewId, lakeNames, lakes, lakeId],
   );

@@ -9,7 +9,17 @@ import { foundHowLabel, HARDNESS_LABELS, kindLabel, positionText, VEGETATION_LAB
 import styles from '../../../components/record-detail/record-detail.module.css';
 
 /** One find in full: what was read on the sonar, where and when, its photo and the sun and moon at that moment. */
-export function FindDetail({ crewId, find, lake, prefs }: { crewId: string; find: FindWithSky; lake: LakeView | undefined; prefs: UnitPreferences }) {
+export function FindDetail({
+  crewId,
+  find,
+  lake,
+  prefs,
+}: {
+  crewId: string;
+  find: FindWithSky;
+  lake: LakeView | undefined;
+  prefs: UnitPreferences;
+}) {
   const zone = lake?.timeZone ?? 'UTC';
   return (
     <div className={styles.layout}>
@@ -39,7 +49,11 @@ export function FindDetail({ crewId, find, lake, prefs }: { crewId: string; find
           <dt>Position</dt>
           <dd>{find.lat === null ? 'Hidden by the crew\u2019s settings' : positionText(find.lat, find.lon)}</dd>
           <dt>Marked</dt>
-          <dd>{find.markedAt ? `${localDate(find.markedAt, zone)} at ${clockTime(find.markedAt, zone)}` : find.practiceDate ?? 'Time not recorded'}</dd>
+          <dd>
+            {find.markedAt
+              ? `${localDate(find.markedAt, zone)} at ${clockTime(find.markedAt, zone)}`
+              : (find.practiceDate ?? 'Time not recorded')}
+          </dd>
         </dl>
         {find.notes ? (
           <Text as="p" className={styles.notes}>
@@ -51,7 +65,12 @@ export function FindDetail({ crewId, find, lake, prefs }: { crewId: string; find
         <SkyContextPanel sky={find.sky} timeZone={zone} title="Sun and moon when marked" />
         {find.photoId ? (
           <figure className={styles.figure}>
-            <img src={photoUrl(crewId, find.photoId)} alt={`Photo or sonar screenshot of ${find.name}`} className={styles.photo} loading="lazy" />
+            <img
+              src={photoUrl(crewId, find.photoId)}
+              alt={`Photo or sonar screenshot of ${find.name}`}
+              className={styles.photo}
+              loading="lazy"
+            />
             <figcaption>
               <Text size="small">Attached image</Text>
             </figcaption>

@@ -22,7 +22,15 @@ import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
 import { clockTime, lakeWallTimeToIso, localDate, isClockTime } from '../../../lib/lake-time';
 import type { FindWithSky } from '../../../lib/journal-types';
-import { depthInputValue, parseDepth, parseOptional, parseTemperature, readNumber, temperatureInputValue, UNIT_SIGNS } from '../../../lib/units';
+import {
+  depthInputValue,
+  parseDepth,
+  parseOptional,
+  parseTemperature,
+  readNumber,
+  temperatureInputValue,
+  UNIT_SIGNS,
+} from '../../../lib/units';
 import { uploadPhoto, useSaveFind, type FindInput } from '../api/finds-api';
 import { HARDNESS_LABELS, VEGETATION_LABELS } from './find-labels';
 import styles from './find-form.module.css';
@@ -49,7 +57,12 @@ type Values = Record<
   string
 > & { baitSeen: boolean; photoId: string | null };
 
-function initialValues(find: FindWithSky | undefined, lake: LakeView | undefined, defaults: { lakeId?: string; eventId?: string }, prefs: UnitPreferences): Values {
+function initialValues(
+  find: FindWithSky | undefined,
+  lake: LakeView | undefined,
+  defaults: { lakeId?: string; eventId?: string },
+  prefs: UnitPreferences,
+): Values {
   const zone = lake?.timeZone ?? 'UTC';
   return {
     lakeId: find?.lakeId ?? defaults.lakeId ?? lake?.id ?? '',
@@ -76,7 +89,11 @@ function initialValues(find: FindWithSky | undefined, lake: LakeView | undefined
 }
 
 /** Read the form into the request, or say which field is wrong. Depth and water temperature go with their unit. */
-export function validateFind(v: Values, lake: LakeView | undefined, prefs: UnitPreferences): { input?: FindInput; errors: Record<string, string> } {
+export function validateFind(
+  v: Values,
+  lake: LakeView | undefined,
+  prefs: UnitPreferences,
+): { input?: FindInput; errors: Record<string, string> } {
   const errors: Record<string, string> = {};
   if (!v.lakeId) errors.lakeId = 'Choose the lake.';
   if (!v.name.trim()) errors.name = 'Give the find a name you will recognise on the water.';
@@ -89,12 +106,15 @@ export function validateFind(v: Values, lake: LakeView | undefined, prefs: UnitP
   const temp = parseOptional(v.waterTemp, (t) => parseTemperature(t, prefs.temperature));
   if (!temp.ok) errors.waterTemp = temp.error;
   const fish = v.fishMarked.trim() ? readNumber(v.fishMarked) : null;
-  if (v.fishMarked.trim() && (fish === null || !Number.isInteger(fish) || fish < 0)) errors.fishMarked = 'A whole number of fish, 0 or more.';
+  if (v.fishMarked.trim() && (fish === null || !Number.isInteger(fish) || fish < 0))
+    errors.fishMarked = 'A whole number of fish, 0 or more.';
   const khz = v.frequencyKhz.trim() ? readNumber(v.frequencyKhz) : null;
-  if (v.frequencyKhz.trim() && (khz === null || khz <= 0 || khz > 3000)) errors.frequencyKhz = 'The frequency in kHz, e.g. 83 or 200.';
+  if (v.frequencyKhz.trim() && (khz === null || khz <= 0 || khz > 3000))
+    errors.frequencyKhz = 'The frequency in kHz, e.g. 83 or 200.';
   let markedAt: string | null = null;
   if (v.markedDate || v.markedTime) {
-    if (!v.markedDate || !isClockTime(v.markedTime)) errors.markedAt = 'Give both the date and a 24-hour time (06:40), or neither.';
+    if (!v.markedDate || !isClockTime(v.markedTime))
+      errors.markedAt = 'Give both the date and a 24-hour time (06:40), or neither.';
     else markedAt = lakeWallTimeToIso(v.markedDate, v.markedTime, lake?.timeZone ?? 'UTC');
   }
   if (Object.keys(errors).length || !depth.ok || !temp.ok) return { errors };
@@ -144,7 +164,13 @@ function SelectField({
   return (
     <FormControl>
       <FormControl.Label>{label}</FormControl.Label>
-      <Select name={name} value={value} onChange={(e) => onChange(e.target.value)} block validationStatus={messages.length ? 'error' : undefined}>
+      <Select
+        name={name}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        block
+        validationStatus={messages.length ? 'error' : undefined}
+      >
         {children}
       </Select>
       {caption ? <FormControl.Caption>{caption}</FormControl.Caption> : null}
@@ -176,7 +202,11 @@ export function FindForm({
   const startLake = lakes.find((l) => l.id === (find?.lakeId ?? defaults.lakeId)) ?? lakes[0];
   const [v, setValues] = useState<Values>(() => initialValues(find, startLake, defaults, prefs));
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [photoState, setPhotoState] = useState<{ busy: boolean; error: string | null; name: string | null }>({ busy: false, error: null, name: null });
+  const [photoState, setPhotoState] = useState<{ busy: boolean; error: string | null; name: string | null }>({
+    busy: false,
+    error: null,
+    name: null,
+  });
   const save = useSaveFind(crewId, find?.id);
   const photoInputId = useId();
   const lake = lakes.find((l) => l.id === v.lakeId);
@@ -208,7 +238,11 @@ export function FindForm({
       setValues((s) => ({ ...s, photoId: id }));
       setPhotoState({ busy: false, error: null, name: file.name });
     } catch (error) {
-      setPhotoState({ busy: false, error: error instanceof Error ? error.message : 'The image could not be sent.', name: null });
+      setPhotoState({
+        busy: false,
+        error: error instanceof Error ? error.message : 'The image could not be sent.',
+        name: null,
+      });
     }
   };
 
@@ -222,16 +256,34 @@ export function FindForm({
     <FormStack onSubmit={submit} label={find ? `Edit ${find.name}` : 'New find'}>
       <OnPlaneCaution />
       <FormError error={save.error} />
-      <TextField label="Name" required autoComplete="off" placeholder="e.g. Shell bar off the north point" {...text('name')} />
+      <TextField
+        label="Name"
+        required
+        autoComplete="off"
+        placeholder="e.g. Shell bar off the north point"
+        {...text('name')}
+      />
       <div className={styles.grid}>
-        <SelectField label="Lake" name="lakeId" value={v.lakeId} onChange={(id) => setValues((s) => ({ ...s, lakeId: id, eventId: '', practiceDate: '' }))} messages={messages('lakeId')}>
+        <SelectField
+          label="Lake"
+          name="lakeId"
+          value={v.lakeId}
+          onChange={(id) => setValues((s) => ({ ...s, lakeId: id, eventId: '', practiceDate: '' }))}
+          messages={messages('lakeId')}
+        >
           {lakes.map((l) => (
             <Select.Option key={l.id} value={l.id}>
               {l.name}
             </Select.Option>
           ))}
         </SelectField>
-        <SelectField label="Event" name="eventId" value={v.eventId} onChange={(id) => setValues((s) => ({ ...s, eventId: id, practiceDate: '' }))} messages={messages('eventId')}>
+        <SelectField
+          label="Event"
+          name="eventId"
+          value={v.eventId}
+          onChange={(id) => setValues((s) => ({ ...s, eventId: id, practiceDate: '' }))}
+          messages={messages('eventId')}
+        >
           <Select.Option value="">Not tied to an event</Select.Option>
           {lakeEvents.map((e) => (
             <Select.Option key={e.id} value={e.id}>
@@ -240,7 +292,13 @@ export function FindForm({
           ))}
         </SelectField>
         {event && event.practiceDates.length ? (
-          <SelectField label="Practice day" name="practiceDate" value={v.practiceDate} onChange={set('practiceDate')} messages={messages('practiceDate')}>
+          <SelectField
+            label="Practice day"
+            name="practiceDate"
+            value={v.practiceDate}
+            onChange={set('practiceDate')}
+            messages={messages('practiceDate')}
+          >
             <Select.Option value="">—</Select.Option>
             {event.practiceDates.map((d) => (
               <Select.Option key={d} value={d}>
@@ -256,7 +314,13 @@ export function FindForm({
         <TextField label={`Depth (${UNIT_SIGNS[prefs.depth]})`} inputMode="decimal" {...text('depth')} />
       </div>
       <div className={styles.grid}>
-        <TextField label="Date marked" type="date" {...text('markedDate', 'markedAt')} clientError={null} serverError={null} />
+        <TextField
+          label="Date marked"
+          type="date"
+          {...text('markedDate', 'markedAt')}
+          clientError={null}
+          serverError={null}
+        />
         <TextField
           label="Time marked (lake clock)"
           placeholder="06:40"
@@ -279,7 +343,13 @@ export function FindForm({
             </Select.Option>
           ))}
         </SelectField>
-        <SelectField label="Sub-kind" name="subKind" value={v.subKind} onChange={set('subKind')} messages={messages('subKind')}>
+        <SelectField
+          label="Sub-kind"
+          name="subKind"
+          value={v.subKind}
+          onChange={set('subKind')}
+          messages={messages('subKind')}
+        >
           {FIND_SUB_KINDS[v.kind as FindKind].map((s) => (
             <Select.Option key={s} value={s}>
               {s}
@@ -301,7 +371,13 @@ export function FindForm({
             </Select.Option>
           ))}
         </SelectField>
-        <SelectField label="Vegetation density" name="vegetationDensity" value={v.vegetationDensity} onChange={set('vegetationDensity')} messages={messages('vegetationDensity')}>
+        <SelectField
+          label="Vegetation density"
+          name="vegetationDensity"
+          value={v.vegetationDensity}
+          onChange={set('vegetationDensity')}
+          messages={messages('vegetationDensity')}
+        >
           <Select.Option value="">Not noted</Select.Option>
           {VEGETATION_DENSITIES.map((d) => (
             <Select.Option key={d} value={d}>
@@ -316,8 +392,19 @@ export function FindForm({
           <FormControl.Label>Bait seen</FormControl.Label>
         </FormControl>
         <TextField label="Fish marked" inputMode="numeric" {...text('fishMarked')} />
-        <TextField label="Frequency (kHz)" inputMode="decimal" caption="e.g. 83 (wide beam) or 200 (narrow)" {...text('frequencyKhz')} />
-        <SelectField label="How it was found" name="foundHow" value={v.foundHow} onChange={set('foundHow')} messages={messages('foundHow')}>
+        <TextField
+          label="Frequency (kHz)"
+          inputMode="decimal"
+          caption="e.g. 83 (wide beam) or 200 (narrow)"
+          {...text('frequencyKhz')}
+        />
+        <SelectField
+          label="How it was found"
+          name="foundHow"
+          value={v.foundHow}
+          onChange={set('foundHow')}
+          messages={messages('foundHow')}
+        >
           <Select.Option value="">Not noted</Select.Option>
           {FOUND_HOW.map((h) => (
             <Select.Option key={h} value={h}>
@@ -325,7 +412,11 @@ export function FindForm({
             </Select.Option>
           ))}
         </SelectField>
-        <TextField label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`} inputMode="decimal" {...text('waterTemp')} />
+        <TextField
+          label={`Water temperature (${UNIT_SIGNS[prefs.temperature]})`}
+          inputMode="decimal"
+          {...text('waterTemp')}
+        />
       </div>
       <FormControl>
         <FormControl.Label>Notes</FormControl.Label>
@@ -335,13 +426,22 @@ export function FindForm({
         <label htmlFor={photoInputId} className={styles.photoLabel}>
           Photo or sonar screenshot
         </label>
-        <input id={photoInputId} type="file" accept="image/*" className={styles.file} aria-describedby={`${photoInputId}-caption`} onChange={(e) => onPhoto(e.target.files?.[0])} />
+        <input
+          id={photoInputId}
+          type="file"
+          accept="image/*"
+          className={styles.file}
+          aria-describedby={`${photoInputId}-caption`}
+          onChange={(e) => onPhoto(e.target.files?.[0])}
+        />
         <Text as="p" size="small" id={`${photoInputId}-caption`} className={styles.photoCaption}>
           An image up to 8 MB. Location tags inside the file are removed when it is stored; only your crew can open it.
         </Text>
         <div aria-live="polite">
           {photoState.busy ? <Text size="small">Sending {photoState.name}…</Text> : null}
-          {!photoState.busy && v.photoId && photoState.name ? <Text size="small">Attached: {photoState.name}</Text> : null}
+          {!photoState.busy && v.photoId && photoState.name ? (
+            <Text size="small">Attached: {photoState.name}</Text>
+          ) : null}
           {photoState.error ? (
             <Text size="small" className={styles.photoError}>
               {photoState.error}

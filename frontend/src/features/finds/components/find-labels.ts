@@ -1,4 +1,10 @@
-import { FIND_KIND_LABELS, FOUND_HOW_LABELS, type FindKind, type FoundHow, type VegetationDensity } from '@shoalbook/shared';
+import {
+  FIND_KIND_LABELS,
+  FOUND_HOW_LABELS,
+  type FindKind,
+  type FoundHow,
+  type VegetationDensity,
+} from '@shoalbook/shared';
 
 export const VEGETATION_LABELS: Record<VegetationDensity, string> = {
   none: 'None',
@@ -17,7 +23,7 @@ export const HARDNESS_LABELS: Record<number, string> = {
 };
 
 export const kindLabel = (kind: FindKind) => FIND_KIND_LABELS[kind] ?? kind;
-export const foundHowLabel = (how: FoundHow | null) => (how ? FOUND_HOW_LABELS[how] ?? how : '—');
+export const foundHowLabel = (how: FoundHow | null) => (how ? (FOUND_HOW_LABELS[how] ?? how) : '—');
 
 /** Position for a table cell, or why it is missing. */
 export function positionText(lat: number | null, lon: number | null): string {

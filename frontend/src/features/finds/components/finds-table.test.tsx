@@ -80,7 +80,14 @@ describe('FindsTable', () => {
 
   it('shows depths in the user’s unit (20 ft = 6.096 m, shown 6.1 m)', () => {
     const metric: UnitPreferences = { weight: 'kg', length: 'mm', depth: 'm', temperature: 'C' };
-    renderWithApp(<FindsTable crewId="c1" finds={[find('Twenty-foot shelf', 'contour', 20, 'ledge')]} prefs={metric} timeZoneOf={() => 'UTC'} />);
+    renderWithApp(
+      <FindsTable
+        crewId="c1"
+        finds={[find('Twenty-foot shelf', 'contour', 20, 'ledge')]}
+        prefs={metric}
+        timeZoneOf={() => 'UTC'}
+      />,
+    );
     expect(within(bodyRows()[0]).getByText('6.1 m')).toBeInTheDocument();
   });
 

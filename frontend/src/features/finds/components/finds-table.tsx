@@ -61,7 +61,10 @@ export function FindsTable({
         meta: { numeric: true },
         cell: (info) => info.getValue() ?? '—',
       }),
-      column.accessor((f) => (f.vegetationDensity ? VEGETATION_LABELS[f.vegetationDensity] : ''), { id: 'vegetation', header: 'Vegetation' }),
+      column.accessor((f) => (f.vegetationDensity ? VEGETATION_LABELS[f.vegetationDensity] : ''), {
+        id: 'vegetation',
+        header: 'Vegetation',
+      }),
       column.accessor((f) => (f.baitSeen ? 'Yes' : 'No'), { id: 'bait', header: 'Bait' }),
       column.accessor((f) => f.fishMarked ?? undefined, {
         id: 'fishMarked',

@@ -15,7 +15,9 @@ export interface GpxTarget {
 
 /** POST /finds/import/preview: nothing is written; every waypoint comes back with its error or duplicate. */
 export function previewGpx(crewId: string, file: File, target: GpxTarget, onProgress?: (p: UploadProgress) => void) {
-  return uploadFile<GpxPreview>(crewApiPath(crewId, `/finds/import/preview${queryString({ ...target })}`), file, { onProgress });
+  return uploadFile<GpxPreview>(crewApiPath(crewId, `/finds/import/preview${queryString({ ...target })}`), file, {
+    onProgress,
+  });
 }
 
 /** POST /finds/import: all accepted waypoints in one transaction, or none. */
@@ -32,12 +34,26 @@ export function commitGpx(
   });
 }
 
-export function previewCatchesCsv(crewId: string, file: File, eventId: string, onProgress?: (p: UploadProgress) => void) {
-  return uploadFile<CsvPreview>(crewApiPath(crewId, `/catches/import/preview${queryString({ eventId })}`), file, { onProgress });
+export function previewCatchesCsv(
+  crewId: string,
+  file: File,
+  eventId: string,
+  onProgress?: (p: UploadProgress) => void,
+) {
+  return uploadFile<CsvPreview>(crewApiPath(crewId, `/catches/import/preview${queryString({ eventId })}`), file, {
+    onProgress,
+  });
 }
 
-export function commitCatchesCsv(crewId: string, file: File, eventId: string, onProgress?: (p: UploadProgress) => void) {
-  return uploadFile<ImportResult>(crewApiPath(crewId, `/catches/import${queryString({ eventId })}`), file, { onProgress });
+export function commitCatchesCsv(
+  crewId: string,
+  file: File,
+  eventId: string,
+  onProgress?: (p: UploadProgress) => void,
+) {
+  return uploadFile<ImportResult>(crewApiPath(crewId, `/catches/import${queryString({ eventId })}`), file, {
+    onProgress,
+  });
 }
 
 /** The CSV header to fill in, as a download link (a plain GET with the session cookie). */
@@ -63,6 +79,7 @@ export function fileProblem(file: File, kind: 'gpx' | 'csv'): string | null {
   if (kind === 'csv' && extension !== 'csv') return 'Choose a CSV file (its name ends in .csv).';
   if (file.size === 0) return 'The file is empty.';
   const limit = MAX_IMPORT_BYTES[kind];
-  if (file.size > limit) return `The file is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${limit / 1024 / 1024} MB.`;
+  if (file.size > limit)
+    return `The file is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${limit / 1024 / 1024} MB.`;
   return null;
 }

@@ -6,7 +6,13 @@ import { FishCareCaution } from '../../../components/cautions/journal-cautions';
 import { ErrorState } from '../../../components/feedback/query-states';
 import type { CsvPreview, CsvPreviewRow, ImportResult } from '../../../lib/journal-types';
 import type { UploadProgress } from '../../../lib/upload';
-import { catchesTemplateUrl, commitCatchesCsv, fileProblem, previewCatchesCsv, useAfterImport } from '../api/imports-api';
+import {
+  catchesTemplateUrl,
+  commitCatchesCsv,
+  fileProblem,
+  previewCatchesCsv,
+  useAfterImport,
+} from '../api/imports-api';
 import { CsvPreviewTable } from './csv-preview-table';
 import { UploadProgressBar } from './upload-progress';
 import styles from './imports.module.css';
@@ -74,7 +80,9 @@ export function CatchesCsvImport({
   };
 
   if (events.length === 0) {
-    return <Text as="p">Add an event with its competition days first; imported catches belong to one of its days.</Text>;
+    return (
+      <Text as="p">Add an event with its competition days first; imported catches belong to one of its days.</Text>
+    );
   }
   return (
     <div className={styles.panel}>
@@ -91,7 +99,11 @@ export function CatchesCsvImport({
           </Select>
         </FormControl>
         <div>
-          <LinkButton href={catchesTemplateUrl(crewId)} download="shoalbook-catches-template.csv" leadingVisual={DownloadIcon}>
+          <LinkButton
+            href={catchesTemplateUrl(crewId)}
+            download="shoalbook-catches-template.csv"
+            leadingVisual={DownloadIcon}
+          >
             Download the CSV template
           </LinkButton>
         </div>
@@ -123,7 +135,13 @@ export function CatchesCsvImport({
       </div>
       <UploadProgressBar progress={progress} what={file?.name ?? 'the file'} />
       {failure ? <ErrorState error={failure} title="The file could not be read" /> : null}
-      {result ? <Banner variant="success" title={`${result.imported} catches imported`} description="Every row is in, in one go." /> : null}
+      {result ? (
+        <Banner
+          variant="success"
+          title={`${result.imported} catches imported`}
+          description="Every row is in, in one go."
+        />
+      ) : null}
       {preview ? (
         <>
           <div className={styles.summary} aria-live="polite">
@@ -148,10 +166,18 @@ export function CatchesCsvImport({
             </section>
           ) : null}
           <div className={styles.actions}>
-            <Button variant="primary" onClick={commit} disabled={progress !== null || preview.accepted === 0 || preview.rejected > 0}>
+            <Button
+              variant="primary"
+              onClick={commit}
+              disabled={progress !== null || preview.accepted === 0 || preview.rejected > 0}
+            >
               {`Import ${preview.accepted} catches`}
             </Button>
-            <Text size="small">{preview.rejected > 0 ? 'Fix the rows above and check again; nothing is imported while a row is wrong.' : 'All rows go in together.'}</Text>
+            <Text size="small">
+              {preview.rejected > 0
+                ? 'Fix the rows above and check again; nothing is imported while a row is wrong.'
+                : 'All rows go in together.'}
+            </Text>
           </div>
         </>
       ) : null}

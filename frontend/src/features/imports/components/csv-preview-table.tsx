@@ -10,7 +10,15 @@ import { formatLength, formatWeight } from '../../../lib/units';
 const column = createColumnHelper<CsvPreviewRow>();
 
 /** Every row of a catch CSV as the server read it: its values in the user's units, or what is wrong with it. */
-export function CsvPreviewTable({ rows, prefs, timeZone }: { rows: CsvPreviewRow[]; prefs: UnitPreferences; timeZone: string }) {
+export function CsvPreviewTable({
+  rows,
+  prefs,
+  timeZone,
+}: {
+  rows: CsvPreviewRow[];
+  prefs: UnitPreferences;
+  timeZone: string;
+}) {
   const columns = useMemo(
     () => [
       column.accessor('line', { header: 'Line', meta: { numeric: true } }),
@@ -24,14 +32,22 @@ export function CsvPreviewTable({ rows, prefs, timeZone }: { rows: CsvPreviewRow
           ],
         },
         cell: (info) =>
-          info.getValue() === 'error' ? <Label variant="danger">Needs fixing</Label> : <Label variant="success">Ready</Label>,
+          info.getValue() === 'error' ? (
+            <Label variant="danger">Needs fixing</Label>
+          ) : (
+            <Label variant="success">Ready</Label>
+          ),
       }),
       column.accessor((r) => r.errors.map((e) => (e.field ? `${e.field}: ${e.message}` : e.message)).join('; '), {
         id: 'problems',
         header: 'What is wrong',
         enableSorting: false,
       }),
-      column.accessor((r) => r.caughtAt ?? '', { id: 'caughtAt', header: 'Time', cell: (info) => (info.getValue() ? clockTime(info.getValue(), timeZone) : '—') }),
+      column.accessor((r) => r.caughtAt ?? '', {
+        id: 'caughtAt',
+        header: 'Time',
+        cell: (info) => (info.getValue() ? clockTime(info.getValue(), timeZone) : '—'),
+      }),
       column.accessor((r) => r.species ?? '', { id: 'species', header: 'Species' }),
       column.accessor((r) => r.weightLb ?? undefined, {
         id: 'weight',
@@ -57,14 +73,29 @@ export function CsvPreviewTable({ rows, prefs, timeZone }: { rows: CsvPreviewRow
         meta: { numeric: true },
         cell: (info) => formatLength(info.row.original.lengthIn, prefs.length),
       }),
-      column.accessor((r) => (r.attributionDistanceM !== null ? `${Math.round(r.attributionDistanceM)} m to a find` : r.findId ? 'Find by name' : ''), {
-        id: 'find',
-        header: 'Find',
-      }),
+      column.accessor(
+        (r) =>
+          r.attributionDistanceM !== null
+            ? `${Math.round(r.attributionDistanceM)} m to a find`
+            : r.findId
+              ? 'Find by name'
+              : '',
+        {
+          id: 'find',
+          header: 'Find',
+        },
+      ),
     ],
     [prefs, timeZone],
   );
   return (
-    <DataTable data={rows} columns={columns} caption="Rows of the CSV file" getRowId={(r) => String(r.index)} initialSorting={[{ id: 'line', desc: false }]} height={400} />
+    <DataTable
+      data={rows}
+      columns={columns}
+      caption="Rows of the CSV file"
+      getRowId={(r) => String(r.index)}
+      initialSorting={[{ id: 'line', desc: false }]}
+      height={400}
+    />
   );
 }

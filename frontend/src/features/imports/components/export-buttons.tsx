@@ -11,10 +11,18 @@ export function ExportButtons({ crewId }: { crewId: string }) {
     <div className={styles.panel}>
       <PositionsFileCaution />
       <div className={styles.actions}>
-        <LinkButton href={`${API_BASE}${crewApiPath(crewId, '/export.json')}`} download="shoalbook-journal.json" leadingVisual={DownloadIcon}>
+        <LinkButton
+          href={`${API_BASE}${crewApiPath(crewId, '/export.json')}`}
+          download="shoalbook-journal.json"
+          leadingVisual={DownloadIcon}
+        >
           Export journal (JSON)
         </LinkButton>
-        <LinkButton href={`${API_BASE}${crewApiPath(crewId, '/export.csv')}`} download="shoalbook-journal.csv" leadingVisual={DownloadIcon}>
+        <LinkButton
+          href={`${API_BASE}${crewApiPath(crewId, '/export.csv')}`}
+          download="shoalbook-journal.csv"
+          leadingVisual={DownloadIcon}
+        >
           Export journal (CSV)
         </LinkButton>
       </div>

@@ -1,4 +1,12 @@
-import { FIND_KINDS, FIND_KIND_LABELS, FIND_SUB_KINDS, type EventView, type FindKind, type LakeView, type UnitPreferences } from '@shoalbook/shared';
+import {
+  FIND_KINDS,
+  FIND_KIND_LABELS,
+  FIND_SUB_KINDS,
+  type EventView,
+  type FindKind,
+  type LakeView,
+  type UnitPreferences,
+} from '@shoalbook/shared';
 import { Banner, Button, Checkbox, FormControl, Label, Select, Text } from '@primer/react';
 import { useId, useState } from 'react';
 import { OnPlaneCaution } from '../../../components/cautions/journal-cautions';
@@ -72,7 +80,12 @@ export function GpxImport({
     if (!file || !preview) return;
     setFailure(null);
     try {
-      const done = await commitGpx(crewId, file, { lakeId, eventId: eventId || undefined, kind, subKind, skipDuplicates }, setProgress);
+      const done = await commitGpx(
+        crewId,
+        file,
+        { lakeId, eventId: eventId || undefined, kind, subKind, skipDuplicates },
+        setProgress,
+      );
       setResult(done);
       setPreview(null);
       await afterImport();
@@ -84,7 +97,11 @@ export function GpxImport({
   };
 
   const counts = preview
-    ? preview.rows.reduce((acc, row) => ({ ...acc, [rowStatus(row)]: acc[rowStatus(row)] + 1 }), { ready: 0, duplicate: 0, error: 0 })
+    ? preview.rows.reduce((acc, row) => ({ ...acc, [rowStatus(row)]: acc[rowStatus(row)] + 1 }), {
+        ready: 0,
+        duplicate: 0,
+        error: 0,
+      })
     : null;
   const toImport = counts ? counts.ready + (skipDuplicates ? 0 : counts.duplicate) : 0;
 
@@ -94,7 +111,15 @@ export function GpxImport({
       <div className={styles.grid}>
         <FormControl>
           <FormControl.Label>Lake</FormControl.Label>
-          <Select value={lakeId} onChange={(e) => { setLakeId(e.target.value); setEventId(''); reset(); }} block>
+          <Select
+            value={lakeId}
+            onChange={(e) => {
+              setLakeId(e.target.value);
+              setEventId('');
+              reset();
+            }}
+            block
+          >
             {lakes.map((l) => (
               <Select.Option key={l.id} value={l.id}>
                 {l.name}
@@ -104,7 +129,14 @@ export function GpxImport({
         </FormControl>
         <FormControl>
           <FormControl.Label>Event (optional)</FormControl.Label>
-          <Select value={eventId} onChange={(e) => { setEventId(e.target.value); reset(); }} block>
+          <Select
+            value={eventId}
+            onChange={(e) => {
+              setEventId(e.target.value);
+              reset();
+            }}
+            block
+          >
             <Select.Option value="">Not tied to an event</Select.Option>
             {lakeEvents.map((e) => (
               <Select.Option key={e.id} value={e.id}>
@@ -130,7 +162,9 @@ export function GpxImport({
               </Select.Option>
             ))}
           </Select>
-          <FormControl.Caption>Waypoints carry no kind; set it here and adjust finds one by one later.</FormControl.Caption>
+          <FormControl.Caption>
+            Waypoints carry no kind; set it here and adjust finds one by one later.
+          </FormControl.Caption>
         </FormControl>
         <FormControl>
           <FormControl.Label>Sub-kind</FormControl.Label>
@@ -159,7 +193,8 @@ export function GpxImport({
           }}
         />
         <Text as="p" size="small" id={`${fileId}-hint`}>
-          A GPX 1.1 waypoint file from your unit or mapping app, up to 20 MB. Names, times, positions and depths (elevation) are read.
+          A GPX 1.1 waypoint file from your unit or mapping app, up to 20 MB. Names, times, positions and depths
+          (elevation) are read.
         </Text>
         {problem ? (
           <Text size="small" role="alert" className={styles.errorList}>

@@ -23,12 +23,21 @@ const row = (index: number, name: string, extra: Partial<FindImportRow> = {}): F
 const rows: FindImportRow[] = [
   row(0, 'Shell flat'),
   row(1, 'Old bar', { duplicateOf: { findId: 'f9', name: 'North shell bar', distanceM: 8.6 } }),
-  row(2, 'Broken one', { lat: null, lon: null, markedAt: null, depthFt: null, error: 'Latitude 95.2 is outside -90 to 90.' }),
-  row(3, 'Shell flat again', { duplicateOf: { findId: null, name: 'Shell flat', distanceM: 3.2, inFile: true, rowIndex: 0 } }),
+  row(2, 'Broken one', {
+    lat: null,
+    lon: null,
+    markedAt: null,
+    depthFt: null,
+    error: 'Latitude 95.2 is outside -90 to 90.',
+  }),
+  row(3, 'Shell flat again', {
+    duplicateOf: { findId: null, name: 'Shell flat', distanceM: 3.2, inFile: true, rowIndex: 0 },
+  }),
 ];
 const prefs: UnitPreferences = { weight: 'lb', length: 'in', depth: 'm', temperature: 'F' };
 
-const rowNamed = (name: string) => screen.getAllByRole('row').find((r) => within(r).queryByText(name, { exact: true }))!;
+const rowNamed = (name: string) =>
+  screen.getAllByRole('row').find((r) => within(r).queryByText(name, { exact: true }))!;
 
 describe('GpxPreviewTable', () => {
   it('marks each waypoint ready, near an existing find (which, how far) or refused (why)', () => {

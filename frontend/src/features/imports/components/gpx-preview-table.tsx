@@ -15,7 +15,11 @@ export function rowStatus(row: GpxPreviewRow): RowStatus {
   return 'ready';
 }
 
-const STATUS_TEXT: Record<RowStatus, string> = { ready: 'Ready', duplicate: 'Near an existing find', error: 'Cannot import' };
+const STATUS_TEXT: Record<RowStatus, string> = {
+  ready: 'Ready',
+  duplicate: 'Near an existing find',
+  error: 'Cannot import',
+};
 const column = createColumnHelper<GpxPreviewRow>();
 
 /** Which find (or which earlier waypoint of the same file) a row sits on top of, and how far away. */
@@ -23,12 +27,24 @@ export function duplicateText(row: GpxPreviewRow): string {
   const d = row.duplicateOf;
   if (!d) return '';
   const metres = `${Math.round(d.distanceM)} m`;
-  if (d.inFile) return `${metres} from waypoint ${d.rowIndex !== undefined ? d.rowIndex + 1 : ''} “${d.name}” earlier in this file`.replace('  ', ' ');
+  if (d.inFile)
+    return `${metres} from waypoint ${d.rowIndex !== undefined ? d.rowIndex + 1 : ''} “${d.name}” earlier in this file`.replace(
+      '  ',
+      ' ',
+    );
   return `${metres} from the find “${d.name}”`;
 }
 
 /** What the GPX file holds, waypoint by waypoint: ready, within 15 m of an existing find (which, how far), or refused (why). */
-export function GpxPreviewTable({ rows, prefs, timeZone }: { rows: GpxPreviewRow[]; prefs: UnitPreferences; timeZone: string }) {
+export function GpxPreviewTable({
+  rows,
+  prefs,
+  timeZone,
+}: {
+  rows: GpxPreviewRow[];
+  prefs: UnitPreferences;
+  timeZone: string;
+}) {
   const columns = useMemo(
     () => [
       column.accessor((r) => r.index + 1, { id: 'row', header: 'Waypoint', meta: { numeric: true } }),
@@ -36,10 +52,16 @@ export function GpxPreviewTable({ rows, prefs, timeZone }: { rows: GpxPreviewRow
       column.accessor((r) => rowStatus(r), {
         id: 'status',
         header: 'Status',
-        meta: { filterOptions: (['ready', 'duplicate', 'error'] as const).map((s) => ({ value: s, label: STATUS_TEXT[s] })) },
+        meta: {
+          filterOptions: (['ready', 'duplicate', 'error'] as const).map((s) => ({ value: s, label: STATUS_TEXT[s] })),
+        },
         cell: (info) => {
           const status = info.getValue() as RowStatus;
-          return <Label variant={status === 'error' ? 'danger' : status === 'duplicate' ? 'attention' : 'success'}>{STATUS_TEXT[status]}</Label>;
+          return (
+            <Label variant={status === 'error' ? 'danger' : status === 'duplicate' ? 'attention' : 'success'}>
+              {STATUS_TEXT[status]}
+            </Label>
+          );
         },
       }),
       column.accessor((r) => r.error ?? duplicateText(r), {

@@ -5,7 +5,8 @@ import styles from './imports.module.css';
 /** The bar shown while a file goes up and the server reads it. */
 export function UploadProgressBar({ progress, what }: { progress: UploadProgress | null; what: string }) {
   if (!progress) return null;
-  const label = progress.phase === 'uploading' ? `Sending ${what}: ${progress.percent}%` : `Checking ${what} on the server…`;
+  const label =
+    progress.phase === 'uploading' ? `Sending ${what}: ${progress.percent}%` : `Checking ${what} on the server…`;
   return (
     <div className={styles.progress} role="status" aria-live="polite">
       <ProgressBar

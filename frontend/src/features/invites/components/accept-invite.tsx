@@ -16,7 +16,15 @@ const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'long' });
  * What an invite link offers and, once the person is signed in, the button that accepts it.
  * `me` is null when nobody is signed in: the person signs in or up first and comes back here.
  */
-export function AcceptInvite({ token, me, onAccepted }: { token: string; me: MeResponse | null; onAccepted: (crewId: string) => void }) {
+export function AcceptInvite({
+  token,
+  me,
+  onAccepted,
+}: {
+  token: string;
+  me: MeResponse | null;
+  onAccepted: (crewId: string) => void;
+}) {
   const queryClient = useQueryClient();
   const preview = useQuery(invitePreviewQuery(token));
   const accept = useMutation({
@@ -41,7 +49,9 @@ export function AcceptInvite({ token, me, onAccepted }: { token: string; me: MeR
         />
       );
     }
-    return <ErrorState error={preview.error} title="The invite could not be opened" onRetry={() => void preview.refetch()} />;
+    return (
+      <ErrorState error={preview.error} title="The invite could not be opened" onRetry={() => void preview.refetch()} />
+    );
   }
 
   const invite = preview.data;

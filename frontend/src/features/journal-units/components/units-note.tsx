@@ -11,7 +11,8 @@ const WEIGHT_WORDS = { lb: 'pounds and hundredths', 'lb-oz': 'pounds–ounces', 
 export function UnitsNote({ prefs }: { prefs: UnitPreferences }) {
   return (
     <Text as="p" size="small" className={styles.note}>
-      Shown and entered in {WEIGHT_WORDS[prefs.weight]}, {UNIT_SIGNS[prefs.length]}, {UNIT_SIGNS[prefs.depth]} and {UNIT_SIGNS[prefs.temperature]}.{' '}
+      Shown and entered in {WEIGHT_WORDS[prefs.weight]}, {UNIT_SIGNS[prefs.length]}, {UNIT_SIGNS[prefs.depth]} and{' '}
+      {UNIT_SIGNS[prefs.temperature]}.{' '}
       <PrimerLink as={Link} to={paths.account.href()} inline className={styles.link}>
         Change units
       </PrimerLink>

@@ -18,9 +18,11 @@ export function validateLake(values: Record<keyof LakeInput, string>): { input?:
   const lat = readNumber(values.lat);
   const lon = readNumber(values.lon);
   if (lat === null || lat < -90 || lat > 90) errors.lat = 'Latitude is a decimal number from -90 to 90, e.g. 34.512.';
-  if (lon === null || lon < -180 || lon > 180) errors.lon = 'Longitude is a decimal number from -180 to 180, e.g. -86.204.';
+  if (lon === null || lon < -180 || lon > 180)
+    errors.lon = 'Longitude is a decimal number from -180 to 180, e.g. -86.204.';
   const area = values.areaAcres.trim() ? readNumber(values.areaAcres) : null;
-  if (values.areaAcres.trim() && (area === null || area <= 0)) errors.areaAcres = 'Area is a positive number of acres, or leave it empty.';
+  if (values.areaAcres.trim() && (area === null || area <= 0))
+    errors.areaAcres = 'Area is a positive number of acres, or leave it empty.';
   if (Object.keys(errors).length) return { errors };
   return {
     errors,
@@ -37,7 +39,17 @@ export function validateLake(values: Record<keyof LakeInput, string>): { input?:
 }
 
 /** Create or edit a lake: name, region, its time zone, a reference point and optional area and notes. */
-export function LakeForm({ crewId, lake, onSaved, onCancel }: { crewId: string; lake?: LakeView; onSaved: (lake: LakeView) => void; onCancel?: () => void }) {
+export function LakeForm({
+  crewId,
+  lake,
+  onSaved,
+  onCancel,
+}: {
+  crewId: string;
+  lake?: LakeView;
+  onSaved: (lake: LakeView) => void;
+  onCancel?: () => void;
+}) {
   const [values, setValues] = useState<Record<keyof LakeInput, string>>({
     name: lake?.name ?? '',
     region: lake?.region ?? '',
@@ -49,7 +61,8 @@ export function LakeForm({ crewId, lake, onSaved, onCancel }: { crewId: string; 
   });
   const [errors, setErrors] = useState<Errors>({});
   const save = useSaveLake(crewId, lake?.id);
-  const set = (key: keyof LakeInput) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
+  const set = (key: keyof LakeInput) => (e: { target: { value: string } }) =>
+    setValues((v) => ({ ...v, [key]: e.target.value }));
 
   const submit = () => {
     const { input, errors: found } = validateLake(values);
@@ -57,7 +70,13 @@ export function LakeForm({ crewId, lake, onSaved, onCancel }: { crewId: string; 
     if (input) save.mutate(lake ? { ...input, version: lake.version } : input, { onSuccess: onSaved });
   };
 
-  const common = (key: keyof LakeInput) => ({ name: key, value: values[key], onChange: set(key), serverError: save.error, clientError: errors[key] });
+  const common = (key: keyof LakeInput) => ({
+    name: key,
+    value: values[key],
+    onChange: set(key),
+    serverError: save.error,
+    clientError: errors[key],
+  });
   return (
     <FormStack onSubmit={submit} label={lake ? `Edit ${lake.name}` : 'New lake'}>
       <FormError error={save.error} />
@@ -68,14 +87,28 @@ export function LakeForm({ crewId, lake, onSaved, onCancel }: { crewId: string; 
         onChange={(timeZone) => setValues((v) => ({ ...v, timeZone }))}
         messages={fieldMessages(save.error, 'timeZone')}
       />
-      <TextField label="Latitude" required inputMode="decimal" caption="Decimal degrees (WGS84), a point on the lake." {...common('lat')} />
-      <TextField label="Longitude" required inputMode="decimal" caption="Decimal degrees; west of Greenwich is negative." {...common('lon')} />
+      <TextField
+        label="Latitude"
+        required
+        inputMode="decimal"
+        caption="Decimal degrees (WGS84), a point on the lake."
+        {...common('lat')}
+      />
+      <TextField
+        label="Longitude"
+        required
+        inputMode="decimal"
+        caption="Decimal degrees; west of Greenwich is negative."
+        {...common('lon')}
+      />
       <TextField label="Area (acres)" inputMode="decimal" {...common('areaAcres')} />
       <FormControl>
         <FormControl.Label>Notes</FormControl.Label>
         <Textarea name="notes" value={values.notes} onChange={set('notes')} block rows={3} />
         {fieldMessages(save.error, 'notes').length ? (
-          <FormControl.Validation variant="error">{fieldMessages(save.error, 'notes').join(' ')}</FormControl.Validation>
+          <FormControl.Validation variant="error">
+            {fieldMessages(save.error, 'notes').join(' ')}
+          </FormControl.Validation>
         ) : null}
       </FormControl>
       <FormActions>

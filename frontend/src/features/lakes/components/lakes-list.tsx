@@ -47,7 +47,11 @@ function LakeCard({ crewId, lake }: { crewId: string; lake: LakeView }) {
         </PrimerLink>
       </Heading>
       <Text as="p" size="small" className={styles.meta}>
-        {[lake.region, lake.timeZone.replace(/_/g, ' '), lake.areaAcres ? `${lake.areaAcres.toLocaleString('en-US')} acres` : null]
+        {[
+          lake.region,
+          lake.timeZone.replace(/_/g, ' '),
+          lake.areaAcres ? `${lake.areaAcres.toLocaleString('en-US')} acres` : null,
+        ]
           .filter(Boolean)
           .join(' · ')}
       </Text>

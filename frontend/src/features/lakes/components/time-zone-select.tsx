@@ -28,7 +28,13 @@ export function TimeZoneSelect({
   return (
     <FormControl required>
       <FormControl.Label>Time zone</FormControl.Label>
-      <Select name="timeZone" value={value} onChange={(e) => onChange(e.target.value)} block validationStatus={messages.length ? 'error' : undefined}>
+      <Select
+        name="timeZone"
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        block
+        validationStatus={messages.length ? 'error' : undefined}
+      >
         {groups.map(([area, zones]) => (
           <Select.OptGroup key={area} label={area}>
             {zones.map((zone) => (

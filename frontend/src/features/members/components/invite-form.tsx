@@ -48,15 +48,15 @@ export function InviteForm({ crewId }: { crewId: string }) {
           ))}
         </Select>
         <FormControl.Caption>{ROLE_DESCRIPTIONS[role]}</FormControl.Caption>
-        {roleMessages.length ? <FormControl.Validation variant="error">{roleMessages.join(' ')}</FormControl.Validation> : null}
+        {roleMessages.length ? (
+          <FormControl.Validation variant="error">{roleMessages.join(' ')}</FormControl.Validation>
+        ) : null}
       </FormControl>
       <FormActions>
         <Button type="submit" variant="primary" loading={mutation.isPending}>
           Send invite
         </Button>
-        {sentTo && !mutation.isPending ? (
-          <Text role="status">Invite sent to {sentTo}.</Text>
-        ) : null}
+        {sentTo && !mutation.isPending ? <Text role="status">Invite sent to {sentTo}.</Text> : null}
       </FormActions>
     </FormStack>
   );

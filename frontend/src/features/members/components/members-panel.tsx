@@ -11,13 +11,22 @@ import { PendingInvites } from './pending-invites';
 import styles from './members-panel.module.css';
 
 /** Members, and for owners the pending invites and the invite form. */
-export function MembersPanel({ crewId, ownUserId, canManage }: { crewId: string; ownUserId: string; canManage: boolean }) {
+export function MembersPanel({
+  crewId,
+  ownUserId,
+  canManage,
+}: {
+  crewId: string;
+  ownUserId: string;
+  canManage: boolean;
+}) {
   const queryClient = useQueryClient();
   const members = useQuery(membersQuery(crewId));
   const [toRemove, setToRemove] = useState<MemberView | null>(null);
 
   const roleChange = useMutation({
-    mutationFn: ({ member, role }: { member: MemberView; role: CrewRole }) => changeMemberRole(crewId, member.userId, role),
+    mutationFn: ({ member, role }: { member: MemberView; role: CrewRole }) =>
+      changeMemberRole(crewId, member.userId, role),
     onSettled: () => queryClient.invalidateQueries({ queryKey: ['crews', crewId, 'members'] }),
     onSuccess: (_updated, { member }) => {
       // The caller's own role in the crew may have changed.
@@ -31,9 +40,16 @@ export function MembersPanel({ crewId, ownUserId, canManage }: { crewId: string;
     mutationFn: (member: MemberView) => removeMember(crewId, member.userId),
     onSettled: () => queryClient.invalidateQueries({ queryKey: ['crews', crewId, 'members'] }),
   });
-  const onChangeRole = useCallback((member: MemberView, role: CrewRole) => roleChange.mutate({ member, role }), [roleChange]);
+  const onChangeRole = useCallback(
+    (member: MemberView, role: CrewRole) => roleChange.mutate({ member, role }),
+    [roleChange],
+  );
   const onRemove = useCallback((member: MemberView) => setToRemove(member), []);
-  const busyUserId = roleChange.isPending ? roleChange.variables?.member.userId : removal.isPending ? removal.variables?.userId : null;
+  const busyUserId = roleChange.isPending
+    ? roleChange.variables?.member.userId
+    : removal.isPending
+      ? removal.variables?.userId
+      : null;
 
   return (
     <div className={styles.panel}>
@@ -46,7 +62,11 @@ export function MembersPanel({ crewId, ownUserId, canManage }: { crewId: string;
         {members.isPending ? (
           <LoadingState label="Loading members…" />
         ) : members.isError ? (
-          <ErrorState error={members.error} title="Members could not be loaded" onRetry={() => void members.refetch()} />
+          <ErrorState
+            error={members.error}
+            title="Members could not be loaded"
+            onRetry={() => void members.refetch()}
+          />
         ) : members.data.length === 0 ? (
           <EmptyState title="No members yet" />
         ) : (
@@ -96,8 +116,8 @@ function InvitesSection({ crewId }: { crewId: string }) {
           Invite someone
         </Heading>
         <Text as="p" className={styles.lead}>
-          Your partner or co-angler as an angler; a coach or sponsor as a viewer. The link in the e-mail works once
-          and expires after seven days.
+          Your partner or co-angler as an angler; a coach or sponsor as a viewer. The link in the e-mail works once and
+          expires after seven days.
         </Text>
         <InviteForm crewId={crewId} />
       </section>
@@ -109,7 +129,11 @@ function InvitesSection({ crewId }: { crewId: string }) {
         {invites.isPending ? (
           <LoadingState label="Loading invites…" />
         ) : invites.isError ? (
-          <ErrorState error={invites.error} title="Invites could not be loaded" onRetry={() => void invites.refetch()} />
+          <ErrorState
+            error={invites.error}
+            title="Invites could not be loaded"
+            onRetry={() => void invites.refetch()}
+          />
         ) : invites.data.length === 0 ? (
           <EmptyState title="No invites waiting">Invites you send appear here until they are accepted.</EmptyState>
         ) : (

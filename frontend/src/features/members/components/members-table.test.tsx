@@ -6,16 +6,36 @@ import { renderWithApp } from '../../../testing/render';
 import { MembersTable } from './members-table';
 
 const members: MemberView[] = [
-  { userId: 'u-own', email: 'skipper@example.test', displayName: 'Skipper Jo', role: 'owner', joinedAt: '2025-03-01T10:00:00Z' },
-  { userId: 'u-ang', email: 'partner@example.test', displayName: 'Partner Ray', role: 'angler', joinedAt: '2025-03-02T10:00:00Z' },
-  { userId: 'u-view', email: 'coach@example.test', displayName: 'Coach Lin', role: 'viewer', joinedAt: '2025-03-03T10:00:00Z' },
+  {
+    userId: 'u-own',
+    email: 'skipper@example.test',
+    displayName: 'Skipper Jo',
+    role: 'owner',
+    joinedAt: '2025-03-01T10:00:00Z',
+  },
+  {
+    userId: 'u-ang',
+    email: 'partner@example.test',
+    displayName: 'Partner Ray',
+    role: 'angler',
+    joinedAt: '2025-03-02T10:00:00Z',
+  },
+  {
+    userId: 'u-view',
+    email: 'coach@example.test',
+    displayName: 'Coach Lin',
+    role: 'viewer',
+    joinedAt: '2025-03-03T10:00:00Z',
+  },
 ];
 
 describe('MembersTable', () => {
   it('gives owners a role control on every row and a remove button on everyone but themselves', async () => {
     const onChangeRole = vi.fn();
     const onRemove = vi.fn();
-    renderWithApp(<MembersTable members={members} ownUserId="u-own" canManage onChangeRole={onChangeRole} onRemove={onRemove} />);
+    renderWithApp(
+      <MembersTable members={members} ownUserId="u-own" canManage onChangeRole={onChangeRole} onRemove={onRemove} />,
+    );
 
     const selects = screen.getAllByRole('combobox');
     expect(selects).toHaveLength(3);

@@ -40,12 +40,16 @@ export function MembersTable({ members, ownUserId, canManage, busyUserId, onChan
           </Text>
         ),
       }),
-      column.accessor('email', { header: 'E-mail', cell: (info) => <span className={tableStyles.wrapAnywhere}>{info.getValue()}</span> }),
+      column.accessor('email', {
+        header: 'E-mail',
+        cell: (info) => <span className={tableStyles.wrapAnywhere}>{info.getValue()}</span>,
+      }),
       column.accessor('role', {
         header: 'Role',
         cell: (info) => {
           const member = info.row.original;
-          if (!canManage) return <Label variant={member.role === 'owner' ? 'accent' : 'secondary'}>{ROLE_LABELS[member.role]}</Label>;
+          if (!canManage)
+            return <Label variant={member.role === 'owner' ? 'accent' : 'secondary'}>{ROLE_LABELS[member.role]}</Label>;
           return (
             <Select
               aria-label={`Role of ${member.displayName}`}
@@ -89,7 +93,12 @@ export function MembersTable({ members, ownUserId, canManage, busyUserId, onChan
     return base;
   }, [canManage, ownUserId, busyUserId, onChangeRole, onRemove]);
 
-  const table = useReactTable({ data: members, columns, getCoreRowModel: getCoreRowModel(), getRowId: (m) => m.userId });
+  const table = useReactTable({
+    data: members,
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    getRowId: (m) => m.userId,
+  });
 
   return (
     <div className={tableStyles.scroller} role="region" aria-label="Crew members" tabIndex={0}>

@@ -53,16 +53,29 @@ function groupColumn(count: (g: HitRateGroup) => number, few: string) {
 }
 
 /** A rate, its likely range and its small-sample-adjusted value. */
-function rateColumns(rate: (g: HitRateGroup) => Rate, headers: { id: string; rate: string; range: string; adjusted: string }) {
+function rateColumns(
+  rate: (g: HitRateGroup) => Rate,
+  headers: { id: string; rate: string; range: string; adjusted: string },
+) {
   return [
-    column.accessor((g) => rate(g).rate, { id: headers.id, header: headers.rate, cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor((g) => rate(g).rate, {
+      id: headers.id,
+      header: headers.rate,
+      cell: (info) => percent(info.getValue()),
+      meta: { numeric: true },
+    }),
     column.accessor((g) => rate(g).upper - rate(g).lower, {
       id: 'interval',
       header: headers.range,
       cell: (info) => percentRange(rate(info.row.original).lower, rate(info.row.original).upper),
       meta: { numeric: true },
     }),
-    column.accessor((g) => rate(g).shrunk, { id: 'shrunk', header: headers.adjusted, cell: (info) => percent(info.getValue()), meta: { numeric: true } }),
+    column.accessor((g) => rate(g).shrunk, {
+      id: 'shrunk',
+      header: headers.adjusted,
+      cell: (info) => percent(info.getValue()),
+      meta: { numeric: true },
+    }),
   ];
 }
 
@@ -89,7 +102,12 @@ function catchColumns(units: UnitPreferences) {
       cell: (info) => formatWeight(info.getValue(), units.weight),
       meta: { numeric: true },
     }),
-    ...rateColumns((g) => g.shareOfFish, { id: 'share', rate: 'Share of fish', range: 'Likely range', adjusted: 'Adjusted share' }),
+    ...rateColumns((g) => g.shareOfFish, {
+      id: 'share',
+      rate: 'Share of fish',
+      range: 'Likely range',
+      adjusted: 'Adjusted share',
+    }),
     rankColumn,
   ];
 }

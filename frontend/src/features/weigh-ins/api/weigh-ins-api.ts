@@ -16,7 +16,9 @@ export function useRecordWeighIn(crewId: string, eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ dayId, ...body }: { dayId: string } & RecordWeighInRequest) =>
-      api.request<unknown>('PUT', crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`), { body }),
+      api.request<unknown>('PUT', crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`), {
+        body,
+      }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.weighIns(crewId, eventId) }),
   });
 }

@@ -21,6 +21,12 @@ export interface CrewSection {
 export const CREW_SECTIONS: readonly CrewSection[] = [
   { id: 'journal', label: 'Journal', icon: BookIcon, href: paths.crew.href, end: true },
   ...JOURNAL_SECTIONS,
-  { id: 'reports', label: 'Reports', icon: GraphIcon, href: (crewId: string) => `${paths.crew.href(crewId)}/reports`, end: false },
+  {
+    id: 'reports',
+    label: 'Reports',
+    icon: GraphIcon,
+    href: (crewId: string) => `${paths.crew.href(crewId)}/reports`,
+    end: false,
+  },
   { id: 'settings', label: 'Crew & members', icon: GearIcon, href: paths.crewSettings.href, end: false },
 ];

@@ -33,7 +33,12 @@ export function Component() {
         <Heading as="h2" id="leave-heading" variant="medium">
           Leave the crew
         </Heading>
-        <LeaveCrew crewId={crew.id} crewName={crew.name} ownUserId={me.user.id} onLeft={() => navigate(paths.home.href())} />
+        <LeaveCrew
+          crewId={crew.id}
+          crewName={crew.name}
+          ownUserId={me.user.id}
+          onLeft={() => navigate(paths.home.href())}
+        />
       </section>
     </>
   );

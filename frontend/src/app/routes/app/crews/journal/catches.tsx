@@ -16,7 +16,9 @@ export function Component() {
   const [search, setSearch] = useSearchParams();
   const events = useEvents(crewId);
   const lakes = useLakes(crewId);
-  const sorted = [...(events.data ?? [])].sort((a, b) => (b.competitionDates[0] ?? '').localeCompare(a.competitionDates[0] ?? ''));
+  const sorted = [...(events.data ?? [])].sort((a, b) =>
+    (b.competitionDates[0] ?? '').localeCompare(a.competitionDates[0] ?? ''),
+  );
   const eventId = search.get('eventId') ?? sorted[0]?.id ?? '';
   const event = sorted.find((e) => e.id === eventId);
   const lake = lakes.data?.find((l) => l.id === event?.lakeId);
@@ -44,7 +46,9 @@ export function Component() {
       {events.isPending || lakes.isPending ? <LoadingState label="Loading events…" /> : null}
       {events.isError ? <ErrorState error={events.error} onRetry={() => events.refetch()} /> : null}
       {events.data?.length === 0 ? (
-        <EmptyState title="No events yet">Catches belong to an event&rsquo;s competition day: add an event under Events first.</EmptyState>
+        <EmptyState title="No events yet">
+          Catches belong to an event&rsquo;s competition day: add an event under Events first.
+        </EmptyState>
       ) : null}
       {sorted.length ? (
         <div className={styles.dayPicker}>

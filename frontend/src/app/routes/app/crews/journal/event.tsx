@@ -6,7 +6,14 @@ import { EmptyState, ErrorState, LoadingState } from '../../../../../components/
 import { DeleteRecordButton } from '../../../../../components/journal-forms/confirm-delete-dialog';
 import { EVENT_SECTIONS, journalPaths, type EventSection } from '../../../../../config/journal-paths';
 import { CatchEntryForm, CatchesTable, useCatches } from '../../../../../features/catches';
-import { CompetitionDayForm, EventSummary, PracticeDaysPanel, useDeleteEvent, useEvent, useEventDays } from '../../../../../features/events';
+import {
+  CompetitionDayForm,
+  EventSummary,
+  PracticeDaysPanel,
+  useDeleteEvent,
+  useEvent,
+  useEventDays,
+} from '../../../../../features/events';
 import { FindsTable, useFinds } from '../../../../../features/finds';
 import { ExportButtons } from '../../../../../features/imports';
 import { UnitsNote } from '../../../../../features/journal-units';
@@ -63,7 +70,12 @@ export function Component() {
       />
       <UnderlineNav aria-label="Event sections" className={styles.sectionNav}>
         {EVENT_SECTIONS.map((s) => (
-          <UnderlineNav.Item key={s} as={Link} to={journalPaths.event.href(crewId, e.id, s)} aria-current={s === section ? 'page' : undefined}>
+          <UnderlineNav.Item
+            key={s}
+            as={Link}
+            to={journalPaths.event.href(crewId, e.id, s)}
+            aria-current={s === section ? 'page' : undefined}
+          >
             {SECTION_LABELS[s]}
           </UnderlineNav.Item>
         ))}
@@ -75,10 +87,21 @@ export function Component() {
           {canExport ? <ExportButtons crewId={crewId} /> : null}
         </div>
       ) : null}
-      {section === 'finds' && lake.data ? <EventFinds crewId={crewId} event={e} lake={lake.data} prefs={prefs} canWrite={canWrite} /> : null}
-      {section === 'days' && lake.data ? <EventDays crewId={crewId} event={e} lake={lake.data} prefs={prefs} canWrite={canWrite} /> : null}
+      {section === 'finds' && lake.data ? (
+        <EventFinds crewId={crewId} event={e} lake={lake.data} prefs={prefs} canWrite={canWrite} />
+      ) : null}
+      {section === 'days' && lake.data ? (
+        <EventDays crewId={crewId} event={e} lake={lake.data} prefs={prefs} canWrite={canWrite} />
+      ) : null}
       {section === 'weigh-ins' && lake.data ? (
-        <WeighInsPanel crewId={crewId} eventId={e.id} rules={e.rules} prefs={prefs} timeZone={lake.data.timeZone} canWrite={canWrite} />
+        <WeighInsPanel
+          crewId={crewId}
+          eventId={e.id}
+          rules={e.rules}
+          prefs={prefs}
+          timeZone={lake.data.timeZone}
+          canWrite={canWrite}
+        />
       ) : null}
       {section !== 'overview' && lake.isPending ? <LoadingState label="Loading the lake…" /> : null}
     </>
@@ -111,10 +134,18 @@ function EventFindsTable({ crewId, event, lake, prefs, canWrite }: SectionProps)
   if (finds.isError) return <ErrorState error={finds.error} onRetry={() => finds.refetch()} />;
   const actions = canWrite ? (
     <>
-      <Button as={Link} to={journalPaths.newFind.href(crewId, { lakeId: lake.id, eventId: event.id })} leadingVisual={PlusIcon}>
+      <Button
+        as={Link}
+        to={journalPaths.newFind.href(crewId, { lakeId: lake.id, eventId: event.id })}
+        leadingVisual={PlusIcon}
+      >
         Add a find
       </Button>
-      <Button as={Link} to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId: lake.id, eventId: event.id })} leadingVisual={UploadIcon}>
+      <Button
+        as={Link}
+        to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId: lake.id, eventId: event.id })}
+        leadingVisual={UploadIcon}
+      >
         Import GPX
       </Button>
     </>
@@ -128,7 +159,9 @@ function EventFindsTable({ crewId, event, lake, prefs, canWrite }: SectionProps)
       </EmptyState>
     );
   }
-  return <FindsTable crewId={crewId} finds={finds.data} prefs={prefs} timeZoneOf={() => lake.timeZone} toolbar={actions} />;
+  return (
+    <FindsTable crewId={crewId} finds={finds.data} prefs={prefs} timeZoneOf={() => lake.timeZone} toolbar={actions} />
+  );
 }
 
 function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
@@ -139,7 +172,11 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   if (days.isError) return <ErrorState error={days.error} onRetry={() => days.refetch()} />;
   const competition = days.data.competition;
   if (competition.length === 0) {
-    return <EmptyState title="No competition days">Edit the event and add its competition days; catches are logged per day.</EmptyState>;
+    return (
+      <EmptyState title="No competition days">
+        Edit the event and add its competition days; catches are logged per day.
+      </EmptyState>
+    );
   }
   const dayId = search.get('day');
   const day = competition.find((d) => d.id === dayId) ?? competition[0];
@@ -178,7 +215,14 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
       <Heading as="h3" className={styles.subheading}>
         Catches of {dayLabel(day.date)}
       </Heading>
-      <DayCatches crewId={crewId} dayId={day.id} lake={lake} prefs={prefs} canWrite={canWrite} finds={finds.data ?? []} />
+      <DayCatches
+        crewId={crewId}
+        dayId={day.id}
+        lake={lake}
+        prefs={prefs}
+        canWrite={canWrite}
+        finds={finds.data ?? []}
+      />
     </div>
   );
 }
@@ -201,5 +245,15 @@ function DayCatches({
   const catches = useCatches(crewId, { competitionDayId: dayId });
   if (catches.isPending) return <LoadingState label="Loading catches…" />;
   if (catches.isError) return <ErrorState error={catches.error} onRetry={() => catches.refetch()} />;
-  return <CatchesTable crewId={crewId} catches={catches.data} finds={finds} prefs={prefs} timeZone={lake.timeZone} canWrite={canWrite} caption="Catches of the day" />;
+  return (
+    <CatchesTable
+      crewId={crewId}
+      catches={catches.data}
+      finds={finds}
+      prefs={prefs}
+      timeZone={lake.timeZone}
+      canWrite={canWrite}
+      caption="Catches of the day"
+    />
+  );
 }

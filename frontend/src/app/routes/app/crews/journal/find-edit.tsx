@@ -24,7 +24,15 @@ export function Component() {
   return (
     <div className={styles.narrow}>
       <JournalHeader title={`Edit ${find.data!.name}`} lead={<UnitsNote prefs={prefs} />} />
-      <FindForm crewId={crewId} lakes={lakes.data!} events={events.data!} find={find.data!} prefs={prefs} onSaved={back} onCancel={back} />
+      <FindForm
+        crewId={crewId}
+        lakes={lakes.data!}
+        events={events.data!}
+        find={find.data!}
+        prefs={prefs}
+        onSaved={back}
+        onCancel={back}
+      />
     </div>
   );
 }

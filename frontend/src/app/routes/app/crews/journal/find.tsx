@@ -34,7 +34,11 @@ export function Component() {
                 consequence="Catches that came from it stay in the journal, without a find."
                 onDelete={() => remove.mutateAsync(findId)}
                 onDeleted={() =>
-                  navigate(find.data.eventId ? journalPaths.event.href(crewId, find.data.eventId, 'finds') : `${journalPaths.finds.href(crewId)}?lakeId=${encodeURIComponent(find.data.lakeId)}`)
+                  navigate(
+                    find.data.eventId
+                      ? journalPaths.event.href(crewId, find.data.eventId, 'finds')
+                      : `${journalPaths.finds.href(crewId)}?lakeId=${encodeURIComponent(find.data.lakeId)}`,
+                  )
                 }
               />
             </>

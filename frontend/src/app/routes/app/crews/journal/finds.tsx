@@ -18,16 +18,17 @@ export function Component() {
   const lake = lakes.data?.find((l) => l.id === lakeId);
   const finds = useFinds(crewId, { lakeId: lakeId || undefined });
 
-  const actions = canWrite && lake ? (
-    <>
-      <Button as={Link} to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId })} leadingVisual={UploadIcon}>
-        Import GPX
-      </Button>
-      <Button as={Link} to={journalPaths.newFind.href(crewId, { lakeId })} variant="primary" leadingVisual={PlusIcon}>
-        New find
-      </Button>
-    </>
-  ) : undefined;
+  const actions =
+    canWrite && lake ? (
+      <>
+        <Button as={Link} to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId })} leadingVisual={UploadIcon}>
+          Import GPX
+        </Button>
+        <Button as={Link} to={journalPaths.newFind.href(crewId, { lakeId })} variant="primary" leadingVisual={PlusIcon}>
+          New find
+        </Button>
+      </>
+    ) : undefined;
 
   return (
     <div className={styles.stack}>
@@ -35,7 +36,9 @@ export function Component() {
       {lakes.isPending ? <LoadingState label="Loading lakes…" /> : null}
       {lakes.isError ? <ErrorState error={lakes.error} onRetry={() => lakes.refetch()} /> : null}
       {lakes.data?.length === 0 ? (
-        <EmptyState title="Add a lake first">Finds are marked on a lake; add one under Lakes, then record or import your waypoints.</EmptyState>
+        <EmptyState title="Add a lake first">
+          Finds are marked on a lake; add one under Lakes, then record or import your waypoints.
+        </EmptyState>
       ) : null}
       {lakes.data && lakes.data.length > 1 ? (
         <div className={styles.dayPicker}>
@@ -60,7 +63,9 @@ export function Component() {
             : 'Finds appear here once an angler records them.'}
         </EmptyState>
       ) : null}
-      {lake && finds.data?.length ? <FindsTable crewId={crewId} finds={finds.data} prefs={prefs} timeZoneOf={() => lake.timeZone} /> : null}
+      {lake && finds.data?.length ? (
+        <FindsTable crewId={crewId} finds={finds.data} prefs={prefs} timeZoneOf={() => lake.timeZone} />
+      ) : null}
     </div>
   );
 }

@@ -16,7 +16,11 @@ export function Component() {
   const lakes = useLakes(crewId);
   const events = useEvents(crewId);
   const tab = (k: 'gpx' | 'csv' | 'export', label: string) => (
-    <UnderlineNav.Item as={Link} to={`${journalPaths.import.href(crewId)}?kind=${k}`} aria-current={kind === k ? 'page' : undefined}>
+    <UnderlineNav.Item
+      as={Link}
+      to={`${journalPaths.import.href(crewId)}?kind=${k}`}
+      aria-current={kind === k ? 'page' : undefined}
+    >
       {label}
     </UnderlineNav.Item>
   );
@@ -24,7 +28,9 @@ export function Component() {
     return (
       <>
         <JournalHeader title="Files" />
-        <p className={styles.readOnly}>Imports and exports carry positions, so they are open to the crew&rsquo;s anglers and owners only.</p>
+        <p className={styles.readOnly}>
+          Imports and exports carry positions, so they are open to the crew&rsquo;s anglers and owners only.
+        </p>
       </>
     );
   }
@@ -41,7 +47,9 @@ export function Component() {
       {events.isError ? <ErrorState error={events.error} onRetry={() => events.refetch()} /> : null}
       {lakes.data && events.data ? (
         <>
-          {kind === 'gpx' && lakes.data.length === 0 ? <EmptyState title="Add a lake first">Imported finds are placed on a lake.</EmptyState> : null}
+          {kind === 'gpx' && lakes.data.length === 0 ? (
+            <EmptyState title="Add a lake first">Imported finds are placed on a lake.</EmptyState>
+          ) : null}
           {kind === 'gpx' && lakes.data.length ? (
             <GpxImport
               crewId={crewId}
@@ -51,7 +59,15 @@ export function Component() {
               defaults={{ lakeId: search.get('lakeId') ?? undefined, eventId: search.get('eventId') ?? undefined }}
             />
           ) : null}
-          {kind === 'csv' ? <CatchesCsvImport crewId={crewId} events={events.data} lakes={lakes.data} prefs={prefs} defaultEventId={search.get('eventId') ?? undefined} /> : null}
+          {kind === 'csv' ? (
+            <CatchesCsvImport
+              crewId={crewId}
+              events={events.data}
+              lakes={lakes.data}
+              prefs={prefs}
+              defaultEventId={search.get('eventId') ?? undefined}
+            />
+          ) : null}
           {kind === 'export' && canExport ? <ExportButtons crewId={crewId} /> : null}
         </>
       ) : null}

@@ -20,7 +20,17 @@ export function useParam(name: string): string {
 }
 
 /** The title row of a journal screen (h2: the crew's name is the page's h1). */
-export function JournalHeader({ title, lead, actions, docTitle }: { title: string; lead?: ReactNode; actions?: ReactNode; docTitle?: string }) {
+export function JournalHeader({
+  title,
+  lead,
+  actions,
+  docTitle,
+}: {
+  title: string;
+  lead?: ReactNode;
+  actions?: ReactNode;
+  docTitle?: string;
+}) {
   useDocumentTitle(docTitle ?? title);
   return (
     <div className={styles.header}>

@@ -8,5 +8,12 @@ export const JOURNAL_SECTIONS: readonly CrewSection[] = [
   { id: 'events', label: 'Events', icon: CalendarIcon, href: journalPaths.events.href, end: false },
   { id: 'finds', label: 'Finds', icon: LocationIcon, href: journalPaths.finds.href, end: false },
   { id: 'catches', label: 'Catches', icon: ZapIcon, href: journalPaths.catches.href, end: false },
-  { id: 'files', label: 'Files', icon: FileIcon, href: (crewId) => journalPaths.import.href(crewId), end: false, roles: ['owner', 'angler'] },
+  {
+    id: 'files',
+    label: 'Files',
+    icon: FileIcon,
+    href: (crewId) => journalPaths.import.href(crewId),
+    end: false,
+    roles: ['owner', 'angler'],
+  },
 ];

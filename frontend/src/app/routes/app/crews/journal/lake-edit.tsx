@@ -17,7 +17,11 @@ export function Component() {
   return (
     <div className={styles.narrow}>
       <JournalHeader title={`Edit ${lake.data.name}`} />
-      {canWrite ? <LakeForm crewId={crewId} lake={lake.data} onSaved={back} onCancel={back} /> : <p className={styles.readOnly}>Viewers cannot change lakes.</p>}
+      {canWrite ? (
+        <LakeForm crewId={crewId} lake={lake.data} onSaved={back} onCancel={back} />
+      ) : (
+        <p className={styles.readOnly}>Viewers cannot change lakes.</p>
+      )}
     </div>
   );
 }

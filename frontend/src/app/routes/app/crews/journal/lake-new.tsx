@@ -12,7 +12,11 @@ export function Component() {
     <div className={styles.narrow}>
       <JournalHeader title="New lake" />
       {canWrite ? (
-        <LakeForm crewId={crewId} onSaved={(lake) => navigate(journalPaths.lake.href(crewId, lake.id))} onCancel={() => navigate(journalPaths.lakes.href(crewId))} />
+        <LakeForm
+          crewId={crewId}
+          onSaved={(lake) => navigate(journalPaths.lake.href(crewId, lake.id))}
+          onCancel={() => navigate(journalPaths.lakes.href(crewId))}
+        />
       ) : (
         <p className={styles.readOnly}>Viewers read the journal; an angler or owner of the crew adds lakes.</p>
       )}

@@ -25,17 +25,33 @@ export function Component() {
     <div className={styles.stack}>
       <JournalHeader
         title={l.name}
-        lead={[l.region, l.timeZone.replace(/_/g, ' '), position, l.areaAcres ? `${l.areaAcres.toLocaleString('en-US')} acres` : null].filter(Boolean).join(' · ')}
+        lead={[
+          l.region,
+          l.timeZone.replace(/_/g, ' '),
+          position,
+          l.areaAcres ? `${l.areaAcres.toLocaleString('en-US')} acres` : null,
+        ]
+          .filter(Boolean)
+          .join(' · ')}
         actions={
           canWrite ? (
             <>
               <Button as={Link} to={journalPaths.editLake.href(crewId, l.id)} leadingVisual={PencilIcon}>
                 Edit lake
               </Button>
-              <Button as={Link} to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId: l.id })} leadingVisual={UploadIcon}>
+              <Button
+                as={Link}
+                to={journalPaths.import.href(crewId, { kind: 'gpx', lakeId: l.id })}
+                leadingVisual={UploadIcon}
+              >
                 Import GPX
               </Button>
-              <Button as={Link} to={journalPaths.newEvent.href(crewId, l.id)} variant="primary" leadingVisual={PlusIcon}>
+              <Button
+                as={Link}
+                to={journalPaths.newEvent.href(crewId, l.id)}
+                variant="primary"
+                leadingVisual={PlusIcon}
+              >
                 New event
               </Button>
               <DeleteRecordButton
