@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { profile, ROOT } from './lib/profile.mjs';
 import { stopMariadb } from './lib/mariadb.mjs';
 import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.mjs';
-import { capture, log } from './lib/run.mjs';
+import { log } from './lib/run.mjs';
 import { spawnSync } from 'node:child_process';
 
 const SUITES = [

@@ -471,8 +471,8 @@ describe('fuzzing every JSON request body (fast-check)', () => {
         fc.asyncProperty(bodyFor(samples[route.key] ?? {}), async (body) => {
           const raw = 'raw' in body ? body.raw : serialise(body.value, versions.get(route.key));
           const who = ANONYMOUS.has(route.key) ? anonymous : owner;
-          const res = await request(app.getHttpServer())
-            [route.method](route.url)
+          const server = request(app.getHttpServer());
+          const res = await server[route.method](route.url)
             .set('Cookie', who.cookie)
             .set(CSRF_HEADER, who.csrf)
             .set('Content-Type', 'application/json')

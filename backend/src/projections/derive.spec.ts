@@ -173,7 +173,10 @@ describe('derived rows against analytics hitRates', () => {
     const a = new JournalApplier(once);
     const b = new JournalApplier(twice);
     for (const e of events) a.apply(e);
-    for (const e of events) (b.apply(e), b.apply(e));
+    for (const e of events) {
+      b.apply(e);
+      b.apply(e);
+    }
     expect([...twice.catches.rows.values()]).toEqual([...once.catches.rows.values()]);
     expect([...twice.finds.rows.values()]).toEqual([...once.finds.rows.values()]);
     expect([...twice.days.rows.values()]).toEqual([...once.days.rows.values()]);

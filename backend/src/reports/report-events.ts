@@ -17,12 +17,30 @@ const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T)
 export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
   const parts = ['e.crew_id = ?'];
   const params: unknown[] = [crewId];
-  if (f.lakeId) (parts.push('e.lake_id = ?'), params.push(f.lakeId));
-  if (f.eventId) (parts.push('e.id = ?'), params.push(f.eventId));
-  if (f.season) (parts.push('e.season = ?'), params.push(f.season));
-  if (f.year) (parts.push('e.year = ?'), params.push(f.year));
-  if (f.from) (parts.push('e.first_date >= ?'), params.push(f.from));
-  if (f.to) (parts.push('e.first_date <= ?'), params.push(f.to));
+  if (f.lakeId) {
+    parts.push('e.lake_id = ?');
+    params.push(f.lakeId);
+  }
+  if (f.eventId) {
+    parts.push('e.id = ?');
+    params.push(f.eventId);
+  }
+  if (f.season) {
+    parts.push('e.season = ?');
+    params.push(f.season);
+  }
+  if (f.year) {
+    parts.push('e.year = ?');
+    params.push(f.year);
+  }
+  if (f.from) {
+    parts.push('e.first_date >= ?');
+    params.push(f.from);
+  }
+  if (f.to) {
+    parts.push('e.first_date <= ?');
+    params.push(f.to);
+  }
   return { sql: parts.join(' AND '), params };
 }
 

@@ -28,7 +28,8 @@ export interface DataColumnMeta {
 }
 
 declare module '@tanstack/react-table' {
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars
+  // Declaration merging needs an interface with TanStack's own type parameters.
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars, @typescript-eslint/no-empty-object-type
   interface ColumnMeta<TData, TValue> extends DataColumnMeta {}
 }
 

@@ -2,11 +2,11 @@ import type { FindKind, FindView, UnitPreferences } from '@shoalbook/shared';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { useTestViewport } from '../../../components/data-table/test-viewport';
+import { withTestViewport } from '../../../components/data-table/test-viewport';
 import { renderWithApp } from '../../../testing/render';
 import { FindsTable } from './finds-table';
 
-useTestViewport();
+withTestViewport();
 
 let n = 0;
 function find(name: string, kind: FindKind, depthFt: number | null, subKind: string, notes = ''): FindView {

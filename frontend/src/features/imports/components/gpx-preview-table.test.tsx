@@ -2,11 +2,11 @@ import type { FindImportRow, UnitPreferences } from '@shoalbook/shared';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { useTestViewport } from '../../../components/data-table/test-viewport';
+import { withTestViewport } from '../../../components/data-table/test-viewport';
 import { renderWithApp } from '../../../testing/render';
 import { GpxPreviewTable } from './gpx-preview-table';
 
-useTestViewport();
+withTestViewport();
 
 const row = (index: number, name: string, extra: Partial<FindImportRow> = {}): FindImportRow => ({
   index,

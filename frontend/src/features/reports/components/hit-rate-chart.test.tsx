@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { renderWithApp } from '../../../testing/render';
-import { hitRates, useLaidOutElements } from '../testing/report-test-kit';
+import { hitRates, withLaidOutElements } from '../testing/report-test-kit';
 import { HitRateChart } from './hit-rate-chart';
 
-useLaidOutElements(900, 600);
+withLaidOutElements(900, 600);
 
 // 14 of 40 gives the Wilson interval 22–50 % (the worked example in the reports issue; Wilson 1927 score interval).
 const report = hitRates(

@@ -3,10 +3,10 @@ import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import { renderWithApp } from '../../../testing/render';
 import type { EventFindRow } from '../api/report-types';
-import { useLaidOutElements } from '../testing/report-test-kit';
+import { withLaidOutElements } from '../testing/report-test-kit';
 import { PaidOffFindsTable } from './paid-off-finds-table';
 
-useLaidOutElements(1000, 600);
+withLaidOutElements(1000, 600);
 
 function row(
   findId: string,

@@ -22,7 +22,6 @@ function labelOf(header: unknown): string | undefined {
  */
 export function ReportTable<T>({
   data,
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
   columns,
   caption,
   getRowId,

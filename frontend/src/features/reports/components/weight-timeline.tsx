@@ -77,7 +77,7 @@ export function WeightTimeline({
             pointBorderWidth={2}
             pointBorderColor="#1f2328"
             pointColor={{ from: 'series.color' }}
-            pointSymbol={({ datum, color, size }) => (
+            pointSymbol={({ color, size }) => (
               <SymbolMark shape={symbolShape(indexOfColour.get(color) ?? 0)} size={size} colour={color} />
             )}
             enableGridX

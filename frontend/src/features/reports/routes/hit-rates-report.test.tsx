@@ -3,9 +3,9 @@ import userEvent from '@testing-library/user-event';
 import type { Mock } from 'vitest';
 import { describe, expect, it } from 'vitest';
 import { fakeNetwork } from '../../../testing/fake-network';
-import { events, hitRates, lakes, me, renderReports, useLaidOutElements } from '../testing/report-test-kit';
+import { events, hitRates, lakes, me, renderReports, withLaidOutElements } from '../testing/report-test-kit';
 
-useLaidOutElements(1200, 700);
+withLaidOutElements(1200, 700);
 
 const readings = [
   'Hard bottom produced on 14 of 40 finds fished (35 %, 22–50 %).',

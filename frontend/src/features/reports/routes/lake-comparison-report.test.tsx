@@ -2,9 +2,9 @@ import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { fakeNetwork } from '../../../testing/fake-network';
 import type { LakeComparisonReport } from '../api/report-types';
-import { comparison, lakes, me, events, rate, renderReports, useLaidOutElements } from '../testing/report-test-kit';
+import { comparison, lakes, me, events, rate, renderReports, withLaidOutElements } from '../testing/report-test-kit';
 
-useLaidOutElements(1200, 700);
+withLaidOutElements(1200, 700);
 
 const withFished = (k: number, n: number) => ({ ...rate(k, n), findsFished: n });
 const vegetationChange = comparison(

@@ -12,7 +12,7 @@ import { reportRoutes } from '../routes/report-routes';
  * jsdom lays nothing out: give every element a size for one test file, so the charts (which measure their
  * box with getBoundingClientRect) and the virtualised tables (clientHeight) draw.
  */
-export function useLaidOutElements(width = 1000, height = 600) {
+export function withLaidOutElements(width = 1000, height = 600) {
   const rect = { x: 0, y: 0, top: 0, left: 0, right: width, bottom: height, width, height, toJSON: () => ({}) };
   const originals = {
     clientHeight: Object.getOwnPropertyDescriptor(HTMLElement.prototype, 'clientHeight'),
