@@ -51,13 +51,15 @@ export function Component() {
     const paid = report.data.paidOff;
     body = (
       <div className={styles.stack}>
-        <Text as="p" className={styles.figure}>
-          {percent(paid.rate)} of practice paid off
-        </Text>
-        <Text as="p" className={styles.muted}>
-          {paid.successes} of {paid.trials} finds gave fish on competition days (likely between{' '}
-          {percentRange(paid.lower, paid.upper)}).
-        </Text>
+        <div>
+          <Text as="p" className={`${styles.figure} ${styles.flush}`}>
+            {percent(paid.rate)} of practice paid off
+          </Text>
+          <Text as="p" className={`${styles.muted} ${styles.flush}`}>
+            {paid.successes} of {paid.trials} finds gave fish on competition days (likely between{' '}
+            {percentRange(paid.lower, paid.upper)}).
+          </Text>
+        </div>
         <PaidOffFindsTable finds={report.data.finds} crewId={crew.id} units={units} timeZone={timeZone} />
       </div>
     );
