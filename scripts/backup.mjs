@@ -18,7 +18,7 @@ import {
   rmSync,
   statSync,
 } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
+import { basename, dirname, join, relative, resolve } from 'node:path';
 import { ensureDatabase, mariadbSocket, startMariadb } from './lib/mariadb.mjs';
 import { profile } from './lib/profile.mjs';
 import { fail, log } from './lib/run.mjs';
@@ -91,11 +91,13 @@ function uploadsArgs(p) {
 /** GNU tar exits 1 when a file changed while it was archived (an upload meanwhile): the second pass adds it. */
 const TAR_WRITE = { okCodes: [0, 1] };
 
-/** Regular files under a folder, as paths relative to it. */
-function filesUnder(dir, prefix = '') {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
-    e.isDirectory() ? filesUnder(join(dir, e.name), `${prefix}${e.name}/`) : e.isFile() ? [`${prefix}${e.name}`] : [],
-  );
+/** Everything under a folder (Node's recursive listing), as paths relative to it with their kind. */
+function entriesUnder(dir) {
+  return readdirSync(dir, { recursive: true, withFileTypes: true }).map((e) => ({
+    path: relative(dir, join(e.parentPath, e.name)),
+    file: e.isFile(),
+    folder: e.isDirectory(),
+  }));
 }
 
 /**
@@ -161,12 +163,8 @@ function unexpectedContent(dir) {
     return `it holds ${top.join(', ') || 'nothing'} instead of ${SQL_MEMBER} and ${UPLOADS_MEMBER}/`;
   if (!lstatSync(join(dir, SQL_MEMBER)).isFile() || !lstatSync(join(dir, UPLOADS_MEMBER)).isDirectory())
     return `${SQL_MEMBER} or ${UPLOADS_MEMBER}/ is of the wrong kind`;
-  const odd = (sub) =>
-    readdirSync(join(dir, sub), { withFileTypes: true }).flatMap((e) =>
-      e.isDirectory() ? odd(join(sub, e.name)) : e.isFile() ? [] : [join(sub, e.name)],
-    );
-  const others = odd(UPLOADS_MEMBER);
-  if (others.length) return `${others[0]} is neither a file nor a folder`;
+  const others = entriesUnder(join(dir, UPLOADS_MEMBER)).filter((e) => !e.file && !e.folder);
+  if (others.length) return `${join(UPLOADS_MEMBER, others[0].path)} is neither a file nor a folder`;
   if (!isCompleteDump(join(dir, SQL_MEMBER))) return `its ${SQL_MEMBER} is not a complete mariadb-dump file`;
   return null;
 }
@@ -217,7 +215,7 @@ export async function restore(p, file) {
     const incoming = join(staging, UPLOADS_MEMBER);
     if (existsSync(p.uploadDir)) renameSync(p.uploadDir, join(staging, `${basename(p.uploadDir)}.replaced`));
     renameSync(incoming, p.uploadDir);
-    return { photos: filesUnder(p.uploadDir).length };
+    return { photos: entriesUnder(p.uploadDir).filter((e) => e.file).length };
   } finally {
     rmSync(staging, { recursive: true, force: true });
   }

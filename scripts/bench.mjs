@@ -51,11 +51,12 @@ class Session {
     // on first use; a short pause lets the event loop see the closes, then a fresh socket is used.
     let res;
     for (let attempt = 1; !res; attempt++) {
-      res = await fetch(this.base + path, init).catch(async (e) => {
+      try {
+        res = await fetch(this.base + path, init);
+      } catch (e) {
         if (attempt >= 3) throw e;
         await new Promise((r) => setTimeout(r, 200));
-        return undefined;
-      });
+      }
     }
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(';');

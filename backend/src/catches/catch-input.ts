@@ -14,7 +14,7 @@ import {
 import { assignMeasured, checkRange, RANGES, sentField } from '../measurements/ranges';
 import type { Catch } from './catch.entity';
 import { catchTimeProblem } from './catch-window';
-import type { FindLookup } from './find-lookup';
+import type { FindLookup, FindsInMemory } from './find-lookup';
 import type { LogCatchDto, UpdateCatchDto } from './dto/catch.dto';
 
 /** What checking a catch needs from the database. */
@@ -25,6 +25,9 @@ export interface CatchContext {
   finds: FindLookup;
   photoIds: (id: string) => Promise<boolean>;
 }
+
+/** What checking an import's rows needs: no day yet (each row names its date), and the lake's finds in memory. */
+export type ImportCatchContext = Omit<CatchContext, 'day' | 'finds'> & { finds: FindsInMemory };
 
 /**
  * Apply a log or update request to a catch. Problems go to `problems` beside the request's field

@@ -11,9 +11,9 @@ import { Lake } from '../lakes/lake.entity';
 import { Photo } from '../photos/photo.entity';
 import { SkyService } from '../sky/sky.service';
 import { Catch } from './catch.entity';
-import type { CatchContext } from './catch-input';
+import type { CatchContext, ImportCatchContext } from './catch-input';
 import { catchView } from './catch-view';
-import { type FindRef, findsInDatabase, findsInMemory } from './find-lookup';
+import { findsInDatabase, loadLakeFinds } from './find-lookup';
 
 /** Reads of a crew's catches (scoped by crew in every query) and the context checks need. */
 @Injectable()
@@ -104,19 +104,9 @@ export class CatchesService {
   }
 
   /** For an import: the event's lake and all its finds, loaded once for thousands of rows. */
-  async lakeContext(
-    em: EntityManager,
-    crewId: string,
-    event: TournamentEvent,
-  ): Promise<Omit<CatchContext, 'day'> & { lakeFinds: FindRef[] }> {
+  async lakeContext(em: EntityManager, crewId: string, event: TournamentEvent): Promise<ImportCatchContext> {
     const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
-    const found = await em.find(
-      Find,
-      { crewId, lakeId: lake.id },
-      { fields: ['id', 'name', 'lat', 'lon'], orderBy: { id: 'asc' } },
-    );
-    const lakeFinds = found.map((f) => ({ id: f.id, name: f.name, lat: f.lat, lon: f.lon }));
-    return { lake, lakeFinds, finds: findsInMemory(lakeFinds), photoIds: this.photoIds(em, crewId) };
+    return { lake, finds: await loadLakeFinds(em, crewId, lake.id), photoIds: this.photoIds(em, crewId) };
   }
 
   private photoIds(em: EntityManager, crewId: string) {

@@ -36,10 +36,25 @@ export function boundingBox(
   return { ...box, minLon: point.lon - dLon, maxLon: point.lon + dLon };
 }
 
+/** The find columns attribution and naming need, and the reference made from them. */
+const FIND_FIELDS = ['id', 'name', 'lat', 'lon'] as const;
+const refOf = (f: Pick<Find, (typeof FIND_FIELDS)[number]>): FindRef => ({
+  id: f.id,
+  name: f.name,
+  lat: f.lat,
+  lon: f.lon,
+});
+
+/** A lookup over finds already in memory, which also hands out the whole list (an import matches finds by name). */
+export interface FindsInMemory extends FindLookup {
+  readonly all: readonly FindRef[];
+}
+
 /** For a batch (an import checks thousands of rows): every find of the lake, loaded once. */
-export function findsInMemory(finds: readonly FindRef[]): FindLookup {
+export function findsInMemory(finds: readonly FindRef[]): FindsInMemory {
   const byId = new Map(finds.map((f) => [f.id, f]));
   return {
+    all: finds,
     byId: (id) => Promise.resolve(byId.get(id)),
     near: (point, radiusM) => {
       const b = boundingBox(point, radiusM);
@@ -55,20 +70,24 @@ export function findsInMemory(finds: readonly FindRef[]): FindLookup {
   };
 }
 
+/** Every find of the lake, read once, as an in-memory lookup (in id order, so ties in attribution are stable). */
+export async function loadLakeFinds(em: EntityManager, crewId: string, lakeId: string): Promise<FindsInMemory> {
+  const found = await em.find(Find, { crewId, lakeId }, { fields: [...FIND_FIELDS], orderBy: { id: 'asc' } });
+  return findsInMemory(found.map(refOf));
+}
+
 /**
  * For one catch: ask the database for the find or for the box around the point, so logging a catch
  * costs the same on a lake with twenty finds as on one with twenty thousand.
  */
 export function findsInDatabase(em: EntityManager, crewId: string, lakeId: string): FindLookup {
-  const fields = ['id', 'name', 'lat', 'lon'] as const;
-  const ref = (f: Pick<Find, (typeof fields)[number]>): FindRef => ({ id: f.id, name: f.name, lat: f.lat, lon: f.lon });
   // A command asks for the same find twice (to check it, then to name it in the view); read it once.
   const seen = new Map<string, FindRef | undefined>();
   return {
     byId: async (id) => {
       if (!seen.has(id)) {
-        const f = await em.findOne(Find, { id, crewId, lakeId }, { fields: [...fields] });
-        seen.set(id, f ? ref(f) : undefined);
+        const f = await em.findOne(Find, { id, crewId, lakeId }, { fields: [...FIND_FIELDS] });
+        seen.set(id, f ? refOf(f) : undefined);
       }
       return seen.get(id);
     },
@@ -78,9 +97,9 @@ export function findsInDatabase(em: EntityManager, crewId: string, lakeId: strin
       const finds = await em.find(
         Find,
         { crewId, lakeId, lat: { $gte: b.minLat, $lte: b.maxLat }, ...lon },
-        { fields: [...fields], orderBy: { id: 'asc' } },
+        { fields: [...FIND_FIELDS], orderBy: { id: 'asc' } },
       );
-      const refs = finds.map(ref);
+      const refs = finds.map(refOf);
       for (const f of refs) seen.set(f.id, f);
       return refs;
     },

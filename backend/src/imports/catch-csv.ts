@@ -3,8 +3,7 @@ import { validate } from 'class-validator';
 import Papa from 'papaparse';
 import { CATCH_CSV_COLUMNS, type CatchImportPreview, type CatchImportRow } from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
-import { applyCatchInput, type CatchContext } from '../catches/catch-input';
-import type { FindRef } from '../catches/find-lookup';
+import { applyCatchInput, type ImportCatchContext } from '../catches/catch-input';
 import { LogCatchDto } from '../catches/dto/catch.dto';
 import { toFieldErrors } from '../common/pipes/api-validation.pipe';
 import type { CompetitionDay } from '../events/competition-day.entity';
@@ -136,12 +135,12 @@ export async function checkCatchRows(
   crewId: string,
   eventId: string,
   days: CompetitionDay[],
-  ctx: Omit<CatchContext, 'day'> & { lakeFinds: readonly FindRef[] },
+  ctx: ImportCatchContext,
   parsed: ParsedCsv,
 ): Promise<CheckedCatchRow[]> {
   const dayByDate = new Map(days.map((d) => [d.date, d]));
   const findsByName = new Map<string, string[]>();
-  for (const f of ctx.lakeFinds)
+  for (const f of ctx.finds.all)
     findsByName.set(f.name.toLowerCase(), [...(findsByName.get(f.name.toLowerCase()) ?? []), f.id]);
   const out: CheckedCatchRow[] = [];
   for (const [index, row] of parsed.rows.entries()) {

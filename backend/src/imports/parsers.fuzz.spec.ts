@@ -250,8 +250,10 @@ describe('catch CSV parser and row checks under fuzzing (fast-check)', () => {
     eventId: 'e',
     date: '2024-04-13',
   });
-  const lakeFinds = [{ id: '33333333-3333-4333-8333-333333333333', name: 'Shell bar', lat: 32.951, lon: -96.201 }];
-  const ctx = { lake, lakeFinds, finds: findsInMemory(lakeFinds), photoIds: async () => false };
+  const finds = findsInMemory([
+    { id: '33333333-3333-4333-8333-333333333333', name: 'Shell bar', lat: 32.951, lon: -96.201 },
+  ]);
+  const ctx = { lake, finds, photoIds: async () => false };
 
   it('arbitrary text: a whole-file ImportFileError, or rows each checked with field errors or a record', async () => {
     await fc.assert(

@@ -38,3 +38,17 @@ export function smallSampleReading(label: string, trials: number): string {
 export function noSpreadReading(groupingLabel: string, shrunk: number): string {
   return `Between ${groupingLabel}, the differences are no bigger than chance would give with these numbers of finds, so every adjusted rate sits near the overall ${percent(shrunk)}: narrow the filters to one lake or season, or fish more finds, before ranking them.`;
 }
+
+const points = (x: number) => `${Math.round(Math.abs(x) * 100)}`;
+
+/**
+ * The difference as a size in points with its interval on the same side, so "worse" never reads with negative
+ * bounds; an interval that reaches past zero names both directions ("likely from 6 points higher to 94 lower").
+ */
+export function differenceText(difference: number, lower: number, upper: number): string {
+  const [lo, hi] = difference < 0 ? [-upper, -lower] : [lower, upper];
+  const [side, other] = difference < 0 ? ['lower', 'higher'] : ['higher', 'lower'];
+  const size = difference === 0 ? '0 points' : `${points(difference)} points ${side}`;
+  if (Math.round(lo * 100) < 0) return `${size}, likely from ${points(lo)} points ${other} to ${points(hi)} ${side}`;
+  return `${size}, likely ${Math.round(lo * 100)} to ${Math.round(hi * 100)}`;
+}

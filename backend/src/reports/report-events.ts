@@ -13,35 +13,23 @@ export interface ReportEvent extends ReportEventRef {
 
 const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T) : (v as T));
 
+/** Each report filter and the condition it puts on rm_event (alias e). */
+const FILTER_CONDITIONS: readonly [keyof ReportFilters, string][] = [
+  ['lakeId', 'e.lake_id = ?'],
+  ['eventId', 'e.id = ?'],
+  ['season', 'e.season = ?'],
+  ['year', 'e.year = ?'],
+  ['from', 'e.first_date >= ?'],
+  ['to', 'e.first_date <= ?'],
+];
+
 /** `WHERE …` on rm_event (alias e) for the crew and the filters, with its parameters. */
 export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
-  const parts = ['e.crew_id = ?'];
-  const params: unknown[] = [crewId];
-  if (f.lakeId) {
-    parts.push('e.lake_id = ?');
-    params.push(f.lakeId);
-  }
-  if (f.eventId) {
-    parts.push('e.id = ?');
-    params.push(f.eventId);
-  }
-  if (f.season) {
-    parts.push('e.season = ?');
-    params.push(f.season);
-  }
-  if (f.year) {
-    parts.push('e.year = ?');
-    params.push(f.year);
-  }
-  if (f.from) {
-    parts.push('e.first_date >= ?');
-    params.push(f.from);
-  }
-  if (f.to) {
-    parts.push('e.first_date <= ?');
-    params.push(f.to);
-  }
-  return { sql: parts.join(' AND '), params };
+  const set = FILTER_CONDITIONS.filter(([key]) => f[key]);
+  return {
+    sql: ['e.crew_id = ?', ...set.map(([, condition]) => condition)].join(' AND '),
+    params: [crewId, ...set.map(([key]) => f[key])],
+  };
 }
 
 /** The crew's events matching the filters, oldest first. */

@@ -43,11 +43,15 @@ export function responseValidator(
     Object.entries(doc.components.schemas).map(([name, s]) => [name, toJsonSchema(s)]),
   );
   ajv.addSchema({ $id: DOC_ID, definitions });
+  // One compiled validator per route and status: the tests check the same routes many times.
+  const compiled = new Map<string, ReturnType<typeof ajv.compile>>();
   return (method, path, status, body) => {
     const schema =
       doc.paths[path]?.[method.toLowerCase()]?.responses[String(status)]?.content?.['application/json']?.schema;
     if (!schema) return [`${method.toUpperCase()} ${path} ${status}: no JSON response schema in the document`];
-    const validate = ajv.compile(toJsonSchema(schema) as object);
+    const key = `${method} ${path} ${status}`;
+    const validate = compiled.get(key) ?? ajv.compile(toJsonSchema(schema) as object);
+    compiled.set(key, validate);
     if (validate(body)) return [];
     return (validate.errors ?? []).map(
       (e) =>

@@ -6,23 +6,9 @@ import { CATCH_UNIT_GROUPINGS, type EventRate, type LakeComparisonView } from '@
 import { ApiException, ErrorCode } from '../../common/errors/api-errors';
 import { eventLabel, groupLabel } from '../labels';
 import { groupRates } from '../rates';
-import { percent, pValueText } from '../readings';
+import { differenceText, percent, pValueText } from '../readings';
 import { findLake, placeholders, selectEvents } from '../report-events';
 import { GetLakeComparisonQuery } from './lake-comparison.query';
-
-const points = (x: number) => `${Math.round(Math.abs(x) * 100)}`;
-
-/**
- * The difference as a size in points with its interval on the same side, so "worse" never reads with negative
- * bounds; an interval that reaches past zero names both directions ("likely from 6 points higher to 94 lower").
- */
-export function differenceText(difference: number, lower: number, upper: number): string {
-  const [lo, hi] = difference < 0 ? [-upper, -lower] : [lower, upper];
-  const [side, other] = difference < 0 ? ['lower', 'higher'] : ['higher', 'lower'];
-  const size = difference === 0 ? '0 points' : `${points(difference)} points ${side}`;
-  if (Math.round(lo * 100) < 0) return `${size}, likely from ${points(lo)} points ${other} to ${points(hi)} ${side}`;
-  return `${size}, likely ${Math.round(lo * 100)} to ${Math.round(hi * 100)}`;
-}
 
 /** Reads rm_group_stats for the lake's events; differences with @shoalbook/analytics compareProportions. */
 @QueryHandler(GetLakeComparisonQuery)

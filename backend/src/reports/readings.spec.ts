@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { differenceText } from './lake-comparison.handler';
+import { differenceText } from './readings';
 
 describe('differenceText', () => {
   it('reads a rise and a drop as a size with bounds on its own side', () => {
