@@ -3,7 +3,7 @@ import { CATCH_GROUPINGS, type CatchGroupSums, type CatchSums, deriveGroupStats,
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
 import type { OutcomeRow } from './rows';
-import { fromDb, inList, insertChunks, type TableSpec } from './sql-values';
+import { fromDb, inList, insertChunks, sqlString, type TableSpec } from './sql-values';
 import {
   CATCH_TABLE,
   DAY_TABLE,
@@ -126,10 +126,7 @@ export class ReadModelStore {
     const dirtyFinds = [...state.dirtyFinds];
     const dirtyEvents = new Set(state.dirtyEvents);
     if (dirtyFinds.length) {
-      const old: Row[] = await tx.execute(
-        `SELECT DISTINCT event_id FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`,
-      );
-      for (const r of old) dirtyEvents.add(String(r.event_id));
+      const before = await select(tx, OUTCOME_TABLE, inList('find_id', dirtyFinds));
       const missing = dirtyFinds.filter((id) => !state.finds.rows.has(id) && !state.finds.changed.has(id));
       for (const f of await select(tx, FIND_TABLE, inList('id', missing))) state.finds.load(f.id, f);
       // Sums per (find, event) straight from SQL: a find with thousands of catches costs one small result.
@@ -145,7 +142,9 @@ export class ReadModelStore {
       const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) =>
         outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map()),
       );
-      for (const o of outcomes) dirtyEvents.add(o.eventId);
+      // Only events whose outcome rows changed need their statistics again: a catch logged on a find changes
+      // the find's outcome in the catch's event, not in the other events the find was fished in.
+      for (const eventId of eventsWithChangedRows(OUTCOME_TABLE, before, outcomes)) dirtyEvents.add(eventId);
       await tx.execute(`DELETE FROM rm_find_outcome WHERE ${inList('find_id', dirtyFinds)}`);
       for (const sql of insertChunks(OUTCOME_TABLE, outcomes)) await tx.execute(sql);
     }
@@ -154,7 +153,21 @@ export class ReadModelStore {
     if (events.length) {
       const missing = events.filter((id) => !state.events.rows.has(id) && !state.events.changed.has(id));
       for (const ev of await select(tx, EVENT_TABLE, inList('id', missing))) state.events.load(ev.id, ev);
-      const outcomes = await select(tx, OUTCOME_TABLE, inList('event_id', events));
+      // By crew and event, the (crew_id, event_id) index's order; events no longer present have no statistics.
+      const present = events.map((id) => state.events.get(id)).filter((ev) => ev !== undefined);
+      const outcomes = await select(
+        tx,
+        OUTCOME_TABLE,
+        [...groupBy(present, (ev) => ev.crewId)]
+          .map(
+            ([crewId, evs]) =>
+              `(crew_id = ${sqlString(crewId)} AND ${inList(
+                'event_id',
+                evs.map((ev) => ev.id),
+              )})`,
+          )
+          .join(' OR ') || 'FALSE',
+      );
       const groupRows: Row[] = await tx.execute(
         CATCH_GROUPINGS.map(
           (
@@ -181,6 +194,25 @@ export class ReadModelStore {
       for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);
     }
   }
+}
+
+/** The events of the rows that differ between two sets of outcome rows (added, removed or changed). */
+export function eventsWithChangedRows<R extends { eventId: string }>(
+  spec: TableSpec<R>,
+  before: readonly R[],
+  after: readonly R[],
+): Set<string> {
+  const keyOf = (r: R) => spec.key.map((k) => String(r[k])).join('\u0000');
+  const same = (a: R, b: R) => spec.columns.every((c) => a[c.prop] === b[c.prop]);
+  const old = new Map(before.map((r) => [keyOf(r), r]));
+  const changed = new Set<string>();
+  for (const r of after) {
+    const o = old.get(keyOf(r));
+    old.delete(keyOf(r));
+    if (!o || !same(o, r)) changed.add(r.eventId);
+  }
+  for (const r of old.values()) changed.add(r.eventId);
+  return changed;
 }
 
 /** Rows grouped by a key, in input order. */

@@ -7,7 +7,11 @@ import type { Fate, Species } from '@shoalbook/shared';
  * `weightUlb` is the weight in micro-pounds (integer), so sums are exact whatever order rows are added in.
  */
 @Entity({ tableName: 'rm_catch_fact' })
-@Index({ name: 'rm_catch_fact_event_index', properties: ['eventId'] })
+// Covers the projector's per-event catch-grouping sums (Migration20261221000000).
+@Index({
+  name: 'rm_catch_fact_event_groups_index',
+  properties: ['eventId', 'solunarPeriod', 'timeOfDay', 'fate', 'weightUlb'],
+})
 @Index({ name: 'rm_catch_fact_find_index', properties: ['findId'] })
 @Index({ name: 'rm_catch_fact_crew_lake_index', properties: ['crewId', 'lakeId'] })
 export class RmCatchFact {
