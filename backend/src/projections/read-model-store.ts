@@ -2,8 +2,8 @@ import type { EntityManager } from '@mikro-orm/mariadb';
 import { CATCH_GROUPINGS, type CatchGroupSums, type CatchSums, deriveGroupStats, outcomesFromSums } from './derive';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
-import type { OutcomeRow } from './rows';
-import { fromDb, inList, insertChunks, sqlString, type TableSpec } from './sql-values';
+import type { EventRow, OutcomeRow } from './rows';
+import { fromDb, inList, insertChunks, rowKey, sqlString, type TableSpec } from './sql-values';
 import {
   CATCH_TABLE,
   DAY_TABLE,
@@ -155,19 +155,7 @@ export class ReadModelStore {
       for (const ev of await select(tx, EVENT_TABLE, inList('id', missing))) state.events.load(ev.id, ev);
       // By crew and event, the (crew_id, event_id) index's order; events no longer present have no statistics.
       const present = events.map((id) => state.events.get(id)).filter((ev) => ev !== undefined);
-      const outcomes = await select(
-        tx,
-        OUTCOME_TABLE,
-        [...groupBy(present, (ev) => ev.crewId)]
-          .map(
-            ([crewId, evs]) =>
-              `(crew_id = ${sqlString(crewId)} AND ${inList(
-                'event_id',
-                evs.map((ev) => ev.id),
-              )})`,
-          )
-          .join(' OR ') || 'FALSE',
-      );
+      const outcomes = await select(tx, OUTCOME_TABLE, eventsOfCrews(present));
       const groupRows: Row[] = await tx.execute(
         CATCH_GROUPINGS.map(
           (
@@ -196,19 +184,31 @@ export class ReadModelStore {
   }
 }
 
+/** `(crew_id = … AND event_id IN (…)) OR …` for some events; `FALSE` for none. */
+function eventsOfCrews(events: readonly EventRow[]): string {
+  const perCrew = [...groupBy(events, (ev) => ev.crewId)].map(
+    ([crewId, evs]) =>
+      `(crew_id = ${sqlString(crewId)} AND ${inList(
+        'event_id',
+        evs.map((ev) => ev.id),
+      )})`,
+  );
+  return perCrew.join(' OR ') || 'FALSE';
+}
+
 /** The events of the rows that differ between two sets of outcome rows (added, removed or changed). */
 export function eventsWithChangedRows<R extends { eventId: string }>(
   spec: TableSpec<R>,
   before: readonly R[],
   after: readonly R[],
 ): Set<string> {
-  const keyOf = (r: R) => spec.key.map((k) => String(r[k])).join('\u0000');
   const same = (a: R, b: R) => spec.columns.every((c) => a[c.prop] === b[c.prop]);
-  const old = new Map(before.map((r) => [keyOf(r), r]));
+  const old = new Map(before.map((r) => [rowKey(spec, r), r]));
   const changed = new Set<string>();
   for (const r of after) {
-    const o = old.get(keyOf(r));
-    old.delete(keyOf(r));
+    const key = rowKey(spec, r);
+    const o = old.get(key);
+    old.delete(key);
     if (!o || !same(o, r)) changed.add(r.eventId);
   }
   for (const r of old.values()) changed.add(r.eventId);

@@ -10,7 +10,7 @@ import { ProjectionState } from './projection-state';
 import { JOURNAL_PROJECTION, withProjectionLock, writeCheckpoint } from './projection-lock';
 import { groupBy } from './read-model-store';
 import type { OutcomeRow } from './rows';
-import { insertSql, type TableSpec } from './sql-values';
+import { insertSql, rowKey, type TableSpec } from './sql-values';
 import {
   CATCH_TABLE,
   DAY_TABLE,
@@ -95,9 +95,8 @@ export async function rebuildReadModels(
       let pending: Promise<unknown> = Promise.resolve();
       // Rows go in primary-key order: InnoDB then appends to its clustered index instead of splitting pages.
       const write = async <R>(spec: TableSpec<R>, rows: Iterable<R>) => {
-        const keyOf = (r: R) => spec.key.map((k) => String(r[k])).join('\u0000');
         const all = [...rows]
-          .map((r) => ({ r, k: keyOf(r) }))
+          .map((r) => ({ r, k: rowKey(spec, r) }))
           .sort((a, b) => (a.k < b.k ? -1 : a.k > b.k ? 1 : 0))
           .map((x) => x.r);
         for (let i = 0; i < all.length; i += WRITE_CHUNK) {

@@ -61,6 +61,11 @@ export interface TableSpec<R> {
   key: readonly (keyof R & string)[];
 }
 
+/** A row's primary key as one string (the parts joined by NUL, which no id contains). */
+export function rowKey<R>(spec: TableSpec<R>, row: R): string {
+  return spec.key.map((k) => String(row[k])).join('\u0000');
+}
+
 const snake = (name: string) => name.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 
 /** A table spec from `prop: kind` pairs; column names are the snake_case of the property (…Ms dropped for instants). */
