@@ -14,6 +14,8 @@ const DEFAULTS = {
   // Extra test profiles, so two engineers can run test suites side by side (SHOALBOOK_TEST_PROFILE=test2).
   test2: { dbPort: 3320, port: 3101, smtpPort: 2528, dbName: 'shoalbook_test2' },
   test3: { dbPort: 3321, port: 3102, smtpPort: 2529, dbName: 'shoalbook_test3' },
+  test4: { dbPort: 3322, port: 3103, smtpPort: 2530, dbName: 'shoalbook_test4' },
+  test5: { dbPort: 3323, port: 3104, smtpPort: 2531, dbName: 'shoalbook_test5' },
 };
 
 /** Resolve a profile; the demo profile honours PORT and DB_PORT from the environment. */
