@@ -12,6 +12,7 @@ import { authThrottlerOptions } from './common/throttling/auth-throttling';
 import { AppConfigModule } from './config/app-config.module';
 import { AppConfig } from './config/app-config.service';
 import { CrewsModule } from './crews/crews.module';
+import { setStaticCacheHeaders } from './common/static-cache';
 import { buildOrmConfig } from './database/mikro-orm.config';
 import { DevOutboxModule } from './dev-outbox/dev-outbox.module';
 import { HealthModule } from './health/health.module';
@@ -53,7 +54,15 @@ export class AppModule {
         ProjectionsModule,
         ReportsModule,
         ...(raw.NODE_ENV === 'production' ? [] : [DevOutboxModule]),
-        ...(serveFrontend ? [ServeStaticModule.forRoot({ rootPath: frontendDist!, exclude: ['/api/{*path}'] })] : []),
+        ...(serveFrontend
+          ? [
+              ServeStaticModule.forRoot({
+                rootPath: frontendDist!,
+                exclude: ['/api/{*path}'],
+                serveStaticOptions: { setHeaders: setStaticCacheHeaders },
+              }),
+            ]
+          : []),
       ],
     };
   }

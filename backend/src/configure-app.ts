@@ -7,6 +7,7 @@ import { SESSION_COOKIE } from './auth/session-cookie';
 import { CsrfService } from './common/csrf/csrf.service';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { jsonBodyMiddleware } from './common/middleware/json-body.middleware';
+import { noStoreMiddleware } from './common/middleware/no-store.middleware';
 import { requestIdMiddleware } from './common/middleware/request-id.middleware';
 import { ApiValidationPipe } from './common/pipes/api-validation.pipe';
 import { AppConfig } from './config/app-config.service';
@@ -47,6 +48,7 @@ export function configureApp(app: INestApplication): INestApplication {
     }),
   );
   app.use(cookieParser());
+  app.use(`/${API_PREFIX}`, noStoreMiddleware);
   app.use(`/${API_PREFIX}`, jsonBodyMiddleware());
   app.use(`/${API_PREFIX}`, app.get(CsrfService).middleware);
   app.setGlobalPrefix(API_PREFIX);

@@ -161,6 +161,14 @@ describe('authorisation matrix from the OpenAPI document', () => {
         const res =
           op.method === 'get' || op.method === 'delete' ? await req : await req.send(SAMPLE_BODIES[op.key]?.() ?? {});
         const got = classify(res);
+        // OWASP ASVS 4.0.3 V8.2.1: answers to a signed-in caller carry anti-caching headers (RFC 9111 no-store).
+        if (
+          actor !== 'anonymous' &&
+          (res.headers['cache-control'] !== 'no-store' || !/\bCookie\b/.test(res.headers.vary ?? ''))
+        )
+          failures.push(
+            `${op.key} as ${actor}: Cache-Control ${res.headers['cache-control']}, Vary ${res.headers.vary} (want no-store, Cookie)`,
+          );
         if (got !== expected[actor])
           failures.push(
             `${op.key} as ${actor}: expected ${expected[actor]}, got ${got} (${res.status} ${JSON.stringify(res.body).slice(0, 120)})`,

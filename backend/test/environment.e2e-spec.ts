@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { INestApplication } from '@nestjs/common';
@@ -73,6 +73,8 @@ describe('serving the built front end', () => {
     dist = mkdtempSync(join(tmpdir(), 'shoalbook-dist-'));
     writeFileSync(join(dist, 'index.html'), '<!doctype html><title>Shoalbook test shell</title>');
     writeFileSync(join(dist, 'app.js'), 'console.log(1)');
+    mkdirSync(join(dist, 'assets'));
+    writeFileSync(join(dist, 'assets', 'index-B7x_Qk2a.js'), 'console.log(2)');
     // serve-static only works in a real app (not inside Test.createTestingModule).
     app = await NestFactory.create(AppModule.forRoot({ FRONTEND_DIST: dist }), { ...APP_OPTIONS, logger: ['error'] });
     configureApp(app);
@@ -81,6 +83,22 @@ describe('serving the built front end', () => {
   afterAll(async () => {
     await app.close();
     rmSync(dist, { recursive: true, force: true });
+  });
+
+  it('caches only the hashed assets for long, and never an API answer', async () => {
+    const server = app.getHttpServer();
+    // RFC 8246 immutable: the file name changes whenever its bytes do (Vite's content hash).
+    const hashed = await request(server).get('/assets/index-B7x_Qk2a.js');
+    expect(hashed.text).toBe('console.log(2)');
+    expect(hashed.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    for (const path of ['/', '/app.js', '/crews/some-id/settings'])
+      expect((await request(server).get(path)).headers['cache-control'], path).toBe('no-cache');
+    // OWASP ASVS 4.0.3 V8.2.1: API answers are never stored, also error answers.
+    for (const path of ['/api/auth/csrf', '/api/nothing-here']) {
+      const res = await request(server).get(path);
+      expect(res.headers['cache-control'], path).toBe('no-store');
+      expect(res.headers.vary, path).toMatch(/\bCookie\b/);
+    }
   });
 
   it('serves files, falls back to index.html for app routes, and keeps /api JSON', async () => {

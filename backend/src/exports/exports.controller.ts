@@ -19,7 +19,6 @@ export class ExportsController {
   @Get('export.json')
   @ApiOperation({ summary: "The crew's whole journal as JSON (contains positions; owner or angler)" })
   @ApiOkResponse({ type: JournalExportDto })
-  @Header('Cache-Control', 'no-store')
   async json(@CurrentCrew() access: CrewAccess, @Res({ passthrough: true }) res: Response): Promise<JournalExport> {
     res.setHeader(
       'Content-Disposition',
@@ -38,7 +37,6 @@ export class ExportsController {
     description: 'one row per record; cells that could start a formula are neutralised',
     schema: { type: 'string' },
   })
-  @Header('Cache-Control', 'no-store')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   async csv(@CurrentCrew() access: CrewAccess, @Res({ passthrough: true }) res: Response): Promise<string> {
     res.setHeader(

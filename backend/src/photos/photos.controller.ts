@@ -61,7 +61,6 @@ export class PhotosController {
     const photo = await this.em.findOne(Photo, { id: photoId, crewId: access.crewId });
     const bytes = photo ? await this.storage.get(photo.storageKey) : null;
     if (!photo || !bytes) throw recordNotFound('photo');
-    res.setHeader('Cache-Control', 'private, max-age=3600');
     res.setHeader('X-Content-Type-Options', 'nosniff');
     return new StreamableFile(bytes, { type: photo.contentType, length: bytes.length });
   }
