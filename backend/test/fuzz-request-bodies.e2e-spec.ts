@@ -8,9 +8,10 @@ import { SessionsService } from '../src/auth/sessions.service';
 import { hashToken, randomToken } from '../src/common/tokens';
 import { Crew } from '../src/crews/crew.entity';
 import { Invite } from '../src/crews/invite.entity';
+import { Find } from '../src/finds/find.entity';
 import { User } from '../src/users/user.entity';
-import { competitionDays, createEvent, createLake, expectOk } from './journal-fixtures';
-import { addMember, crewWithMembers, makeAdmin, newUser } from './utils/api-client';
+import { competitionDays, createEvent, createLake, expectOk, journalCount } from './journal-fixtures';
+import { addMember, ApiClient, crewWithMembers, makeAdmin, newUser } from './utils/api-client';
 import { createTestApp, testEm } from './utils/test-app';
 
 // Property-based fuzzing of every JSON request body in the OpenAPI document (security.md): whatever the body
@@ -87,7 +88,7 @@ const { junk } = fc.letrec((tie) => ({
     fc.boolean(),
     fc.integer(),
     fc.double(),
-    fc.constantFrom(Number.MAX_SAFE_INTEGER + 2, -0, 1e308, 2 ** 31, -(2 ** 31) - 1),
+    fc.constantFrom(Number.MAX_SAFE_INTEGER + 2, -0, 1e308, 5e-324, -5e-324, 2 ** 31, -(2 ** 31) - 1),
     fc.string({ maxLength: 30 }),
     fc.constantFrom(...NASTY),
     hugeString,
@@ -114,7 +115,7 @@ function plausible(like: unknown): fc.Arbitrary<unknown> {
       fc.constant(null),
       fc.integer({ min: -1000, max: 100_000 }),
       fc.double({ noNaN: true, noDefaultInfinity: true }),
-      fc.constantFrom(0, -1, 0.5, 90.000001, -180.5, 1e9, like + 1, like - 1),
+      fc.constantFrom(0, -0, -1, 0.5, 90.000001, -180.5, 1e9, 1e308, 5e-324, like + 1, like - 1),
     );
   }
   if (typeof like === 'string')
@@ -186,6 +187,7 @@ function bodyFor(sample: Record<string, unknown>): fc.Arbitrary<Body> {
           '[]',
           '{}',
           `{"a":${'['.repeat(5000)}`,
+          `{"a":${'['.repeat(5000)}${']'.repeat(5000)}}`,
         )
         .map((raw) => ({ raw })),
     },
@@ -504,4 +506,168 @@ describe('fuzzing every JSON request body (fast-check)', () => {
     expect(refused).toBeGreaterThan(routes.length * RUNS_PER_ROUTE * 0.5);
     expect(accepted).toBeGreaterThan(0);
   }, 600_000);
+});
+
+/** `{"a":[[...]]}` nested `levels` deep (objects and arrays both count). */
+function nested(levels: number): string {
+  return `{"a":${'['.repeat(levels - 1)}${']'.repeat(levels - 1)}}`;
+}
+
+// The cases the generator above reaches only by chance, pinned: the nesting limit and every numeric field
+// at the float edges. OWASP ASVS 4.0.3 V5.1.3 (positive validation with ranges) and V5.1.4 (structured data).
+describe('hostile bodies, pinned: nesting depth and float edges', () => {
+  let app: INestApplication;
+  let crew: Awaited<ReturnType<typeof crewWithMembers>>;
+  let base: string;
+  let dayId: string;
+  let findId: string;
+  let lakeId: string;
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    crew = await crewWithMembers(app, 'Edge Crew');
+    base = `/api/crews/${crew.crewId}`;
+    const lake = await createLake(crew.owner, crew.crewId);
+    lakeId = lake.id;
+    const event = await createEvent(crew.owner, crew.crewId, lake.id);
+    dayId = (await competitionDays(crew.owner, crew.crewId, event.id))[0]!.id;
+    const find = await crew.owner.post(`${base}/finds`, {
+      lakeId,
+      name: 'Edge',
+      lat: 32.9,
+      lon: -96.1,
+      kind: 'contour',
+    });
+    expectOk(find, 201);
+    findId = find.body.id;
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  async function rawPost(path: string, raw: string, signedIn = true): Promise<Response> {
+    const client = signedIn ? crew.owner : new ApiClient(app);
+    const token = await client.refreshCsrf();
+    return client.agent.post(path).set(CSRF_HEADER, token).set('Content-Type', 'application/json').send(raw);
+  }
+
+  it('refuses a body nested more than 32 levels with 400, also on the anonymous sign-in', async () => {
+    for (const [path, signedIn] of [
+      ['/api/auth/sign-in', false],
+      [`${base}/lakes`, true],
+    ] as const) {
+      for (const levels of [33, 5000, 20_000]) {
+        const res = await rawPost(path, nested(levels), signedIn);
+        expect(res.status, `${path} ${levels}`).toBe(400);
+        expect(res.body.message).toMatch(/the request body is nested too deeply/i);
+      }
+      // Brackets inside strings are text, not nesting; 32 levels still reach validation.
+      const inString = await rawPost(path, JSON.stringify({ name: '['.repeat(50_000) }), signedIn);
+      expect(inString.body.message).not.toMatch(/nested/);
+      const deepest = await rawPost(path, nested(32), signedIn);
+      expect(deepest.status).toBe(400);
+      expect(deepest.body.message).not.toMatch(/nested/);
+    }
+  });
+
+  const EDGES = [1e308, -1e308, 5e-324, -5e-324, -0, Number.MAX_VALUE];
+
+  it('answers 400 naming the field for every numeric field at a float edge or out of range, and writes nothing', async () => {
+    const catchBody = {
+      competitionDayId: '',
+      caughtAt: '09:10',
+      species: 'largemouth',
+      weightLb: 2.5,
+      fate: 'weighed',
+    };
+    const findBody = { lakeId: '', name: 'Edge 2', lat: 32.9, lon: -96.1, kind: 'contour' };
+    // [route, base body, field, values that must be refused]; plausible ranges from measurements/ranges.ts.
+    const cases: [string, 'post' | 'put' | 'patch', object, string, unknown[]][] = [
+      ['catches', 'post', catchBody, 'lengthIn', [...EDGES, 0.99, 40.01]],
+      ['catches', 'post', catchBody, 'weightLb', [...EDGES, 0.009, 25.01]],
+      ['catches', 'post', catchBody, 'depthFt', [1e308, -1e308, 400.5, -0.5]],
+      ['catches', 'post', catchBody, 'waterTempF', [...EDGES, 31.9, 100.1]],
+      [
+        'catches',
+        'post',
+        catchBody,
+        'length',
+        [
+          { value: 1e308, unit: 'mm' },
+          { value: 5e-324, unit: 'in' },
+          { value: 1017, unit: 'mm' },
+        ],
+      ],
+      [
+        'catches',
+        'post',
+        catchBody,
+        'weight',
+        [
+          { value: 1e308, unit: 'kg' },
+          { value: 11.4, unit: 'kg' },
+        ],
+      ],
+      [
+        'catches',
+        'post',
+        catchBody,
+        'waterTemp',
+        [
+          { value: 1e308, unit: 'C' },
+          { value: 38, unit: 'C' },
+        ],
+      ],
+      ['finds', 'post', findBody, 'depthFt', [1e308, 400.01]],
+      [
+        'finds',
+        'post',
+        findBody,
+        'depth',
+        [
+          { value: 1e308, unit: 'm' },
+          { value: 122, unit: 'm' },
+        ],
+      ],
+      ['finds', 'post', findBody, 'waterTempF', [...EDGES, 101]],
+      ['weigh-in', 'put', {}, 'grossLb', [1e308, 150.01, -1]],
+      ['weigh-in', 'put', {}, 'officialLb', [Number.MAX_VALUE, 151]],
+      ['weigh-in', 'put', {}, 'penaltyLb', [1e308, -0.01]],
+      ['competition-day', 'patch', { version: 1 }, 'waterTempF', [1e308, 5e-324, 20]],
+    ];
+    const url = (route: string) =>
+      route === 'weigh-in'
+        ? `${base}/competition-days/${dayId}/weigh-in`
+        : route === 'competition-day'
+          ? `${base}/competition-days/${dayId}`
+          : `${base}/${route}`;
+    const failures: string[] = [];
+    const before = await journalCount(app, crew.crewId);
+    for (const [route, method, body, field, values] of cases) {
+      for (const value of values) {
+        const filled = { ...body, ...('competitionDayId' in body ? { competitionDayId: dayId } : {}) };
+        const full = { ...filled, ...('lakeId' in body ? { lakeId } : {}), [field]: value };
+        const res = await crew.owner.send(method, url(route), full);
+        const named = Object.keys(res.body.fieldErrors ?? {}).some((k) => k === field || k.startsWith(`${field}.`));
+        if (res.status !== 400 || !named)
+          failures.push(
+            `${route} ${field}=${JSON.stringify(value)}: ${res.status} ${JSON.stringify(res.body).slice(0, 160)}`,
+          );
+      }
+    }
+    expect(failures).toEqual([]);
+    expect(await journalCount(app, crew.crewId)).toBe(before);
+  });
+
+  it('stores -0 and subnormal numbers as a plain 0, never the edge itself', async () => {
+    for (const depthFt of [-0, 5e-324]) {
+      const res = await crew.owner.patch(`${base}/finds/${findId}`, {
+        depthFt,
+        version: (await crew.owner.get(`${base}/finds/${findId}`)).body.version,
+      });
+      expectOk(res);
+      const row = await testEm(app).findOneOrFail(Find, { id: findId });
+      expect(Object.is(row.depthFt, 0), `depthFt ${String(row.depthFt)}`).toBe(true);
+    }
+  });
 });

@@ -341,7 +341,7 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       expectFieldError(await post({ caughtAt: '08:00', weightLb: -1 }), 'weightLb');
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 0 }), 'weightLb');
       expectFieldError(await post({ caughtAt: '08:00', weight: { value: 30, unit: 'kg' } }), 'weight', /at most 25 lb/);
-      expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, lengthIn: 40 }), 'lengthIn');
+      expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, lengthIn: 40.5 }), 'lengthIn');
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, length: { value: 0, unit: 'mm' } }), 'length');
       expectFieldError(await post({ caughtAt: '08:00', weightLb: 3, colour: 'green' }), 'colour');
       // An array where a measurement object belongs (once a 500, found by the request-body fuzzer).

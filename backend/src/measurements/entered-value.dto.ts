@@ -10,13 +10,14 @@ import {
   type WeightUnit,
 } from '@shoalbook/shared';
 import { IsIn, IsNumber, Max, Min, ValidateIf } from 'class-validator';
+import { EnteredNumber } from './ranges';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
 /** A weight as typed: `{value: 1.42, unit: 'kg'}` or `{value: 3, unit: 'lb-oz', ounces: 4}`. */
 export class EnteredWeightDto {
   @ApiProperty({ description: 'The number typed (whole pounds for lb-oz)' })
-  @IsNumber(finite)
+  @EnteredNumber()
   @Min(0)
   value: number;
 
@@ -33,16 +34,16 @@ export class EnteredWeightDto {
 }
 
 export class EnteredLengthDto {
-  @ApiProperty() @IsNumber(finite) value: number;
+  @ApiProperty() @EnteredNumber() value: number;
   @ApiProperty({ enum: LENGTH_UNITS }) @IsIn([...LENGTH_UNITS]) unit: LengthUnit;
 }
 
 export class EnteredDepthDto {
-  @ApiProperty() @IsNumber(finite) value: number;
+  @ApiProperty() @EnteredNumber() value: number;
   @ApiProperty({ enum: DEPTH_UNITS }) @IsIn([...DEPTH_UNITS]) unit: DepthUnit;
 }
 
 export class EnteredTemperatureDto {
-  @ApiProperty() @IsNumber(finite) value: number;
+  @ApiProperty() @EnteredNumber() value: number;
   @ApiProperty({ enum: TEMPERATURE_UNITS }) @IsIn([...TEMPERATURE_UNITS]) unit: TemperatureUnit;
 }

@@ -1,29 +1,22 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { RecordWeighInRequest } from '@shoalbook/shared';
-import { IsInt, IsNumber, IsOptional, Max, Min } from 'class-validator';
+import { IsInt, IsOptional, Max, Min } from 'class-validator';
 import { IsOmittable } from '../common/dto/omittable';
-
-const finite = { allowNaN: false, allowInfinity: false };
+import { InRange, RANGES } from '../measurements/ranges';
 
 /** The official figures as announced; each optional (null clears it), plus the version they are based on. */
 export class RecordWeighInDto implements RecordWeighInRequest {
-  @ApiPropertyOptional({ nullable: true, description: 'lb' })
+  @ApiPropertyOptional({ nullable: true, description: 'lb', minimum: RANGES.bagLb.min, maximum: RANGES.bagLb.max })
   @IsOptional()
-  @IsNumber(finite)
-  @Min(0)
-  @Max(200)
+  @InRange(RANGES.bagLb)
   grossLb?: number | null;
-  @ApiPropertyOptional({ nullable: true, description: 'lb' })
+  @ApiPropertyOptional({ nullable: true, description: 'lb', minimum: RANGES.bagLb.min, maximum: RANGES.bagLb.max })
   @IsOptional()
-  @IsNumber(finite)
-  @Min(0)
-  @Max(200)
+  @InRange(RANGES.bagLb)
   penaltyLb?: number | null;
-  @ApiPropertyOptional({ nullable: true, description: 'lb' })
+  @ApiPropertyOptional({ nullable: true, description: 'lb', minimum: RANGES.bagLb.min, maximum: RANGES.bagLb.max })
   @IsOptional()
-  @IsNumber(finite)
-  @Min(0)
-  @Max(200)
+  @InRange(RANGES.bagLb)
   officialLb?: number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) dayPlace?: number | null;
   @ApiPropertyOptional({ nullable: true, description: 'minutes late at check-in' })

@@ -23,6 +23,7 @@ import {
 } from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { IsOmittable } from '../../common/dto/omittable';
+import { InRange, RANGES } from '../../measurements/ranges';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -53,17 +54,28 @@ export class LogCatchDto implements LogCatchRequest {
   @Max(1000)
   radiusM?: number;
   @ApiProperty({ enum: SPECIES }) @IsIn([...SPECIES]) species: Species;
-  @ApiPropertyOptional({ nullable: true, description: 'inches' }) @IsOptional() @IsNumber(finite) lengthIn?:
-    number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: 'inches',
+    minimum: RANGES.lengthIn.min,
+    maximum: RANGES.lengthIn.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.lengthIn)
+  lengthIn?: number | null;
   @ApiPropertyOptional({ type: EnteredLengthDto, nullable: true })
   @IsOptional()
   @IsObject()
   @ValidateNested()
   @Type(() => EnteredLengthDto)
   length?: EnteredLengthDto | null;
-  @ApiPropertyOptional({ description: 'decimal pounds (or give weight)' })
+  @ApiPropertyOptional({
+    description: 'decimal pounds (or give weight)',
+    minimum: RANGES.weightLb.min,
+    maximum: RANGES.weightLb.max,
+  })
   @IsOmittable()
-  @IsNumber(finite)
+  @InRange(RANGES.weightLb)
   weightLb?: number;
   @ApiPropertyOptional({ type: EnteredWeightDto })
   @IsOmittable()
@@ -73,15 +85,30 @@ export class LogCatchDto implements LogCatchRequest {
   weight?: EnteredWeightDto;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) lure?: string;
   @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) technique?: string;
-  @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: 'feet',
+    minimum: RANGES.depthFt.min,
+    maximum: RANGES.depthFt.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.depthFt)
+  depthFt?: number | null;
   @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true })
   @IsOptional()
   @IsObject()
   @ValidateNested()
   @Type(() => EnteredDepthDto)
   depth?: EnteredDepthDto | null;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
-    number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: '°F',
+    minimum: RANGES.waterTempF.min,
+    maximum: RANGES.waterTempF.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.waterTempF)
+  waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
   @IsObject()

@@ -1,27 +1,24 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import type { UpdateCompetitionDayRequest, UpdatePracticeDayRequest } from '@shoalbook/shared';
-import {
-  IsInt,
-  IsNumber,
-  IsObject,
-  IsOptional,
-  IsString,
-  Matches,
-  MaxLength,
-  Min,
-  ValidateNested,
-} from 'class-validator';
+import { IsInt, IsObject, IsOptional, IsString, Matches, MaxLength, Min, ValidateNested } from 'class-validator';
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
+import { InRange, RANGES } from '../../measurements/ranges';
 import { IsOmittable } from '../../common/dto/omittable';
 
-const finite = { allowNaN: false, allowInfinity: false };
 const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 export class UpdatePracticeDayDto implements UpdatePracticeDayRequest {
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
-    number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: '°F',
+    minimum: RANGES.waterTempF.min,
+    maximum: RANGES.waterTempF.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.waterTempF)
+  waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
   @IsObject()
@@ -41,8 +38,15 @@ export class UpdateCompetitionDayDto implements UpdateCompetitionDayRequest {
   @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
   checkInTime?: string | null;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) weatherNotes?: string;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
-    number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: '°F',
+    minimum: RANGES.waterTempF.min,
+    maximum: RANGES.waterTempF.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.waterTempF)
+  waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
   @IsObject()

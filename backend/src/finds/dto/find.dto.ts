@@ -28,6 +28,7 @@ import {
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
+import { InRange, RANGES } from '../../measurements/ranges';
 import { ListPageDto } from '../../journal/list-query.dto';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -48,7 +49,15 @@ export class AddFindDto implements AddFindRequest {
   markedAt?: string | null;
   @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
   @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
-  @ApiPropertyOptional({ nullable: true, description: 'feet' }) @IsOptional() @IsNumber(finite) depthFt?: number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: 'feet',
+    minimum: RANGES.depthFt.min,
+    maximum: RANGES.depthFt.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.depthFt)
+  depthFt?: number | null;
   @ApiPropertyOptional({ type: EnteredDepthDto, nullable: true })
   @IsOptional()
   @IsObject()
@@ -84,8 +93,15 @@ export class AddFindDto implements AddFindRequest {
   @IsOptional()
   @IsIn([...FOUND_HOW])
   foundHow?: FoundHow | null;
-  @ApiPropertyOptional({ nullable: true, description: '°F' }) @IsOptional() @IsNumber(finite) waterTempF?:
-    number | null;
+  @ApiPropertyOptional({
+    nullable: true,
+    description: '°F',
+    minimum: RANGES.waterTempF.min,
+    maximum: RANGES.waterTempF.max,
+  })
+  @IsOptional()
+  @InRange(RANGES.waterTempF)
+  waterTempF?: number | null;
   @ApiPropertyOptional({ type: EnteredTemperatureDto, nullable: true })
   @IsOptional()
   @IsObject()
