@@ -15,7 +15,11 @@ describe('GET /api/health', () => {
   it('answers ok with the database up', async () => {
     const res = await request(app.getHttpServer()).get('/api/health');
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ status: 'ok', db: 'up' });
+    expect(res.body).toEqual({
+      status: 'ok',
+      db: 'up',
+      projection: { events: expect.any(Number), failedRuns: 0 },
+    });
   });
 
   it('sets the security headers (CSP without inline scripts)', async () => {
@@ -43,6 +47,8 @@ describe('GET /api/health with the database unreachable', () => {
     const res = await request(app.getHttpServer()).get('/api/health');
     expect(res.status).toBe(503);
     expect(res.body).toMatchObject({ status: 'error', db: 'down', statusCode: 503 });
+    // RFC 9110 §10.2.3: a 503 may say when to come back.
+    expect(res.headers['retry-after']).toMatch(/^\d+$/);
     expect(Date.now() - started).toBeLessThan(5000);
     const again = await request(app.getHttpServer()).get('/api/health');
     expect(again.status).toBe(503);
@@ -52,6 +58,7 @@ describe('GET /api/health with the database unreachable', () => {
     const res = await request(app.getHttpServer()).get('/api/crews').set('Cookie', 'sb_session=abc');
     expect(res.status).toBe(503);
     expect(res.body).toMatchObject({ statusCode: 503, code: 'db_unavailable', requestId: expect.any(String) });
+    expect(res.headers['retry-after']).toMatch(/^\d+$/);
     expect(JSON.stringify(res.body)).not.toMatch(/ECONNREFUSED|at .*\.js:\d+/);
   });
 });

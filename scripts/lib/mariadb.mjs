@@ -61,7 +61,7 @@ function ping(p) {
 }
 
 /** Our server's pid, only if that process really runs on our data directory. */
-function ourPid(p) {
+export function ourPid(p) {
   const { pidFile } = paths(p);
   if (!existsSync(pidFile)) return null;
   const pid = Number(readFileSync(pidFile, 'utf8').trim());

@@ -2,6 +2,8 @@
 export interface HealthResponse {
   status: 'ok' | 'error';
   db: 'up' | 'down';
+  /** With the database up: journal events the read models have not applied yet, and failed catch-ups in a row. */
+  projection?: { events: number; failedRuns: number };
 }
 
 /** GET /api/dev/outbox — one e-mail caught by the local fake SMTP server (development only). */

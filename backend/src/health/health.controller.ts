@@ -4,6 +4,8 @@ import { ApiOkResponse, ApiOperation, ApiProperty, ApiServiceUnavailableResponse
 import type { Request, Response } from 'express';
 import type { HealthResponse } from '@shoalbook/shared';
 import { Public } from '../common/decorators/public.decorator';
+import { DB_RETRY_AFTER_SECONDS } from '../common/filters/api-exception.filter';
+import { JournalProjector } from '../projections/journal-projector.service';
 
 /** How long the database may take to answer before we call it down. */
 const DB_CHECK_TIMEOUT_MS = 1500;
@@ -13,22 +15,38 @@ export class HealthResponseDto implements HealthResponse {
   @ApiProperty({ enum: ['up', 'down'] }) db: 'up' | 'down';
 }
 
+class ProjectionLagDto {
+  @ApiProperty({ description: 'journal events the read models have not applied yet' }) events: number;
+  @ApiProperty({ description: 'catch-ups failed in a row (retried with a growing delay)' }) failedRuns: number;
+}
+
+export class HealthOkDto extends HealthResponseDto {
+  @ApiProperty({ type: ProjectionLagDto, required: false }) projection?: ProjectionLagDto;
+}
+
 @ApiTags('health')
 @Controller('health')
 export class HealthController {
-  constructor(private readonly orm: MikroORM) {}
+  constructor(
+    private readonly orm: MikroORM,
+    private readonly projector: JournalProjector,
+  ) {}
 
   @Public()
   @Get()
   @ApiOperation({ summary: 'Liveness with a real database round trip' })
-  @ApiOkResponse({ type: HealthResponseDto })
+  @ApiOkResponse({ type: HealthOkDto })
   @ApiServiceUnavailableResponse({ type: HealthResponseDto, description: 'The database does not answer.' })
   async check(
     @Req() req: Request,
     @Res({ passthrough: true }) res: Response,
   ): Promise<HealthResponse | (HealthResponse & object)> {
-    if (await this.databaseAnswers()) return { status: 'ok', db: 'up' };
+    if (await this.databaseAnswers()) {
+      if (!this.projector.enabled) return { status: 'ok', db: 'up' };
+      return { status: 'ok', db: 'up', projection: await this.projector.lag() };
+    }
     res.status(HttpStatus.SERVICE_UNAVAILABLE);
+    res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
     // Also carries the ApiError fields, so clients that only know the error shape read it too.
     return {
       status: 'error',

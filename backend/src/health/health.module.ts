@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
+import { ProjectionsModule } from '../projections/projections.module';
 import { HealthController } from './health.controller';
 
-@Module({ controllers: [HealthController] })
+@Module({ imports: [ProjectionsModule], controllers: [HealthController] })
 export class HealthModule {}

@@ -13,10 +13,20 @@ const BATCH_SIZE = 2000;
 const DEFAULT_GAP_TIMEOUT_MS = 5000;
 /** Retry delay while a gap is open or another process holds the projection lock (ms). */
 const RETRY_MS = 100;
+/** Longest wait between retries after failed catch-ups (the delay doubles per failure up to this, ms). */
+const MAX_FAILURE_BACKOFF_MS = 10_000;
 
 export interface CatchUpResult {
   applied: number;
   lastSeq: number;
+}
+
+/** How far the read models trail the journal, for /api/health. */
+export interface ProjectionLag {
+  /** Journal events not yet applied. */
+  events: number;
+  /** Catch-ups failed in a row since the last one that worked (0 when healthy). */
+  failedRuns: number;
 }
 
 /**
@@ -24,6 +34,8 @@ export interface CatchUpResult {
  * checkpoint in seq order, batch by batch, each batch and its checkpoint in one transaction. Catch-ups are
  * serialised in the process (a queue of at most one running and one waiting) and across processes (a MariaDB
  * user lock). Runs on start-up, so events written before a crash are applied, and on every JournalEventsAppended.
+ * A failed catch-up (the database went away) is retried with a doubling delay, so the read models catch up
+ * once the database is back without waiting for the next write.
  * Set PROJECTOR_ENABLED=false for a process that must not project (a write-only instance).
  */
 @Injectable()
@@ -33,6 +45,7 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
   private queued: Promise<CatchUpResult> | null = null;
   private retryTimer: NodeJS.Timeout | null = null;
   private closed = false;
+  private failedRuns = 0;
   readonly gaps: GapPolicy;
   readonly enabled: boolean;
 
@@ -62,8 +75,13 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
       return this.catchUp();
     });
     this.queued = run;
-    this.tail = run.catch((e: unknown) =>
-      this.logger.error(`catch-up failed: ${e instanceof Error ? e.stack : String(e)}`),
+    this.tail = run.then(
+      () => (this.failedRuns = 0),
+      (e: unknown) => {
+        this.failedRuns++;
+        this.logger.error(`catch-up failed (${this.failedRuns} in a row): ${e instanceof Error ? e.stack : String(e)}`);
+        this.retryLater(Math.min(RETRY_MS * 2 ** this.failedRuns, MAX_FAILURE_BACKOFF_MS));
+      },
     );
     return run;
   }
@@ -93,12 +111,22 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
     return { applied, lastSeq };
   }
 
-  private retryLater(): void {
+  /** Journal events after the checkpoint, and the failed runs in a row. */
+  async lag(): Promise<ProjectionLag> {
+    const em = this.orm.em.fork();
+    const checkpoint = await readCheckpoint(em);
+    const [row] = (await em.execute(`SELECT COUNT(*) AS n FROM journal_event WHERE seq > ${checkpoint}`)) as {
+      n: unknown;
+    }[];
+    return { events: Number(row?.n ?? 0), failedRuns: this.failedRuns };
+  }
+
+  private retryLater(delayMs = RETRY_MS): void {
     if (this.retryTimer || this.closed) return;
     this.retryTimer = setTimeout(() => {
       this.retryTimer = null;
-      void this.requestCatchUp();
-    }, RETRY_MS);
+      void this.requestCatchUp().catch(() => undefined);
+    }, delayMs);
     this.retryTimer.unref();
   }
 

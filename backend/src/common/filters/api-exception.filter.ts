@@ -13,17 +13,43 @@ const DEFAULT_CODES: Record<number, string> = {
   429: ErrorCode.rateLimited,
 };
 
+/**
+ * Error codes that mean "the database is not there right now" (connection refused, dropped, timed out,
+ * server shutting down), from Node's sockets, the mariadb connector and the server itself.
+ */
 const UNREACHABLE_CODES = new Set([
   'ECONNREFUSED',
+  'ECONNRESET',
+  'EPIPE',
   'ETIMEDOUT',
   'EHOSTUNREACH',
+  'PROTOCOL_CONNECTION_LOST',
+  'ER_SOCKET',
+  'ER_SOCKET_UNEXPECTED_CLOSE',
+  'ER_SOCKET_TIMEOUT',
+  'ER_CONNECTION_ALREADY_CLOSED',
+  'ER_CMD_CONNECTION_CLOSED',
   'ER_GET_CONNECTION_TIMEOUT',
   'ER_CONNECTION_TIMEOUT',
+  'ER_POOL_NO_CONNECTION',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
 ]);
 
-function isDatabaseUnreachable(e: unknown): boolean {
+/** Seconds a client should wait before retrying while the database is away (RFC 9110 §10.2.3 Retry-After). */
+export const DB_RETRY_AFTER_SECONDS = 5;
+
+/** A MikroORM driver error, or the mariadb connector's own SqlError (thrown by raw connection calls). */
+function isDriverError(e: unknown): e is { code?: unknown; cause?: unknown; previous?: unknown } {
+  return e instanceof DriverException || (e instanceof Error && e.name === 'SqlError');
+}
+
+/** The driver error, or one it wraps (MikroORM keeps the connector's error as `previous` or `cause`). */
+function isDatabaseUnreachable(e: unknown, depth = 0): boolean {
   if (e instanceof ConnectionException) return true;
-  return e instanceof DriverException && UNREACHABLE_CODES.has(String(e.code));
+  if (!isDriverError(e) || depth > 3) return false;
+  if (UNREACHABLE_CODES.has(String(e.code))) return true;
+  return isDatabaseUnreachable(e.cause, depth + 1) || isDatabaseUnreachable(e.previous, depth + 1);
 }
 
 /** Turn anything thrown into the one ApiError shape: a readable message, never a stack trace or SQL. */
@@ -89,6 +115,7 @@ export function sendApiError(req: Request, res: Response, exception: unknown): v
     logger.verbose(`${where}: ${error.message}`);
   }
   if (res.headersSent) return;
+  if (error.statusCode === 503) res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
   res.status(error.statusCode).json(error);
 }
 
