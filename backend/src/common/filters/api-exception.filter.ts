@@ -39,9 +39,15 @@ const UNREACHABLE_CODES = new Set([
 /** Seconds a client should wait before retrying while the database is away (RFC 9110 §10.2.3 Retry-After). */
 export const DB_RETRY_AFTER_SECONDS = 5;
 
-/** A MikroORM driver error, or the mariadb connector's own SqlError (thrown by raw connection calls). */
+/**
+ * A MikroORM driver error, the mariadb connector's own SqlError (raw connection calls), or the bare socket
+ * error a transaction's COMMIT fails with when the server vanishes (knex only prefixes its message).
+ */
 function isDriverError(e: unknown): e is { code?: unknown; cause?: unknown; previous?: unknown } {
-  return e instanceof DriverException || (e instanceof Error && e.name === 'SqlError');
+  return (
+    e instanceof DriverException ||
+    (e instanceof Error && (e.name === 'SqlError' || typeof (e as { syscall?: unknown }).syscall === 'string'))
+  );
 }
 
 /** The driver error, or one it wraps (MikroORM keeps the connector's error as `previous` or `cause`). */
