@@ -1,3 +1,4 @@
+import { DriverException } from '@mikro-orm/core';
 import { describe, expect, it } from 'vitest';
 import { toApiError } from './api-exception.filter';
 
@@ -15,6 +16,10 @@ describe('toApiError: database faults', () => {
       code: 'ER_SOCKET_UNEXPECTED_CLOSE',
     });
     expect(toApiError(sqlError).statusCode).toBe(503);
+    const lostTransaction = new DriverException(
+      new Error('Transaction query already complete, run with DEBUG=knex:tx'),
+    );
+    expect(toApiError(lostTransaction).statusCode).toBe(503);
   });
 
   it('keeps 500 for other failures, even with a network-like code but no socket behind it', () => {

@@ -55,6 +55,8 @@ function isDatabaseUnreachable(e: unknown, depth = 0): boolean {
   if (e instanceof ConnectionException) return true;
   if (!isDriverError(e) || depth > 3) return false;
   if (UNREACHABLE_CODES.has(String(e.code))) return true;
+  // knex's answer for a statement on a transaction whose connection the server has just dropped.
+  if (/^Transaction query already complete/.test((e as Error).message)) return true;
   return isDatabaseUnreachable(e.cause, depth + 1) || isDatabaseUnreachable(e.previous, depth + 1);
 }
 
