@@ -16,6 +16,7 @@ const DEFAULTS = {
   test3: { dbPort: 3321, port: 3102, smtpPort: 2529, dbName: 'shoalbook_test3' },
   test4: { dbPort: 3322, port: 3103, smtpPort: 2530, dbName: 'shoalbook_test4' },
   test5: { dbPort: 3323, port: 3104, smtpPort: 2531, dbName: 'shoalbook_test5' },
+  test6: { dbPort: 3324, port: 3105, smtpPort: 2532, dbName: 'shoalbook_test6' },
 };
 
 /** Resolve a profile; the demo profile honours PORT and DB_PORT from the environment. */
