@@ -16,6 +16,7 @@ export class Invite {
   @ManyToOne({ entity: () => Crew, deleteRule: 'cascade' })
   crew: Crew;
 
+  /** Canonical form (canonicalEmail), compared exactly like the account's. */
   @Property({ type: 'string', length: 254 })
   email: string;
 

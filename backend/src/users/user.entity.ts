@@ -2,7 +2,10 @@ import { randomUUID } from 'node:crypto';
 import { Entity, Enum, Index, PrimaryKey, Property, OptionalProps } from '@mikro-orm/core';
 import { DEFAULT_UNITS, SITE_ROLES, type SiteRole, type UnitPreferences } from '@shoalbook/shared';
 
-/** An account. E-mail addresses are stored trimmed and lower-cased, so uniqueness ignores case. */
+/**
+ * An account. The e-mail address is stored in its canonical form (canonicalEmail) in a binary-collated column (utf8mb4_bin, set by Migration20270102000000; MikroORM 6 has no collation option):
+ * uniqueness and lookups compare that form exactly, without the server collation's accent folding.
+ */
 @Entity({ tableName: 'users' })
 export class User {
   [OptionalProps]?: 'siteRole' | 'disabled' | 'units' | 'createdAt' | 'updatedAt';

@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import type { MeResponse, UnitPreferences, UserView } from '@shoalbook/shared';
 import { Membership } from '../crews/membership.entity';
+import { canonicalEmail } from './canonical-email';
 import { User } from './user.entity';
 
 export function toUserView(user: User): UserView {
@@ -14,7 +15,7 @@ export class UsersService {
   constructor(private readonly em: EntityManager) {}
 
   findByEmail(email: string): Promise<User | null> {
-    return this.em.findOne(User, { email: email.trim().toLowerCase() });
+    return this.em.findOne(User, { email: canonicalEmail(email) });
   }
 
   /** GET /auth/me: the account and its crews, oldest membership first. */

@@ -1,8 +1,9 @@
 import { Transform } from 'class-transformer';
+import { canonicalEmail } from '../../users/canonical-email';
 
-/** Trim and lower-case e-mail addresses before validation, so case never makes a second account. */
+/** E-mail addresses in their canonical form before validation, so no spelling makes a second account. */
 export const NormaliseEmail = (): PropertyDecorator =>
-  Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim().toLowerCase() : value));
+  Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? canonicalEmail(value) : value));
 
 /** Trim free text (names) before validation. */
 export const Trim = (): PropertyDecorator =>
