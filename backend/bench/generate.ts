@@ -364,7 +364,7 @@ async function main(): Promise<void> {
         vegetationDensity: null,
         baitSeen: random.chance(0.3),
         fishMarked: random.int(0, 6),
-        frequencyKhz: 200,
+        frequencyKhz: 240,
         foundHow: 'on-plane',
         waterTempF: Math.round(random.between(48, 86)),
         waterTempValue: null,

@@ -211,7 +211,7 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
         hardness: 4,
         baitSeen: true,
         fishMarked: 3,
-        frequencyKhz: 200,
+        frequencyKhz: 240,
         foundHow: 'on-plane',
       });
       expectOk(res, 201);
@@ -257,6 +257,29 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
           depthFt: -3,
         }),
         'depthFt',
+      );
+      // Any sonar frequency from 20 to 3000 kHz is taken (FREQUENCY_KHZ); a value in Hz typed for kHz is not.
+      expectFieldError(
+        await crew.angler.post(`${base}/finds`, {
+          lakeId: lake.id,
+          name: 'x',
+          lat: 1,
+          lon: 0,
+          kind: 'bait',
+          frequencyKhz: 15,
+        }),
+        'frequencyKhz',
+      );
+      expectFieldError(
+        await crew.angler.post(`${base}/finds`, {
+          lakeId: lake.id,
+          name: 'x',
+          lat: 1,
+          lon: 0,
+          kind: 'bait',
+          frequencyKhz: 50_000,
+        }),
+        'frequencyKhz',
       );
       expectFieldError(
         await crew.angler.post(`${base}/finds`, {

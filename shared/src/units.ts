@@ -16,3 +16,12 @@ export interface UnitPreferences {
 }
 
 export const DEFAULT_UNITS: UnitPreferences = { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' };
+
+/**
+ * Sonar frequencies a find may carry, in kHz. Echo sounders for fishing and survey work run from
+ * some tens of kHz to a few MHz (from memory, general underwater-acoustics knowledge: beam width
+ * scales with wavelength over transducer size, so a lower frequency gives a wider cone and reaches
+ * deeper, a higher one a narrower, sharper cone). 20–3000 kHz admits all of them and refuses slips
+ * such as Hz typed for kHz.
+ */
+export const FREQUENCY_KHZ = Object.freeze({ min: 20, max: 3000 });

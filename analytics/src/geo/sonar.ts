@@ -16,7 +16,8 @@ function assertBeamAngle(beamAngleDeg: number): void {
  * cone of full apex angle `beamAngleDeg`). Same length unit out as in.
  *
  * @param depthM depth (any length unit; metres by name)
- * @param beamAngleDeg full cone angle in degrees, e.g. about 20° at 200 kHz or 40°–60° at 83 kHz
+ * @param beamAngleDeg full cone angle in degrees; a lower sonar frequency gives a wider cone, a higher one a
+ *   narrower cone (the angle depends on the transducer, so take it from its data sheet)
  */
 export function beamFootprintM(depthM: number, beamAngleDeg: number): number {
   assertNonNegative('depthM', depthM);

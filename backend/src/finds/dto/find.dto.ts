@@ -3,6 +3,7 @@ import { Type } from 'class-transformer';
 import {
   FIND_KINDS,
   FOUND_HOW,
+  FREQUENCY_KHZ,
   VEGETATION_DENSITIES,
   type AddFindRequest,
   type FindKind,
@@ -83,11 +84,16 @@ export class AddFindDto implements AddFindRequest {
   @ApiPropertyOptional() @IsOptional() @IsBoolean() baitSeen?: boolean;
   @ApiPropertyOptional({ nullable: true, minimum: 0 }) @IsOptional() @IsInt() @Min(0) @Max(10_000) fishMarked?:
     number | null;
-  @ApiPropertyOptional({ nullable: true, description: 'kHz' })
+  @ApiPropertyOptional({
+    nullable: true,
+    minimum: FREQUENCY_KHZ.min,
+    maximum: FREQUENCY_KHZ.max,
+    description: 'Sonar frequency in kHz: a lower one gives a wider cone, a higher one a narrower cone',
+  })
   @IsOptional()
   @IsNumber(finite)
-  @Min(10)
-  @Max(3000)
+  @Min(FREQUENCY_KHZ.min)
+  @Max(FREQUENCY_KHZ.max)
   frequencyKhz?: number | null;
   @ApiPropertyOptional({ enum: FOUND_HOW, nullable: true })
   @IsOptional()

@@ -4,6 +4,7 @@ import {
   FIND_SUB_KINDS,
   FOUND_HOW,
   FOUND_HOW_LABELS,
+  FREQUENCY_KHZ,
   HARDNESS_GRADES,
   VEGETATION_DENSITIES,
   type EventView,
@@ -109,8 +110,8 @@ export function validateFind(
   if (v.fishMarked.trim() && (fish === null || !Number.isInteger(fish) || fish < 0))
     errors.fishMarked = 'A whole number of fish, 0 or more.';
   const khz = v.frequencyKhz.trim() ? readNumber(v.frequencyKhz) : null;
-  if (v.frequencyKhz.trim() && (khz === null || khz <= 0 || khz > 3000))
-    errors.frequencyKhz = 'The frequency in kHz, e.g. 83 or 200.';
+  if (v.frequencyKhz.trim() && (khz === null || khz < FREQUENCY_KHZ.min || khz > FREQUENCY_KHZ.max))
+    errors.frequencyKhz = `Frequency (kHz): a number from ${FREQUENCY_KHZ.min} to ${FREQUENCY_KHZ.max}.`;
   let markedAt: string | null = null;
   if (v.markedDate || v.markedTime) {
     if (!v.markedDate || !isClockTime(v.markedTime))
@@ -395,7 +396,7 @@ export function FindForm({
         <TextField
           label="Frequency (kHz)"
           inputMode="decimal"
-          caption="e.g. 83 (wide beam) or 200 (narrow)"
+          caption="The sonar's frequency: a lower one gives a wider cone, a higher one a narrower cone"
           {...text('frequencyKhz')}
         />
         <SelectField
