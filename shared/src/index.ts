@@ -8,3 +8,4 @@ export * from './journal.js';
 export * from './admin.js';
 export * from './system.js';
 export * from './reports.js';
+export * from './lake-time.js';

@@ -1,6 +1,6 @@
 import { Body, Observer, SearchHourAngle } from 'astronomy-engine';
 import * as SunCalc from 'suncalc';
-import type { LocalDay } from './local-day.js';
+import type { LocalDay } from '@shoalbook/shared';
 
 const DAY_MS = 86_400_000;
 const MINUTE_MS = 60_000;

@@ -1,5 +1,6 @@
 import { assertFinite } from '../stats/validate.js';
-import { localDateOf, localDay, parseInstant, shiftDate, toIsoUtc } from './local-day.js';
+import { localDateOf, localDay, shiftDate } from '@shoalbook/shared';
+import { instantMs, toIsoUtc } from './instants.js';
 import { moonEvents, type MoonEvents } from './moon-events.js';
 
 /** Which moon event a solunar period is centred on. */
@@ -88,7 +89,7 @@ export function solunarPeriodAt(
   timeZone: string,
   options: SolunarOptions = {},
 ): SolunarPeriod | null {
-  const ms = parseInstant(instant);
+  const ms = instantMs(instant);
   assertPosition(lat, lon);
   periodHours(options);
   const date = localDateOf(ms, timeZone);

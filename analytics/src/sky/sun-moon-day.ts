@@ -1,5 +1,6 @@
 import * as SunCalc from 'suncalc';
-import { localDay, toIsoUtc, type LocalDay } from './local-day.js';
+import { localDay, type LocalDay } from '@shoalbook/shared';
+import { toIsoUtc } from './instants.js';
 import { moonEvents } from './moon-events.js';
 import { assertPosition, periodsFromMoonEvents, type SolunarOptions, type SolunarPeriod } from './solunar.js';
 

@@ -1,8 +1,7 @@
 import { nearestFind, units, weightLooksWrong } from '@shoalbook/analytics';
-import { DEFAULT_ATTRIBUTION_RADIUS_M } from '@shoalbook/shared';
+import { DEFAULT_ATTRIBUTION_RADIUS_M, isHhMm, localTimeOn, parseInstant } from '@shoalbook/shared';
 import type { CompetitionDay } from '../events/competition-day.entity';
 import type { FieldProblems } from '../journal/journal-errors';
-import { isHhMm, localTimeOn, parseInstant } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
 import {
   MeasurementError,

@@ -1,9 +1,8 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
-import { FIND_SUB_KINDS } from '@shoalbook/shared';
+import { FIND_SUB_KINDS, localDateOf } from '@shoalbook/shared';
 import { PracticeDay } from '../events/practice-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { FieldProblems } from '../journal/journal-errors';
-import { localDateOf } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
 import { MeasurementError, resolveDepth, resolveTemperature } from '../measurements/measurements';
 import { assignMeasured, checkRange, RANGES, sentField } from '../measurements/ranges';

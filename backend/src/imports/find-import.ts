@@ -1,10 +1,15 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
-import { DUPLICATE_FIND_RADIUS_M, type FindImportPreview, type FindImportRow, type FindKind } from '@shoalbook/shared';
+import {
+  DUPLICATE_FIND_RADIUS_M,
+  type FindImportPreview,
+  type FindImportRow,
+  type FindKind,
+  localDateOf,
+} from '@shoalbook/shared';
 import { PracticeDay } from '../events/practice-day.entity';
 import type { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';
 import type { JournalRecorder } from '../journal-events/journal-events.service';
-import { localDateOf } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
 import { insertRecordsBulk } from './bulk-insert';
 import { DuplicateIndex } from './duplicate-index';

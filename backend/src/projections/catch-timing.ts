@@ -1,6 +1,5 @@
 import { sunMoonDay } from '@shoalbook/analytics';
-import type { TimeOfDayBand } from '@shoalbook/shared';
-import { DateTime } from 'luxon';
+import { zoneOffsetMinutes, type TimeOfDayBand } from '@shoalbook/shared';
 
 /** Where a catch's timing is computed: the lake's reference point and zone. */
 export interface TimingPlace {
@@ -57,8 +56,7 @@ export class CatchTimingCalculator {
     const key = `${timeZone}|${Math.floor(ms / QUARTER_HOUR_MS)}`;
     let offset = this.offsets.get(key);
     if (offset === undefined) {
-      const dt = DateTime.fromMillis(Math.floor(ms / QUARTER_HOUR_MS) * QUARTER_HOUR_MS, { zone: timeZone });
-      offset = dt.isValid ? dt.offset : 0;
+      offset = zoneOffsetMinutes(Math.floor(ms / QUARTER_HOUR_MS) * QUARTER_HOUR_MS, timeZone);
       if (this.offsets.size >= MAX_CACHED) this.offsets.clear();
       this.offsets.set(key, offset);
     }

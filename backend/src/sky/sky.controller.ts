@@ -1,11 +1,10 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiCookieAuth, ApiOkResponse, ApiOperation, ApiProperty, ApiTags } from '@nestjs/swagger';
-import type { SkyDayView } from '@shoalbook/shared';
+import { type SkyDayView, isCalendarDate } from '@shoalbook/shared';
 import { IsUUID, Matches } from 'class-validator';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import type { CrewAccess } from '../common/request-context';
 import { fieldErrors } from '../journal/journal-errors';
-import { isCalendarDate } from '../journal/local-time';
 import { LakesService } from '../lakes/lakes.service';
 import { SkyDayViewDto } from './dto/sky-view.dto';
 import { SkyService } from './sky.service';

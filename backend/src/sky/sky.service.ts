@@ -1,7 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { sunMoonDay, type SunMoonDay } from '@shoalbook/analytics';
-import type { SkyContext, SkyDayView } from '@shoalbook/shared';
-import { DateTime } from 'luxon';
+import { localDateOf, shiftDate, type SkyContext, type SkyDayView } from '@shoalbook/shared';
 
 interface SkyPlace {
   lat: number;
@@ -57,10 +56,9 @@ export class SkyService {
    */
   at(place: SkyPlace, instant: Date): SkyContext {
     const ms = instant.getTime();
-    const local = DateTime.fromMillis(ms, { zone: place.timeZone });
-    const date = local.toISODate()!;
+    const date = localDateOf(ms, place.timeZone);
     const day = this.day(place, date);
-    const around = [-1, 0, 1].flatMap((offset) => this.day(place, local.plus({ days: offset }).toISODate()!).periods);
+    const around = [-1, 0, 1].flatMap((offset) => this.day(place, shiftDate(date, offset)).periods);
     const containing = around
       .filter((p) => Date.parse(p.start) <= ms && ms < Date.parse(p.end))
       .sort(

@@ -1,12 +1,11 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import type { CompetitionDayView, PracticeDayView } from '@shoalbook/shared';
+import { clockTime, type CompetitionDayView, type PracticeDayView } from '@shoalbook/shared';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
 import { assertVersion, FieldProblems, recordNotFound } from '../../journal/journal-errors';
 import { MeasurementError, resolveTemperature } from '../../measurements/measurements';
 import { assignMeasured, checkRange, RANGES, sentField } from '../../measurements/ranges';
-import { DateTime } from 'luxon';
 import { Catch } from '../../catches/catch.entity';
 import { catchTimeProblem } from '../../catches/catch-window';
 import { Lake } from '../../lakes/lake.entity';
@@ -55,7 +54,7 @@ async function checkDayWindow(tx: EntityManager, crewId: string, day: Competitio
   );
   const outside = catches
     .filter((c) => catchTimeProblem(c.caughtAt, day, lake.timeZone) !== null)
-    .map((c) => DateTime.fromJSDate(c.caughtAt, { zone: lake.timeZone }).toFormat('HH:mm'));
+    .map((c) => clockTime(c.caughtAt, lake.timeZone));
   if (outside.length) {
     const listed = `${outside.slice(0, 5).join(', ')}${outside.length > 5 ? ', …' : ''}`;
     const field = day.startTime && outside[0]! < day.startTime ? 'startTime' : 'checkInTime';

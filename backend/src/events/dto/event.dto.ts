@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import type { CreateEventRequest, EventRules } from '@shoalbook/shared';
+import { type CreateEventRequest, type EventRules, isCalendarDate } from '@shoalbook/shared';
 import {
   ArrayMaxSize,
   IsArray,
@@ -20,7 +20,6 @@ import {
   type ValidatorConstraintInterface,
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
-import { isCalendarDate } from '../../journal/local-time';
 import { IsOmittable } from '../../common/dto/omittable';
 
 const finite = { allowNaN: false, allowInfinity: false };

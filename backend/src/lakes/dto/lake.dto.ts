@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import type { CreateLakeRequest, LakeView } from '@shoalbook/shared';
+import { type CreateLakeRequest, type LakeView, isIanaZone } from '@shoalbook/shared';
 import {
   IsInt,
   IsNotEmpty,
@@ -14,7 +14,6 @@ import {
   type ValidatorConstraintInterface,
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
-import { isIanaZone } from '../../journal/local-time';
 
 const finite = { allowNaN: false, allowInfinity: false };
 

@@ -21,7 +21,7 @@ import { OnPlaneCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
-import { clockTime, lakeWallTimeToIso, localDate, isClockTime } from '../../../lib/lake-time';
+import { clockTime, localTimeOn, localDate, isClockTime } from '../../../lib/lake-time';
 import type { FindWithSky } from '../../../lib/journal-types';
 import {
   depthInputValue,
@@ -116,7 +116,12 @@ export function validateFind(
   if (v.markedDate || v.markedTime) {
     if (!v.markedDate || !isClockTime(v.markedTime))
       errors.markedAt = 'Give both the date and a 24-hour time (06:40), or neither.';
-    else markedAt = lakeWallTimeToIso(v.markedDate, v.markedTime, lake?.timeZone ?? 'UTC');
+    else {
+      const zone = lake?.timeZone ?? 'UTC';
+      markedAt = localTimeOn(v.markedDate, v.markedTime.trim(), zone)?.toISOString() ?? null;
+      if (!markedAt)
+        errors.markedAt = `${v.markedTime.trim()} did not happen on ${v.markedDate} on the lake's clock (${zone}): the clocks went forward. Give a time outside that hour.`;
+    }
   }
   if (Object.keys(errors).length || !depth.ok || !temp.ok) return { errors };
   return {
