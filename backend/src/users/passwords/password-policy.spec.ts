@@ -8,19 +8,31 @@ describe('passwordProblem', () => {
 
   it('refuses passwords under 10 or over 128 characters (NIST SP 800-63B length rule)', () => {
     expect(passwordProblem('short1234')).toMatch(/at least 10/);
-    expect(passwordProblem('x'.repeat(9) + 'y')).toBeNull();
-    expect(passwordProblem('ab'.repeat(64))).toBeNull();
-    expect(passwordProblem('ab'.repeat(64) + 'c')).toMatch(/at most 128/);
+    expect(passwordProblem('Tq8#vL2pWx')).toBeNull();
+    const long = 'Tq8#vL2pWx'.repeat(12) + 'Tq8#vL2p';
+    expect(long).toHaveLength(128);
+    expect(passwordProblem(long)).toBeNull();
+    expect(passwordProblem(long + 'c')).toMatch(/at most 128/);
   });
 
   it('counts characters, not UTF-16 units', () => {
-    expect(passwordProblem('🐟'.repeat(5) + 'abcde')).toBeNull();
+    expect(passwordProblem('🐟🐟Tq8#vL2p')).toBeNull(); // 10 code points, 12 UTF-16 units
+    expect(passwordProblem('🐟🐟Tq8#vL2')).toMatch(/at least 10/); // 9 code points, 11 UTF-16 units
   });
 
-  it('refuses common passwords whatever their case', () => {
+  // Reference: zxcvbn-ts (npm @zxcvbn-ts/core with @zxcvbn-ts/language-common, whose passwords-common list is
+  // drawn from published breach corpora); the refused ones below are at the top of such lists.
+  it('refuses common passwords, keyboard walks and their simple variants whatever their case', () => {
     expect(passwordProblem('password123')).toMatch(/too common/);
     expect(passwordProblem('QwertyUiop')).toMatch(/too common/);
     expect(passwordProblem('1234567890')).toMatch(/too common/);
+    expect(passwordProblem('iloveyou12')).toMatch(/too common/);
+    expect(passwordProblem('asdfghjkl;')).toMatch(/too common/);
+  });
+
+  it('accepts uncommon passwords that are not on any list', () => {
+    expect(passwordProblem('shoal-ridge-at-dawn')).toBeNull();
+    expect(passwordProblem('Tq8#vL2pWx')).toBeNull();
   });
 
   it('refuses one repeated character and the account e-mail', () => {
