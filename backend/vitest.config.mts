@@ -1,11 +1,12 @@
 import { defineConfig } from 'vitest/config';
 
-// The back end's tests run against the test profile's real MariaDB and fake SMTP (never the demo ones).
+// The back end's database tests (`test/**/*.e2e-spec.ts`) run against the test profile's real MariaDB and
+// fake SMTP (never the demo ones). The unit specs beside the code have their own config (vitest.unit.config.mts).
 const { profile, backendEnv } = await import('../scripts/lib/profile.mjs');
 
 export default defineConfig({
   test: {
-    include: ['test/**/*.e2e-spec.ts', 'src/**/*.spec.ts'],
+    include: ['test/**/*.e2e-spec.ts'],
     globalSetup: ['test/global-setup.mts'],
     // The suites share one database; run files one at a time.
     fileParallelism: false,

@@ -8,29 +8,35 @@ import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.m
 import { log } from './lib/run.mjs';
 import { spawnSync } from 'node:child_process';
 
+// `unit` suites need no database, mail or browser (feedback in seconds); the others start what they need.
 const SUITES = [
-  { name: 'shared', dir: 'shared', args: [] },
-  { name: 'analytics', dir: 'analytics', args: [] },
-  { name: 'fixtures', dir: 'fixtures', args: [] },
-  { name: 'backend', dir: 'backend', args: [] },
+  { name: 'shared', unit: true, dir: 'shared', args: [] },
+  { name: 'analytics', unit: true, dir: 'analytics', args: [] },
+  { name: 'fixtures', unit: true, dir: 'fixtures', args: [] },
+  { name: 'backend unit', unit: true, dir: 'backend', args: ['--config', 'vitest.unit.config.mts'] },
+  { name: 'backend database', dir: 'backend', args: [] },
   { name: 'frontend components', dir: 'frontend', args: [] },
   { name: 'browser', dir: 'frontend', args: ['--config', 'vitest.e2e.config.ts'] },
 ];
 
+// `npm test -- unit` runs the unit suites; other words select suites by the start of their names.
 const only = process.argv.slice(2);
+const selected = SUITES.filter(
+  (s) => !only.length || only.some((o) => (o === 'unit' ? s.unit : s.name.startsWith(o))),
+);
 const started = Date.now();
 ensureNpmPackages();
-ensureSystemPackages({ chromium: true });
+if (selected.some((s) => s.name === 'browser')) ensureSystemPackages({ chromium: true });
+else if (selected.some((s) => !s.unit)) ensureSystemPackages();
 const p = profile('test');
-buildAll();
+buildAll({ frontend: selected.some((s) => !s.unit) });
 
 const resultsDir = join(p.dataDir, 'results');
 rmSync(resultsDir, { recursive: true, force: true });
 mkdirSync(resultsDir, { recursive: true });
 
 const tally = [];
-for (const s of SUITES) {
-  if (only.length && !only.some((o) => s.name.startsWith(o))) continue;
+for (const s of selected) {
   const out = join(resultsDir, `${s.name.replace(/\s+/g, '-')}.json`);
   log(`suite: ${s.name}`);
   const t0 = Date.now();
