@@ -64,6 +64,15 @@ describe('start-up configuration', () => {
     expect(error?.message).toMatch(/APP_URL is missing/);
     expect(error?.message).not.toMatch(/DB_PORT/);
   });
+
+  it('validates the projector switches too, instead of reading them undeclared', async () => {
+    const error = await createTestApp({ PROJECTOR_ENABLED: 'maybe', PROJECTION_GAP_TIMEOUT_MS: 'soon' }).then(
+      () => null,
+      (e: unknown) => e as Error,
+    );
+    expect(error?.message).toMatch(/PROJECTOR_ENABLED is invalid/);
+    expect(error?.message).toMatch(/PROJECTION_GAP_TIMEOUT_MS is invalid/);
+  });
 });
 
 describe('serving the built front end', () => {

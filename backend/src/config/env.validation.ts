@@ -44,6 +44,10 @@ export class EnvironmentVariables extends DatabaseEnv {
   @Type(() => Number) @IsInt() @Min(1) SESSION_ABSOLUTE_DAYS = 30;
   /** How often expired sessions, reset tokens and invites are deleted (minutes; 0 = never). */
   @Type(() => Number) @IsInt() @Min(0) SESSION_CLEANUP_MINUTES = 60;
+  /** "false" for a process that only appends journal events and never projects them (a write-only instance). */
+  @IsIn(['true', 'false']) PROJECTOR_ENABLED: 'true' | 'false' = 'true';
+  /** How long the projector waits for an uncommitted gap in the journal's ids before passing it (ms). */
+  @Type(() => Number) @IsInt() @Min(0) PROJECTION_GAP_TIMEOUT_MS = 5000;
 }
 
 /**

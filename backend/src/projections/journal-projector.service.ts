@@ -9,8 +9,6 @@ import { ReadModelStore } from './read-model-store';
 
 /** Events applied per transaction. */
 const BATCH_SIZE = 2000;
-/** How long an unfilled seq is waited for before it counts as rolled back (ms). */
-const DEFAULT_GAP_TIMEOUT_MS = 5000;
 /** Retry delay while a gap is open or another process holds the projection lock (ms). */
 const RETRY_MS = 100;
 /** Longest wait between retries after failed catch-ups (the delay doubles per failure up to this, ms). */
@@ -53,9 +51,8 @@ export class JournalProjector implements OnApplicationBootstrap, OnModuleDestroy
     private readonly orm: MikroORM,
     config: AppConfig,
   ) {
-    const get = (key: string) => (config.get as (k: string) => unknown)(key);
-    this.enabled = String(get('PROJECTOR_ENABLED') ?? 'true') !== 'false';
-    this.gaps = new GapPolicy(Number(get('PROJECTION_GAP_TIMEOUT_MS') ?? DEFAULT_GAP_TIMEOUT_MS));
+    this.enabled = config.get('PROJECTOR_ENABLED') !== 'false';
+    this.gaps = new GapPolicy(config.get('PROJECTION_GAP_TIMEOUT_MS'));
   }
 
   onApplicationBootstrap(): void {
