@@ -9,3 +9,4 @@ export * from './admin.js';
 export * from './system.js';
 export * from './reports.js';
 export * from './lake-time.js';
+export * from './stops.js';

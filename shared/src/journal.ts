@@ -494,5 +494,8 @@ export const JOURNAL_EVENT_TYPES = [
   'CatchDeleted',
   'WeighInRecorded',
   'PhotoUploaded',
+  'StopLogged',
+  'StopUpdated',
+  'StopDeleted',
 ] as const;
 export type JournalEventType = (typeof JOURNAL_EVENT_TYPES)[number];

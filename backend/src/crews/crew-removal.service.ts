@@ -12,6 +12,7 @@ import { Photo } from '../photos/photo.entity';
 import { JournalProjector } from '../projections/journal-projector.service';
 import { withProjectionLock } from '../projections/projection-lock';
 import { StorageService } from '../storage/storage.service';
+import { Stop } from '../stops/stop.entity';
 import { WeighIn } from '../weigh-ins/weigh-in.entity';
 import { Crew } from './crew.entity';
 import { Invite } from './invite.entity';
@@ -22,6 +23,7 @@ import { Membership } from './membership.entity';
  * the order matters). Every other table with a crew_id column (the read models) is found at run time.
  */
 const ORDERED_ENTITIES = [
+  Stop,
   Catch,
   WeighIn,
   Find,

@@ -20,7 +20,7 @@ export class JournalEvent {
   @Property({ type: 'string', length: 40 })
   type: string;
 
-  /** 'lake' | 'event' | 'practiceDay' | 'competitionDay' | 'find' | 'catch' | 'weighIn' | 'photo'. */
+  /** 'lake' | 'event' | 'practiceDay' | 'competitionDay' | 'find' | 'catch' | 'stop' | 'weighIn' | 'photo'. */
   @Property({ type: 'string', length: 20 })
   aggregateType: string;
 

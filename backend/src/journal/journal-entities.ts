@@ -6,6 +6,7 @@ import { Find } from '../finds/find.entity';
 import { JournalEvent } from '../journal-events/journal-event.entity';
 import { Lake } from '../lakes/lake.entity';
 import { Photo } from '../photos/photo.entity';
+import { Stop } from '../stops/stop.entity';
 import { WeighIn } from '../weigh-ins/weigh-in.entity';
 
 /** The journal's entities, spread into the ORM's entity list. */
@@ -16,6 +17,7 @@ export const JOURNAL_ENTITIES = [
   CompetitionDay,
   Find,
   Catch,
+  Stop,
   WeighIn,
   Photo,
   JournalEvent,

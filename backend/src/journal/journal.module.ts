@@ -19,12 +19,15 @@ import { PhotosController } from '../photos/photos.controller';
 import { SkyController } from '../sky/sky.controller';
 import { SkyService } from '../sky/sky.service';
 import { StorageModule } from '../storage/storage.module';
+import { STOP_COMMAND_HANDLERS } from '../stops/commands';
+import { StopsController } from '../stops/stops.controller';
+import { StopsService } from '../stops/stops.service';
 import { WEIGH_IN_COMMAND_HANDLERS } from '../weigh-ins/commands';
 import { WeighInsController } from '../weigh-ins/weigh-ins.controller';
 import { WeighInsService } from '../weigh-ins/weigh-ins.service';
 
 /**
- * The journal: lakes, events and their days, finds, catches, weigh-ins, photos, imports, exports and
+ * The journal: lakes, events and their days, finds, catches, stops, weigh-ins, photos, imports, exports and
  * sky context. Every write is a command whose handler appends to journal_event in its transaction.
  */
 @Module({
@@ -34,6 +37,7 @@ import { WeighInsService } from '../weigh-ins/weigh-ins.service';
     EventsController,
     FindsController,
     CatchesController,
+    StopsController,
     WeighInsController,
     PhotosController,
     SkyController,
@@ -46,12 +50,14 @@ import { WeighInsService } from '../weigh-ins/weigh-ins.service';
     EventsService,
     FindsService,
     CatchesService,
+    StopsService,
     WeighInsService,
     JournalExportService,
     ...LAKE_COMMAND_HANDLERS,
     ...EVENT_COMMAND_HANDLERS,
     ...FIND_COMMAND_HANDLERS,
     ...CATCH_COMMAND_HANDLERS,
+    ...STOP_COMMAND_HANDLERS,
     ...WEIGH_IN_COMMAND_HANDLERS,
     UploadPhotoHandler,
   ],

@@ -1,5 +1,5 @@
 import { depthBand, temperatureBand } from '@shoalbook/analytics';
-import type { CatchRow, EventRow, FindRow, GroupStatsRow, OutcomeRow } from './rows';
+import type { CatchRow, EventRow, FindRow, GroupStatsRow, OutcomeRow, StopRow } from './rows';
 
 /** Find groupings stored in rm_group_stats: the unit is the find fished in an event. */
 export const FIND_GROUPINGS = ['kind', 'subKind', 'depthBand', 'hardness', 'temperatureBand'] as const;
@@ -54,13 +54,35 @@ export function sumCatches(catches: Iterable<Pick<CatchRow, 'fate' | 'weightUlb'
   return s;
 }
 
+/** What outcomes need of a find's stops in one event: how many, and the time on the find in whole seconds. */
+export interface StopSums {
+  stopCount: number;
+  secondsFished: number;
+}
+
+/** The sums of some stops (the rebuild's path; incremental batches get the same sums from SQL GROUP BY). */
+export function sumStops(stops: Iterable<Pick<StopRow, 'seconds'>>): StopSums {
+  const s: StopSums = { stopCount: 0, secondsFished: 0 };
+  for (const stop of stops) {
+    s.stopCount++;
+    s.secondsFished += stop.seconds;
+  }
+  return s;
+}
+
 /**
- * A find's outcome rows from the sums of its catches per event: one per event it was fished in (marked in that
- * event's practice, or caught on in it). A deleted find has none.
+ * A find's outcome rows from the sums of its catches and stops per event: one per event it was marked in (in that
+ * event's practice), stopped at or caught on. It is *fished* in an event when it has a stop on one of the event's
+ * competition days, or a catch (a fish caught there was fished for, whether or not a stop was logged); a practice
+ * mark alone does not make it fished. A deleted find has none.
  */
-export function outcomesFromSums(find: FindRow | undefined, sumsByEvent: ReadonlyMap<string, CatchSums>): OutcomeRow[] {
+export function outcomesFromSums(
+  find: FindRow | undefined,
+  sumsByEvent: ReadonlyMap<string, CatchSums>,
+  stopsByEvent: ReadonlyMap<string, StopSums> = new Map(),
+): OutcomeRow[] {
   if (!find) return [];
-  const events = new Set(sumsByEvent.keys());
+  const events = new Set([...sumsByEvent.keys(), ...stopsByEvent.keys()]);
   if (find.eventId) events.add(find.eventId);
   const keys = findKeys(find);
   return [...events].sort().map((eventId) => {
@@ -72,6 +94,7 @@ export function outcomesFromSums(find: FindRow | undefined, sumsByEvent: Readonl
       firstBiteAtMs: null,
     };
     const practiced = find.eventId === eventId;
+    const stops = stopsByEvent.get(eventId) ?? { stopCount: 0, secondsFished: 0 };
     return {
       findId: find.id,
       eventId,
@@ -79,27 +102,40 @@ export function outcomesFromSums(find: FindRow | undefined, sumsByEvent: Readonl
       lakeId: find.lakeId,
       ...keys,
       practiced,
-      fished: practiced || s.fishCount > 0,
+      fished: stops.stopCount > 0 || s.fishCount > 0,
       fishCount: s.fishCount,
       weighedCount: s.weighedCount,
       weightUlb: s.weightUlb,
       weighedWeightUlb: s.weighedWeightUlb,
       firstBiteAtMs: s.firstBiteAtMs,
+      stopCount: stops.stopCount,
+      secondsFished: stops.secondsFished,
     };
   });
 }
 
-/** A find's outcome rows, recomputed from scratch from its catch facts. */
-export function deriveOutcomes(find: FindRow | undefined, catches: readonly CatchRow[]): OutcomeRow[] {
+/** A find's outcome rows, recomputed from scratch from its catch facts and stops. */
+export function deriveOutcomes(
+  find: FindRow | undefined,
+  catches: readonly CatchRow[],
+  stops: readonly StopRow[] = [],
+): OutcomeRow[] {
   if (!find) return [];
-  const byEvent = new Map<string, CatchRow[]>();
-  for (const c of catches) {
-    if (c.findId !== find.id) continue;
-    let list = byEvent.get(c.eventId);
-    if (!list) byEvent.set(c.eventId, (list = []));
-    list.push(c);
-  }
-  return outcomesFromSums(find, new Map([...byEvent].map(([e, list]) => [e, sumCatches(list)])));
+  const byEvent = <T extends { findId: string | null; eventId: string }>(rows: readonly T[]) => {
+    const out = new Map<string, T[]>();
+    for (const r of rows) {
+      if (r.findId !== find.id) continue;
+      let list = out.get(r.eventId);
+      if (!list) out.set(r.eventId, (list = []));
+      list.push(r);
+    }
+    return out;
+  };
+  return outcomesFromSums(
+    find,
+    new Map([...byEvent(catches)].map(([e, list]) => [e, sumCatches(list)])),
+    new Map([...byEvent(stops)].map(([e, list]) => [e, sumStops(list)])),
+  );
 }
 
 /** Sums of one catch grouping key within an event. */
@@ -155,6 +191,7 @@ function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsR
     weighedCount: 0,
     weightUlb: 0,
     weighedWeightUlb: 0,
+    secondsFished: 0,
   };
 }
 
@@ -187,6 +224,7 @@ export function deriveGroupStats(
       g.weighedCount += o.weighedCount;
       g.weightUlb += o.weightUlb;
       g.weighedWeightUlb += o.weighedWeightUlb;
+      g.secondsFished += o.secondsFished;
     }
   }
   for (const c of catchGroups) {

@@ -2,7 +2,7 @@ import type { EventRules, Season } from '@shoalbook/shared';
 import { catchTiming, type CatchTimingCalculator } from './catch-timing';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState } from './projection-state';
-import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, toMicroLb } from './rows';
+import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, type StopRow, toMicroLb } from './rows';
 
 type Payload = Record<string, unknown>;
 
@@ -124,6 +124,11 @@ export class JournalApplier {
         return;
       case 'WeighInRecorded':
         return this.putWeighIn(p);
+      case 'StopLogged':
+      case 'StopUpdated':
+        return this.putStop(e.crewId, { ...p, id: e.aggregateId });
+      case 'StopDeleted':
+        return this.deleteStop(e.aggregateId);
       default:
         // Practice/competition day notes, photos: nothing the reports show.
         return;
@@ -268,6 +273,41 @@ export class JournalApplier {
     if (before?.findId) this.state.dirtyFinds.add(before.findId);
     if (before) this.state.dirtyEvents.add(before.eventId);
     this.state.catches.delete(id);
+  }
+
+  private putStop(crewId: string, p: Payload): void {
+    const before = this.state.stops.get(str(p.id));
+    const eventId = str(p.eventId);
+    const arrivedAtMs = Date.parse(str(p.arrivedAt));
+    const leftAtMs = Date.parse(str(p.leftAt));
+    const arrived = Number.isFinite(arrivedAtMs) ? arrivedAtMs : 0;
+    const left = Number.isFinite(leftAtMs) ? leftAtMs : null;
+    const row: StopRow = {
+      id: str(p.id),
+      crewId,
+      lakeId: this.state.events.get(eventId)?.lakeId ?? before?.lakeId ?? '',
+      eventId,
+      competitionDayId: str(p.competitionDayId),
+      findId: strOrNull(p.findId),
+      arrivedAtMs: arrived,
+      leftAtMs: left,
+      seconds: left === null ? 0 : Math.max(0, Math.floor(left / 1000) - Math.floor(arrived / 1000)),
+    };
+    this.markStop(before);
+    this.state.stops.put(row.id, row);
+    this.markStop(row);
+  }
+
+  private deleteStop(id: string): void {
+    this.markStop(this.state.stops.get(id));
+    this.state.stops.delete(id);
+  }
+
+  /** A stop counts toward its find's outcome in its event, and toward its event's statistics. */
+  private markStop(stop: StopRow | undefined): void {
+    if (!stop) return;
+    if (stop.findId) this.state.dirtyFinds.add(stop.findId);
+    this.state.dirtyEvents.add(stop.eventId);
   }
 
   private putWeighIn(p: Payload): void {

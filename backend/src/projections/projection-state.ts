@@ -1,4 +1,4 @@
-import type { CatchRow, DayRow, EventRow, FindRow, LakeRow } from './rows';
+import type { CatchRow, DayRow, EventRow, FindRow, LakeRow, StopRow } from './rows';
 
 /** A table of the state: rows by id, plus the ids whose final state (present or absent) must be written. */
 export class StateTable<R> {
@@ -50,6 +50,7 @@ export class ProjectionState {
   readonly days: StateTable<DayRow>;
   readonly finds: StateTable<FindRow>;
   readonly catches: StateTable<CatchRow>;
+  readonly stops: StateTable<StopRow>;
   /** Finds whose rm_find_outcome rows must be recomputed. */
   readonly dirtyFinds = new Set<string>();
   /** Events whose rm_group_stats rows must be recomputed. */
@@ -62,5 +63,6 @@ export class ProjectionState {
     this.days = new StateTable(track);
     this.finds = new StateTable(track);
     this.catches = new StateTable(track);
+    this.stops = new StateTable(track);
   }
 }

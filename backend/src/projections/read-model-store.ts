@@ -1,5 +1,12 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
-import { CATCH_GROUPINGS, type CatchGroupSums, type CatchSums, deriveGroupStats, outcomesFromSums } from './derive';
+import {
+  CATCH_GROUPINGS,
+  type CatchGroupSums,
+  type CatchSums,
+  deriveGroupStats,
+  outcomesFromSums,
+  type StopSums,
+} from './derive';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
 import type { EventRow, OutcomeRow } from './rows';
@@ -12,6 +19,7 @@ import {
   GROUP_STATS_TABLE,
   LAKE_TABLE,
   OUTCOME_TABLE,
+  STOP_TABLE,
 } from './tables';
 
 type Row = Record<string, unknown>;
@@ -69,6 +77,7 @@ export class ReadModelStore {
     const dayIds = new Set<string>();
     const findIds = new Set<string>();
     const catchIds = new Set<string>();
+    const stopIds = new Set<string>();
     for (const e of batch) {
       const p = e.payload ?? {};
       if (e.aggregateType === 'lake') {
@@ -90,6 +99,9 @@ export class ReadModelStore {
           if (str(c.eventId)) eventIds.add(c.eventId as string);
           if (str(c.competitionDayId)) dayIds.add(c.competitionDayId as string);
         }
+      } else if (e.aggregateType === 'stop') {
+        stopIds.add(e.aggregateId);
+        if (str(p.eventId)) eventIds.add(p.eventId as string);
       } else if (e.aggregateType === 'weighIn') {
         if (str(p.competitionDayId)) dayIds.add(p.competitionDayId as string);
       }
@@ -102,6 +114,10 @@ export class ReadModelStore {
     for (const c of catches) {
       state.catches.load(c.id, c);
       eventIds.add(c.eventId);
+    }
+    for (const s of await select(tx, STOP_TABLE, inList('id', stopIds))) {
+      state.stops.load(s.id, s);
+      eventIds.add(s.eventId);
     }
     for (const f of await select(tx, FIND_TABLE, inList('id', findIds))) state.finds.load(f.id, f);
     const events = await select(tx, EVENT_TABLE, inList('id', eventIds));
@@ -122,6 +138,7 @@ export class ReadModelStore {
     await writeChanges(tx, DAY_TABLE, state.days);
     await writeChanges(tx, FIND_TABLE, state.finds);
     await writeChanges(tx, CATCH_TABLE, state.catches);
+    await writeChanges(tx, STOP_TABLE, state.stops);
 
     const dirtyFinds = [...state.dirtyFinds];
     const dirtyEvents = new Set(state.dirtyEvents);
@@ -139,8 +156,19 @@ export class ReadModelStore {
         if (!sums.has(findId)) sums.set(findId, new Map());
         sums.get(findId)!.set(String(r.event_id), { ...sumsOf(r), firstBiteAtMs: instant(r.first_bite) });
       }
+      const stopRows: Row[] = await tx.execute(
+        `SELECT find_id, event_id, COUNT(*) AS stop_count, SUM(seconds) AS seconds_fished FROM rm_stop WHERE ${inList('find_id', dirtyFinds)} GROUP BY find_id, event_id`,
+      );
+      const stopSums = new Map<string, Map<string, StopSums>>();
+      for (const r of stopRows) {
+        const findId = String(r.find_id);
+        if (!stopSums.has(findId)) stopSums.set(findId, new Map());
+        stopSums
+          .get(findId)!
+          .set(String(r.event_id), { stopCount: Number(r.stop_count), secondsFished: Number(r.seconds_fished) });
+      }
       const outcomes: OutcomeRow[] = dirtyFinds.flatMap((id) =>
-        outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map()),
+        outcomesFromSums(state.finds.get(id), sums.get(id) ?? new Map(), stopSums.get(id) ?? new Map()),
       );
       // Only events whose outcome rows changed need their statistics again: a catch logged on a find changes
       // the find's outcome in the catch's event, not in the other events the find was fished in.

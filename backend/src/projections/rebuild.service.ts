@@ -19,6 +19,7 @@ import {
   GROUP_STATS_TABLE,
   LAKE_TABLE,
   OUTCOME_TABLE,
+  STOP_TABLE,
 } from './tables';
 
 const READ_PAGE = 50_000;
@@ -77,9 +78,10 @@ export async function rebuildReadModels(
       }
 
       const catchesByFind = groupBy(state.catches.rows.values(), (c) => c.findId);
+      const stopsByFind = groupBy(state.stops.rows.values(), (s) => s.findId);
       const outcomes: OutcomeRow[] = [];
       for (const find of state.finds.rows.values())
-        outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? []));
+        outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? [], stopsByFind.get(find.id) ?? []));
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
       const catchesByEvent = groupBy<CatchForStats>(state.catches.rows.values(), (c) => c.eventId);
       const stats = [...state.events.rows.values()].flatMap((ev) =>
@@ -112,6 +114,7 @@ export async function rebuildReadModels(
       await write(DAY_TABLE, state.days.rows.values());
       await write(FIND_TABLE, state.finds.rows.values());
       await write(CATCH_TABLE, state.catches.rows.values());
+      await write(STOP_TABLE, state.stops.rows.values());
       await write(OUTCOME_TABLE, outcomes);
       await write(GROUP_STATS_TABLE, stats);
       await pending;

@@ -77,6 +77,19 @@ export interface CatchRow {
   timeOfDay: string;
 }
 
+export interface StopRow {
+  id: string;
+  crewId: string;
+  lakeId: string;
+  eventId: string;
+  competitionDayId: string;
+  findId: string | null;
+  arrivedAtMs: number;
+  leftAtMs: number | null;
+  /** Whole seconds from arrival to leaving; 0 while the angler is still there. */
+  seconds: number;
+}
+
 export interface OutcomeRow {
   findId: string;
   eventId: string;
@@ -88,12 +101,15 @@ export interface OutcomeRow {
   hardness: string;
   temperatureBand: string;
   practiced: boolean;
+  /** A stop on the find on one of the event's competition days, or a catch on it (practice marks do not count). */
   fished: boolean;
   fishCount: number;
   weighedCount: number;
   weightUlb: number;
   weighedWeightUlb: number;
   firstBiteAtMs: number | null;
+  stopCount: number;
+  secondsFished: number;
 }
 
 export interface GroupStatsRow {
@@ -110,6 +126,7 @@ export interface GroupStatsRow {
   weighedCount: number;
   weightUlb: number;
   weighedWeightUlb: number;
+  secondsFished: number;
 }
 
 /** Pounds → integer micro-pounds (1e-6 lb, far below any scale's resolution). */

@@ -1,7 +1,7 @@
-import type { CatchRow, DayRow, EventRow, FindRow, GroupStatsRow, LakeRow, OutcomeRow } from './rows';
+import type { CatchRow, DayRow, EventRow, FindRow, GroupStatsRow, LakeRow, OutcomeRow, StopRow } from './rows';
 import { tableSpec } from './sql-values';
 
-// Column lists of the read-model tables (the migration Migration20261220120000 creates them).
+// Column lists of the read-model tables (the migrations Migration20261220120000 and Migration20261231000000 create them).
 
 export const LAKE_TABLE = tableSpec<LakeRow>('rm_lake', ['id'], {
   id: 'str',
@@ -77,6 +77,18 @@ export const CATCH_TABLE = tableSpec<CatchRow>('rm_catch_fact', ['id'], {
   timeOfDay: 'str',
 });
 
+export const STOP_TABLE = tableSpec<StopRow>('rm_stop', ['id'], {
+  id: 'str',
+  crewId: 'str',
+  lakeId: 'str',
+  eventId: 'str',
+  competitionDayId: 'str',
+  findId: 'str',
+  arrivedAtMs: 'instant',
+  leftAtMs: 'instant',
+  seconds: 'num',
+});
+
 export const OUTCOME_TABLE = tableSpec<OutcomeRow>('rm_find_outcome', ['findId', 'eventId'], {
   findId: 'str',
   eventId: 'str',
@@ -94,6 +106,8 @@ export const OUTCOME_TABLE = tableSpec<OutcomeRow>('rm_find_outcome', ['findId',
   weightUlb: 'num',
   weighedWeightUlb: 'num',
   firstBiteAtMs: 'instant',
+  stopCount: 'num',
+  secondsFished: 'num',
 });
 
 export const GROUP_STATS_TABLE = tableSpec<GroupStatsRow>('rm_group_stats', ['eventId', 'grouping', 'groupKey'], {
@@ -110,4 +124,5 @@ export const GROUP_STATS_TABLE = tableSpec<GroupStatsRow>('rm_group_stats', ['ev
   weighedCount: 'num',
   weightUlb: 'num',
   weighedWeightUlb: 'num',
+  secondsFished: 'num',
 });

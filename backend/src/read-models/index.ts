@@ -6,8 +6,9 @@ import { RmFindOutcome } from './rm-find-outcome.entity';
 import { RmFind } from './rm-find.entity';
 import { RmGroupStats } from './rm-group-stats.entity';
 import { RmLake } from './rm-lake.entity';
+import { RmStop } from './rm-stop.entity';
 
-export { ProjectionCheckpoint, RmCatchFact, RmCompetitionDay, RmEvent, RmFind, RmFindOutcome, RmGroupStats, RmLake };
+export { ProjectionCheckpoint, RmCatchFact, RmCompetitionDay, RmEvent, RmFind, RmFindOutcome, RmGroupStats, RmLake, RmStop };
 
 /** The read-model entities (written only by projections, read only by query handlers). */
 export const READ_MODEL_ENTITIES = [
@@ -16,6 +17,7 @@ export const READ_MODEL_ENTITIES = [
   RmCompetitionDay,
   RmFind,
   RmCatchFact,
+  RmStop,
   RmFindOutcome,
   RmGroupStats,
   ProjectionCheckpoint,
@@ -28,6 +30,7 @@ export const READ_MODEL_TABLES = [
   'rm_competition_day',
   'rm_find',
   'rm_catch_fact',
+  'rm_stop',
   'rm_find_outcome',
   'rm_group_stats',
 ] as const;

@@ -2,7 +2,7 @@ import { Entity, Index, PrimaryKey, Property } from '@mikro-orm/core';
 
 /**
  * Read model: a find's outcome in one event, recomputed from rm_catch_fact whenever its catches or the find
- * change. One row per find and event it was fished in (marked in the event's practice, or caught on in it).
+ * change. One row per find and event it was marked in (in the event's practice), stopped at or caught on.
  * Group keys are '' when not recorded.
  */
 @Entity({ tableName: 'rm_find_outcome' })
@@ -54,6 +54,14 @@ export class RmFindOutcome {
 
   @Property({ type: 'bigint' })
   weighedWeightUlb: number;
+
+  /** Stops on the find on this event's competition days. */
+  @Property({ type: 'integer' })
+  stopCount: number = 0;
+
+  /** Time on the find over those stops (whole seconds). */
+  @Property({ type: 'bigint' })
+  secondsFished: number = 0;
 
   @Property({ type: 'datetime', length: 3, nullable: true })
   firstBiteAt: Date | null = null;

@@ -46,4 +46,8 @@ export class RmGroupStats {
 
   @Property({ type: 'bigint' })
   weighedWeightUlb: number;
+
+  /** Time on the group's finds (whole seconds over their stops; 0 for the catch groupings). */
+  @Property({ type: 'bigint' })
+  secondsFished: number = 0;
 }

@@ -2,6 +2,7 @@ import type { EntityManager } from '@mikro-orm/mariadb';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import type { EventView } from '@shoalbook/shared';
 import { Catch } from '../../catches/catch.entity';
+import { Stop } from '../../stops/stop.entity';
 import { Find } from '../../finds/find.entity';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
@@ -110,8 +111,15 @@ export class UpdateEventHandler implements ICommandHandler<UpdateEventCommand> {
       await reconcileDays(tx, access.crewId, event, PracticeDay, practice, (dayIds) =>
         tx.count(Find, { practiceDayId: { $in: dayIds } }),
       );
-      await reconcileDays(tx, access.crewId, event, CompetitionDay, competition, (dayIds) =>
-        tx.count(Catch, { competitionDayId: { $in: dayIds } }),
+      await reconcileDays(
+        tx,
+        access.crewId,
+        event,
+        CompetitionDay,
+        competition,
+        async (dayIds) =>
+          (await tx.count(Catch, { competitionDayId: { $in: dayIds } })) +
+          (await tx.count(Stop, { competitionDayId: { $in: dayIds } })),
       );
 
       if (input.name !== undefined) event.name = input.name;
@@ -152,7 +160,7 @@ async function reconcileDays(
     const used = await usage(dropped.map((d) => d.id));
     if (used) {
       throw inUse(
-        `The day(s) ${dropped.map((d) => d.date).join(', ')} have finds or catches logged; move or delete those before dropping the date.`,
+        `The day(s) ${dropped.map((d) => d.date).join(', ')} have finds, catches or stops logged; move or delete those before dropping the date.`,
         JournalErrorCode.dayInUse,
       );
     }
@@ -175,8 +183,11 @@ export class DeleteEventHandler implements ICommandHandler<DeleteEventCommand> {
       if (!event) throw recordNotFound('event');
       const finds = await tx.count(Find, { crewId: access.crewId, eventId });
       const catches = await tx.count(Catch, { crewId: access.crewId, eventId });
-      if (finds || catches)
-        throw inUse(`The event still has ${finds} find(s) and ${catches} catch(es); delete those first.`);
+      const stops = await tx.count(Stop, { crewId: access.crewId, eventId });
+      if (finds || catches || stops)
+        throw inUse(
+          `The event still has ${finds} find(s), ${catches} catch(es) and ${stops} stop(s); delete those first.`,
+        );
       const dayIds = (await tx.find(CompetitionDay, { eventId })).map((d) => d.id);
       if (dayIds.length) await tx.nativeDelete(WeighIn, { competitionDayId: { $in: dayIds } });
       await tx.nativeDelete(PracticeDay, { eventId });

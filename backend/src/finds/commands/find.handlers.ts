@@ -1,6 +1,7 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import type { FindView } from '@shoalbook/shared';
 import { Catch } from '../../catches/catch.entity';
+import { Stop } from '../../stops/stop.entity';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
 import { assertVersion, recordNotFound, unknownReference } from '../../journal/journal-errors';
@@ -90,6 +91,16 @@ export class DeleteFindHandler implements ICommandHandler<DeleteFindCommand> {
           aggregateId: c.id,
           payload: recordState(tx, 'Catch', c),
         });
+      // Its stops stay (the angler fished there), at the find's position with no find.
+      const stops = await tx.find(Stop, { crewId: access.crewId, findId });
+      for (const s of stops) {
+        s.findId = null;
+        s.lat ??= find.lat;
+        s.lon ??= find.lon;
+      }
+      await tx.flush();
+      for (const s of stops)
+        log.record({ type: 'StopUpdated', aggregateType: 'stop', aggregateId: s.id, payload: recordState(tx, 'Stop', s) });
       tx.remove(find);
       log.record({ type: 'FindDeleted', aggregateType: 'find', aggregateId: find.id, payload: { id: find.id } });
     });

@@ -1,0 +1,3 @@
+import { DeleteStopHandler, LogStopHandler, UpdateStopHandler } from './stop.handlers';
+
+export const STOP_COMMAND_HANDLERS = [LogStopHandler, UpdateStopHandler, DeleteStopHandler];
