@@ -176,5 +176,6 @@ describe('authorisation matrix from the OpenAPI document', () => {
       }
     }
     expect(failures).toEqual([]);
-  });
+    // Every route × six actors, each with a fresh session: minutes on a loaded shared machine, not a speed target.
+  }, 180_000);
 });

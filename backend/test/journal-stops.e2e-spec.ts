@@ -56,7 +56,13 @@ describe('stops: visits on a competition day', () => {
     dayId = days[0]!.id;
     day2Id = days[1]!.id;
     // Take-off 06:30, check-in 15:00 (lake time).
-    expectOk(await crew.owner.patch(`${base}/competition-days/${dayId}`, { startTime: '06:30', checkInTime: '15:00', version: days[0]!.version }));
+    expectOk(
+      await crew.owner.patch(`${base}/competition-days/${dayId}`, {
+        startTime: '06:30',
+        checkInTime: '15:00',
+        version: days[0]!.version,
+      }),
+    );
     findA = await addFind(crew, lake.id, 'Rock point', TEST_LAKE.lat, event.id);
     findB = await addFind(crew, lake.id, 'Channel swing', TEST_LAKE.lat + 0.01, event.id);
     findPracticed = await addFind(crew, lake.id, 'Marked, never visited', TEST_LAKE.lat + 0.02, event.id);
@@ -107,7 +113,11 @@ describe('stops: visits on a competition day', () => {
     expectFieldError(await post({ arrivedAt: '2024-04-13T09:00:00-05:00' }), 'arrivedAt', /outside/);
     expectFieldError(await post({ findId: otherCrewFind, arrivedAt: '11:00' }), 'findId', /No such find/);
     expectFieldError(await post({ findId: null, arrivedAt: '11:00' }), 'lat', /position/);
-    const badDay = await crew.angler.post(`${base}/stops`, { competitionDayId: other.crewId, arrivedAt: '11:00', findId: findB });
+    const badDay = await crew.angler.post(`${base}/stops`, {
+      competitionDayId: other.crewId,
+      arrivedAt: '11:00',
+      findId: findB,
+    });
     expect(badDay.status).toBe(400);
     expect(await stopCount()).toBe(before.stops);
     expect(await journalCount(app, crew.crewId)).toBe(before.journal);
@@ -121,13 +131,21 @@ describe('stops: visits on a competition day', () => {
       leftAt: '08:00',
     });
     expectOk(owners, 201);
-    const viewer = await crew.viewer.post(`${base}/stops`, { competitionDayId: dayId, findId: findB, arrivedAt: '12:00' });
+    const viewer = await crew.viewer.post(`${base}/stops`, {
+      competitionDayId: dayId,
+      findId: findB,
+      arrivedAt: '12:00',
+    });
     expect(viewer.status).toBe(403);
     expectOk(await crew.owner.delete(`${base}/stops/${owners.body.id}`));
   });
 
   it('attributes catches by time, flags one far from the find, and keeps catches when the stop is deleted', async () => {
-    const open = await crew.angler.post(`${base}/stops`, { competitionDayId: dayId, findId: findB, arrivedAt: '09:00' });
+    const open = await crew.angler.post(`${base}/stops`, {
+      competitionDayId: dayId,
+      findId: findB,
+      arrivedAt: '09:00',
+    });
     expectOk(open, 201);
     expect(open.body.leftAt).toBeNull();
     const log = async (caughtAt: string, lat?: number) => {
@@ -146,13 +164,18 @@ describe('stops: visits on a competition day', () => {
     const inside = await log('09:20');
     // 0.001° of latitude ≈ 111 m (mean Earth radius 6,371,008.8 m): beyond the 50 m radius.
     const far = await log('09:40', TEST_LAKE.lat + 0.01 + 0.001);
-    const left = await crew.angler.patch(`${base}/stops/${open.body.id}`, { leftAt: '10:30', version: open.body.version });
+    const left = await crew.angler.patch(`${base}/stops/${open.body.id}`, {
+      leftAt: '10:30',
+      version: open.body.version,
+    });
     expectOk(left);
     expect(left.body.minutes).toBe(90);
     expect(left.body.catchIds).toEqual([inside, far]);
     expect(left.body.catchesToCheck.map((c: { catchId: string }) => c.catchId)).toEqual([far]);
     // Stale version.
-    expect((await crew.angler.patch(`${base}/stops/${open.body.id}`, { leftAt: '10:40', version: 1 })).status).toBe(409);
+    expect((await crew.angler.patch(`${base}/stops/${open.body.id}`, { leftAt: '10:40', version: 1 })).status).toBe(
+      409,
+    );
     // Leaving before arriving, on update.
     expectFieldError(
       await crew.angler.patch(`${base}/stops/${open.body.id}`, { leftAt: '08:59', version: left.body.version }),
@@ -175,7 +198,12 @@ describe('stops: visits on a competition day', () => {
   it('counts a find with stops and no fish as fished, and a find only marked in practice as not', async () => {
     // A second stop on find B with no bite, on day 2.
     expectOk(
-      await crew.angler.post(`${base}/stops`, { competitionDayId: day2Id, findId: findB, arrivedAt: '08:00', leftAt: '08:45' }),
+      await crew.angler.post(`${base}/stops`, {
+        competitionDayId: day2Id,
+        findId: findB,
+        arrivedAt: '08:00',
+        leftAt: '08:45',
+      }),
       201,
     );
     await waitForProjection(app);

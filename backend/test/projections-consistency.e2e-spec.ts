@@ -68,6 +68,28 @@ const commandArb = fc.oneof(
     }),
   },
   { weight: 1, arbitrary: fc.record({ t: fc.constant('deleteFind' as const), f: fc.nat() }) },
+  {
+    weight: 3,
+    arbitrary: fc.record({
+      t: fc.constant('logStop' as const),
+      find: fc.option(fc.nat(), { nil: null, freq: 6 }),
+      event: fc.constantFrom(0, 1),
+      day: fc.constantFrom(0, 1),
+      minute: fc.integer({ min: 360, max: 1020 }),
+      // 0 = still there (no leaving time yet).
+      duration: fc.constantFrom(0, 15, 40, 95),
+    }),
+  },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      t: fc.constant('updateStop' as const),
+      s: fc.nat(),
+      duration: fc.constantFrom(10, 55),
+      find: fc.option(fc.nat(), { nil: undefined }),
+    }),
+  },
+  { weight: 1, arbitrary: fc.record({ t: fc.constant('deleteStop' as const), s: fc.nat() }) },
 );
 type Command = typeof commandArb extends fc.Arbitrary<infer T> ? T : never;
 
@@ -94,6 +116,7 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
     const { lakeId, events } = await lakeWithEvents(owner, crewId);
     const finds: { id: string; version: number }[] = [];
     const catches: { id: string; version: number }[] = [];
+    const stops: { id: string; version: number; minute: number }[] = [];
     const base = `/api/crews/${crewId}`;
     let ok = 0;
     for (const [i, cmd] of commands.entries()) {
@@ -142,13 +165,40 @@ describe('projections: incremental = rebuild = recomputation from the journal (p
           ...(cmd.depthFt ? { depthFt: cmd.depthFt } : {}),
         });
         if (res.status === 200) f.version = res.body.version;
+      } else if (cmd.t === 'logStop') {
+        const ev = events[cmd.event]!;
+        res = await owner.post(`${base}/stops`, {
+          competitionDayId: ev.dayIds[cmd.day],
+          arrivedAt: hhmm(cmd.minute),
+          leftAt: cmd.duration ? hhmm(cmd.minute + cmd.duration) : null,
+          ...(cmd.find === null || !finds.length
+            ? { findId: null, lat: 32.9, lon: -96.3 }
+            : { findId: finds[cmd.find % finds.length]!.id }),
+        });
+        // Overlapping another stop is refused (400): that is part of the sequence too.
+        if (res.status === 201) stops.push({ id: res.body.id, version: res.body.version, minute: cmd.minute });
+      } else if (cmd.t === 'updateStop' && stops.length) {
+        const st = stops[cmd.s % stops.length]!;
+        res = await owner.patch(`${base}/stops/${st.id}`, {
+          version: st.version,
+          leftAt: hhmm(st.minute + cmd.duration),
+          ...(cmd.find !== undefined && finds.length ? { findId: finds[cmd.find % finds.length]!.id } : {}),
+        });
+        if (res.status === 200) st.version = res.body.version;
+      } else if (cmd.t === 'deleteStop' && stops.length) {
+        const [st] = stops.splice(cmd.s % stops.length, 1);
+        res = await owner.delete(`${base}/stops/${st!.id}`);
       } else if (cmd.t === 'deleteFind' && finds.length) {
         const [f] = finds.splice(cmd.f % finds.length, 1);
         res = await owner.delete(`${base}/finds/${f!.id}`);
-        // Its catches were detached (new versions): refresh theirs.
+        // Its catches and stops were detached (new versions): refresh theirs.
         for (const c of catches) {
           const got = await owner.get(`${base}/catches/${c.id}`);
           if (got.status === 200) c.version = got.body.version;
+        }
+        for (const st of stops) {
+          const got = await owner.get(`${base}/stops/${st.id}`);
+          if (got.status === 200) st.version = got.body.version;
         }
       }
       if (res && res.status < 300) ok++;

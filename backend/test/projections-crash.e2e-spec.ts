@@ -40,7 +40,7 @@ describe('projections: a crash between write and projection loses nothing', () =
       depthFt: 19,
     });
     expect(find.status).toBe(201);
-    await owner.post(`/api/crews/${crewId}/finds`, {
+    const grass = await owner.post(`/api/crews/${crewId}/finds`, {
       lakeId,
       eventId: events[0]!.id,
       name: 'Grass edge',
@@ -49,6 +49,14 @@ describe('projections: a crash between write and projection loses nothing', () =
       kind: 'vegetation',
       depthFt: 8,
     });
+    // Fished without a bite: a stop, no catch.
+    const stop = await owner.post(`/api/crews/${crewId}/stops`, {
+      competitionDayId: events[0]!.dayIds[0],
+      findId: grass.body.id,
+      arrivedAt: '06:40',
+      leftAt: '07:20',
+    });
+    expect(stop.status).toBe(201);
     const caught = await owner.post(`/api/crews/${crewId}/catches`, {
       competitionDayId: events[0]!.dayIds[0],
       caughtAt: '07:45',

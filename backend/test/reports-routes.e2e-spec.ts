@@ -80,6 +80,16 @@ describe('report routes', () => {
       });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
     }
+    // The blanks of event 0 were visited without a bite: a stop each on day 1, none on its catches' finds.
+    for (const [i, name] of ['hb3', 'hb4', 'v1', 'v2', 'v3'].entries()) {
+      const res = await crew.angler.post(`${base}/stops`, {
+        competitionDayId: events[0]!.dayIds[0],
+        findId: findIds[name],
+        arrivedAt: `${10 + i}:00`,
+        leftAt: `${10 + i}:30`,
+      });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+    }
     await waitForProjection(app);
   });
   afterAll(async () => {

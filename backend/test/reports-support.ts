@@ -5,6 +5,7 @@ import { type FindInput, hitRates } from '@shoalbook/analytics';
 import { Catch } from '../src/catches/catch.entity';
 import { Find } from '../src/finds/find.entity';
 import { READ_MODEL_TABLES } from '../src/read-models';
+import { Stop } from '../src/stops/stop.entity';
 import type { ApiClient } from './utils/api-client';
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { testEm } from './utils/test-app';
@@ -36,6 +37,7 @@ const KEYS: Record<string, string> = {
   rm_competition_day: 'id',
   rm_find: 'id',
   rm_catch_fact: 'id',
+  rm_stop: 'id',
   rm_find_outcome: 'find_id, event_id',
   rm_group_stats: 'event_id, grouping, group_key',
 };
@@ -78,8 +80,9 @@ export interface GroupFigures {
 }
 
 /**
- * The reference: hit rates recomputed from the raw journal tables (finds, catches) with @shoalbook/analytics
- * hitRates. One analytics find per (find, event) it was fished in: marked in the event, or caught on in it.
+ * The reference: hit rates recomputed from the raw journal tables (finds, catches, stops) with @shoalbook/analytics
+ * hitRates. One analytics find per (find, event) it was marked in, stopped at or caught on; fished when it has a
+ * stop or a catch in that event (a practice mark alone is not fishing it).
  */
 export async function recomputeFromJournal(
   app: INestApplication,
@@ -90,22 +93,25 @@ export async function recomputeFromJournal(
   const em = testEm(app);
   const finds = await em.find(Find, { crewId });
   const catches = (await em.find(Catch, { crewId })).filter((c) => !eventIds || eventIds.includes(c.eventId));
+  const stops = await em.find(Stop, { crewId });
   const pairs = new Map<string, FindInput>();
-  const addPair = (f: Find, eventId: string) => {
+  const addPair = (f: Find, eventId: string, fished: boolean) => {
     if (eventIds && !eventIds.includes(eventId)) return;
-    pairs.set(`${f.id}|${eventId}`, {
-      id: `${f.id}|${eventId}`,
+    const id = `${f.id}|${eventId}`;
+    pairs.set(id, {
+      id,
       kind: f.kind,
       subKind: f.subKind || null,
       depthFt: f.depthFt,
       hardness: f.hardness,
       waterTempF: f.waterTempF,
-      fished: true,
+      fished: fished || (pairs.get(id)?.fished ?? false),
     });
   };
   const byId = new Map(finds.map((f) => [f.id, f]));
-  for (const f of finds) if (f.eventId) addPair(f, f.eventId);
-  for (const c of catches) if (c.findId && byId.has(c.findId)) addPair(byId.get(c.findId)!, c.eventId);
+  for (const f of finds) if (f.eventId) addPair(f, f.eventId, false);
+  for (const s of stops) if (s.findId && byId.has(s.findId)) addPair(byId.get(s.findId)!, s.eventId, true);
+  for (const c of catches) if (c.findId && byId.has(c.findId)) addPair(byId.get(c.findId)!, c.eventId, true);
   const groups = hitRates(
     [...pairs.values()],
     catches.map((c) => ({

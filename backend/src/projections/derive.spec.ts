@@ -109,7 +109,8 @@ describe('derived rows against analytics hitRates', () => {
             ),
           );
 
-          // The reference: one analytics "find" per (find, event) fished, its catches keyed the same way.
+          // The reference: one analytics "find" per (find, event) with a row, its catches keyed the same way; fished
+          // when caught on in that event (no stops in this journal), not merely marked in its practice.
           const pairs = outcomes.map((o) => {
             const f = state.finds.get(o.findId)!;
             return {
@@ -119,7 +120,7 @@ describe('derived rows against analytics hitRates', () => {
               depthFt: f.depthFt,
               hardness: f.hardness,
               waterTempF: f.waterTempF,
-              fished: true,
+              fished: facts.some((c) => c.findId === o.findId && c.eventId === o.eventId),
             };
           });
           const refCatches = facts.map((c) => ({

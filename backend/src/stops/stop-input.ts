@@ -76,7 +76,13 @@ export async function applyStopInput(
     problems.add(latSent && input.lat !== null ? 'lon' : 'lat', 'Give both lat and lon, or neither.');
   const lat = latSent ? (input.lat ?? null) : stop.lat;
   const lon = lonSent ? (input.lon ?? null) : stop.lon;
-  if (!findId && !problems.errors.findId && !problems.errors.lat && !problems.errors.lon && (lat === null || lon === null))
+  if (
+    !findId &&
+    !problems.errors.findId &&
+    !problems.errors.lat &&
+    !problems.errors.lon &&
+    (lat === null || lon === null)
+  )
     problems.add('lat', 'A stop with no find needs its position: give lat and lon (or name the find).');
 
   if (!problems.empty) return;

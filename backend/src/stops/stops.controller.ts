@@ -30,7 +30,9 @@ export class StopsController {
   ) {}
 
   @Get()
-  @ApiOperation({ summary: 'Stops, optionally of one event or competition day, by arrival; X-Total-Count has the total' })
+  @ApiOperation({
+    summary: 'Stops, optionally of one event or competition day, by arrival; X-Total-Count has the total',
+  })
   @ApiOkResponse({
     type: [StopViewDto],
     headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'stops matching the filter' } },

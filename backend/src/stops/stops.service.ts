@@ -63,9 +63,10 @@ export class StopsService {
     );
     const findIds = ids(stops, (s) => s.findId);
     const finds = new Map(
-      (findIds.length ? await em.find(Find, { id: { $in: findIds }, crewId }, { fields: ['id', 'lat', 'lon'] }) : []).map(
-        (f) => [f.id, { lat: f.lat, lon: f.lon }],
-      ),
+      (findIds.length
+        ? await em.find(Find, { id: { $in: findIds }, crewId }, { fields: ['id', 'lat', 'lon'] })
+        : []
+      ).map((f) => [f.id, { lat: f.lat, lon: f.lon }]),
     );
     const byStop = new Map<string, StopCatches>();
     const unattached: string[] = [];
@@ -119,7 +120,9 @@ export class StopsService {
         lure: s.lure,
         technique: s.technique,
         notes: s.notes,
-        loggedBy: s.loggedById ? { userId: s.loggedById, displayName: users.get(s.loggedById) ?? 'former member' } : null,
+        loggedBy: s.loggedById
+          ? { userId: s.loggedById, displayName: users.get(s.loggedById) ?? 'former member' }
+          : null,
         catchIds: catches.catchIds,
         catchesToCheck: showPositions ? catches.catchesToCheck : [],
         version: s.version,

@@ -31,7 +31,15 @@ export class Migration20261231000000 extends Migration {
       'alter table `rm_find_outcome` add `stop_count` int not null default 0, add `seconds_fished` bigint not null default 0;',
     );
     this.addSql('alter table `rm_group_stats` add `seconds_fished` bigint not null default 0;');
-    for (const table of ['rm_lake', 'rm_event', 'rm_competition_day', 'rm_find', 'rm_catch_fact', 'rm_find_outcome', 'rm_group_stats'])
+    for (const table of [
+      'rm_lake',
+      'rm_event',
+      'rm_competition_day',
+      'rm_find',
+      'rm_catch_fact',
+      'rm_find_outcome',
+      'rm_group_stats',
+    ])
       this.addSql(`truncate table \`${table}\`;`);
     this.addSql("delete from `projection_checkpoint` where `name` = 'journal';");
   }

@@ -100,7 +100,12 @@ export class DeleteFindHandler implements ICommandHandler<DeleteFindCommand> {
       }
       await tx.flush();
       for (const s of stops)
-        log.record({ type: 'StopUpdated', aggregateType: 'stop', aggregateId: s.id, payload: recordState(tx, 'Stop', s) });
+        log.record({
+          type: 'StopUpdated',
+          aggregateType: 'stop',
+          aggregateId: s.id,
+          payload: recordState(tx, 'Stop', s),
+        });
       tx.remove(find);
       log.record({ type: 'FindDeleted', aggregateType: 'find', aggregateId: find.id, payload: { id: find.id } });
     });

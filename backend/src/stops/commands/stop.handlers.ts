@@ -53,7 +53,12 @@ export class LogStopHandler implements ICommandHandler<LogStopCommand> {
       await refuseOverlap(tx, ctx, stop, input);
       tx.persist(stop);
       await tx.flush();
-      log.record({ type: 'StopLogged', aggregateType: 'stop', aggregateId: stop.id, payload: recordState(tx, 'Stop', stop) });
+      log.record({
+        type: 'StopLogged',
+        aggregateType: 'stop',
+        aggregateId: stop.id,
+        payload: recordState(tx, 'Stop', stop),
+      });
       return stopView(this.stops, tx, access, stop);
     });
   }
@@ -79,7 +84,12 @@ export class UpdateStopHandler implements ICommandHandler<UpdateStopCommand> {
       problems.throwIfAny();
       await refuseOverlap(tx, ctx, found, input);
       await tx.flush();
-      log.record({ type: 'StopUpdated', aggregateType: 'stop', aggregateId: found.id, payload: recordState(tx, 'Stop', found) });
+      log.record({
+        type: 'StopUpdated',
+        aggregateType: 'stop',
+        aggregateId: found.id,
+        payload: recordState(tx, 'Stop', found),
+      });
       return stopView(this.stops, tx, access, found);
     });
   }

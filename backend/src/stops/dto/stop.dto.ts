@@ -6,7 +6,10 @@ import { ListPageDto } from '../../journal/list-query.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
 
 const finite = { allowNaN: false, allowInfinity: false };
-const TIME = { description: '"HH:MM" lake-local on the competition day, or an ISO-8601 instant with a zone', example: '07:15' };
+const TIME = {
+  description: '"HH:MM" lake-local on the competition day, or an ISO-8601 instant with a zone',
+  example: '07:15',
+};
 
 export class LogStopDto implements LogStopRequest {
   @ApiProperty({ format: 'uuid' }) @IsUUID() competitionDayId: string;
