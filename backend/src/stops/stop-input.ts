@@ -1,10 +1,9 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
-import { DateTime } from 'luxon';
+import { clockTime, isHhMm, localDateOf, localTimeOn, parseInstant } from '@shoalbook/shared';
 import type { CompetitionDay } from '../events/competition-day.entity';
 import type { FindLookup } from '../catches/find-lookup';
 import { catchTimeProblem } from '../catches/catch-window';
 import type { FieldProblems } from '../journal/journal-errors';
-import { isHhMm, localTimeOn, parseInstant } from '../journal/local-time';
 import type { Lake } from '../lakes/lake.entity';
 import type { LogStopDto, UpdateStopDto } from './dto/stop.dto';
 import { spansOverlap } from './stop-attribution';
@@ -29,14 +28,13 @@ function timeOn(ctx: StopContext, field: 'arrivedAt' | 'leftAt', value: string, 
   }
   // The day's hours (its date, from the start to check-in where recorded) are the same for stops as for catches.
   if (catchTimeProblem(at, ctx.day, ctx.lake.timeZone) !== null) {
-    const local = DateTime.fromJSDate(at, { zone: ctx.lake.timeZone });
     const hours =
       ctx.day.startTime || ctx.day.checkInTime
         ? ` (${ctx.day.startTime ?? 'midnight'} to ${ctx.day.checkInTime ?? 'midnight'})`
         : '';
     problems.add(
       field,
-      `${local.toFormat('yyyy-MM-dd HH:mm')} lies outside the competition day ${ctx.day.date}${hours}, lake time ${ctx.lake.timeZone}.`,
+      `${localDateOf(at, ctx.lake.timeZone)} ${clockTime(at, ctx.lake.timeZone)} lies outside the competition day ${ctx.day.date}${hours}, lake time ${ctx.lake.timeZone}.`,
     );
     return null;
   }

@@ -1,7 +1,6 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import type { StopDeletedView, StopView } from '@shoalbook/shared';
-import { DateTime } from 'luxon';
+import { clockTime, type StopDeletedView, type StopView } from '@shoalbook/shared';
 import type { CrewAccess } from '../../common/request-context';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
@@ -15,8 +14,7 @@ import { DeleteStopCommand, LogStopCommand, UpdateStopCommand } from './stop.com
 async function refuseOverlap(tx: EntityManager, ctx: StopContext, stop: Stop, sent: object): Promise<void> {
   const other = await overlappingStop(tx, stop);
   if (!other) return;
-  const clock = (d: Date | null) =>
-    d ? DateTime.fromJSDate(d, { zone: ctx.lake.timeZone }).toFormat('HH:mm') : 'still there';
+  const clock = (d: Date | null) => (d ? clockTime(d, ctx.lake.timeZone) : 'still there');
   const problems = new FieldProblems();
   // Name the field the request sent that causes it (leaving, when only that changed).
   const field = 'arrivedAt' in sent || !('leftAt' in sent) ? 'arrivedAt' : 'leftAt';
