@@ -29,7 +29,24 @@ export {
 export { normalQuantile, normalCdf } from './stats/special.js';
 
 // Weigh-in
-export { countedBag, type BagFish, type BagRules, type CountedBag } from './weigh-in/counted-bag.js';
+export {
+  dayBag,
+  dayBags,
+  daySummary,
+  isShortFish,
+  verdictsById,
+  FISH_STATES,
+  type BagPenalty,
+  type DayBag,
+  type DayFish,
+  type DayRules,
+  type DaySummary,
+  type EventFormat,
+  type FishState,
+  type FishVerdict,
+  type LoggedFate,
+} from './weigh-in/day-bag.js';
+export { fieldStanding, ordinal, type FieldStanding } from './weigh-in/field-standing.js';
 export { units, KG_PER_LB, MM_PER_IN, M_PER_FT, OZ_PER_LB, type PoundsOunces } from './weigh-in/units.js';
 
 // Fish condition

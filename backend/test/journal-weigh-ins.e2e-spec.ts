@@ -55,8 +55,26 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     // Worked by hand: legal candidates 4.1, 3.6, 3.0 dead (2.75 net), 2.8, 2.5, 2.2 → top five by net value:
     // 4.1, 3.6, 2.8, 3.0 (dead, 2.75), 2.5; gross 16.0; penalties 0.25 (dead) + 1 (short) = 1.25; net 14.75.
     expect(new Set(d1.computed.counted)).toEqual(new Set([ids[0], ids[1], ids[5], ids[3], ids[6]]));
-    expect(d1.computed.short).toEqual([ids[4]]);
-    expect(d1.computed.culled).toEqual(expect.arrayContaining([ids[2], ids[4], ids[7]]));
+    // Every fish's state by the one bag rule: the culled short-free 2.2 and the released 5.0 never reached the
+    // scale; the dead 3.0 was counted, so it was weighed and charged; the short 2.9 was brought in and charged.
+    expect(d1.computed.fish.map((f) => [f.catchId, f.state, f.counted, f.weighed, f.penaltyLb])).toEqual([
+      [ids[0], 'counted', true, true, 0],
+      [ids[1], 'counted', true, true, 0],
+      [ids[2], 'culled', false, false, 0],
+      [ids[3], 'dead', true, true, 0.25],
+      [ids[4], 'short', false, true, 1],
+      [ids[5], 'counted', true, true, 0],
+      [ids[6], 'counted', true, true, 0],
+      [ids[7], 'released', false, false, 0],
+    ]);
+    expect(d1.computed.penalties).toEqual([
+      { kind: 'dead', catchId: ids[3], lb: 0.25 },
+      { kind: 'short', catchId: ids[4], lb: 1 },
+    ]);
+    expect(d1.computed.format).toBe('team');
+    expect(d1.computed.bags).toHaveLength(1);
+    expect(d1.computed.bags[0]).toMatchObject({ nextToCull: ids[6], mustBeatLb: 2.5 });
+    expect(d1.difference).toEqual({ grossLb: null, penaltyLb: null, netLb: null });
     expect(d1.computed.grossLb).toBeCloseTo(16.0, 6);
     expect(d1.computed.penaltyLb).toBeCloseTo(1.25, 6);
     expect(d1.computed.netLb).toBeCloseTo(14.75, 6);
@@ -85,9 +103,17 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
       officialLb: 12.77,
       dayPlace: 4,
       lateMinutes: 2,
+      fieldSize: null,
+      winningLb: null,
+      cutLb: null,
       version: 1,
     });
     expect(after.days[0]!.computed.penaltyLb).toBeCloseTo(3.25, 6); // 1.25 + 2 min × 1 lb/min
+    expect(after.days[0]!.computed.penalties.at(-1)).toEqual({ kind: 'late', catchId: null, lb: 2, minutes: 2 });
+    // Official figures win in the totals, with the difference beside them; neither is overwritten.
+    expect(after.days[0]!.computed.grossLb).toBeCloseTo(16.0, 6);
+    expect(after.days[0]!.difference).toEqual({ grossLb: 0.02, penaltyLb: 0, netLb: 0.02 });
+    expect(after.totals.differenceLb).toBeCloseTo(0.02, 6);
     expect(after.totals.officialLb).toBeCloseTo(12.77, 6);
     expect(after.totals.computedNetLb).toBeCloseTo(12.75, 6);
     const recorded = await testEm(app).find(JournalEvent, { crewId: crew.crewId, type: 'WeighInRecorded' });

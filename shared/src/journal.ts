@@ -1,4 +1,4 @@
-import type { Fate, FindKind, FoundHow, HardnessGrade, Species, VegetationDensity } from './taxonomy.js';
+import type { EventFormat, Fate, FishState, FindKind, FoundHow, HardnessGrade, Species, VegetationDensity } from './taxonomy.js';
 import type { DepthUnit, LengthUnit, TemperatureUnit, WeightUnit } from './units.js';
 
 /** Storage units: what the API stores and returns. Display conversion happens in the client. */
@@ -26,6 +26,8 @@ export interface EventRules {
   deadFishPenaltyLb: number;
   shortFishPenaltyLb: number;
   latePenaltyLbPerMinute: number;
+  /** Team (one bag per boat) or individual (a bag per angler). */
+  format: EventFormat;
 }
 
 export const DEFAULT_EVENT_RULES: EventRules = {
@@ -34,7 +36,18 @@ export const DEFAULT_EVENT_RULES: EventRules = {
   deadFishPenaltyLb: 0.25,
   shortFishPenaltyLb: 1,
   latePenaltyLbPerMinute: 1,
+  format: 'team',
 };
+
+/** The field an event or a day was fished against, from the results sheet (all optional). */
+export interface FieldContext {
+  /** Boats (team) or anglers (individual) in the field: a positive integer. */
+  fieldSize: number | null;
+  /** The winning weight (lb). */
+  winningLb: number | null;
+  /** The weight that made the cut or the money (lb). */
+  cutLb: number | null;
+}
 
 export interface EventView {
   id: string;
@@ -48,6 +61,8 @@ export interface EventView {
   entryFee: number | null;
   payout: number | null;
   finalPlace: number | null;
+  /** The event's field (results sheet); optional so fixtures can build views without it. */
+  field?: FieldContext;
   notes: string;
   /** Always set by the API. */
   version?: number;
@@ -108,6 +123,8 @@ export interface CatchView {
   /** Relative weight looks implausible for the length: flagged for a second look, never changed. */
   weightFlagged: boolean;
   // The fields below are always set by the API; optional only so fixtures can build views without them.
+  /** The crew member who logged the catch (null for catches logged before this was recorded). */
+  loggedBy?: { userId: string; name: string } | null;
   competitionDayId?: string;
   /** Name of the find in findId (null without one). */
   findName?: string | null;
@@ -220,6 +237,7 @@ export interface CreateEventRequest {
   entryFee?: number | null;
   payout?: number | null;
   finalPlace?: number | null;
+  field?: Partial<FieldContext>;
   notes?: string;
 }
 /** lakeId cannot change. Dropping a date with finds or catches on it gets 409 "day_in_use". */
@@ -307,6 +325,10 @@ export interface RecordWeighInRequest {
   officialLb?: number | null;
   dayPlace?: number | null;
   lateMinutes?: number | null;
+  /** The day's field from the results sheet. */
+  fieldSize?: number | null;
+  winningLb?: number | null;
+  cutLb?: number | null;
   /** The version of the recorded weigh-in this change is based on; omitted only for the first recording. */
   version?: number;
 }
@@ -317,21 +339,70 @@ export interface OfficialWeighIn {
   officialLb: number | null;
   dayPlace: number | null;
   lateMinutes: number | null;
+  /** The day's field (optional so older fixtures can build views without it). */
+  fieldSize?: number | null;
+  winningLb?: number | null;
+  cutLb?: number | null;
   /** Send it back with the next PUT (409 "stale_version" when someone saved in between). */
   version?: number;
 }
 
-export interface ComputedBag {
-  /** Catch ids counted, heaviest net value first. */
+/** What the bag rule made of one fish. */
+export interface BagFishVerdict {
+  catchId: string;
+  state: FishState;
+  /** In the counted bag (a counted dead fish has state 'dead' and counted true). */
+  counted: boolean;
+  /** Reached the scale: counted fish and short fish brought in; culled and released fish never do. */
+  weighed: boolean;
+  penaltyLb: number;
+}
+
+/** One penalty, itemised. */
+export interface BagPenaltyItem {
+  kind: 'dead' | 'short' | 'late';
+  catchId: string | null;
+  lb: number;
+  minutes?: number;
+}
+
+/** One bag (the boat's in a team event, an angler's in an individual one). */
+export interface BagView {
+  /** The angler of an individual bag; null for a team bag. */
+  anglerId: string | null;
+  /** Catch ids counted, highest value first. */
   counted: string[];
-  /** Every other catch of the day (culled, short, released …). */
-  culled: string[];
-  /** Short fish (under the minimum length): a subset of culled. */
-  short: string[];
+  fish: BagFishVerdict[];
+  penalties: BagPenaltyItem[];
+  grossLb: number;
+  penaltyLb: number;
+  netLb: number;
+  /** Live bag: the counted fish a better one replaces (null while the limit is not filled). */
+  nextToCull: string | null;
+  /** A new legal live fish improves the bag when it weighs more than this (0 while the limit is not filled). */
+  mustBeatLb: number;
+}
+
+/** A day's bags by the one bag rule (analytics dayBag), with the day's sums. */
+export interface ComputedBag {
+  format: EventFormat;
+  bags: BagView[];
+  /** Every counted catch of the day. */
+  counted: string[];
+  /** Every catch of the day, with its state. */
+  fish: BagFishVerdict[];
+  penalties: BagPenaltyItem[];
   grossLb: number;
   /** Dead and short fish penalties, plus the late penalty when the official lateMinutes is known. */
   penaltyLb: number;
   netLb: number;
+}
+
+/** Official figure minus Shoalbook's own computation (null where the official one is not entered). */
+export interface OfficialDifference {
+  grossLb: number | null;
+  penaltyLb: number | null;
+  netLb: number | null;
 }
 
 export interface WeighInDayView {
@@ -339,6 +410,8 @@ export interface WeighInDayView {
   date: string;
   computed: ComputedBag;
   official: OfficialWeighIn | null;
+  /** Official minus computed, beside both (neither is ever overwritten). */
+  difference: OfficialDifference;
   catches: CatchView[];
 }
 
@@ -348,7 +421,10 @@ export interface WeighInsView {
     computedNetLb: number;
     /** Sum over days of the official weight where recorded, else the computed net. */
     officialLb: number;
+    /** officialLb − computedNetLb. */
+    differenceLb: number;
     finalPlace: number | null;
+    field: FieldContext;
   };
 }
 

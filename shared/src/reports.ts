@@ -1,5 +1,5 @@
-import type { EventRules } from './journal.js';
-import type { Fate, FindKind, Species } from './taxonomy.js';
+import type { BagPenaltyItem, EventRules, FieldContext, OfficialDifference } from './journal.js';
+import type { Fate, FindKind, FishState, Species } from './taxonomy.js';
 
 // Reports (issue 5): routes under /api/crews/:crewId/reports/. Weights in lb, depths in ft, temperatures in °F,
 // instants ISO-8601 UTC, dates YYYY-MM-DD local to the lake. Rates are fractions 0–1.
@@ -183,12 +183,32 @@ export interface ReportFish {
   day: string;
 }
 
+/** A fish of a recap day with what the bag rule made of it. */
+export interface RecapFish extends ReportFish {
+  state: FishState;
+  /** Reached the scale (counted fish and short fish brought in). */
+  weighed: boolean;
+  penaltyLb: number;
+}
+
+/** A place and a weight read against the field the angler entered (analytics fieldStanding). */
+export interface StandingView {
+  /** "26th of 180 (top 15 %)"; null without a place. */
+  place: string | null;
+  topPercent: number | null;
+  behindWinnerLb: number | null;
+  overCutLb: number | null;
+  readings: string[];
+}
+
 export interface RecapDay {
   competitionDayId: string;
   date: string;
-  /** Computed with @shoalbook/analytics countedBag under the event's rules. */
+  /** The counted fish by the one bag rule (@shoalbook/analytics dayBag) under the event's rules. */
   counted: ReportFish[];
-  culled: ReportFish[];
+  /** Every fish of the day, with its state (counted, culled, released, short or dead). */
+  fish: RecapFish[];
+  penalties: BagPenaltyItem[];
   grossLb: number;
   penaltyLb: number;
   netLb: number;
@@ -199,7 +219,13 @@ export interface RecapDay {
     dayPlace: number | null;
     lateMinutes: number | null;
   } | null;
+  /** Official minus computed, beside both. */
+  difference: OfficialDifference;
   dayPlace: number | null;
+  /** The day's field from the results sheet. */
+  field: FieldContext;
+  /** The day's place and weight (official where entered) against its field. */
+  standing: StandingView;
 }
 
 export interface EventRecapView {
@@ -210,10 +236,14 @@ export interface EventRecapView {
     dates: { practice: string[]; competition: string[] };
     rules: EventRules;
     finalPlace: number | null;
+    field: FieldContext;
   };
   days: RecapDay[];
-  /** officialLb: per day the official weight where recorded, else the computed net. */
-  totals: { netLb: number; officialLb: number; finalPlace: number | null };
+  /**
+   * officialLb: per day the official weight where recorded, else the computed net; differenceLb = officialLb −
+   * netLb; standing: the final place and the total against the event's field.
+   */
+  totals: { netLb: number; officialLb: number; differenceLb: number; finalPlace: number | null; standing: StandingView };
   producingFinds: {
     findId: string;
     name: string;

@@ -53,6 +53,21 @@ export const SPECIES_LABELS: Record<Species, string> = {
 export const FATES = ['weighed', 'culled', 'released', 'dead'] as const;
 export type Fate = (typeof FATES)[number];
 
+/** What the day's bag rule (analytics dayBag) made of a fish; labelled on screen exactly as below. */
+export const FISH_STATES = ['counted', 'culled', 'released', 'short', 'dead'] as const;
+export type FishState = (typeof FISH_STATES)[number];
+export const FISH_STATE_LABELS: Record<FishState, string> = {
+  counted: 'Counted',
+  culled: 'Culled',
+  released: 'Released',
+  short: 'Short fish',
+  dead: 'Dead fish',
+};
+
+/** Team: one bag per boat from both anglers' fish. Individual: a bag per angler. The event's own rules. */
+export const EVENT_FORMATS = ['team', 'individual'] as const;
+export type EventFormat = (typeof EVENT_FORMATS)[number];
+
 /** Hardness grade 1 (soft: faint, fuzzy double echo) … 5 (very hard: strong, sharp double echo). */
 export const HARDNESS_GRADES = [1, 2, 3, 4, 5] as const;
 export type HardnessGrade = (typeof HARDNESS_GRADES)[number];

@@ -7,6 +7,8 @@ export interface CatchViewContext {
   competitionDate: string;
   findName: string | null;
   sky: SkyContext | null;
+  /** The display name of the crew member in `loggedBy` (null when unknown). */
+  loggedByName: string | null;
 }
 
 export function catchView(c: Catch, ctx: CatchViewContext): CatchView {
@@ -32,6 +34,7 @@ export function catchView(c: Catch, ctx: CatchViewContext): CatchView {
     notes: c.notes,
     photoId: c.photoId,
     weightFlagged: c.weightFlagged,
+    loggedBy: c.loggedBy ? { userId: c.loggedBy, name: ctx.loggedByName ?? '' } : null,
     entered: {
       weight: enteredWeightOf(c.weightValue, c.weightUnit, c.weightOunces),
       length: enteredOf<EnteredLength['unit']>(c.lengthValue, c.lengthUnit),

@@ -31,6 +31,7 @@ export class Catch {
     | 'waterTempUnit'
     | 'notes'
     | 'photoId'
+    | 'loggedBy'
     | 'version'
     | 'createdAt'
     | 'updatedAt';
@@ -122,6 +123,10 @@ export class Catch {
 
   @Property({ type: 'uuid', nullable: true })
   photoId: string | null = null;
+
+  /** The crew member (user id) who logged the catch, from the session; null for catches from before it was kept. */
+  @Property({ type: 'uuid', nullable: true })
+  loggedBy: string | null = null;
 
   @Property({ type: 'integer', version: true })
   version: number = 1;

@@ -10,6 +10,7 @@ import { canSeePositions } from '../journal/positions';
 import { Lake } from '../lakes/lake.entity';
 import { Photo } from '../photos/photo.entity';
 import { SkyService } from '../sky/sky.service';
+import { User } from '../users/user.entity';
 import { Catch } from './catch.entity';
 import type { CatchContext, ImportCatchContext } from './catch-input';
 import { catchView } from './catch-view';
@@ -71,6 +72,7 @@ export class CatchesService {
     const lakes = new Map(
       (lakeIds.length ? await em.find(Lake, { id: { $in: lakeIds }, crewId }) : []).map((l) => [l.id, l]),
     );
+    const names = await this.names(em, ids('loggedBy'));
     const showPositions = canSeePositions(access);
     return catches.map((c) => {
       const lake = lakes.get(events.get(c.eventId)!)!;
@@ -79,8 +81,16 @@ export class CatchesService {
         competitionDate: days.get(c.competitionDayId)!.date,
         findName: c.findId ? (finds.get(c.findId) ?? null) : null,
         sky: this.sky.at(lake, c.caughtAt),
+        loggedByName: c.loggedBy ? (names.get(c.loggedBy) ?? null) : null,
       });
     });
+  }
+
+  /** Display names of crew members by user id. */
+  private async names(em: EntityManager, userIds: string[]): Promise<Map<string, string>> {
+    if (!userIds.length) return new Map();
+    const users = await em.find(User, { id: { $in: userIds } }, { fields: ['id', 'displayName'] });
+    return new Map(users.map((u) => [u.id, u.displayName]));
   }
 
   /** The view of a catch just checked in `ctx`: the day, lake and find are already at hand, so nothing is read again. */
@@ -91,6 +101,7 @@ export class CatchesService {
       competitionDate: ctx.day.date,
       findName: find?.name ?? null,
       sky: this.sky.at(ctx.lake, c.caughtAt),
+      loggedByName: c.loggedBy ? ((await this.names(this.em, [c.loggedBy])).get(c.loggedBy) ?? null) : null,
     });
   }
 

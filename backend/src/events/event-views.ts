@@ -18,10 +18,12 @@ export function eventView(e: TournamentEvent): EventView {
       deadFishPenaltyLb: e.deadFishPenaltyLb,
       shortFishPenaltyLb: e.shortFishPenaltyLb,
       latePenaltyLbPerMinute: e.latePenaltyLbPerMinute,
+      format: e.format,
     },
     entryFee: e.entryFee,
     payout: e.payout,
     finalPlace: e.finalPlace,
+    field: { fieldSize: e.fieldSize, winningLb: e.winningLb, cutLb: e.cutLb },
     notes: e.notes,
     version: e.version,
   };

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import type { EventFormat } from '@shoalbook/shared';
 import { Entity, OptionalProps, Index, PrimaryKey, Property } from '@mikro-orm/core';
 
 /**
@@ -20,6 +21,10 @@ export class TournamentEvent {
     | 'entryFee'
     | 'payout'
     | 'finalPlace'
+    | 'format'
+    | 'fieldSize'
+    | 'winningLb'
+    | 'cutLb'
     | 'notes'
     | 'version'
     | 'createdAt'
@@ -62,6 +67,10 @@ export class TournamentEvent {
   @Property({ type: 'double' })
   latePenaltyLbPerMinute: number = 1;
 
+  /** Team (one bag per boat) or individual (a bag per angler): part of the event's rules. */
+  @Property({ type: 'string', length: 10 })
+  format: EventFormat = 'team';
+
   @Property({ type: 'double', nullable: true })
   entryFee: number | null = null;
 
@@ -70,6 +79,16 @@ export class TournamentEvent {
 
   @Property({ type: 'integer', nullable: true })
   finalPlace: number | null = null;
+
+  /** The event's field from the results sheet: its size, the winning and the cut weight (lb). */
+  @Property({ type: 'integer', nullable: true })
+  fieldSize: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  winningLb: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  cutLb: number | null = null;
 
   @Property({ type: 'text' })
   notes: string = '';

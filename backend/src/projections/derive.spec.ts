@@ -1,3 +1,4 @@
+import { countBagStates } from './bag-states';
 import fc from 'fast-check';
 import { hitRates } from '@shoalbook/analytics';
 import { describe, expect, it } from 'vitest';
@@ -94,6 +95,8 @@ describe('derived rows against analytics hitRates', () => {
           const state = new ProjectionState(false);
           const applier = new JournalApplier(state);
           for (const e of journal(finds, catches)) applier.apply(e);
+          // As the rebuild does: each catch's state under its day's bag rule.
+          countBagStates(state.catches.rows.values(), (id) => state.events.get(id)?.rules);
           const facts = [...state.catches.rows.values()];
           const outcomes = [...state.finds.rows.values()].flatMap((f) =>
             deriveOutcomes(
@@ -127,7 +130,8 @@ describe('derived rows against analytics hitRates', () => {
             id: c.id,
             findId: c.findId ? `${c.findId}|${c.eventId}` : null,
             weightLb: c.weightLb,
-            fate: c.fate as 'weighed',
+            // "Weighed" is the counted bag's verdict, whatever the logged fate.
+            fate: c.bagCounted ? ('weighed' as const) : ('released' as const),
           }));
           for (const grouping of FIND_GROUPINGS) {
             const reference = hitRates(pairs, refCatches, { by: grouping });

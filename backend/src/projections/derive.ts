@@ -7,7 +7,7 @@ export const FIND_GROUPINGS = ['kind', 'subKind', 'depthBand', 'hardness', 'temp
 export const CATCH_GROUPINGS = ['solunarPeriod', 'timeOfDay'] as const;
 
 /** What group statistics read of a catch. */
-export type CatchForStats = Pick<CatchRow, 'eventId' | 'fate' | 'weightUlb' | 'solunarPeriod' | 'timeOfDay'>;
+export type CatchForStats = Pick<CatchRow, 'eventId' | 'bagCounted' | 'weightUlb' | 'solunarPeriod' | 'timeOfDay'>;
 
 const safe = (band: () => string | null): string => {
   try {
@@ -30,7 +30,10 @@ export function findKeys(
   };
 }
 
-/** What outcomes and group statistics need of a set of catches: counts, integer micro-pound sums, first bite. */
+/**
+ * What outcomes and group statistics need of a set of catches: counts, integer micro-pound sums, first bite.
+ * "Weighed" is the counted bag (the one bag rule's verdict, bag-states.ts), not a fate of its own.
+ */
 export interface CatchSums {
   fishCount: number;
   weighedCount: number;
@@ -40,12 +43,12 @@ export interface CatchSums {
 }
 
 /** The sums of some catches (the rebuild's path; incremental batches get the same sums from SQL GROUP BY). */
-export function sumCatches(catches: Iterable<Pick<CatchRow, 'fate' | 'weightUlb' | 'caughtAtMs'>>): CatchSums {
+export function sumCatches(catches: Iterable<Pick<CatchRow, 'bagCounted' | 'weightUlb' | 'caughtAtMs'>>): CatchSums {
   const s: CatchSums = { fishCount: 0, weighedCount: 0, weightUlb: 0, weighedWeightUlb: 0, firstBiteAtMs: null };
   for (const c of catches) {
     s.fishCount++;
     s.weightUlb += c.weightUlb;
-    if (c.fate === 'weighed') {
+    if (c.bagCounted) {
       s.weighedCount++;
       s.weighedWeightUlb += c.weightUlb;
     }
@@ -167,7 +170,7 @@ export function catchGroupSums(catches: readonly CatchForStats[]): CatchGroupSum
         );
       g.fishCount++;
       g.weightUlb += c.weightUlb;
-      if (c.fate === 'weighed') {
+      if (c.bagCounted) {
         g.weighedCount++;
         g.weighedWeightUlb += c.weightUlb;
       }

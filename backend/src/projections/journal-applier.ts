@@ -5,6 +5,11 @@ import type { ProjectionState } from './projection-state';
 import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, type StopRow, toMicroLb } from './rows';
 
 type Payload = Record<string, unknown>;
+/** A catch as its journal event gives it, before the derived fields. */
+type CatchBase = Omit<
+  CatchRow,
+  'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay' | 'bagState' | 'bagCounted'
+>;
 
 const UTC_PLACE = { lat: 0, lon: 0, timeZone: 'UTC' };
 
@@ -48,6 +53,7 @@ function eventRow(crewId: string, p: Payload): EventRow {
     deadFishPenaltyLb: num(p.deadFishPenaltyLb) ?? 0,
     shortFishPenaltyLb: num(p.shortFishPenaltyLb) ?? 0,
     latePenaltyLbPerMinute: num(p.latePenaltyLbPerMinute) ?? 0,
+    format: p.format === 'individual' ? 'individual' : 'team',
   };
   return {
     id: str(p.id),
@@ -61,6 +67,9 @@ function eventRow(crewId: string, p: Payload): EventRow {
     year: firstDate ? Number(firstDate.slice(0, 4)) : null,
     rules,
     finalPlace: num(p.finalPlace),
+    fieldSize: num(p.fieldSize),
+    winningLb: num(p.winningLb),
+    cutLb: num(p.cutLb),
   };
 }
 
@@ -147,17 +156,22 @@ export class JournalApplier {
 
   private putEvent(crewId: string, p: Payload): void {
     const row = eventRow(crewId, p);
+    const before = this.state.events.get(row.id);
     this.state.events.put(row.id, row);
     this.state.dirtyEvents.add(row.id);
+    // New rules recount every day of the event.
+    const recount = !before || JSON.stringify(before.rules) !== JSON.stringify(row.rules);
+    if (recount) for (const d of this.state.days.rows.values()) if (d.eventId === row.id) this.state.dirtyDays.add(d.id);
     if (!Array.isArray(p.competitionDays)) return;
     const kept = new Set<string>();
     for (const raw of p.competitionDays as Payload[]) {
       const id = str(raw.id);
       if (!id) continue;
       kept.add(id);
-      const before = this.state.days.get(id);
-      const day: DayRow = before
-        ? { ...before, date: str(raw.date, before.date) }
+      if (recount) this.state.dirtyDays.add(id);
+      const old = this.state.days.get(id);
+      const day: DayRow = old
+        ? { ...old, date: str(raw.date, old.date) }
         : {
             id,
             crewId,
@@ -169,6 +183,9 @@ export class JournalApplier {
             officialLb: null,
             dayPlace: null,
             lateMinutes: null,
+            fieldSize: null,
+            winningLb: null,
+            cutLb: null,
           };
       this.state.days.put(id, day);
     }
@@ -201,10 +218,7 @@ export class JournalApplier {
   private putCatch(crewId: string, p: Payload): void {
     const caughtAtMs = Date.parse(str(p.caughtAt));
     const weightLb = num(p.weightLb) ?? 0;
-    const base: Omit<
-      CatchRow,
-      'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'
-    > = {
+    const base: CatchBase = {
       id: str(p.id),
       crewId,
       eventId: str(p.eventId),
@@ -219,16 +233,14 @@ export class JournalApplier {
       lure: str(p.lure).slice(0, 120),
       lat: num(p.lat),
       lon: num(p.lon),
+      loggedBy: strOrNull(p.loggedBy),
     };
     const before = this.state.catches.get(base.id);
     this.putCatchRow(this.deriveCatch(base, before));
   }
 
   /** The derived fields of a catch: its lake (through the event), its day's date and its timing. */
-  private deriveCatch(
-    c: Omit<CatchRow, 'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay'>,
-    before?: CatchRow,
-  ): CatchRow {
+  private deriveCatch(c: CatchBase, before?: CatchRow): CatchRow {
     const event = this.state.events.get(c.eventId);
     const lakeId = event?.lakeId ?? before?.lakeId ?? '';
     const lake = this.state.lakes.get(lakeId);
@@ -256,6 +268,10 @@ export class JournalApplier {
       minutesFromSunrise: t.minutesFromSunrise,
       solunarPeriod: t.solunarPeriod,
       timeOfDay: t.timeOfDay,
+      loggedBy: c.loggedBy,
+      // Set when the day is counted (bag-states.ts), after the batch; kept meanwhile so an unchanged day stays.
+      bagState: before?.bagState ?? '',
+      bagCounted: before?.bagCounted ?? false,
     };
   }
 
@@ -263,6 +279,8 @@ export class JournalApplier {
     const before = this.state.catches.get(row.id);
     if (before?.findId) this.state.dirtyFinds.add(before.findId);
     if (before) this.state.dirtyEvents.add(before.eventId);
+    if (before) this.state.dirtyDays.add(before.competitionDayId);
+    this.state.dirtyDays.add(row.competitionDayId);
     this.state.catches.put(row.id, row);
     if (row.findId) this.state.dirtyFinds.add(row.findId);
     this.state.dirtyEvents.add(row.eventId);
@@ -272,6 +290,7 @@ export class JournalApplier {
     const before = this.state.catches.get(id);
     if (before?.findId) this.state.dirtyFinds.add(before.findId);
     if (before) this.state.dirtyEvents.add(before.eventId);
+    if (before) this.state.dirtyDays.add(before.competitionDayId);
     this.state.catches.delete(id);
   }
 
@@ -322,6 +341,9 @@ export class JournalApplier {
       officialLb: num(p.officialLb),
       dayPlace: num(p.dayPlace),
       lateMinutes: num(p.lateMinutes),
+      fieldSize: num(p.fieldSize),
+      winningLb: num(p.winningLb),
+      cutLb: num(p.cutLb),
     });
   }
 }

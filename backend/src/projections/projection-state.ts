@@ -55,6 +55,8 @@ export class ProjectionState {
   readonly dirtyFinds = new Set<string>();
   /** Events whose rm_group_stats rows must be recomputed. */
   readonly dirtyEvents = new Set<string>();
+  /** Competition days whose catches' bag states must be counted again (bag-states.ts). */
+  readonly dirtyDays = new Set<string>();
 
   /** @param track record changed ids (incremental batches); a rebuild writes everything instead. */
   constructor(readonly track: boolean) {

@@ -1,4 +1,5 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
+import { countBagStates } from './bag-states';
 import {
   CATCH_GROUPINGS,
   type CatchGroupSums,
@@ -32,9 +33,9 @@ const instant = (v: unknown): number | null =>
       ? v.getTime()
       : Date.parse(`${String(v).replace(' ', 'T')}Z`);
 
-/** The same sums as derive.ts sumCatches, in SQL (integer micro-pounds: exact in any order). */
+/** The same sums as derive.ts sumCatches, in SQL (integer micro-pounds: exact in any order); weighed = counted in the bag. */
 const SUM_COLUMNS =
-  "COUNT(*) AS fish_count, SUM(fate = 'weighed') AS weighed_count, SUM(weight_ulb) AS weight_ulb, SUM(IF(fate = 'weighed', weight_ulb, 0)) AS weighed_weight_ulb";
+  'COUNT(*) AS fish_count, SUM(bag_counted) AS weighed_count, SUM(weight_ulb) AS weight_ulb, SUM(IF(bag_counted, weight_ulb, 0)) AS weighed_weight_ulb';
 const sumsOf = (r: Row) => ({
   fishCount: Number(r.fish_count),
   weighedCount: Number(r.weighed_count),
@@ -139,6 +140,7 @@ export class ReadModelStore {
     await writeChanges(tx, FIND_TABLE, state.finds);
     await writeChanges(tx, CATCH_TABLE, state.catches);
     await writeChanges(tx, STOP_TABLE, state.stops);
+    await countDirtyDays(tx, state);
 
     const dirtyFinds = [...state.dirtyFinds];
     const dirtyEvents = new Set(state.dirtyEvents);
@@ -210,6 +212,22 @@ export class ReadModelStore {
       for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);
     }
   }
+}
+
+/** Counts the bags of the batch's dirty days again and writes the catches whose state changed. */
+export async function countDirtyDays(tx: EntityManager, state: ProjectionState): Promise<void> {
+  const days = [...state.dirtyDays];
+  if (!days.length) return;
+  const catches = await select(tx, CATCH_TABLE, inList('competition_day_id', days));
+  const missing = [...new Set(catches.map((c) => c.eventId))].filter((id) => !state.events.rows.has(id));
+  for (const ev of await select(tx, EVENT_TABLE, inList('id', missing))) state.events.load(ev.id, ev);
+  const changed = countBagStates(catches, (id) => state.events.get(id)?.rules);
+  // A fish counted or dropped changes its find's outcome and its event's statistics.
+  for (const c of changed) {
+    if (c.findId) state.dirtyFinds.add(c.findId);
+    state.dirtyEvents.add(c.eventId);
+  }
+  for (const sql of insertChunks(CATCH_TABLE, changed, true)) await tx.execute(sql);
 }
 
 /** `(crew_id = … AND event_id IN (…)) OR …` for some events; `FALSE` for none. */

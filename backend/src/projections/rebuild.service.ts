@@ -1,3 +1,4 @@
+import { countBagStates } from './bag-states';
 import { MikroORM } from '@mikro-orm/mariadb';
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
@@ -77,6 +78,7 @@ export async function rebuildReadModels(
         options.onProgress?.({ seq: last, maxSeq, events, phase: 'replay' });
       }
 
+      countBagStates(state.catches.rows.values(), (id) => state.events.get(id)?.rules);
       const catchesByFind = groupBy(state.catches.rows.values(), (c) => c.findId);
       const stopsByFind = groupBy(state.stops.rows.values(), (s) => s.findId);
       const outcomes: OutcomeRow[] = [];

@@ -23,6 +23,9 @@ export interface EventRow {
   year: number | null;
   rules: EventRules;
   finalPlace: number | null;
+  fieldSize: number | null;
+  winningLb: number | null;
+  cutLb: number | null;
 }
 
 export interface DayRow {
@@ -36,6 +39,9 @@ export interface DayRow {
   officialLb: number | null;
   dayPlace: number | null;
   lateMinutes: number | null;
+  fieldSize: number | null;
+  winningLb: number | null;
+  cutLb: number | null;
 }
 
 export interface FindRow {
@@ -75,6 +81,11 @@ export interface CatchRow {
   minutesFromSunrise: number | null;
   solunarPeriod: string;
   timeOfDay: string;
+  loggedBy: string | null;
+  /** The fish's state under its day's bag rule (bag-states.ts); '' until the day is counted. */
+  bagState: string;
+  /** In the day's counted bag: what the "weighed" counts and weights of outcomes and statistics sum. */
+  bagCounted: boolean;
 }
 
 export interface StopRow {

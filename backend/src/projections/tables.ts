@@ -24,6 +24,9 @@ export const EVENT_TABLE = tableSpec<EventRow>('rm_event', ['id'], {
   year: 'num',
   rules: 'json',
   finalPlace: 'num',
+  fieldSize: 'num',
+  winningLb: 'num',
+  cutLb: 'num',
 });
 
 export const DAY_TABLE = tableSpec<DayRow>('rm_competition_day', ['id'], {
@@ -37,6 +40,9 @@ export const DAY_TABLE = tableSpec<DayRow>('rm_competition_day', ['id'], {
   officialLb: 'num',
   dayPlace: 'num',
   lateMinutes: 'num',
+  fieldSize: 'num',
+  winningLb: 'num',
+  cutLb: 'num',
 });
 
 export const FIND_TABLE = tableSpec<FindRow>('rm_find', ['id'], {
@@ -75,6 +81,9 @@ export const CATCH_TABLE = tableSpec<CatchRow>('rm_catch_fact', ['id'], {
   minutesFromSunrise: 'num',
   solunarPeriod: 'str',
   timeOfDay: 'str',
+  loggedBy: 'str',
+  bagState: 'str',
+  bagCounted: 'bool',
 });
 
 export const STOP_TABLE = tableSpec<StopRow>('rm_stop', ['id'], {

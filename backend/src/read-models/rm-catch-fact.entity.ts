@@ -7,10 +7,10 @@ import type { Fate, Species } from '@shoalbook/shared';
  * `weightUlb` is the weight in micro-pounds (integer), so sums are exact whatever order rows are added in.
  */
 @Entity({ tableName: 'rm_catch_fact' })
-// Covers the projector's per-event catch-grouping sums (Migration20261221000000).
+// Covers the projector's per-event catch-grouping sums (Migration20261221000000, Migration20261230000000).
 @Index({
   name: 'rm_catch_fact_event_groups_index',
-  properties: ['eventId', 'solunarPeriod', 'timeOfDay', 'fate', 'weightUlb'],
+  properties: ['eventId', 'solunarPeriod', 'timeOfDay', 'bagCounted', 'weightUlb'],
 })
 @Index({ name: 'rm_catch_fact_find_index', properties: ['findId'] })
 @Index({ name: 'rm_catch_fact_crew_lake_index', properties: ['crewId', 'lakeId'] })
@@ -77,4 +77,16 @@ export class RmCatchFact {
   /** early | morning | midday | afternoon | late (TIME_OF_DAY_BANDS). */
   @Property({ type: 'string', length: 10 })
   timeOfDay: string;
+
+  /** The crew member who logged it (an individual event's bag is per angler). */
+  @Property({ type: 'uuid', nullable: true })
+  loggedBy: string | null = null;
+
+  /** The fish's state under the day's bag rule (analytics dayBag): counted, culled, released, short or dead. */
+  @Property({ type: 'string', length: 10 })
+  bagState: string = '';
+
+  /** In the day's counted bag (a counted dead fish too). */
+  @Property({ type: 'boolean' })
+  bagCounted: boolean = false;
 }

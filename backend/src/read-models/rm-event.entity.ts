@@ -38,4 +38,14 @@ export class RmEvent {
 
   @Property({ type: 'integer', nullable: true })
   finalPlace: number | null = null;
+
+  /** The field from the results sheet: its size, the winning and the cut weight (lb). */
+  @Property({ type: 'integer', nullable: true })
+  fieldSize: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  winningLb: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  cutLb: number | null = null;
 }

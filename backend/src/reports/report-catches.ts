@@ -11,6 +11,8 @@ export interface ReportCatch extends ReportFish {
   solunarPeriod: string;
   lat: number | null;
   lon: number | null;
+  /** The crew member who logged it (an individual event's bag is per angler). */
+  loggedBy: string | null;
 }
 
 const instant = (v: unknown): number =>
@@ -24,7 +26,7 @@ export async function selectCatches(
 ): Promise<ReportCatch[]> {
   const rows: Record<string, unknown>[] = await em.execute(
     `SELECT c.id, c.event_id, c.competition_day_id, c.day_date, c.find_id, c.caught_at, c.weight_lb, c.length_in, c.species, c.fate, c.lure,
-            c.lat, c.lon, c.local_minutes, c.minutes_from_sunrise, c.solunar_period, f.name AS find_name
+            c.lat, c.lon, c.logged_by, c.local_minutes, c.minutes_from_sunrise, c.solunar_period, f.name AS find_name
        FROM rm_catch_fact c LEFT JOIN rm_find f ON f.id = c.find_id AND f.crew_id = c.crew_id
       WHERE ${where} ORDER BY c.caught_at, c.id${limit ? ` LIMIT ${Math.floor(limit)}` : ''}`,
     params,
@@ -47,6 +49,7 @@ export async function selectCatches(
       lure: String(r.lure ?? ''),
       lat: r.lat === null ? null : Number(r.lat),
       lon: r.lon === null ? null : Number(r.lon),
+      loggedBy: (r.logged_by as string | null) ?? null,
       localMinutes: Number(r.local_minutes),
       minutesFromSunrise: r.minutes_from_sunrise === null ? null : Number(r.minutes_from_sunrise),
       solunarPeriod: String(r.solunar_period),

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import type { ReportEventRef, ReportFilters, Season } from '@shoalbook/shared';
-import type { EventRules } from '@shoalbook/shared';
+import type { EventRules, FieldContext } from '@shoalbook/shared';
 
 /** An event as the report queries read it from rm_event. */
 export interface ReportEvent extends ReportEventRef {
@@ -9,9 +9,12 @@ export interface ReportEvent extends ReportEventRef {
   competitionDates: string[];
   rules: EventRules;
   finalPlace: number | null;
+  field: FieldContext;
 }
 
 const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T) : (v as T));
+/** Rules projected before the format existed read as a team event. */
+const withFormat = (rules: EventRules): EventRules => ({ ...rules, format: rules.format ?? 'team' });
 
 /** Each report filter and the condition it puts on rm_event (alias e). */
 const FILTER_CONDITIONS: readonly [keyof ReportFilters, string][] = [
@@ -40,7 +43,7 @@ export async function selectEvents(
   extra: { ids?: string[] } = {},
 ): Promise<ReportEvent[]> {
   const where = eventWhere(crewId, f);
-  let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place FROM rm_event e WHERE ${where.sql}`;
+  let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place, e.field_size, e.winning_lb, e.cut_lb FROM rm_event e WHERE ${where.sql}`;
   const params = [...where.params];
   if (extra.ids) {
     if (!extra.ids.length) return [];
@@ -58,8 +61,13 @@ export async function selectEvents(
     year: r.year === null ? null : Number(r.year),
     practiceDates: json<string[]>(r.practice_dates),
     competitionDates: json<string[]>(r.competition_dates),
-    rules: json<EventRules>(r.rules),
+    rules: withFormat(json<EventRules>(r.rules)),
     finalPlace: r.final_place === null ? null : Number(r.final_place),
+    field: {
+      fieldSize: r.field_size === null ? null : Number(r.field_size),
+      winningLb: r.winning_lb === null ? null : Number(r.winning_lb),
+      cutLb: r.cut_lb === null ? null : Number(r.cut_lb),
+    },
   }));
 }
 

@@ -1,8 +1,23 @@
-import { ApiProperty } from '@nestjs/swagger';
-import type { ComputedBag, OfficialWeighIn, WeighInDayView, WeighInsView } from '@shoalbook/shared';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  EVENT_FORMATS,
+  FISH_STATES,
+  type BagFishVerdict,
+  type BagPenaltyItem,
+  type BagView,
+  type ComputedBag,
+  type EventFormat,
+  type FishState,
+  type OfficialDifference,
+  type OfficialWeighIn,
+  type WeighInDayView,
+  type WeighInsView,
+} from '@shoalbook/shared';
 import { CatchViewDto } from '../catches/dto/catch-view.dto';
+import { FieldContextViewDto } from '../events/dto/field-context.dto';
 
 const nullableNumber = { type: Number, nullable: true } as const;
+const nullableId = { type: String, format: 'uuid', nullable: true } as const;
 
 /** The organiser's figures of one day, with the version to send back on the next PUT. */
 export class OfficialWeighInDto implements OfficialWeighIn {
@@ -11,6 +26,9 @@ export class OfficialWeighInDto implements OfficialWeighIn {
   @ApiProperty({ ...nullableNumber, description: 'lb' }) officialLb: number | null;
   @ApiProperty(nullableNumber) dayPlace: number | null;
   @ApiProperty({ ...nullableNumber, description: 'minutes late at check-in' }) lateMinutes: number | null;
+  @ApiProperty({ ...nullableNumber, description: "the day's field size" }) fieldSize: number | null;
+  @ApiProperty({ ...nullableNumber, description: "the day's winning weight, lb" }) winningLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: "the day's cut weight, lb" }) cutLb: number | null;
   @ApiProperty({ description: 'send it back with the next PUT; 409 "stale_version" when outdated' }) version: number;
 }
 
@@ -18,13 +36,51 @@ export class RecordedWeighInDto extends OfficialWeighInDto {
   @ApiProperty({ format: 'uuid' }) competitionDayId: string;
 }
 
-export class ComputedBagDto implements ComputedBag {
-  @ApiProperty({ type: [String], description: 'catch ids counted, heaviest net first' }) counted: string[];
-  @ApiProperty({ type: [String] }) culled: string[];
-  @ApiProperty({ type: [String], description: 'under the minimum length (a subset of culled)' }) short: string[];
+export class BagFishVerdictDto implements BagFishVerdict {
+  @ApiProperty({ format: 'uuid' }) catchId: string;
+  @ApiProperty({ enum: FISH_STATES }) state: FishState;
+  @ApiProperty({ description: 'in the counted bag (a counted dead fish too)' }) counted: boolean;
+  @ApiProperty({ description: 'reached the scale (never a culled or released fish)' }) weighed: boolean;
+  @ApiProperty({ description: 'lb' }) penaltyLb: number;
+}
+
+export class BagPenaltyItemDto implements BagPenaltyItem {
+  @ApiProperty({ enum: ['dead', 'short', 'late'] }) kind: 'dead' | 'short' | 'late';
+  @ApiProperty(nullableId) catchId: string | null;
+  @ApiProperty({ description: 'lb' }) lb: number;
+  @ApiPropertyOptional({ description: 'minutes late (late penalty only)' }) minutes?: number;
+}
+
+export class BagViewDto implements BagView {
+  @ApiProperty({ type: String, nullable: true, description: "the angler of an individual event's bag" })
+  anglerId: string | null;
+  @ApiProperty({ type: [String], description: 'catch ids counted, highest value first' }) counted: string[];
+  @ApiProperty({ type: [BagFishVerdictDto] }) fish: BagFishVerdictDto[];
+  @ApiProperty({ type: [BagPenaltyItemDto] }) penalties: BagPenaltyItemDto[];
   @ApiProperty({ description: 'lb' }) grossLb: number;
   @ApiProperty({ description: 'lb' }) penaltyLb: number;
   @ApiProperty({ description: 'lb' }) netLb: number;
+  @ApiProperty({ ...nullableId, description: 'the counted fish a better one would replace' }) nextToCull: string | null;
+  @ApiProperty({ description: 'lb: a new legal live fish improves the bag above this (0 while not full)' })
+  mustBeatLb: number;
+}
+
+export class ComputedBagDto implements ComputedBag {
+  @ApiProperty({ enum: EVENT_FORMATS }) format: EventFormat;
+  @ApiProperty({ type: [BagViewDto], description: 'one bag (team) or one per angler (individual)' }) bags: BagViewDto[];
+  @ApiProperty({ type: [String], description: 'catch ids counted' }) counted: string[];
+  @ApiProperty({ type: [BagFishVerdictDto], description: 'every catch of the day with its state' })
+  fish: BagFishVerdictDto[];
+  @ApiProperty({ type: [BagPenaltyItemDto] }) penalties: BagPenaltyItemDto[];
+  @ApiProperty({ description: 'lb' }) grossLb: number;
+  @ApiProperty({ description: 'lb' }) penaltyLb: number;
+  @ApiProperty({ description: 'lb' }) netLb: number;
+}
+
+export class OfficialDifferenceDto implements OfficialDifference {
+  @ApiProperty({ ...nullableNumber, description: 'official − computed, lb' }) grossLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'official − computed, lb' }) penaltyLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'official − computed, lb' }) netLb: number | null;
 }
 
 export class WeighInDayViewDto implements WeighInDayView {
@@ -32,13 +88,16 @@ export class WeighInDayViewDto implements WeighInDayView {
   @ApiProperty({ example: '2024-04-12' }) date: string;
   @ApiProperty({ type: ComputedBagDto }) computed: ComputedBagDto;
   @ApiProperty({ type: OfficialWeighInDto, nullable: true }) official: OfficialWeighInDto | null;
+  @ApiProperty({ type: OfficialDifferenceDto }) difference: OfficialDifferenceDto;
   @ApiProperty({ type: [CatchViewDto] }) catches: CatchViewDto[];
 }
 
 export class WeighInTotalsDto {
   @ApiProperty({ description: 'lb' }) computedNetLb: number;
   @ApiProperty({ description: 'lb: official where recorded, else computed' }) officialLb: number;
+  @ApiProperty({ description: 'officialLb − computedNetLb' }) differenceLb: number;
   @ApiProperty(nullableNumber) finalPlace: number | null;
+  @ApiProperty({ type: FieldContextViewDto }) field: FieldContextViewDto;
 }
 
 export class WeighInsViewDto implements WeighInsView {

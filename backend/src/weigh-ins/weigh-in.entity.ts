@@ -4,7 +4,7 @@ import { Entity, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 /** The official figures of one competition day, as the organiser announced them (all optional). */
 @Entity({ tableName: 'weigh_ins' })
 export class WeighIn {
-  [OptionalProps]?: 'grossLb' | 'penaltyLb' | 'officialLb' | 'dayPlace' | 'lateMinutes' | 'version' | 'updatedAt';
+  [OptionalProps]?: 'grossLb' | 'penaltyLb' | 'officialLb' | 'dayPlace' | 'lateMinutes' | 'fieldSize' | 'winningLb' | 'cutLb' | 'version' | 'updatedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -29,6 +29,16 @@ export class WeighIn {
 
   @Property({ type: 'integer', nullable: true })
   lateMinutes: number | null = null;
+
+  /** The day's field from the results sheet. */
+  @Property({ type: 'integer', nullable: true })
+  fieldSize: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  winningLb: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  cutLb: number | null = null;
 
   @Property({ type: 'integer', version: true })
   version: number = 1;

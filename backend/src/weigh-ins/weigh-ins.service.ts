@@ -5,8 +5,9 @@ import { Catch } from '../catches/catch.entity';
 import { CatchesService } from '../catches/catches.service';
 import type { CrewAccess } from '../common/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
+import { eventView } from '../events/event-views';
 import { EventsService } from '../events/events.service';
-import { computeDayBag } from './day-bag';
+import { bagOfDay, differenceOf } from './bag-rule';
 import { WeighIn } from './weigh-in.entity';
 
 /** The official figures with the version a client sends back on its next PUT. */
@@ -20,6 +21,9 @@ export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
         officialLb: w.officialLb,
         dayPlace: w.dayPlace,
         lateMinutes: w.lateMinutes,
+        fieldSize: w.fieldSize,
+        winningLb: w.winningLb,
+        cutLb: w.cutLb,
         version: w.version,
       }
     : null;
@@ -27,7 +31,10 @@ export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
 
 const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 
-/** The event's weigh-ins: per day the computed bag beside the official figures, and the totals. */
+/**
+ * The event's weigh-ins: per day the bag by the one bag rule beside the official figures and their difference,
+ * and the totals (official where entered). Neither figure ever overwrites the other.
+ */
 @Injectable()
 export class WeighInsService {
   constructor(
@@ -54,12 +61,13 @@ export class WeighInsService {
       ).map((w) => [w.competitionDayId, w]),
     );
     const views = new Map((await this.catches.views(access, catches)).map((v) => [v.id, v]));
+    const rules = eventView(event).rules;
     let computedNetLb = 0;
     let officialLb = 0;
     const out = days.map((day) => {
       const dayCatches = catches.filter((c) => c.competitionDayId === day.id);
       const official = officialOf(weighIns.get(day.id));
-      const computed = computeDayBag(dayCatches, event, official?.lateMinutes ?? null);
+      const computed = bagOfDay(dayCatches, rules, official?.lateMinutes ?? null);
       computedNetLb += computed.netLb;
       officialLb += official?.officialLb ?? computed.netLb;
       return {
@@ -67,12 +75,19 @@ export class WeighInsService {
         date: day.date,
         computed,
         official,
+        difference: differenceOf(official, computed),
         catches: dayCatches.map((c) => views.get(c.id)!),
       };
     });
     return {
       days: out,
-      totals: { computedNetLb: clean(computedNetLb), officialLb: clean(officialLb), finalPlace: event.finalPlace },
+      totals: {
+        computedNetLb: clean(computedNetLb),
+        officialLb: clean(officialLb),
+        differenceLb: clean(officialLb - computedNetLb),
+        finalPlace: event.finalPlace,
+        field: { fieldSize: event.fieldSize, winningLb: event.winningLb, cutLb: event.cutLb },
+      },
     };
   }
 }

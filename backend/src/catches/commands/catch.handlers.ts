@@ -22,6 +22,8 @@ export class LogCatchHandler implements ICommandHandler<LogCatchCommand> {
         crewId: access.crewId,
         eventId: ctx.event.id,
         competitionDayId: ctx.day.id,
+        // Who logged it comes from the session, never from the request body.
+        loggedBy: access.userId,
       });
       const problems = new FieldProblems();
       await applyCatchInput(ctx, c, input, problems);

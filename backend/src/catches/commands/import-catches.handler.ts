@@ -43,7 +43,8 @@ export class ImportCatchesHandler implements ICommandHandler<ImportCatchesComman
           fieldErrors,
         );
       }
-      const records = rows.map((r) => r.record!);
+      // The one who imports the file logged its catches.
+      const records = rows.map((r) => Object.assign(r.record!, { loggedBy: access.userId }));
       await insertRecordsBulk(tx, log, 'Catch', records, (c) => ({
         type: 'CatchLogged',
         aggregateType: 'catch',

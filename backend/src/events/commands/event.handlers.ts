@@ -42,6 +42,15 @@ function applyRules(event: TournamentEvent, input: CreateEventDto | UpdateEventD
   if (r.deadFishPenaltyLb !== undefined) event.deadFishPenaltyLb = r.deadFishPenaltyLb;
   if (r.shortFishPenaltyLb !== undefined) event.shortFishPenaltyLb = r.shortFishPenaltyLb;
   if (r.latePenaltyLbPerMinute !== undefined) event.latePenaltyLbPerMinute = r.latePenaltyLbPerMinute;
+  if (r.format !== undefined) event.format = r.format;
+}
+
+function applyField(event: TournamentEvent, input: CreateEventDto | UpdateEventDto): void {
+  const f = input.field;
+  if (!f) return;
+  if (f.fieldSize !== undefined) event.fieldSize = f.fieldSize;
+  if (f.winningLb !== undefined) event.winningLb = f.winningLb;
+  if (f.cutLb !== undefined) event.cutLb = f.cutLb;
 }
 
 /** The event's state with its days, as its journal events carry it. */
@@ -79,6 +88,7 @@ export class CreateEventHandler implements ICommandHandler<CreateEventCommand> {
         notes: input.notes ?? '',
       });
       applyRules(event, input);
+      applyField(event, input);
       // Foreign keys are plain columns, so the ORM cannot order the inserts: the event goes first.
       await tx.flush();
       for (const date of practice) tx.create(PracticeDay, { crewId: access.crewId, eventId: event.id, date });
@@ -131,6 +141,7 @@ export class UpdateEventHandler implements ICommandHandler<UpdateEventCommand> {
       event.practiceDates = practice;
       event.competitionDates = competition;
       applyRules(event, input);
+      applyField(event, input);
       // A change to the days alone still bumps the event's version, so the journal sees one new state.
       event.updatedAt = new Date();
       await tx.flush();

@@ -1,5 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { CompetitionDayView, EventRules, EventView, PracticeDayView } from '@shoalbook/shared';
+import { EVENT_FORMATS, type CompetitionDayView, type EventFormat, type EventRules, type EventView, type PracticeDayView } from '@shoalbook/shared';
+import { FieldContextViewDto } from './field-context.dto';
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 
 /** The rules as stored (every field set; defaults are common practice). */
@@ -9,6 +10,8 @@ export class EventRulesViewDto implements EventRules {
   @ApiProperty({ description: 'lb' }) deadFishPenaltyLb: number;
   @ApiProperty({ description: 'lb' }) shortFishPenaltyLb: number;
   @ApiProperty({ description: 'lb per minute' }) latePenaltyLbPerMinute: number;
+  @ApiProperty({ enum: EVENT_FORMATS, description: 'team: one bag per boat; individual: a bag per angler' })
+  format: EventFormat;
 }
 
 export class EventViewDto implements EventView {
@@ -22,6 +25,7 @@ export class EventViewDto implements EventView {
   @ApiProperty({ type: Number, nullable: true }) entryFee: number | null;
   @ApiProperty({ type: Number, nullable: true }) payout: number | null;
   @ApiProperty({ type: Number, nullable: true }) finalPlace: number | null;
+  @ApiProperty({ type: FieldContextViewDto }) field: FieldContextViewDto;
   @ApiProperty() notes: string;
   @ApiProperty() version: number;
 }

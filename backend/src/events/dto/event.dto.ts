@@ -1,10 +1,17 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { type CreateEventRequest, type EventRules, isCalendarDate } from '@shoalbook/shared';
+import {
+  EVENT_FORMATS,
+  isCalendarDate,
+  type CreateEventRequest,
+  type EventFormat,
+  type EventRules,
+} from '@shoalbook/shared';
 import {
   ArrayMaxSize,
   IsArray,
   IsInt,
+  IsIn,
   IsNotEmpty,
   IsNumber,
   IsObject,
@@ -21,6 +28,7 @@ import {
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
+import { FieldContextDto } from './field-context.dto';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -60,6 +68,14 @@ export class EventRulesDto implements Partial<EventRules> {
   @Min(0)
   @Max(20)
   latePenaltyLbPerMinute?: number;
+  @ApiPropertyOptional({
+    enum: EVENT_FORMATS,
+    default: 'team',
+    description: 'team: one bag per boat from both anglers’ fish; individual: a bag per angler',
+  })
+  @IsOmittable()
+  @IsIn([...EVENT_FORMATS], { message: 'The format must be team or individual.' })
+  format?: EventFormat;
 }
 
 export class CreateEventDto implements CreateEventRequest {
@@ -88,6 +104,12 @@ export class CreateEventDto implements CreateEventRequest {
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?:
     number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;
+  @ApiPropertyOptional({ type: FieldContextDto, description: 'the field from the results sheet' })
+  @IsOmittable()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => FieldContextDto)
+  field?: FieldContextDto;
   @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
 }
 

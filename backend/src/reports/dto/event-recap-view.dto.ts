@@ -1,16 +1,22 @@
 import { ApiProperty } from '@nestjs/swagger';
 import {
   FATES,
+  FISH_STATES,
   FIND_KINDS,
   SPECIES,
   type EventRecapView,
   type Fate,
   type FindKind,
+  type FishState,
   type RecapDay,
+  type RecapFish,
+  type StandingView,
   type ReportFish,
   type Species,
 } from '@shoalbook/shared';
 import { EventRulesViewDto } from '../../events/dto/event-view.dto';
+import { FieldContextViewDto } from '../../events/dto/field-context.dto';
+import { BagPenaltyItemDto, OfficialDifferenceDto } from '../../weigh-ins/weigh-in-view.dto';
 import { RateDto } from './rate-view.dto';
 
 type Recap = EventRecapView;
@@ -34,6 +40,22 @@ export class ReportFishDto implements ReportFish {
   @ApiProperty({ ...date, description: 'the competition day (lake-local)' }) day: string;
 }
 
+export class RecapFishDto extends ReportFishDto implements RecapFish {
+  @ApiProperty({ enum: FISH_STATES, description: 'what the bag rule made of the fish' }) state: FishState;
+  @ApiProperty({ description: 'reached the scale (counted fish and short fish brought in)' }) weighed: boolean;
+  @ApiProperty({ description: 'lb' }) penaltyLb: number;
+}
+
+export class StandingViewDto implements StandingView {
+  @ApiProperty({ type: String, nullable: true, example: '26th of 180 (top 15 %)' }) place: string | null;
+  @ApiProperty({ ...nullableNumber, description: 'share of the field at or above the place, % rounded up' })
+  topPercent: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'lb behind the winning weight' }) behindWinnerLb: number | null;
+  @ApiProperty({ ...nullableNumber, description: 'lb over the cut weight (negative: short of it)' })
+  overCutLb: number | null;
+  @ApiProperty({ type: [String] }) readings: string[];
+}
+
 export class RecapOfficialDto implements NonNullable<RecapDay['official']> {
   @ApiProperty({ ...nullableNumber, description: 'lb' }) grossLb: number | null;
   @ApiProperty({ ...nullableNumber, description: 'lb' }) penaltyLb: number | null;
@@ -47,13 +69,19 @@ export class RecapDayDto implements RecapDay {
   @ApiProperty(date) date: string;
   @ApiProperty({ type: [ReportFishDto], description: 'the bag under the event’s rules, heaviest first' })
   counted: ReportFishDto[];
-  @ApiProperty({ type: [ReportFishDto] }) culled: ReportFishDto[];
+  @ApiProperty({ type: [RecapFishDto], description: 'every fish of the day with its state' }) fish: RecapFishDto[];
+  @ApiProperty({ type: [BagPenaltyItemDto] }) penalties: BagPenaltyItemDto[];
   @ApiProperty({ description: 'lb' }) grossLb: number;
   @ApiProperty({ description: 'lb' }) penaltyLb: number;
   @ApiProperty({ description: 'lb' }) netLb: number;
   @ApiProperty({ type: RecapOfficialDto, nullable: true, description: 'the organiser’s figures, when recorded' })
   official: RecapOfficialDto | null;
+  @ApiProperty({ type: OfficialDifferenceDto, description: 'official − computed, beside both' })
+  difference: OfficialDifferenceDto;
   @ApiProperty({ type: 'integer', nullable: true }) dayPlace: number | null;
+  @ApiProperty({ type: FieldContextViewDto, description: 'the day’s field from the results sheet' })
+  field: FieldContextViewDto;
+  @ApiProperty({ type: StandingViewDto }) standing: StandingViewDto;
 }
 
 export class RecapLakeDto {
@@ -74,13 +102,17 @@ export class RecapEventDto implements Omit<Recap['event'], 'rules'> {
   @ApiProperty({ type: RecapDatesDto }) dates: RecapDatesDto;
   @ApiProperty({ type: EventRulesViewDto }) rules: EventRulesViewDto;
   @ApiProperty({ type: 'integer', nullable: true }) finalPlace: number | null;
+  @ApiProperty({ type: FieldContextViewDto }) field: FieldContextViewDto;
 }
 
 export class RecapTotalsDto implements RecapTotals {
   @ApiProperty({ description: 'lb' }) netLb: number;
   @ApiProperty({ description: 'lb: per day the official weight where recorded, else the computed net' })
   officialLb: number;
+  @ApiProperty({ description: 'officialLb − netLb' }) differenceLb: number;
   @ApiProperty({ type: 'integer', nullable: true }) finalPlace: number | null;
+  @ApiProperty({ type: StandingViewDto, description: 'the final place and total against the event’s field' })
+  standing: StandingViewDto;
 }
 
 export class ProducingFindDto implements ProducingFind {

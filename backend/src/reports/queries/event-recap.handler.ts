@@ -2,14 +2,16 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import type { EventRecapView, FindKind, RecapDay } from '@shoalbook/shared';
 import { fromMicroLb } from '../../projections/rows';
-import { dayBag } from '../day-bag';
+import { bagOfDay, differenceOf } from '../../weigh-ins/bag-rule';
 import { singleRate } from '../rates';
 import { percent, plural } from '../readings';
-import { reportFish, selectCatches } from '../report-catches';
+import { reportFish, selectCatches, type ReportCatch } from '../report-catches';
+import { standingOf } from '../standing';
 import { findLake, selectEvents } from '../report-events';
 import { GetEventRecapQuery } from './event-recap.query';
 
 const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
+const bagInput = (catches: readonly ReportCatch[]) => catches.map((c) => ({ ...c, id: c.catchId }));
 
 /** The recap from rm_event, rm_competition_day, rm_catch_fact, rm_find_outcome and rm_find. */
 @QueryHandler(GetEventRecapQuery)
@@ -21,7 +23,7 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
     if (!event) return null;
     const lake = await findLake(this.em, crewId, event.lakeId);
     const dayRows: Record<string, unknown>[] = await this.em.execute(
-      'SELECT id, date, has_official, official_gross_lb, official_penalty_lb, official_lb, day_place, late_minutes FROM rm_competition_day WHERE crew_id = ? AND event_id = ? ORDER BY date',
+      'SELECT id, date, has_official, official_gross_lb, official_penalty_lb, official_lb, day_place, late_minutes, field_size, winning_lb, cut_lb FROM rm_competition_day WHERE crew_id = ? AND event_id = ? ORDER BY date',
       [crewId, eventId],
     );
     const catches = await selectCatches(this.em, 'c.crew_id = ? AND c.event_id = ?', [crewId, eventId]);
@@ -39,18 +41,28 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
               lateMinutes: n(d.late_minutes),
             }
           : null;
-      const bag = dayBag(mine, event.rules, official?.lateMinutes ?? null);
-      const counted = new Set(bag.counted);
+      const bag = bagOfDay(bagInput(mine), event.rules, official?.lateMinutes ?? null);
+      const byId = new Map(mine.map((c) => [c.catchId, c]));
+      const field = { fieldSize: n(d.field_size), winningLb: n(d.winning_lb), cutLb: n(d.cut_lb) };
       return {
         competitionDayId: String(d.id),
         date: String(d.date),
-        counted: bag.counted.map((id) => reportFish(mine.find((c) => c.catchId === id)!)),
-        culled: mine.filter((c) => !counted.has(c.catchId)).map(reportFish),
+        counted: bag.counted.map((id) => reportFish(byId.get(id)!)),
+        fish: bag.fish.map((v) => ({
+          ...reportFish(byId.get(v.catchId)!),
+          state: v.state,
+          weighed: v.weighed,
+          penaltyLb: v.penaltyLb,
+        })),
+        penalties: bag.penalties,
         grossLb: bag.grossLb,
         penaltyLb: bag.penaltyLb,
         netLb: bag.netLb,
         official,
+        difference: differenceOf(official, bag),
         dayPlace: official?.dayPlace ?? null,
+        field,
+        standing: standingOf(official?.dayPlace ?? null, official?.officialLb ?? bag.netLb, field),
       };
     });
 
@@ -63,7 +75,7 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
           catchId: c.catchId,
           caughtAt: c.caughtAt,
           weightLb: c.weightLb,
-          cumulativeBagLb: dayBag(mine.slice(0, i + 1), event.rules, null).grossLb,
+          cumulativeBagLb: bagOfDay(bagInput(mine.slice(0, i + 1)), event.rules, null).grossLb,
           day: c.day,
         });
       }
@@ -124,9 +136,16 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
         dates: { practice: event.practiceDates, competition: event.competitionDates },
         rules: event.rules,
         finalPlace: event.finalPlace,
+        field: event.field,
       },
       days,
-      totals: { netLb, officialLb, finalPlace: event.finalPlace },
+      totals: {
+        netLb,
+        officialLb,
+        differenceLb: clean(officialLb - netLb),
+        finalPlace: event.finalPlace,
+        standing: standingOf(event.finalPlace, officialLb, event.field),
+      },
       producingFinds,
       timeline,
       bigFish: big ? reportFish(big) : null,

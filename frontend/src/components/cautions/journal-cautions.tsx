@@ -47,6 +47,17 @@ export function FishCareCaution() {
   );
 }
 
+/** Beside the live bag: culling means handling fish again, so the care rules matter most here. */
+export function LiveBagCaution() {
+  return (
+    <Caution icon="info" title="Fish care while culling">
+      Common practice: keep the bag in an aerated livewell with cool water, handle fish with wet hands, cull quickly and
+      release the culled fish at once, close to where it was caught. The event&rsquo;s own rules and the state wildlife
+      agency decide on limits, lengths and dead-fish rules.
+    </Caution>
+  );
+}
+
 /** Beside exports: a list of positions is what a crew guards most. */
 export function PositionsFileCaution() {
   return (

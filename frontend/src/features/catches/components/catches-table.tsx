@@ -98,6 +98,11 @@ export function CatchesTable({
         cell: (info) => FATE_SHORT[info.getValue()],
         meta: { filterOptions: FATES.map((f) => ({ value: f, label: FATE_SHORT[f] })) },
       }),
+      column.accessor((c) => c.loggedBy?.name ?? '', {
+        id: 'loggedBy',
+        header: 'Logged by',
+        cell: (info) => info.getValue() || '—',
+      }),
       column.accessor((c) => solunarWord(c.sky), {
         id: 'solunar',
         header: 'Solunar',

@@ -1,4 +1,4 @@
-import type { EventRules, EventView } from '@shoalbook/shared';
+import type { EventRules, FieldContext, EventView } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
@@ -16,6 +16,7 @@ export interface EventInput {
   entryFee: number | null;
   payout: number | null;
   finalPlace: number | null;
+  field: FieldContext;
   notes: string;
 }
 

@@ -1,4 +1,10 @@
-import { DEFAULT_EVENT_RULES, type EventView, type LakeView, type UnitPreferences } from '@shoalbook/shared';
+import {
+  DEFAULT_EVENT_RULES,
+  type EventFormat,
+  type EventView,
+  type LakeView,
+  type UnitPreferences,
+} from '@shoalbook/shared';
 import { Button, FormControl, Select, Textarea } from '@primer/react';
 import { useState } from 'react';
 import { RulesCaution } from '../../../components/cautions/journal-cautions';
@@ -32,9 +38,13 @@ interface EventFormValues {
   deadFishPenalty: string;
   shortFishPenalty: string;
   latePenalty: string;
+  format: EventFormat;
   entryFee: string;
   payout: string;
   finalPlace: string;
+  fieldSize: string;
+  winningWeight: string;
+  cutWeight: string;
   notes: string;
 }
 
@@ -60,9 +70,13 @@ export function initialEventValues(
     deadFishPenalty: weightInputValue(rules.deadFishPenaltyLb, prefs.weight),
     shortFishPenalty: weightInputValue(rules.shortFishPenaltyLb, prefs.weight),
     latePenalty: weightInputValue(rules.latePenaltyLbPerMinute, prefs.weight),
+    format: rules.format ?? 'team',
     entryFee: event?.entryFee != null ? String(event.entryFee) : '',
     payout: event?.payout != null ? String(event.payout) : '',
     finalPlace: event?.finalPlace != null ? String(event.finalPlace) : '',
+    fieldSize: event?.field?.fieldSize != null ? String(event.field.fieldSize) : '',
+    winningWeight: weightInputValue(event?.field?.winningLb ?? null, prefs.weight),
+    cutWeight: weightInputValue(event?.field?.cutLb ?? null, prefs.weight),
     notes: event?.notes ?? '',
   };
 }
@@ -97,6 +111,19 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
   const place = v.finalPlace.trim() ? readNumber(v.finalPlace) : null;
   if (v.finalPlace.trim() && (place === null || !Number.isInteger(place) || place < 1))
     errors.finalPlace = 'A place is a whole number from 1.';
+  const fieldSize = v.fieldSize.trim() ? readNumber(v.fieldSize) : null;
+  if (v.fieldSize.trim() && (fieldSize === null || !Number.isInteger(fieldSize) || fieldSize < 1))
+    errors['field.fieldSize'] = 'The field size is a whole number of boats or anglers, from 1.';
+  if (place !== null && fieldSize !== null && place > fieldSize)
+    errors.finalPlace = `A place cannot be beyond the field of ${fieldSize}.`;
+  const bagWeight = (text: string, key: string) => {
+    if (!text.trim()) return null;
+    const parsed = parseWeight(text.trim(), prefs.weight);
+    if (!parsed.ok) errors[key] = parsed.error;
+    return parsed.ok ? entryToLb(parsed.entry) : null;
+  };
+  const winningLb = bagWeight(v.winningWeight, 'field.winningLb');
+  const cutLb = bagWeight(v.cutWeight, 'field.cutLb');
   const allDates = [...v.practiceDates, ...v.competitionDates];
   if (allDates.some((d) => !/^\d{4}-\d{2}-\d{2}$/.test(d))) errors.competitionDates = 'Every day needs a full date.';
   if (new Set(allDates).size !== allDates.length) errors.competitionDates = 'A date appears twice.';
@@ -115,7 +142,9 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
         deadFishPenaltyLb: dead,
         shortFishPenaltyLb: short,
         latePenaltyLbPerMinute: late,
+        format: v.format,
       },
+      field: { fieldSize, winningLb, cutLb },
       entryFee,
       payout,
       finalPlace: place,
@@ -240,6 +269,13 @@ export function EventForm({
             caption="Taken off for each minute late at check-in."
             {...field('latePenalty', 'rules.latePenaltyLbPerMinute')}
           />
+          <FormControl>
+            <FormControl.Label>Format</FormControl.Label>
+            <Select name="rules.format" value={values.format} onChange={set('format')} block>
+              <Select.Option value="team">Team: one bag per boat, both anglers’ fish</Select.Option>
+              <Select.Option value="individual">Individual: a bag per angler</Select.Option>
+            </Select>
+          </FormControl>
         </div>
       </fieldset>
       <div className={styles.pair}>
@@ -252,6 +288,27 @@ export function EventForm({
           {...field('finalPlace')}
         />
       </div>
+      <fieldset className={styles.fieldset}>
+        <legend className={styles.legend}>The field (from the results sheet)</legend>
+        <div className={styles.pair}>
+          <TextField
+            label="Field size"
+            inputMode="numeric"
+            caption="Boats or anglers entered."
+            {...field('fieldSize', 'field.fieldSize')}
+          />
+          <TextField
+            label={`Winning weight (${wSign})`}
+            caption={weightHint(prefs.weight)}
+            {...field('winningWeight', 'field.winningLb')}
+          />
+          <TextField
+            label={`Cut weight (${wSign})`}
+            caption="The weight that made the cut or the money."
+            {...field('cutWeight', 'field.cutLb')}
+          />
+        </div>
+      </fieldset>
       <FormControl>
         <FormControl.Label>Notes</FormControl.Label>
         <Textarea name="notes" value={values.notes} onChange={set('notes')} block rows={3} />

@@ -1,8 +1,9 @@
 import { Button, Heading } from '@primer/react';
 import { useState } from 'react';
-import type { UnitPreferences } from '@shoalbook/shared';
+import { FISH_STATE_LABELS, type BagPenaltyItem, type UnitPreferences } from '@shoalbook/shared';
 import { clockOrDash, dayLabel } from '../../../lib/lake-time';
 import { formatLength, formatWeight } from '../../../lib/units';
+import { officialBesideLog } from '../../weigh-ins/official-figures';
 import type { RecapDay, RecapFish } from '../api/report-types';
 import styles from './reports.module.css';
 
@@ -11,6 +12,24 @@ function ordinalPlace(n: number | null | undefined): string {
   const teen = n % 100 >= 11 && n % 100 <= 13;
   return `${n}${teen ? 'th' : n % 10 === 1 ? 'st' : n % 10 === 2 ? 'nd' : n % 10 === 3 ? 'rd' : 'th'}`;
 }
+
+/** The itemised penalties: "dead fish 0.25 lb · short fish 1.00 lb · 2 min late 2.00 lb". */
+export function penaltyItems(items: readonly BagPenaltyItem[], units: UnitPreferences): string {
+  if (!items.length) return 'none';
+  return items
+    .map((p) =>
+      p.kind === 'late'
+        ? `${p.minutes ?? 0} min late ${formatWeight(p.lb, units.weight)}`
+        : `${p.kind === 'dead' ? 'dead fish' : 'short fish'} ${formatWeight(p.lb, units.weight)}`,
+    )
+    .join(' · ');
+}
+
+/** The day's fish outside the counted bag, each with its state. */
+const notCounted = (day: RecapDay) => {
+  const counted = new Set(day.counted.map((c) => c.catchId));
+  return day.fish.filter((f) => !counted.has(f.catchId));
+};
 
 /** Culled lists can run to thirty fish: the heaviest few show, the rest on request (and always in print). */
 const CULLED_SHOWN = 8;
@@ -21,19 +40,19 @@ function FishChips({
   units,
   timeZone,
 }: {
-  fish: RecapFish[];
+  fish: (RecapFish & { state?: keyof typeof FISH_STATE_LABELS })[];
   kind: 'counted' | 'culled';
   units: UnitPreferences;
   timeZone: string;
 }) {
   const [all, setAll] = useState(false);
   if (fish.length === 0)
-    return <p className={styles.muted}>{kind === 'counted' ? 'No fish counted.' : 'None culled.'}</p>;
+    return <p className={styles.muted}>{kind === 'counted' ? 'No fish counted.' : 'Every fish counted.'}</p>;
   const sorted = [...fish].sort((a, b) => b.weightLb - a.weightLb);
   const hidden = kind === 'culled' && !all ? Math.max(0, sorted.length - CULLED_SHOWN) : 0;
   return (
     <>
-      <ul className={styles.fishList} aria-label={kind === 'counted' ? 'Counted fish' : 'Culled fish'}>
+      <ul className={styles.fishList} aria-label={kind === 'counted' ? 'Counted fish' : 'Fish not counted'}>
         {sorted.slice(0, sorted.length - hidden).map((f) => (
           <li
             key={f.catchId}
@@ -41,12 +60,13 @@ function FishChips({
             title={`${f.caughtAt ? clockOrDash(f.caughtAt, timeZone) : ''}${f.lengthIn ? ` · ${formatLength(f.lengthIn, units.length)}` : ''}${f.findName ? ` · ${f.findName}` : ''}`}
           >
             {formatWeight(f.weightLb, units.weight)}
+            {kind === 'culled' && f.state ? ` · ${FISH_STATE_LABELS[f.state].toLowerCase()}` : ''}
           </li>
         ))}
       </ul>
       {hidden > 0 ? (
         <Button size="small" variant="invisible" className="sb-no-print" onClick={() => setAll(true)}>
-          Show {hidden} more culled
+          Show {hidden} more
         </Button>
       ) : null}
     </>
@@ -54,8 +74,9 @@ function FishChips({
 }
 
 /**
- * Each competition day: the fish that counted (solid chips) and the ones culled for bigger fish (dashed
- * chips, listed apart), the crew's own bag math and, when recorded, the official figures and day place.
+ * Each competition day by the one bag rule: the fish that counted (solid chips) and the rest with their state
+ * (culled, released, short or dead fish: dashed chips), the penalties itemised, and the official figures beside
+ * Shoalbook's own with the difference; the day place against the field when entered.
  */
 export function BagByDay({ days, units, timeZone }: { days: RecapDay[]; units: UnitPreferences; timeZone: string }) {
   return (
@@ -71,21 +92,29 @@ export function BagByDay({ days, units, timeZone }: { days: RecapDay[]; units: U
           </Heading>
           <FishChips fish={day.counted} kind="counted" units={units} timeZone={timeZone} />
           <Heading as="h5" variant="small">
-            Culled ({day.culled.length})
+            Not counted ({notCounted(day).length})
           </Heading>
-          <FishChips fish={day.culled} kind="culled" units={units} timeZone={timeZone} />
+          <FishChips
+            fish={notCounted(day)}
+            kind="culled"
+            units={units}
+            timeZone={timeZone}
+          />
           <dl className={styles.dl}>
             <dt>Bag (gross)</dt>
-            <dd>{formatWeight(day.grossLb, units.weight)}</dd>
+            <dd>{officialBesideLog(day.official?.grossLb, day.grossLb, units.weight)}</dd>
             <dt>Penalties</dt>
-            <dd>{day.penaltyLb > 0 ? `− ${formatWeight(day.penaltyLb, units.weight)}` : 'none'}</dd>
-            <dt>Net, our count</dt>
-            <dd>{formatWeight(day.netLb, units.weight)}</dd>
-            <dt>Official</dt>
             <dd>
-              {day.official?.officialLb !== undefined && day.official?.officialLb !== null
-                ? formatWeight(day.official.officialLb, units.weight)
-                : 'not recorded'}
+              {penaltyItems(day.penalties, units)}
+              {day.official?.penaltyLb != null
+                ? ` (scale ${formatWeight(day.official.penaltyLb, units.weight)})`
+                : ''}
+            </dd>
+            <dt>Net</dt>
+            <dd>
+              {day.official?.officialLb != null
+                ? officialBesideLog(day.official.officialLb, day.netLb, units.weight)
+                : `${formatWeight(day.netLb, units.weight)} (our count; official not recorded)`}
             </dd>
             {day.official?.lateMinutes ? (
               <>
@@ -94,7 +123,13 @@ export function BagByDay({ days, units, timeZone }: { days: RecapDay[]; units: U
               </>
             ) : null}
             <dt>Day place</dt>
-            <dd>{ordinalPlace(day.official?.dayPlace ?? day.dayPlace)}</dd>
+            <dd>{day.standing.place ?? ordinalPlace(day.official?.dayPlace ?? day.dayPlace)}</dd>
+            {day.standing.readings.length > 1 ? (
+              <>
+                <dt>Against the field</dt>
+                <dd>{day.standing.readings.slice(day.standing.place ? 1 : 0).join('; ')}</dd>
+              </>
+            ) : null}
           </dl>
         </section>
       ))}

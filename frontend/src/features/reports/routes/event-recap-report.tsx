@@ -88,7 +88,7 @@ export function Component() {
   }
 
   const data = recap.data;
-  const noFish = data.days.every((d) => d.counted.length === 0 && d.culled.length === 0);
+  const noFish = data.days.every((d) => d.fish.length === 0);
   const paid = data.shareOfPracticePaidOff;
 
   return (

@@ -72,6 +72,7 @@ const rules = {
   deadFishPenaltyLb: 0.25,
   shortFishPenaltyLb: 1,
   latePenaltyLbPerMinute: 1,
+  format: 'team' as const,
 };
 export const events: EventView[] = [
   {

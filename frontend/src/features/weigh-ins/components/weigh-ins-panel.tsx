@@ -1,30 +1,19 @@
 import { SPECIES_LABELS, type EventRules, type UnitPreferences } from '@shoalbook/shared';
-import { Details, Heading, Label, Text } from '@primer/react';
+import { Details, Heading, Text } from '@primer/react';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { clockTime, dayLabel } from '../../../lib/lake-time';
-import type { WeighInDay } from '../../../lib/journal-types';
 import { formatLength, formatWeight } from '../../../lib/units';
+import { penaltyItems } from '../../reports/components/bag-by-day';
 import { useWeighIns } from '../api/weigh-ins-api';
+import { officialBesideLog, signedWeight } from '../official-figures';
+import { FishStateLabel } from './fish-state-label';
 import { OfficialWeighInForm } from './official-weigh-in-form';
 import styles from './weigh-ins.module.css';
 
-type Standing = 'counted' | 'culled' | 'out';
-
-function standingOf(day: WeighInDay, catchId: string): Standing {
-  if (day.computed.counted.includes(catchId)) return 'counted';
-  if (day.computed.culled.includes(catchId)) return 'culled';
-  return 'out';
-}
-
-const STANDING_LABEL: Record<Standing, { text: string; variant: 'success' | 'secondary' | 'attention' }> = {
-  counted: { text: 'Counted', variant: 'success' },
-  culled: { text: 'Culled', variant: 'secondary' },
-  out: { text: 'Not in the bag', variant: 'attention' },
-};
-
 /**
- * Each competition day's bag: which fish count (the heaviest legal ones up to the day's limit), which were
- * culled, gross, penalties and net; the official figures, once entered, override. Then the event's totals.
+ * Each competition day's bag by the one bag rule (computed on the server): every fish with its state, the
+ * penalties itemised, gross, penalties and net; the official figures, once entered, beside Shoalbook's own with
+ * the difference (neither overwrites the other), and the event totals.
  */
 export function WeighInsPanel({
   crewId,
@@ -66,12 +55,24 @@ export function WeighInsPanel({
           </div>
           <div>
             <dt>Total, official figures where entered</dt>
-            <dd>{w(totals.officialLb)}</dd>
+            <dd>
+              {w(totals.officialLb)}
+              {Math.abs(totals.differenceLb) >= 0.005 ? ` (${signedWeight(totals.differenceLb, prefs.weight)})` : ''}
+            </dd>
           </div>
           <div>
             <dt>Final place</dt>
-            <dd>{totals.finalPlace ?? 'Not yet'}</dd>
+            <dd>
+              {totals.finalPlace ?? 'Not yet'}
+              {totals.finalPlace && totals.field.fieldSize ? ` of ${totals.field.fieldSize}` : ''}
+            </dd>
           </div>
+          {totals.field.winningLb !== null ? (
+            <div>
+              <dt>Winning weight</dt>
+              <dd>{w(totals.field.winningLb)}</dd>
+            </div>
+          ) : null}
         </dl>
       </section>
       {days.map((day) => (
@@ -84,37 +85,39 @@ export function WeighInsPanel({
               <div>
                 <dt>Counted fish</dt>
                 <dd>
-                  {day.computed.counted.length} of {rules.fishPerDay}
+                  {day.computed.counted.length} of {rules.fishPerDay * day.computed.bags.length}
+                  {day.computed.format === 'individual' ? ` (${day.computed.bags.length} anglers)` : ''}
                 </dd>
               </div>
               <div>
                 <dt>Gross</dt>
-                <dd>{w(day.computed.grossLb)}</dd>
+                <dd>{officialBesideLog(day.official?.grossLb, day.computed.grossLb, prefs.weight)}</dd>
               </div>
               <div>
                 <dt>Penalties</dt>
-                <dd>{day.computed.penaltyLb > 0 ? `−${w(day.computed.penaltyLb)}` : w(0)}</dd>
+                <dd>{officialBesideLog(day.official?.penaltyLb, day.computed.penaltyLb, prefs.weight)}</dd>
               </div>
               <div>
                 <dt>Net</dt>
-                <dd className={styles.net}>{w(day.computed.netLb)}</dd>
+                <dd className={styles.net}>
+                  {officialBesideLog(day.official?.officialLb, day.computed.netLb, prefs.weight)}
+                </dd>
               </div>
-              {day.official ? (
+              {day.official?.dayPlace ? (
                 <div>
-                  <dt>Official</dt>
-                  <dd className={styles.net}>
-                    {w(day.official.officialLb)}
-                    {day.official.dayPlace ? `, place ${day.official.dayPlace}` : ''}
+                  <dt>Day place</dt>
+                  <dd>
+                    {day.official.dayPlace}
+                    {day.official.fieldSize ? ` of ${day.official.fieldSize}` : ''}
                   </dd>
                 </div>
               ) : null}
             </dl>
           </div>
-          {day.official ? (
-            <Text as="p" size="small" className={styles.muted}>
-              The official figures override the computed ones in the totals.
-            </Text>
-          ) : null}
+          <Text as="p" size="small" className={styles.muted}>
+            Penalties: {penaltyItems(day.computed.penalties, prefs)}.
+            {day.official ? ' Official figures count in the totals; ours stay beside them.' : ''}
+          </Text>
           {day.catches.length ? (
             <div className={styles.tableScroll}>
               <table className={styles.table}>
@@ -129,27 +132,25 @@ export function WeighInsPanel({
                     <th scope="col" className={styles.numeric}>
                       Length
                     </th>
-                    <th scope="col">In the bag</th>
+                    <th scope="col">Logged by</th>
+                    <th scope="col">State</th>
                   </tr>
                 </thead>
                 <tbody>
                   {[...day.catches]
                     .sort((a, b) => b.weightLb - a.weightLb)
-                    .map((c) => {
-                      const standing = STANDING_LABEL[standingOf(day, c.id)];
-                      return (
-                        <tr key={c.id}>
-                          <td>{clockTime(c.caughtAt, timeZone)}</td>
-                          <td>{SPECIES_LABELS[c.species]}</td>
-                          <td className={styles.numeric}>{w(c.weightLb)}</td>
-                          <td className={styles.numeric}>{formatLength(c.lengthIn, prefs.length)}</td>
-                          <td>
-                            <Label variant={standing.variant}>{standing.text}</Label>
-                            {c.fate === 'dead' ? <Text size="small"> dead fish</Text> : null}
-                          </td>
-                        </tr>
-                      );
-                    })}
+                    .map((c) => (
+                      <tr key={c.id}>
+                        <td>{clockTime(c.caughtAt, timeZone)}</td>
+                        <td>{SPECIES_LABELS[c.species]}</td>
+                        <td className={styles.numeric}>{w(c.weightLb)}</td>
+                        <td className={styles.numeric}>{formatLength(c.lengthIn, prefs.length)}</td>
+                        <td>{c.loggedBy?.name || '—'}</td>
+                        <td>
+                          <FishStateLabel verdict={day.computed.fish.find((f) => f.catchId === c.id)} />
+                        </td>
+                      </tr>
+                    ))}
                 </tbody>
               </table>
             </div>

@@ -18,7 +18,7 @@ import { FindsTable, useFinds } from '../../../../../features/finds';
 import { ExportButtons } from '../../../../../features/imports';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLake } from '../../../../../features/lakes';
-import { WeighInsPanel } from '../../../../../features/weigh-ins';
+import { LiveBagPanel, WeighInsPanel } from '../../../../../features/weigh-ins';
 import { dayLabel } from '../../../../../lib/lake-time';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
@@ -212,6 +212,7 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
           <CatchEntryForm key={day.id} crewId={crewId} day={day} lake={lake} finds={finds.data ?? []} prefs={prefs} />
         )
       ) : null}
+      <LiveBagPanel crewId={crewId} eventId={event.id} dayId={day.id} rules={event.rules} prefs={prefs} />
       <Heading as="h3" className={styles.subheading}>
         Catches of {dayLabel(day.date)}
       </Heading>
