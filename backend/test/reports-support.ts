@@ -1,8 +1,9 @@
 // Helpers of the read-model and report e2e tests (not a test file itself).
 import type { INestApplication } from '@nestjs/common';
 import { expect } from 'vitest';
-import { type FindInput, hitRates } from '@shoalbook/analytics';
+import { daySummary, type FindInput, hitRates } from '@shoalbook/analytics';
 import { Catch } from '../src/catches/catch.entity';
+import { TournamentEvent } from '../src/events/tournament-event.entity';
 import { Find } from '../src/finds/find.entity';
 import { READ_MODEL_TABLES } from '../src/read-models';
 import { Stop } from '../src/stops/stop.entity';
@@ -108,6 +109,20 @@ export async function recomputeFromJournal(
       fished: fished || (pairs.get(id)?.fished ?? false),
     });
   };
+  // "Weighed" is the counted bag of each day, by the event's rules (analytics daySummary, the one bag rule).
+  const events = new Map((await em.find(TournamentEvent, { crewId })).map((e) => [e.id, e]));
+  const counted = new Set<string>();
+  const byDay = new Map<string, Catch[]>();
+  for (const c of catches) byDay.set(c.competitionDayId, [...(byDay.get(c.competitionDayId) ?? []), c]);
+  for (const list of byDay.values()) {
+    const e = events.get(list[0]!.eventId)!;
+    list.sort((a, b) => a.caughtAt.getTime() - b.caughtAt.getTime() || (a.id < b.id ? -1 : 1));
+    const day = daySummary(
+      list.map((c) => ({ id: c.id, weightLb: c.weightLb, lengthIn: c.lengthIn, fate: c.fate, anglerId: c.loggedBy })),
+      { ...e, format: e.format },
+    );
+    for (const id of day.counted) counted.add(String(id));
+  }
   const byId = new Map(finds.map((f) => [f.id, f]));
   for (const f of finds) if (f.eventId) addPair(f, f.eventId, false);
   for (const s of stops) if (s.findId && byId.has(s.findId)) addPair(byId.get(s.findId)!, s.eventId, true);
@@ -118,7 +133,7 @@ export async function recomputeFromJournal(
       id: c.id,
       findId: c.findId ? `${c.findId}|${c.eventId}` : null,
       weightLb: c.weightLb,
-      fate: c.fate,
+      fate: counted.has(c.id) ? ('weighed' as const) : ('released' as const),
     })),
     { by },
   );
