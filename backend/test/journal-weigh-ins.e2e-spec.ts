@@ -1,6 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { WeighInsView } from '@shoalbook/shared';
+import type { EventRecapView, EventView, WeighInsView } from '@shoalbook/shared';
+import { waitForProjection } from './reports-support';
 import { crewWithMembers, type CrewFixture } from './utils/api-client';
 import { JournalEvent } from '../src/journal-events/journal-event.entity';
 import { createTestApp, testEm } from './utils/test-app';
@@ -176,5 +177,107 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     const fresh = await crew.angler.send('put', path, { dayPlace: 3, version: 2 });
     expectOk(fresh);
     expect(fresh.body).toMatchObject({ officialLb: 12.25, dayPlace: 3, version: 3 });
+  });
+
+  it('stores field context and an individual format, refuses bad figures naming the field, and the recap agrees with the weigh-in screen', async () => {
+    const base = `/api/crews/${crew.crewId}`;
+    const lake = await createLake(crew.angler, crew.crewId, { name: 'Field Lake' });
+    // Invented figures; the rules are common practice (5 fish, 12 in, 0.25 lb dead, 1 lb short), set per event.
+    const event = await createEvent(crew.angler, crew.crewId, lake.id, {
+      rules: { fishPerDay: 5, minLengthIn: 12, deadFishPenaltyLb: 0.25, shortFishPenaltyLb: 1, format: 'team' },
+      field: { fieldSize: 180, winningLb: 31.4, cutLb: 22.1 },
+      finalPlace: 26,
+    });
+    expect(event.rules.format).toBe('team');
+    expect(event.field).toEqual({ fieldSize: 180, winningLb: 31.4, cutLb: 22.1 });
+
+    // Bad input: 400 naming the field, and nothing written.
+    const journalBefore = await testEm(app).count(JournalEvent, { crewId: crew.crewId });
+    for (const [body, field] of [
+      [{ field: { fieldSize: 0 } }, 'field.fieldSize'],
+      [{ field: { fieldSize: 12.5 } }, 'field.fieldSize'],
+      [{ field: { winningLb: 151 } }, 'field.winningLb'],
+      [{ rules: { format: 'pairs' } }, 'rules.format'],
+    ] as const) {
+      const bad = await crew.angler.patch(`${base}/events/${event.id}`, { ...body, version: event.version });
+      expect(bad.status, JSON.stringify(body)).toBe(400);
+      expect(Object.keys(bad.body.fieldErrors)).toContain(field);
+    }
+    const [day1, day2] = await competitionDays(crew.angler, crew.crewId, event.id);
+    const badDay = await crew.angler.send('put', `${base}/competition-days/${day1!.id}/weigh-in`, {
+      fieldSize: -3,
+      cutLb: 200,
+    });
+    expect(badDay.status).toBe(400);
+    expect(Object.keys(badDay.body.fieldErrors).sort()).toEqual(['cutLb', 'fieldSize']);
+    expect(await testEm(app).count(JournalEvent, { crewId: crew.crewId })).toBe(journalBefore);
+    expect((await crew.viewer.get(`${base}/events/${event.id}`)).body.field).toEqual(event.field);
+
+    // Two anglers' fish; who logged each comes from the session.
+    const log = async (client: typeof crew.angler, dayId: string, caughtAt: string, weightLb: number, fate: string) => {
+      const res = await client.post(`${base}/catches`, {
+        competitionDayId: dayId,
+        caughtAt,
+        species: 'largemouth',
+        weightLb,
+        lengthIn: 16,
+        fate,
+      });
+      expectOk(res, 201);
+      return res.body as { id: string; loggedBy: { userId: string; name: string } | null };
+    };
+    const a1 = await log(crew.angler, day1!.id, '07:00', 4.2, 'weighed');
+    const o1 = await log(crew.owner, day1!.id, '08:00', 3.1, 'weighed');
+    await log(crew.owner, day1!.id, '09:00', 2.4, 'dead');
+    await log(crew.angler, day2!.id, '07:30', 5.05, 'weighed');
+    expect(a1.loggedBy?.userId).toEqual(expect.any(String));
+    expect(o1.loggedBy?.userId).toEqual(expect.any(String));
+    expect(o1.loggedBy!.userId).not.toBe(a1.loggedBy!.userId);
+
+    // Official figures with a small difference from the log: both kept, the difference beside them.
+    expectOk(
+      await crew.angler.send('put', `${base}/competition-days/${day1!.id}/weigh-in`, {
+        grossLb: 9.62,
+        penaltyLb: 0.25,
+        officialLb: 9.37,
+        dayPlace: 30,
+        fieldSize: 180,
+        winningLb: 17.9,
+        cutLb: 11.2,
+      }),
+    );
+    const team = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
+    expect(team.days[0]!.computed).toMatchObject({ format: 'team', grossLb: 9.7, penaltyLb: 0.25, netLb: 9.45 });
+    expect(team.days[0]!.difference).toEqual({ grossLb: -0.08, penaltyLb: 0, netLb: -0.08 });
+    expect(team.days[0]!.official).toMatchObject({ officialLb: 9.37, fieldSize: 180, winningLb: 17.9, cutLb: 11.2 });
+    expect(team.totals).toMatchObject({ computedNetLb: 14.5, officialLb: 14.42, differenceLb: -0.08 });
+    expect(team.totals.field).toEqual({ fieldSize: 180, winningLb: 31.4, cutLb: 22.1 });
+
+    // The recap computes the same bags and totals as the weigh-in screen, and reads the place against the field.
+    await waitForProjection(app);
+    const recap = (await crew.viewer.get(`${base}/reports/events/${event.id}/recap`)).body as EventRecapView;
+    for (const d of recap.days) {
+      const w = team.days.find((x) => x.competitionDayId === d.competitionDayId)!;
+      expect([d.grossLb, d.penaltyLb, d.netLb]).toEqual([w.computed.grossLb, w.computed.penaltyLb, w.computed.netLb]);
+      expect(d.fish.map((f) => [f.catchId, f.state])).toEqual(w.computed.fish.map((f) => [f.catchId, f.state]));
+      expect(d.difference).toEqual(w.difference);
+    }
+    expect(recap.totals).toMatchObject({ netLb: team.totals.computedNetLb, officialLb: team.totals.officialLb });
+    expect(recap.days[0]!.standing.place).toBe('30th of 180 (top 17 %)'); // 30/180 = 16.7 %, rounded up
+    expect(recap.days[0]!.standing.behindWinnerLb).toBe(8.53); // 17.9 − 9.37 official
+    expect(recap.totals.standing.place).toBe('26th of 180 (top 15 %)');
+
+    // Individual format: a bag per angler (the event's own rules).
+    const updated = await crew.angler.patch(`${base}/events/${event.id}`, {
+      rules: { format: 'individual' },
+      version: event.version,
+    });
+    expectOk(updated);
+    expect((updated.body as EventView).rules.format).toBe('individual');
+    const solo = (await crew.viewer.get(`${base}/events/${event.id}/weigh-ins`)).body as WeighInsView;
+    expect(solo.days[0]!.computed.bags.map((b) => [b.anglerId === a1.loggedBy!.userId, b.netLb]).sort()).toEqual([
+      [false, 5.25], // owner: 3.1 + 2.4 dead − 0.25
+      [true, 4.2],
+    ]);
   });
 });
