@@ -77,6 +77,9 @@ export class JournalDemoSeeder extends Seeder {
           entryFee: e.entryFee,
           payout: e.payout,
           finalPlace: e.finalPlace,
+          fieldSize: e.field?.fieldSize ?? null,
+          winningLb: e.field?.winningLb ?? null,
+          cutLb: e.field?.cutLb ?? null,
           notes: e.notes,
         }),
       );
@@ -205,6 +208,8 @@ export class JournalDemoSeeder extends Seeder {
           officialLb: w.officialLb,
           dayPlace: w.dayPlace,
           lateMinutes: w.lateMinutes,
+          fieldSize: w.fieldSize,
+          winningLb: w.winningLb ?? null,
           updatedAt: now,
         }),
       );
