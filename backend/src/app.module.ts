@@ -16,6 +16,7 @@ import { setStaticCacheHeaders } from './common/static-cache';
 import { buildOrmConfig } from './database/mikro-orm.config';
 import { DevOutboxModule } from './dev-outbox/dev-outbox.module';
 import { HealthModule } from './health/health.module';
+import { IdempotencyModule } from './idempotency/idempotency.module';
 import { JournalModule } from './journal/journal.module';
 import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
@@ -51,6 +52,7 @@ export class AppModule {
         CrewsModule,
         AdminModule,
         JournalModule,
+        IdempotencyModule,
         ProjectionsModule,
         ReportsModule,
         ...(raw.NODE_ENV === 'production' ? [] : [DevOutboxModule]),

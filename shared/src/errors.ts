@@ -36,6 +36,15 @@ export const API_ERROR_CODES = [
   'rate_limited',
   'mail_failed',
   'db_unavailable',
+  'idempotency_key_invalid',
+  'idempotency_key_reused',
+  'idempotency_key_in_use',
   'internal_error',
 ] as const;
 export type ApiErrorCode = (typeof API_ERROR_CODES)[number];
+
+/**
+ * The request header that makes a journal write safe to repeat (draft-ietf-httpapi-idempotency-key-header):
+ * the same key with the same body gets the first answer again and writes nothing.
+ */
+export const IDEMPOTENCY_KEY_HEADER = 'Idempotency-Key';

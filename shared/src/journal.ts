@@ -259,6 +259,8 @@ export interface UpdateCompetitionDayRequest {
 }
 
 export interface AddFindRequest {
+  /** A client-made id (UUID v7, RFC 9562), so a find marked offline keeps its id; the server makes one when omitted. */
+  id?: string;
   lakeId: string;
   eventId?: string | null;
   /** One of the event's practice dates; derived from markedAt when omitted. */
@@ -282,9 +284,11 @@ export interface AddFindRequest {
   notes?: string;
   photoId?: string | null;
 }
-export type UpdateFindRequest = Partial<Omit<AddFindRequest, 'lakeId'>> & { version: number };
+export type UpdateFindRequest = Partial<Omit<AddFindRequest, 'id' | 'lakeId'>> & { version: number };
 
 export interface LogCatchRequest {
+  /** A client-made id (UUID v7, RFC 9562), so a catch logged offline keeps its id; the server makes one when omitted. */
+  id?: string;
   competitionDayId: string;
   /** ISO-8601 instant, or "HH:MM" local time on the competition day. */
   caughtAt: string;
@@ -309,7 +313,7 @@ export interface LogCatchRequest {
   notes?: string;
   photoId?: string | null;
 }
-export type UpdateCatchRequest = Partial<Omit<LogCatchRequest, 'competitionDayId'>> & { version: number };
+export type UpdateCatchRequest = Partial<Omit<LogCatchRequest, 'id' | 'competitionDayId'>> & { version: number };
 
 /** Default radius for attributing a catch to a find by coordinates (m). Our choice. */
 export const DEFAULT_ATTRIBUTION_RADIUS_M = 50;

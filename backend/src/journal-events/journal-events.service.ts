@@ -2,6 +2,8 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import { EventBus } from '@nestjs/cqrs';
 import type { JournalEventType } from '@shoalbook/shared';
+import { idempotencyScope } from '../idempotency/idempotency-scope';
+import { claimIdempotencyKey, storeIdempotentAnswer } from '../idempotency/idempotent-write';
 import { JournalEvent } from './journal-event.entity';
 import { type AppendedJournalEvent, JournalEventsAppended } from './journal-events-appended.event';
 
@@ -88,7 +90,9 @@ export class JournalEventsService {
 
   /**
    * Run `work` in a transaction with a recorder. Entities persisted on `tx` are flushed first, then the
-   * recorded events are inserted, then the transaction commits; on any error nothing is written.
+   * recorded events are inserted, then the transaction commits; on any error nothing is written. When the
+   * request carries an Idempotency-Key, its first transaction claims the key before the work and stores the
+   * answer after it, so the key, the write and its events commit together or not at all.
    */
   async transaction<T>(
     crewId: string,
@@ -96,11 +100,16 @@ export class JournalEventsService {
     work: (tx: EntityManager, journal: JournalRecorder) => Promise<T>,
   ): Promise<T> {
     let recorder!: JournalRecorder;
+    const idempotent = idempotencyScope.getStore();
+    const claimsKey = !!idempotent && !idempotent.claimed && idempotent.crewId === crewId;
+    if (claimsKey) idempotent.claimed = true;
     const result = await this.em.transactional(async (tx) => {
+      if (claimsKey) await claimIdempotencyKey(tx, idempotent);
       recorder = new JournalRecorder(tx, crewId, actorId);
       const value = await work(tx, recorder);
       await tx.flush();
       await recorder.writePending();
+      if (claimsKey) await storeIdempotentAnswer(tx, idempotent, value);
       return value;
     });
     if (recorder.appended.length) this.eventBus.publish(new JournalEventsAppended(crewId, recorder.appended));

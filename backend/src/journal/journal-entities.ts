@@ -3,6 +3,7 @@ import { CompetitionDay } from '../events/competition-day.entity';
 import { PracticeDay } from '../events/practice-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';
+import { IdempotencyKey } from '../idempotency/idempotency-key.entity';
 import { JournalEvent } from '../journal-events/journal-event.entity';
 import { Lake } from '../lakes/lake.entity';
 import { Photo } from '../photos/photo.entity';
@@ -21,4 +22,5 @@ export const JOURNAL_ENTITIES = [
   WeighIn,
   Photo,
   JournalEvent,
+  IdempotencyKey,
 ];

@@ -10,6 +10,7 @@ export const JournalErrorCode = {
   fileTooLarge: 'file_too_large',
   wrongFileType: 'wrong_file_type',
   malformedFile: 'malformed_file',
+  idTaken: 'id_taken',
 } as const;
 
 /** 404 for a record that is missing or belongs to another crew: the two are indistinguishable. */
@@ -20,6 +21,15 @@ export function recordNotFound(what: string): ApiException {
 /** A referenced record (in the body) that is missing or another crew's: 400 beside the field. */
 export function unknownReference(field: string, what: string): ApiException {
   return fieldError(field, `No such ${what} in this crew.`);
+}
+
+/** 409 for a client-made id that a record already has (one of this crew's, or any other: ids are global). */
+export function idTaken(what: string): ApiException {
+  return new ApiException(
+    HttpStatus.CONFLICT,
+    `A ${what} with this id already exists. To retry a write safely, send it again with the same Idempotency-Key.`,
+    JournalErrorCode.idTaken,
+  );
 }
 
 export function staleVersion(what: string, current: number): ApiException {

@@ -49,9 +49,14 @@ export class ApiClient {
     return this.agent.get(path).then((r) => r);
   }
 
-  async send(method: 'post' | 'patch' | 'put' | 'delete', path: string, body?: unknown): Promise<Response> {
+  async send(
+    method: 'post' | 'patch' | 'put' | 'delete',
+    path: string,
+    body?: unknown,
+    headers: Record<string, string> = {},
+  ): Promise<Response> {
     const token = this.csrfToken ?? (await this.refreshCsrf());
-    const req = this.agent[method](path).set(CSRF_HEADER, token);
+    const req = this.agent[method](path).set(CSRF_HEADER, token).set(headers);
     return body === undefined ? req : req.send(body as object);
   }
 

@@ -2,7 +2,7 @@ import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import type { CatchView } from '@shoalbook/shared';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
-import { assertVersion, FieldProblems, recordNotFound } from '../../journal/journal-errors';
+import { assertVersion, FieldProblems, idTaken, recordNotFound } from '../../journal/journal-errors';
 import { Catch } from '../catch.entity';
 import { applyCatchInput } from '../catch-input';
 import { CatchesService } from '../catches.service';
@@ -17,8 +17,10 @@ export class LogCatchHandler implements ICommandHandler<LogCatchCommand> {
 
   async execute({ access, input }: LogCatchCommand): Promise<CatchView> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
+      if (input.id && (await tx.count(Catch, { id: input.id }))) throw idTaken('catch');
       const ctx = await this.catches.context(tx, access.crewId, input.competitionDayId);
       const c = Object.assign(new Catch(), {
+        ...(input.id ? { id: input.id } : {}),
         crewId: access.crewId,
         eventId: ctx.event.id,
         competitionDayId: ctx.day.id,

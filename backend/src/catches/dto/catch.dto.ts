@@ -22,12 +22,14 @@ import {
   EnteredWeightDto,
 } from '../../measurements/entered-value.dto';
 import { ListPageDto } from '../../journal/list-query.dto';
+import { CLIENT_ID } from '../../common/dto/client-id';
 import { IsOmittable } from '../../common/dto/omittable';
 import { InRange, RANGES } from '../../measurements/ranges';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
 export class LogCatchDto implements LogCatchRequest {
+  @ApiPropertyOptional(CLIENT_ID) @IsOptional() @IsUUID('7') id?: string;
   @ApiProperty({ format: 'uuid' }) @IsUUID() competitionDayId: string;
   @ApiProperty({ description: 'ISO-8601 instant, or "HH:MM" lake-local on the competition day', example: '09:42' })
   @IsString()
@@ -121,7 +123,7 @@ export class LogCatchDto implements LogCatchRequest {
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
-export class UpdateCatchDto extends PartialType(OmitType(LogCatchDto, ['competitionDayId'] as const), {
+export class UpdateCatchDto extends PartialType(OmitType(LogCatchDto, ['id', 'competitionDayId'] as const), {
   skipNullProperties: false,
 }) {
   @ApiProperty() @IsInt() @Min(1) version: number;

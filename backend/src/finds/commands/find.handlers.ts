@@ -4,7 +4,7 @@ import { Catch } from '../../catches/catch.entity';
 import { Stop } from '../../stops/stop.entity';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
-import { assertVersion, recordNotFound, unknownReference } from '../../journal/journal-errors';
+import { assertVersion, idTaken, recordNotFound, unknownReference } from '../../journal/journal-errors';
 import { Lake } from '../../lakes/lake.entity';
 import { Find } from '../find.entity';
 import { applyFindInput } from '../find-input';
@@ -22,7 +22,9 @@ export class AddFindHandler implements ICommandHandler<AddFindCommand> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
       const lake = await tx.findOne(Lake, { id: input.lakeId, crewId: access.crewId });
       if (!lake) throw unknownReference('lakeId', 'lake');
+      if (input.id && (await tx.count(Find, { id: input.id }))) throw idTaken('find');
       const find = tx.create(Find, {
+        ...(input.id ? { id: input.id } : {}),
         crewId: access.crewId,
         lakeId: lake.id,
         name: input.name,

@@ -27,6 +27,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { CLIENT_ID } from '../../common/dto/client-id';
 import { Trim } from '../../common/dto/common-transforms';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
@@ -37,6 +38,7 @@ const INSTANT = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 export class AddFindDto implements AddFindRequest {
+  @ApiPropertyOptional(CLIENT_ID) @IsOptional() @IsUUID('7') id?: string;
   @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() eventId?: string | null;
   @ApiPropertyOptional({ nullable: true, description: "One of the event's practice dates (YYYY-MM-DD)" })
@@ -119,7 +121,7 @@ export class AddFindDto implements AddFindRequest {
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */
-export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['lakeId'] as const), {
+export class UpdateFindDto extends PartialType(OmitType(AddFindDto, ['id', 'lakeId'] as const), {
   skipNullProperties: false,
 }) {
   @ApiProperty() @IsInt() @Min(1) version: number;
