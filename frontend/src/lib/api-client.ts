@@ -38,6 +38,19 @@ export interface RequestOptions {
    */
   renewsSession?: boolean;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. the send queue's Idempotency-Key. */
+  headers?: Record<string, string>;
+}
+
+/**
+ * Keeps the last answers of chosen GET routes on the device, to answer them while there is no network
+ * (see offline-reads.ts). API answers stay `no-store` for the browser's HTTP cache.
+ */
+export interface ReadCache {
+  keeps(path: string): boolean;
+  save(path: string, data: unknown): Promise<void>;
+  /** The kept answer, or undefined. */
+  load(path: string): Promise<unknown>;
 }
 
 type FetchLike = typeof fetch;
@@ -55,8 +68,27 @@ export class ApiClient {
     private readonly base = API_BASE,
   ) {}
 
-  get<T>(path: string, options: Omit<RequestOptions, 'body'> = {}): Promise<T> {
-    return this.request<T>('GET', path, options);
+  private readCache: ReadCache | null = null;
+
+  /** Answer kept GET routes from the device when the server cannot be reached. */
+  useReadCache(cache: ReadCache | null): void {
+    this.readCache = cache;
+  }
+
+  async get<T>(path: string, options: Omit<RequestOptions, 'body'> = {}): Promise<T> {
+    const cache = this.readCache?.keeps(path) ? this.readCache : null;
+    if (!cache) return this.request<T>('GET', path, options);
+    try {
+      const data = await this.request<T>('GET', path, options);
+      // Keeping a copy must never fail the read itself (storage full, private mode).
+      await cache.save(path, data).catch(() => undefined);
+      return data;
+    } catch (error) {
+      if (!isApiError(error, 0)) throw error;
+      const kept = await cache.load(path).catch(() => undefined);
+      if (kept === undefined) throw error;
+      return kept as T;
+    }
   }
   post<T>(path: string, body?: unknown, options: Omit<RequestOptions, 'body'> = {}): Promise<T> {
     return this.request<T>('POST', path, { ...options, body });
@@ -107,7 +139,7 @@ export class ApiClient {
   }
 
   private async send(method: string, path: string, options: RequestOptions, token: string | null): Promise<Response> {
-    const headers: Record<string, string> = { Accept: 'application/json' };
+    const headers: Record<string, string> = { Accept: 'application/json', ...options.headers };
     if (options.body !== undefined) headers['Content-Type'] = 'application/json';
     if (token) headers[CSRF_HEADER] = token;
     try {

@@ -3,6 +3,8 @@ import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query'
 import { redirect, type LoaderFunctionArgs } from 'react-router-dom';
 import { paths, safeNextPath } from '../config/paths';
 import { api, isApiError } from './api-client';
+import { forgetKeptReads } from './offline-reads';
+import { deviceDb } from './send-queue/runtime';
 
 /** Who is signed in; `null` when nobody is (the API answers 401). */
 export const meQuery = queryOptions({
@@ -53,6 +55,8 @@ export function homeRedirect(queryClient: QueryClient) {
 
 /** After sign-in or sign-up: remember who it is and drop anything cached for the previous person. */
 export function rememberSignedIn(queryClient: QueryClient, me: MeResponse): void {
+  // Lists kept for offline reading belong to whoever read them: start afresh.
+  void forgetKeptReads(deviceDb).catch(() => undefined);
   queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== 'me' });
   queryClient.setQueryData(meQuery.queryKey, me);
 }

@@ -6,6 +6,9 @@ export function createQueryClient(): QueryClient {
   return new QueryClient({
     defaultOptions: {
       queries: {
+        // Run the request even when the browser says it is offline: kept lists answer from the device
+        // (offline-reads.ts) and everything else fails at once with a clear message instead of waiting.
+        networkMode: 'always',
         staleTime: 30_000,
         refetchOnWindowFocus: false,
         retry: (failureCount, error) => {
@@ -13,7 +16,7 @@ export function createQueryClient(): QueryClient {
           return failureCount < 2;
         },
       },
-      mutations: { retry: false },
+      mutations: { retry: false, networkMode: 'always' },
     },
   });
 }

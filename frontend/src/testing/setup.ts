@@ -1,4 +1,6 @@
 import '@testing-library/jest-dom/vitest';
+// jsdom has no IndexedDB; the send queue and the kept lists use the W3C API, here in memory.
+import 'fake-indexeddb/auto';
 import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
 import { api } from '../lib/api-client';

@@ -2,12 +2,14 @@ import type { ReactNode } from 'react';
 import { Link as RouterLink, NavLink } from 'react-router-dom';
 import { BrandMark } from '../brand/brand-mark';
 import { OnTheWaterNotice } from '../safety/on-the-water-notice';
+import { SendQueueBadge } from '../send-queue/send-queue-badge';
 import { paths } from '../../config/paths';
 import { AccountMenu } from './account-menu';
 import { CrewSwitcher, type CrewChoice } from './crew-switcher';
 import styles from './app-shell.module.css';
 
 export interface AppShellProps {
+  userId: string;
   displayName: string;
   email: string;
   isSiteAdmin: boolean;
@@ -19,6 +21,7 @@ export interface AppShellProps {
 
 /** The frame of every signed-in screen: header (mark, crew switcher, links, account menu), content, cautions. */
 export function AppShell({
+  userId,
   displayName,
   email,
   isSiteAdmin,
@@ -50,6 +53,7 @@ export function AppShell({
             ) : null}
           </nav>
           <div className={styles.account}>
+            <SendQueueBadge userId={userId} />
             <AccountMenu displayName={displayName} email={email} onSignOut={onSignOut} />
           </div>
         </div>

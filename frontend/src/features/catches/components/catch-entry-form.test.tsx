@@ -81,7 +81,7 @@ function savedCatch(request: SeenRequest, extra: Partial<CatchView> = {}): Catch
 }
 
 function renderForm() {
-  return renderWithApp(<CatchEntryForm crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />);
+  return renderWithApp(<CatchEntryForm userId="u1" crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />);
 }
 
 beforeEach(() => localStorage.clear());
@@ -110,7 +110,11 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
     await user.keyboard('{Enter}');
 
     await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
-    expect(net.to('POST /api/crews/c1/catches')[0].body).toEqual({
+    const sent = net.to('POST /api/crews/c1/catches')[0];
+    // Every catch carries a client-made UUID v7 (RFC 9562 §5.7) and its own Idempotency-Key, an sf-string.
+    expect(sent.headers['idempotency-key']).toMatch(/^"[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}"$/);
+    expect(sent.body).toEqual({
+      id: expect.stringMatching(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/),
       competitionDayId: 'd1',
       caughtAt: '07:42',
       findId: 'f1',
@@ -248,5 +252,39 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
     expect(body).not.toHaveProperty('findId');
     expect(await screen.findByText(/attributed to Rock pile \(23 m away\)/)).toBeInTheDocument();
     expect(screen.getByText(/Check this weight/)).toBeInTheDocument();
+  });
+});
+
+describe('CatchEntryForm without signal', () => {
+  it('keeps the catch on the device marked "waiting to send", clears for the next fish, and says "Logged" once sent', async () => {
+    let online = false;
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => {
+        if (!online) throw new TypeError('Failed to fetch');
+        return { status: 201, body: savedCatch(request) };
+      },
+    }).install();
+    const user = userEvent.setup();
+    renderForm();
+    await user.tab();
+    await user.tab();
+    await user.keyboard('2-4{Enter}');
+
+    expect(await screen.findByText('Waiting to send')).toBeInTheDocument();
+    expect(screen.getByText(/Saved on this phone: 2 lb 4\.0 oz largemouth at 07:42/)).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: /weight/i })).toHaveValue('');
+    const { sendQueue } = await import('../../../lib/send-queue');
+    const [queued] = await sendQueue.entries('u1');
+    expect(queued).toMatchObject({ state: 'waiting', kind: 'log-catch', scope: 'd1', attempts: 1 });
+
+    online = true;
+    await sendQueue.drain('u1', { now: true });
+    expect(await screen.findByText(/Logged 2 lb 4\.0 oz largemouth at 07:42/)).toBeInTheDocument();
+    expect(screen.queryByText('Waiting to send')).not.toBeInTheDocument();
+    expect(await sendQueue.entries('u1')).toEqual([]);
+    // The retry carried the same key as the attempt that failed.
+    const keys = net.seen.filter((r) => r.method === 'POST').map((r) => r.headers['idempotency-key']);
+    expect(new Set(keys).size).toBe(1);
   });
 });

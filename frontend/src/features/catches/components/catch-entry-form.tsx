@@ -9,11 +9,14 @@ import {
   type UnitPreferences,
 } from '@shoalbook/shared';
 import { Button, Checkbox, FormControl, Label, Select, Text, TextInput } from '@primer/react';
-import { useId, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { v7 as uuidv7 } from 'uuid';
 import { FishCareCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
 import { PhotoField } from '../../../components/journal-forms/photo-field';
 import { ApiRequestError } from '../../../lib/api-client';
+import { crewApiPath } from '../../../lib/journal-keys';
+import { queueWrite, sendQueue } from '../../../lib/send-queue';
 import { clockTime, dayLabel, isClockTime } from '../../../lib/lake-time';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import {
@@ -28,7 +31,7 @@ import {
   UNIT_SIGNS,
   weightHint,
 } from '../../../lib/units';
-import { useLogCatch, type CatchInput } from '../api/catches-api';
+import type { CatchInput } from '../api/catches-api';
 import { FATE_LABELS } from './catch-labels';
 import { findOptionLabel, matchFind } from './catch-values';
 import styles from './catch-entry-form.module.css';
@@ -88,8 +91,13 @@ const SERVER_FIELDS: Record<string, string[]> = {
  * Logging a catch between casts, by keyboard alone: focus starts on the time (now, on the lake's clock),
  * Enter logs it from any field, and the form clears for the next fish with focus back on the time.
  * Species, lure, technique and water temperature stay as they were: they seldom change fish to fish.
+ *
+ * The catch goes into the send queue on the device first. When the server answers at once, the form says
+ * "Logged" (or shows a refusal beside the fields, values kept); without signal it says "waiting to send" and
+ * clears for the next fish, and the queue sends it when the network is back.
  */
 export function CatchEntryForm({
+  userId,
   crewId,
   day,
   lake,
@@ -97,6 +105,7 @@ export function CatchEntryForm({
   prefs,
   now = () => new Date(),
 }: {
+  userId: string;
   crewId: string;
   day: { id: string; date: string };
   lake: LakeView;
@@ -126,7 +135,21 @@ export function CatchEntryForm({
   const [photo, setPhoto] = useState<{ photoId: string | null; busy: boolean }>({ photoId: null, busy: false });
   // A new key clears the photo field (its file input) for the next fish.
   const [photoKey, setPhotoKey] = useState(0);
-  const log = useLogCatch(crewId);
+  const [sending, setSending] = useState(false);
+  /** The server's refusal of the catch still in the form, or a device that could not store it. */
+  const [failure, setFailure] = useState<Error | null>(null);
+  const [waiting, setWaiting] = useState<{ key: string; label: string } | null>(null);
+  const waitingKey = useRef<string | null>(null);
+  useEffect(
+    () =>
+      sendQueue.onSent((entry, answer) => {
+        if (entry.key !== waitingKey.current) return;
+        waitingKey.current = null;
+        setWaiting(null);
+        setLogged(answer as CatchWithSky);
+      }),
+    [],
+  );
   const timeRef = useRef<HTMLInputElement>(null);
   const listId = useId();
   const formId = useId();
@@ -134,11 +157,7 @@ export function CatchEntryForm({
   const findName = (id: string | null) => finds.find((f) => f.id === id)?.name ?? 'a find';
 
   const serverMessages = (field: string) =>
-    log.error instanceof ApiRequestError
-      ? SERVER_FIELDS[field].flatMap((name) =>
-          log.error instanceof ApiRequestError ? log.error.messagesFor(name) : [],
-        )
-      : [];
+    failure instanceof ApiRequestError ? SERVER_FIELDS[field].flatMap((name) => failure.messagesFor(name)) : [];
   const messages = (field: string) => [...(errors[field] ? [errors[field]] : []), ...serverMessages(field)];
 
   const set = (key: keyof Values) => (e: { target: { value: string } }) =>
@@ -187,21 +206,55 @@ export function CatchEntryForm({
     };
   };
 
-  const submit = () => {
-    if (log.isPending || photo.busy) return;
+  const clearForNext = () => {
+    rememberSpecies(values.species);
+    setValues((v) => fresh(v));
+    setPhoto({ photoId: null, busy: false });
+    setPhotoKey((k) => k + 1);
+    timeRef.current?.focus();
+  };
+
+  const submit = async () => {
+    if (sending || photo.busy) return;
     const { input, errors: found } = build();
     setErrors(found);
     if (!input) return;
-    log.mutate(input, {
-      onSuccess: (saved) => {
-        rememberSpecies(values.species);
-        setLogged(saved);
-        setValues((v) => fresh(v));
-        setPhoto({ photoId: null, busy: false });
-        setPhotoKey((k) => k + 1);
-        timeRef.current?.focus();
-      },
-    });
+    setSending(true);
+    setFailure(null);
+    const recordId = uuidv7();
+    const label = `${formatWeight(entryToLb(input.weight), prefs.weight)} ${SPECIES_LABELS[input.species].toLowerCase()} at ${input.caughtAt}`;
+    try {
+      const { stored, first } = await queueWrite({
+        userId,
+        crewId,
+        kind: 'log-catch',
+        method: 'POST',
+        path: crewApiPath(crewId, '/catches'),
+        body: { ...input, id: recordId },
+        recordId,
+        label,
+        scope: day.id,
+      });
+      const outcome = await first;
+      if (outcome.kind === 'sent') {
+        setWaiting(null);
+        setLogged(outcome.answer as CatchWithSky);
+        clearForNext();
+      } else if (outcome.kind === 'refused') {
+        // The values are still in the form: show the refusal beside them instead of keeping a second copy.
+        await sendQueue.discard(stored.seq!);
+        setFailure(outcome.failure as ApiRequestError);
+      } else {
+        waitingKey.current = stored.key;
+        setLogged(null);
+        setWaiting({ key: stored.key, label });
+        clearForNext();
+      }
+    } catch (error) {
+      setFailure(error instanceof Error ? error : new Error(String(error)));
+    } finally {
+      setSending(false);
+    }
   };
 
   // Enter logs the catch from any field, selects and the checkbox included (browsers submit only from text inputs).
@@ -209,7 +262,7 @@ export function CatchEntryForm({
     const target = event.target as HTMLElement;
     if (event.key === 'Enter' && (target.tagName === 'SELECT' || (target as HTMLInputElement).type === 'checkbox')) {
       event.preventDefault();
-      submit();
+      void submit();
     }
   };
 
@@ -239,11 +292,11 @@ export function CatchEntryForm({
       onKeyDown={onKeyDown}
       onSubmit={(e) => {
         e.preventDefault();
-        submit();
+        void submit();
       }}
     >
       <FishCareCaution />
-      <FormError error={log.error} title="That catch was not logged" />
+      <FormError error={failure} title="That catch was not logged" />
       <div className={styles.row}>
         {field(
           'caughtAt',
@@ -439,7 +492,7 @@ export function CatchEntryForm({
         ))}
       </datalist>
       <div className={styles.actions}>
-        <Button type="submit" variant="primary" loading={log.isPending} disabled={photo.busy}>
+        <Button type="submit" variant="primary" loading={sending} disabled={photo.busy}>
           Log catch
         </Button>
         <Text size="small" className={styles.hint}>
@@ -447,7 +500,14 @@ export function CatchEntryForm({
         </Text>
       </div>
       <div role="status" aria-live="polite" className={styles.logged}>
-        {logged ? (
+        {waiting ? (
+          <>
+            <Label variant="attention">Waiting to send</Label>{' '}
+            <Text>
+              Saved on this phone: {waiting.label}. It goes to the server by itself once there is signal.
+            </Text>
+          </>
+        ) : logged ? (
           <>
             <Text>
               Logged {formatWeight(logged.weightLb, prefs.weight)} {SPECIES_LABELS[logged.species].toLowerCase()} at{' '}

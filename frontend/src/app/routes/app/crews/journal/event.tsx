@@ -19,6 +19,8 @@ import { ExportButtons } from '../../../../../features/imports';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLake } from '../../../../../features/lakes';
 import { LiveBagPanel, WeighInsPanel } from '../../../../../features/weigh-ins';
+import { WaitingEntries } from '../../../../../components/send-queue/waiting-entries';
+import { useSignedInMe } from '../../../../../lib/auth';
 import { dayLabel } from '../../../../../lib/lake-time';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
@@ -166,6 +168,7 @@ function EventFindsTable({ crewId, event, lake, prefs, canWrite }: SectionProps)
 
 function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   const [search, setSearch] = useSearchParams();
+  const me = useSignedInMe();
   const days = useEventDays(crewId, event.id);
   const finds = useFinds(crewId, { lakeId: lake.id });
   if (days.isPending) return <LoadingState label="Loading the days…" />;
@@ -209,13 +212,17 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
         finds.isPending ? (
           <LoadingState label="Loading finds for the list…" />
         ) : (
-          <CatchEntryForm key={day.id} crewId={crewId} day={day} lake={lake} finds={finds.data ?? []} prefs={prefs} />
+          <CatchEntryForm
+            key={day.id}
+            userId={me.user.id}
+            crewId={crewId} day={day} lake={lake} finds={finds.data ?? []} prefs={prefs} />
         )
       ) : null}
       <LiveBagPanel crewId={crewId} eventId={event.id} dayId={day.id} rules={event.rules} prefs={prefs} />
       <Heading as="h3" className={styles.subheading}>
         Catches of {dayLabel(day.date)}
       </Heading>
+      <WaitingEntries userId={me.user.id} crewId={crewId} scope={day.id} />
       <DayCatches
         crewId={crewId}
         dayId={day.id}

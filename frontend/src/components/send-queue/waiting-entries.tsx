@@ -1,0 +1,40 @@
+import { Label, Text } from '@primer/react';
+import { useSendEntries } from '../../lib/send-queue';
+import styles from './send-queue.module.css';
+
+/**
+ * Entries of one crew (and, if given, one scope such as a competition day) still on this device: shown at once
+ * beside the records the server already has, so a fish logged without signal is visibly kept.
+ */
+export function WaitingEntries({ userId, crewId, scope }: { userId: string; crewId: string; scope?: string }) {
+  const entries = useSendEntries(userId).filter((e) => e.crewId === crewId && (!scope || e.scope === scope));
+  if (entries.length === 0) return null;
+  return (
+    <section aria-label="Not sent yet" className={styles.waiting}>
+      <ul className={styles.list}>
+        {entries.map((e) => (
+          <li key={e.seq} className={styles.item}>
+            {e.state === 'waiting' ? (
+              <Label variant="attention">Waiting to send</Label>
+            ) : (
+              <Label variant="danger">Needs you</Label>
+            )}{' '}
+            <Text>{e.label}</Text>
+            {e.state === 'needs-you' && e.lastError ? (
+              <Text as="p" size="small" className={styles.message}>
+                The server refused it: {e.lastError.message} Use “needs you” at the top of the page to send it again
+                or discard it.
+              </Text>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+/** The header badge's wording, also quoted by the lists. */
+export function badgeText(count: number, needsYou = 0): string {
+  if (needsYou > 0) return `${needsYou} need${needsYou === 1 ? 's' : ''} you`;
+  return `${count} waiting to send`;
+}

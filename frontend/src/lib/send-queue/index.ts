@@ -1,0 +1,3 @@
+export { deviceDb, queueWrite, sendQueue } from './runtime';
+export { DeviceStorageFullError } from './send-queue';
+export { useSendEntries, useSendQueueDrain } from './use-send-queue';
