@@ -9,17 +9,14 @@ import { BACKGROUND_SYNC_TAG, sendQueue } from './runtime';
 export function useSendEntries(userId: string | undefined): SendEntry[] {
   const [entries, setEntries] = useState<SendEntry[]>([]);
   useEffect(() => {
-    if (!userId) {
-      setEntries([]);
-      return;
-    }
+    if (!userId) return;
     const subscription = liveQuery(() => sendQueue.entries(userId)).subscribe({
       next: setEntries,
       error: () => setEntries([]),
     });
     return () => subscription.unsubscribe();
   }, [userId]);
-  return entries;
+  return userId ? entries : [];
 }
 
 /**
