@@ -20,7 +20,8 @@ export default defineConfig({
         id: '/',
         name: 'Shoalbook',
         short_name: 'Shoalbook',
-        description: 'The crew’s results journal: catches, finds and weigh-ins, logged on the water even without signal.',
+        description:
+          'The crew’s results journal: catches, finds and weigh-ins, logged on the water even without signal.',
         lang: 'en',
         start_url: '/',
         scope: '/',

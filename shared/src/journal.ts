@@ -1,4 +1,13 @@
-import type { EventFormat, Fate, FishState, FindKind, FoundHow, HardnessGrade, Species, VegetationDensity } from './taxonomy.js';
+import type {
+  EventFormat,
+  Fate,
+  FishState,
+  FindKind,
+  FoundHow,
+  HardnessGrade,
+  Species,
+  VegetationDensity,
+} from './taxonomy.js';
 import type { DepthUnit, LengthUnit, TemperatureUnit, WeightUnit } from './units.js';
 
 /** Storage units: what the API stores and returns. Display conversion happens in the client. */

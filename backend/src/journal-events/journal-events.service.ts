@@ -10,16 +10,7 @@ import { type AppendedJournalEvent, JournalEventsAppended } from './journal-even
 /** What a command records about one change. */
 export interface JournalChange {
   type: JournalEventType;
-  aggregateType:
-    | 'lake'
-    | 'event'
-    | 'practiceDay'
-    | 'competitionDay'
-    | 'find'
-    | 'catch'
-    | 'stop'
-    | 'weighIn'
-    | 'photo';
+  aggregateType: 'lake' | 'event' | 'practiceDay' | 'competitionDay' | 'find' | 'catch' | 'stop' | 'weighIn' | 'photo';
   aggregateId: string;
   /** The record's full new state, or `{ id }` for a deletion. */
   payload: Record<string, unknown>;

@@ -23,7 +23,10 @@ export function deviceReadCache(db: DeviceDb, now: () => number = Date.now): Rea
       await db.keptReads.put({ path, data, savedAt: now() });
       const count = await db.keptReads.count();
       if (count > KEPT_READS_LIMIT) {
-        const oldest = await db.keptReads.orderBy('savedAt').limit(count - KEPT_READS_LIMIT).primaryKeys();
+        const oldest = await db.keptReads
+          .orderBy('savedAt')
+          .limit(count - KEPT_READS_LIMIT)
+          .primaryKeys();
         await db.keptReads.bulkDelete(oldest);
       }
     },

@@ -46,7 +46,9 @@ function SendQueueList({ userId, entries }: { userId: string; entries: SendEntry
         there is signal.
       </Text>
       {waiting ? (
-        <Button onClick={() => void sendQueue.drain(userId, { now: true }).catch(() => undefined)}>Try sending now</Button>
+        <Button onClick={() => void sendQueue.drain(userId, { now: true }).catch(() => undefined)}>
+          Try sending now
+        </Button>
       ) : null}
       <ul className={styles.list}>
         {entries.map((e) => (

@@ -22,8 +22,8 @@ export function WaitingEntries({ userId, crewId, scope }: { userId: string; crew
             <Text>{e.label}</Text>
             {e.state === 'needs-you' && e.lastError ? (
               <Text as="p" size="small" className={styles.message}>
-                The server refused it: {e.lastError.message} Use “needs you” at the top of the page to send it again
-                or discard it.
+                The server refused it: {e.lastError.message} Use “needs you” at the top of the page to send it again or
+                discard it.
               </Text>
             ) : null}
           </li>

@@ -96,7 +96,8 @@ describe('send queue', () => {
     const queue = new SendQueue(db, fakeServer().transport, options());
     const a = await queue.enqueue(entry(1));
     const b = await queue.enqueue(entry(2));
-    for (const k of [a.key, b.key]) expect(k).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
+    for (const k of [a.key, b.key])
+      expect(k).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
     expect(a.key).not.toBe(b.key);
   });
 

@@ -48,7 +48,12 @@ export class DeviceStorageFullError extends Error {
 export function isTransient(failure: SendFailure): boolean {
   const s = failure.statusCode;
   return (
-    s === 0 || s >= 500 || s === 408 || s === 429 || s === 401 || (s === 409 && failure.code === 'idempotency_key_in_use')
+    s === 0 ||
+    s >= 500 ||
+    s === 408 ||
+    s === 429 ||
+    s === 401 ||
+    (s === 409 && failure.code === 'idempotency_key_in_use')
   );
 }
 

@@ -81,7 +81,9 @@ function savedCatch(request: SeenRequest, extra: Partial<CatchView> = {}): Catch
 }
 
 function renderForm() {
-  return renderWithApp(<CatchEntryForm userId="u1" crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />);
+  return renderWithApp(
+    <CatchEntryForm userId="u1" crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />,
+  );
 }
 
 beforeEach(() => localStorage.clear());
@@ -112,7 +114,9 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
     await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
     const sent = net.to('POST /api/crews/c1/catches')[0];
     // Every catch carries a client-made UUID v7 (RFC 9562 §5.7) and its own Idempotency-Key, an sf-string.
-    expect(sent.headers['idempotency-key']).toMatch(/^"[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}"$/);
+    expect(sent.headers['idempotency-key']).toMatch(
+      /^"[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}"$/,
+    );
     expect(sent.body).toEqual({
       id: expect.stringMatching(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/),
       competitionDayId: 'd1',

@@ -503,9 +503,7 @@ export function CatchEntryForm({
         {waiting ? (
           <>
             <Label variant="attention">Waiting to send</Label>{' '}
-            <Text>
-              Saved on this phone: {waiting.label}. It goes to the server by itself once there is signal.
-            </Text>
+            <Text>Saved on this phone: {waiting.label}. It goes to the server by itself once there is signal.</Text>
           </>
         ) : logged ? (
           <>

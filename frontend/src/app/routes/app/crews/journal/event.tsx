@@ -215,7 +215,12 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
           <CatchEntryForm
             key={day.id}
             userId={me.user.id}
-            crewId={crewId} day={day} lake={lake} finds={finds.data ?? []} prefs={prefs} />
+            crewId={crewId}
+            day={day}
+            lake={lake}
+            finds={finds.data ?? []}
+            prefs={prefs}
+          />
         )
       ) : null}
       <LiveBagPanel crewId={crewId} eventId={event.id} dayId={day.id} rules={event.rules} prefs={prefs} />
