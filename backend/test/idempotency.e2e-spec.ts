@@ -181,6 +181,23 @@ describe('Idempotency-Key on journal writes: exactly once for any client', () =>
     expect(w2.body).toEqual(w1.body);
     expect(w2.headers['idempotent-replayed']).toBe('true');
 
+    // Start a stop, then leave it: both exactly once (a replayed "leave" gets its first answer, not a 409).
+    const stopId = uuidv7();
+    const startKey = uuidv7();
+    const start = { id: stopId, competitionDayId: day.id, lat: 32.953, lon: -96.203, arrivedAt: '10:00' };
+    const s1 = await crew.angler.send('post', `${base}/stops`, start, withKey(startKey));
+    expectOk(s1, 201);
+    expect(s1.body.id).toBe(stopId);
+    expectOk(await crew.angler.send('post', `${base}/stops`, start, withKey(startKey)), 201);
+    const leave = { version: s1.body.version, leftAt: '10:40' };
+    const leaveKey = uuidv7();
+    const l1 = await crew.angler.send('patch', `${base}/stops/${stopId}`, leave, withKey(leaveKey));
+    expectOk(l1);
+    const l2 = await crew.angler.send('patch', `${base}/stops/${stopId}`, leave, withKey(leaveKey));
+    expectOk(l2);
+    expect(l2.body).toEqual(l1.body);
+    expect((await journalOf(app, stopId)).map((e) => e.type)).toEqual(['StopLogged', 'StopUpdated']);
+
     const delKey = uuidv7();
     const d1 = await crew.angler.send('delete', `${base}/catches/${c.id}`, undefined, withKey(delKey));
     expect(d1.status).toBe(204);

@@ -32,6 +32,8 @@ export interface StopView {
 }
 
 export interface LogStopRequest {
+  /** A client-made id (UUID v7, RFC 9562), so a stop started offline keeps its id; the server makes one when omitted. */
+  id?: string;
   competitionDayId: string;
   findId?: string | null;
   lat?: number | null;
@@ -45,7 +47,7 @@ export interface LogStopRequest {
   notes?: string;
 }
 
-export type UpdateStopRequest = Partial<Omit<LogStopRequest, 'competitionDayId'>> & { version: number };
+export type UpdateStopRequest = Partial<Omit<LogStopRequest, 'id' | 'competitionDayId'>> & { version: number };
 
 /** What deleting a stop did: its catches stay, no longer in any stop. */
 export interface StopDeletedView {

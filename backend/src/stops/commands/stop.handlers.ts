@@ -4,7 +4,7 @@ import { clockTime, type StopDeletedView, type StopView } from '@shoalbook/share
 import type { CrewAccess } from '../../common/request-context';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
-import { assertVersion, FieldProblems, recordNotFound } from '../../journal/journal-errors';
+import { assertVersion, FieldProblems, idTaken, recordNotFound } from '../../journal/journal-errors';
 import { applyStopInput, overlappingStop, type StopContext } from '../stop-input';
 import { Stop } from '../stop.entity';
 import { StopsService } from '../stops.service';
@@ -38,8 +38,10 @@ export class LogStopHandler implements ICommandHandler<LogStopCommand> {
 
   async execute({ access, input }: LogStopCommand): Promise<StopView> {
     return this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
+      if (input.id && (await tx.count(Stop, { id: input.id }))) throw idTaken('stop');
       const ctx = await this.stops.context(tx, access.crewId, input.competitionDayId);
       const stop = Object.assign(new Stop(), {
+        ...(input.id ? { id: input.id } : {}),
         crewId: access.crewId,
         eventId: ctx.event.id,
         competitionDayId: ctx.day.id,

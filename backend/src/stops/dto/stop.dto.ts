@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import type { LogStopRequest } from '@shoalbook/shared';
 import { IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
+import { CLIENT_ID } from '../../common/dto/client-id';
 import { IsOmittable } from '../../common/dto/omittable';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
@@ -12,6 +13,7 @@ const TIME = {
 };
 
 export class LogStopDto implements LogStopRequest {
+  @ApiPropertyOptional(CLIENT_ID) @IsOptional() @IsUUID('7') id?: string;
   @ApiProperty({ format: 'uuid' }) @IsUUID() competitionDayId: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true, description: 'null = no find: give lat and lon' })
   @IsOptional()
@@ -59,7 +61,7 @@ export class LogStopDto implements LogStopRequest {
 }
 
 /** Fields left out stay as they are. */
-export class UpdateStopDto extends PartialType(OmitType(LogStopDto, ['competitionDayId'] as const), {
+export class UpdateStopDto extends PartialType(OmitType(LogStopDto, ['id', 'competitionDayId'] as const), {
   skipNullProperties: false,
 }) {
   @ApiProperty() @IsInt() @Min(1) version: number;
