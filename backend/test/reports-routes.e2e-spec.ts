@@ -152,6 +152,13 @@ describe('report routes', () => {
       expect(c.localMinutes).toBe(local.hour * 60 + local.minute);
     }
     for (const g of solunar.body.groups) expect(g.fishCount).toBe(counts[g.key!]);
+    // Headline = sum of the table's rows for every grouping (the 13:15 catch with no find included by time).
+    for (const by of ['kind', 'subKind', 'depthBand', 'hardness', 'temperatureBand', 'solunarPeriod', 'timeOfDay']) {
+      const view = (await get<HitRatesView>(crew.owner, `hit-rates?by=${by}`)).body;
+      const rows = view.groups.reduce((n, g) => n + g.fishCount, 0);
+      expect(view.overall.fishCount, by).toBe(rows);
+      expect(view.overall.fishCount, by).toBe(by === 'solunarPeriod' || by === 'timeOfDay' ? 8 : 7);
+    }
     const byTime = await get<HitRatesView>(crew.owner, 'hit-rates?by=timeOfDay');
     // 06:40 and 07:10 fall before 08:00; 08:00 itself is morning.
     expect(byTime.body.groups.find((g) => g.key === 'early')?.fishCount).toBe(2);

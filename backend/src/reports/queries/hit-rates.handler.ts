@@ -89,8 +89,10 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       finds: total(kinds, 'finds'),
       findsFished: total(kinds, 'findsFished'),
       findsProducing: total(kinds, 'findsProducing'),
-      fishCount: total(kinds, 'fishCount'),
-      weightLb: fromMicroLb(total(kinds, 'weightUlb')),
+      // The headline counts what the table below it counts: for the catch groupings that includes catches with no
+      // find; for the find groupings each find sits in one row, so the rows sum to the same as the kinds.
+      fishCount: total(groups, 'fishCount'),
+      weightLb: fromMicroLb(total(groups, 'weightUlb')),
       producing: singleRate(total(kinds, 'findsProducing'), total(kinds, 'findsFished')),
     };
 
