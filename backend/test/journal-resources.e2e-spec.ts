@@ -110,7 +110,7 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
   });
 
   describe('events and their days', () => {
-    it('creates the practice and competition days from the dates, with default rules (common practice: 5 fish, 12 in)', async () => {
+    it('creates the practice and competition days from the dates, with default rules (common practice: a team event, 5 fish, 12 in)', async () => {
       const lake = await createLake(crew.angler, crew.crewId);
       const event = await createEvent(crew.angler, crew.crewId, lake.id);
       expect(event.rules).toEqual({
@@ -119,6 +119,7 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
         deadFishPenaltyLb: 0.25,
         shortFishPenaltyLb: 1,
         latePenaltyLbPerMinute: 1,
+        format: 'team',
       });
       const practice = await crew.viewer.get(`${base}/events/${event.id}/practice-days`);
       expect(practice.body.map((d: { date: string }) => d.date)).toEqual(['2024-04-10', '2024-04-11']);

@@ -16,6 +16,8 @@ const outcome = (findId: string, eventId: string, fishCount: number): OutcomeRow
   practiced: false,
   fished: fishCount > 0,
   fishCount,
+  stopCount: fishCount > 0 ? 1 : 0,
+  secondsFished: 0,
   weighedCount: 0,
   weightUlb: fishCount * 2_000_000,
   weighedWeightUlb: 0,
