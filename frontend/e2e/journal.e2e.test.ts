@@ -169,10 +169,10 @@ describe('the journal, as the demo angler', () => {
     const bag = page.getByRole('group', { name: 'Bag of Sat, 12 Apr 2025' });
     await bag.getByText('3 of 5').waitFor();
     // 3.45 + 2.10 + 4.02 = 9.57 lb gross; one dead fish at the default 0.25 lb (common practice, set per event).
-    // No scale slip entered yet, so each figure is Shoalbook's own ("log …") and the penalty is itemised below.
-    await bag.getByText('log 9.57 lb').waitFor();
-    await bag.getByText('log 0.25 lb').waitFor();
-    await bag.getByText('log 9.32 lb').waitFor();
+    // No scale slip entered yet, so each figure is Shoalbook's own, and the penalty is itemised below.
+    await bag.getByText('9.57 lb', { exact: true }).waitFor();
+    await bag.getByText('0.25 lb', { exact: true }).waitFor();
+    await bag.getByText('9.32 lb', { exact: true }).waitFor();
     await page.getByText('Penalties: dead fish 0.25 lb.').waitFor();
     await expectNoSeriousAxe(page, 'weigh-ins');
     await screenshot(page, 'journal-weigh-ins-desk');
