@@ -63,11 +63,67 @@ describe('weights', () => {
     expect(parseWeight('3.5-2', 'lb-oz').ok).toBe(false);
   });
 
-  it('accepts a comma as the decimal sign', () => {
-    expect(entry(parseWeight('3,45', 'lb'))).toEqual({ value: 3.45, unit: 'lb' });
+  it('reads the decimal sign of the user’s locale (CLDR through Intl): 3,45 is 3.45 lb in de-DE', () => {
+    expect(entry(parseWeight('3,45', 'lb', 'Weight', 'de-DE'))).toEqual({ value: 3.45, unit: 'lb' });
+    expect(entry(parseWeight('3.45', 'lb', 'Weight', 'en-US'))).toEqual({ value: 3.45, unit: 'lb' });
+    expect(entry(parseWeight('1,56', 'kg', 'Weight', 'fr-FR'))).toEqual({ value: 1.56, unit: 'kg' });
   });
 
-  it('prefills edit inputs in the user’s unit so that they read back to the same weight', () => {
+  it('never turns 18,500 into 18.5 lb: refused, naming the field, with what to write instead', () => {
+    // 18.5 lb = 18 lb 8 oz, since 1 lb = 16 oz (NIST Handbook 44, Appendix C).
+    expect(parseWeight('18,500', 'lb', 'Weight', 'en-US')).toEqual({
+      ok: false,
+      error: "Weight: '18,500' is not a weight in pounds; write 18.5 or 18 lb 8 oz.",
+    });
+    expect(parseWeight('18.500', 'lb', 'Official weight', 'de-DE')).toEqual({
+      ok: false,
+      error: "Official weight: '18.500' is not a weight in pounds; write 18,5 or 18 lb 8 oz.",
+    });
+    expect(parseWeight('3,45', 'kg', 'Weight', 'en-US')).toEqual({
+      ok: false,
+      error: "Weight: '3,45' is not a weight in kilograms; write 3.45.",
+    });
+    const words = parseWeight('heavy', 'lb', 'Gross on the scale', 'en-US');
+    expect(!words.ok && words.error).toBe(
+      "Gross on the scale: 'heavy' is not a weight in pounds; write 3.5 or 3 lb 8 oz.",
+    );
+  });
+
+  it('takes pounds and ounces spelled out in any unit, and the bare 18-8 only in pounds–ounces', () => {
+    const lbOz = { value: 18, unit: 'lb-oz', ounces: 8 };
+    for (const unit of ['lb', 'kg', 'lb-oz'] as const) {
+      expect(entry(parseWeight('18 lb 8 oz', unit, 'Weight', 'en-US'))).toEqual(lbOz);
+      expect(entry(parseWeight('18lbs 8oz', unit, 'Weight', 'en-US'))).toEqual(lbOz);
+    }
+    expect(entry(parseWeight('18 lb 8,5 oz', 'lb', 'Weight', 'de-DE'))).toEqual({ ...lbOz, ounces: 8.5 });
+    expect(entry(parseWeight('18-8', 'lb-oz', 'Weight', 'en-US'))).toEqual(lbOz);
+    expect(parseWeight('18-8', 'lb', 'Weight', 'en-US').ok).toBe(false); // in decimal pounds 18-8 means nothing sure
+    expect(parseWeight('18 lb 16 oz', 'lb', 'Weight', 'en-US').ok).toBe(false);
+  });
+
+  it('keeps the unit typed after the number instead of reading it in the preferred one', () => {
+    expect(entry(parseWeight('1.56 kg', 'lb', 'Weight', 'en-US'))).toEqual({ value: 1.56, unit: 'kg' });
+    expect(entry(parseWeight('3.45 lb', 'kg', 'Weight', 'en-US'))).toEqual({ value: 3.45, unit: 'lb' });
+    expect(entry(parseLength('387 mm', 'in', 'Length', 'en-US'))).toEqual({ value: 387, unit: 'mm' });
+    expect(parseLength('15 kg', 'in', 'Length', 'en-US').ok).toBe(false);
+  });
+
+  it('refuses a length with another locale’s decimal sign, naming the field', () => {
+    expect(parseLength('15,5', 'in', 'Length', 'en-US')).toEqual({
+      ok: false,
+      error: "Length: '15,5' is not a length in inches; write 15.5.",
+    });
+    expect(entry(parseLength('15,5', 'in', 'Length', 'de-DE'))).toEqual({ value: 15.5, unit: 'in' });
+    expect(parseLength('1,016', 'mm', 'Minimum length', 'en-US')).toEqual({
+      ok: false,
+      error: "Minimum length: '1,016' is not a length in millimetres; write 1.016 or 1016.",
+    });
+  });
+
+  it('prefills edit inputs in the user’s unit and locale so that they read back to the same weight', () => {
+    expect(weightInputValue(3.45, 'lb', 'de-DE')).toBe('3,45');
+    expect(entryToLb(entry(parseWeight(weightInputValue(3.45, 'lb', 'de-DE'), 'lb', 'Weight', 'de-DE')))).toBe(3.45);
+    expect(lengthInputValue(15.25, 'in', 'fr-FR')).toBe('15,25');
     expect(weightInputValue(3.4375, 'lb-oz')).toBe('3-7');
     expect(entryToLb(entry(parseWeight(weightInputValue(3.4375, 'lb-oz'), 'lb-oz')))).toBe(3.4375);
     expect(weightInputValue(1, 'kg')).toBe('0.454');

@@ -1,5 +1,6 @@
 import { units } from '@shoalbook/analytics';
 import type { DepthUnit, LengthUnit, TemperatureUnit, UnitPreferences, WeightUnit } from '@shoalbook/shared';
+import { formatTypedNumber, readTypedNumber, typedDecimal, userLocale } from './typed-number';
 
 /**
  * Display and entry of measurements. The API stores lb, in, ft and °F (canonical) and keeps what was typed;
@@ -88,88 +89,195 @@ export function formatTemperature(f: number | null | undefined, unit: Temperatur
   return unit === 'C' ? `${trimmed(units.fToC(f), 1)} °C` : `${trimmed(f, 1)} °F`;
 }
 
+/** A fixed-decimal number for an input, in the locale's decimal sign so that it reads back unchanged. */
+function typed(value: number, decimals: number, locale: string): string {
+  return typedDecimal(trimmed(value, decimals), locale);
+}
+
 /** Canonical → the number shown in an input of the user's unit (for edit forms; no unit sign). */
-export function weightInputValue(lb: number | null | undefined, unit: WeightUnit): string {
+export function weightInputValue(lb: number | null | undefined, unit: WeightUnit, locale = userLocale()): string {
   if (lb === null || lb === undefined) return '';
-  if (unit === 'kg') return trimmed(units.lbToKg(lb), 3);
+  if (unit === 'kg') return typed(units.lbToKg(lb), 3, locale);
   if (unit === 'lb-oz') {
     const { lb: whole, oz } = units.lbToLbOz(lb, 2);
-    return `${whole}-${trimmed(oz, 2)}`;
+    return `${whole}-${typed(oz, 2, locale)}`;
   }
-  return trimmed(lb, 2);
+  return typed(lb, 2, locale);
 }
 
-export function lengthInputValue(inches: number | null | undefined, unit: LengthUnit): string {
+export function lengthInputValue(inches: number | null | undefined, unit: LengthUnit, locale = userLocale()): string {
   if (inches === null || inches === undefined) return '';
-  return unit === 'mm' ? trimmed(units.inToMm(inches), 1) : trimmed(inches, 3);
+  return unit === 'mm' ? typed(units.inToMm(inches), 1, locale) : typed(inches, 3, locale);
 }
 
-export function depthInputValue(ft: number | null | undefined, unit: DepthUnit): string {
+export function depthInputValue(ft: number | null | undefined, unit: DepthUnit, locale = userLocale()): string {
   if (ft === null || ft === undefined) return '';
-  return unit === 'm' ? trimmed(units.ftToM(ft), 2) : trimmed(ft, 2);
+  return unit === 'm' ? typed(units.ftToM(ft), 2, locale) : typed(ft, 2, locale);
 }
 
-export function temperatureInputValue(f: number | null | undefined, unit: TemperatureUnit): string {
+export function temperatureInputValue(
+  f: number | null | undefined,
+  unit: TemperatureUnit,
+  locale = userLocale(),
+): string {
   if (f === null || f === undefined) return '';
-  return unit === 'C' ? trimmed(units.fToC(f), 1) : trimmed(f, 1);
+  return unit === 'C' ? typed(units.fToC(f), 1, locale) : typed(f, 1, locale);
 }
 
-/** Read a decimal number as people type it: "3.45", "3,45" and " 3.45 " are the same; anything else is not a number. */
-export function readNumber(text: string): number | null {
-  const cleaned = text.trim().replace(',', '.');
-  if (!/^[-+]?(\d+(\.\d*)?|\.\d+)$/.test(cleaned)) return null;
-  const value = Number(cleaned);
-  return Number.isFinite(value) ? value : null;
+/** Read a plain number typed by the user's locale (see typed-number.ts); null when it is not one, or not unambiguously one. */
+export function readNumber(text: string, locale: string = userLocale()): number | null {
+  const read = readTypedNumber(text, locale);
+  return read.ok ? read.value : null;
+}
+
+const WEIGHT_WORDS: Record<WeightUnit, string> = { lb: 'pounds', 'lb-oz': 'pounds and ounces', kg: 'kilograms' };
+
+/** "18.5 or 18 lb 8 oz": how to write the weight the user probably meant, in the locale's own signs. */
+function weightSuggestion(unit: WeightUnit, meant: number | null, locale: string): string {
+  const lb = meant ?? (unit === 'kg' ? 1.56 : 3.5);
+  if (unit === 'kg') return formatTypedNumber(lb, locale);
+  const whole = Math.floor(lb);
+  const oz = Math.round((lb - whole) * 16 * 10) / 10; // 1 lb = 16 oz (NIST Handbook 44 App. C)
+  const lbOz = oz < 16 ? `${whole} lb ${formatTypedNumber(oz, locale)} oz` : null;
+  if (unit === 'lb-oz') return lbOz ? `${lbOz} or ${whole}-${formatTypedNumber(oz, locale)}` : '3 lb 7 oz or 3-7';
+  return lbOz ? `${formatTypedNumber(lb, locale)} or ${lbOz}` : formatTypedNumber(lb, locale);
+}
+
+function notAWeight(
+  label: string,
+  text: string,
+  unit: WeightUnit,
+  meant: number | null,
+  locale: string,
+): Parsed<never> {
+  return {
+    ok: false,
+    error: `${label}: '${text.trim()}' is not a weight in ${WEIGHT_WORDS[unit]}; write ${weightSuggestion(unit, meant, locale)}.`,
+  };
+}
+
+/** A typed number, or what it might have meant: the decimal reading, and the grouped one when that is plausible too. */
+type Reading = { ok: true; value: number } | { ok: false; meant: number | null; grouped?: number };
+
+function readPart(text: string, locale: string): Reading {
+  const read = readTypedNumber(text, locale);
+  if (read.ok) return read;
+  if (read.reason === 'not-a-number') return { ok: false, meant: null };
+  return {
+    ok: false,
+    meant: read.decimalReading,
+    grouped: read.reason === 'ambiguous' ? read.groupReading : undefined,
+  };
 }
 
 /**
- * Read a typed weight in the user's unit. Pounds–ounces accept "3-7", "3 7", "3-7.5", "3lb 7oz" and a
- * bare "3" (3 lb 0 oz); ounces must be under 16.
+ * Read a typed weight. Pounds and ounces written out ("18 lb 8 oz", "18lb 8oz", "18 lb") are taken in any
+ * unit, and a unit sign after a number ("1.56 kg", "3.45 lb") is the unit it was weighed in. The bare pair
+ * "3-7" or "3 7" means 3 lb 7 oz only when the user's unit is pounds–ounces, where it cannot mean anything
+ * else; a bare "3" there is 3 lb 0 oz. Ounces must be under 16 (1 lb = 16 oz). Numbers read by the locale.
  */
-export function parseWeight(text: string, unit: WeightUnit): Parsed<WeightEntry> {
+export function parseWeight(
+  text: string,
+  unit: WeightUnit,
+  label = 'Weight',
+  locale: string = userLocale(),
+): Parsed<WeightEntry> {
   const raw = text.trim();
-  if (!raw) return { ok: false, error: 'Enter the weight.' };
-  if (raw.startsWith('-')) return { ok: false, error: 'A weight cannot be negative.' };
-  if (unit === 'lb-oz') {
-    // "3-7", "3 7", "3lb 7oz", "3 lb 7.5 oz" → two parts; a bare "3" is 3 lb 0 oz.
-    const parts = raw.toLowerCase().replace(/oz$/, '').replace(/lbs?/, ' ').replace('-', ' ').trim().split(/\s+/);
-    const whole = parts.length <= 2 ? readNumber(parts[0]) : null;
-    const ounces = parts.length === 2 ? readNumber(parts[1]) : parts.length === 1 ? 0 : null;
-    if (whole === null || ounces === null || !Number.isInteger(whole)) {
-      return { ok: false, error: 'Type pounds and ounces like 3-7 (3 lb 7 oz).' };
-    }
-    if (ounces >= 16) return { ok: false, error: 'Ounces go from 0 to 15.9; 16 oz make a pound.' };
-    return { ok: true, entry: { value: whole, unit, ounces } };
+  if (!raw) return { ok: false, error: `${label}: enter the weight.` };
+  if (/^[-−]/.test(raw)) return { ok: false, error: `${label}: a weight cannot be negative.` };
+  const spelled = /^(.+?)\s*lbs?\.?(?:\s*(.+?)\s*oz\.?)?$/i.exec(raw);
+  const pair = unit === 'lb-oz' ? /^(\d+)\s*(?:-|\s)\s*(\S+)$/.exec(raw) : null;
+  if ((spelled && (spelled[2] !== undefined || unit === 'lb-oz')) || pair) {
+    const [, lbText, ozText] = (spelled ?? pair)!;
+    const whole = readPart(lbText!, locale);
+    const ounces = ozText === undefined ? ({ ok: true, value: 0 } as const) : readPart(ozText, locale);
+    if (!whole.ok || !ounces.ok || !Number.isInteger(whole.value) || whole.value < 0 || ounces.value < 0)
+      return notAWeight(label, raw, unit, null, locale);
+    if (ounces.value >= 16) return { ok: false, error: `${label}: ounces go from 0 to 15.9; 16 oz make a pound.` };
+    return { ok: true, entry: { value: whole.value, unit: 'lb-oz', ounces: ounces.value } };
   }
-  const value = readNumber(raw.replace(/\s*(lbs?|kg)$/i, ''));
-  if (value === null)
-    return { ok: false, error: unit === 'kg' ? 'Type kilograms like 1.56.' : 'Type pounds like 3.45.' };
-  if (value < 0) return { ok: false, error: 'A weight cannot be negative.' };
-  return { ok: true, entry: { value, unit } };
+  const suffixed = /^(.+?)\s*(lbs?|kg)\.?$/i.exec(raw);
+  const typedUnit: WeightUnit = suffixed ? (suffixed[2]!.toLowerCase() === 'kg' ? 'kg' : 'lb') : unit;
+  if (typedUnit === 'lb-oz') {
+    const whole = readPart(raw, locale);
+    if (whole.ok && Number.isInteger(whole.value)) return { ok: true, entry: { value: whole.value, unit, ounces: 0 } };
+    return notAWeight(label, raw, unit, whole.ok ? whole.value : whole.meant, locale);
+  }
+  const read = readPart(suffixed ? suffixed[1]! : raw, locale);
+  if (!read.ok) return notAWeight(label, raw, typedUnit, read.meant, locale);
+  if (read.value < 0) return { ok: false, error: `${label}: a weight cannot be negative.` };
+  return { ok: true, entry: { value: read.value, unit: typedUnit } };
 }
+
+const MEASURE_WORDS: Record<string, string> = {
+  in: 'inches',
+  mm: 'millimetres',
+  ft: 'feet',
+  m: 'metres',
+  F: 'degrees Fahrenheit',
+  C: 'degrees Celsius',
+};
+
+/** Unit signs a number may carry after it, per kind of measure; a typed sign names the unit used. */
+const MEASURE_SIGNS: Record<string, Record<string, string>> = {
+  length: { in: 'in', '"': 'in', inch: 'in', inches: 'in', mm: 'mm' },
+  depth: { ft: 'ft', "'": 'ft', feet: 'ft', m: 'm' },
+  'water temperature': { f: 'F', '°f': 'F', c: 'C', '°c': 'C' },
+};
 
 function parseMeasure<U extends string>(
   text: string,
   unit: U,
-  what: string,
-  allowNegative = false,
+  what: 'length' | 'depth' | 'water temperature',
+  label: string,
+  locale: string,
 ): Parsed<{ value: number; unit: U }> {
-  const value = readNumber(text.replace(/\s*(in|mm|ft|m|°?[fc])$/i, ''));
-  if (value === null) return { ok: false, error: `Type the ${what} as a number.` };
-  if (!allowNegative && value < 0) return { ok: false, error: `The ${what} cannot be negative.` };
-  return { ok: true, entry: { value, unit } };
+  const raw = text.trim();
+  const suffixed = /^(.*?\d)\s*(°?[a-z]+|["'])$/i.exec(raw);
+  const typedUnit = suffixed ? (MEASURE_SIGNS[what]![suffixed[2]!.toLowerCase()] as U | undefined) : unit;
+  const example = formatTypedNumber(what === 'length' ? 15.5 : what === 'depth' ? 12.5 : 18.5, locale);
+  const refuse = (read: Reading & { ok: false }, inUnit: string): Parsed<never> => {
+    // A length in millimetres may well be grouped (1,016 mm), so an ambiguous one offers both readings.
+    const options = [read.meant, read.grouped].filter((n): n is number => n !== null && n !== undefined);
+    const write = options.length ? options.map((n) => formatTypedNumber(n, locale)).join(' or ') : example;
+    return {
+      ok: false,
+      error: `${label}: '${raw}' is not a ${what} in ${MEASURE_WORDS[inUnit] ?? inUnit}; write ${write}.`,
+    };
+  };
+  if (typedUnit === undefined) return refuse({ ok: false, meant: null }, unit);
+  const read = readPart(suffixed ? suffixed[1]! : raw, locale);
+  if (!read.ok) return refuse(read, typedUnit);
+  if (what !== 'water temperature' && read.value < 0)
+    return { ok: false, error: `${label}: the ${what} cannot be negative.` };
+  return { ok: true, entry: { value: read.value, unit: typedUnit } };
 }
 
-export function parseLength(text: string, unit: LengthUnit): Parsed<LengthEntry> {
-  return parseMeasure(text, unit, 'length');
+export function parseLength(
+  text: string,
+  unit: LengthUnit,
+  label = 'Length',
+  locale: string = userLocale(),
+): Parsed<LengthEntry> {
+  return parseMeasure(text, unit, 'length', label, locale);
 }
 
-export function parseDepth(text: string, unit: DepthUnit): Parsed<DepthEntry> {
-  return parseMeasure(text, unit, 'depth');
+export function parseDepth(
+  text: string,
+  unit: DepthUnit,
+  label = 'Depth',
+  locale: string = userLocale(),
+): Parsed<DepthEntry> {
+  return parseMeasure(text, unit, 'depth', label, locale);
 }
 
-export function parseTemperature(text: string, unit: TemperatureUnit): Parsed<TemperatureEntry> {
-  return parseMeasure(text, unit, 'water temperature', true);
+export function parseTemperature(
+  text: string,
+  unit: TemperatureUnit,
+  label = 'Water temperature',
+  locale: string = userLocale(),
+): Parsed<TemperatureEntry> {
+  return parseMeasure(text, unit, 'water temperature', label, locale);
 }
 
 /** Canonical pounds of an entry (for echoes beside the input and client-side checks; the server computes its own). */
@@ -192,10 +300,10 @@ export function entryToF(entry: TemperatureEntry): number {
 }
 
 /** What a weight input's caption says about the accepted format. */
-export function weightHint(unit: WeightUnit): string {
-  if (unit === 'lb-oz') return 'Pounds-ounces, e.g. 3-7';
-  if (unit === 'kg') return 'Kilograms, e.g. 1.56';
-  return 'Pounds and hundredths, e.g. 3.45';
+export function weightHint(unit: WeightUnit, locale = userLocale()): string {
+  if (unit === 'lb-oz') return 'Pounds-ounces, e.g. 3-7 or 3 lb 7 oz';
+  if (unit === 'kg') return `Kilograms, e.g. ${formatTypedNumber(1.56, locale)}`;
+  return `Pounds and hundredths, e.g. ${formatTypedNumber(3.45, locale)} (or 3 lb 7 oz)`;
 }
 
 /** Optional field: blank means "not recorded" (null), otherwise parsed. */

@@ -121,7 +121,7 @@ describe('CatchEditForm', () => {
     await user.clear(screen.getByRole('textbox', { name: /^Weight/ }));
     await user.type(screen.getByRole('textbox', { name: /^Weight/ }), '3-17');
     await user.click(screen.getByRole('button', { name: 'Save changes' }));
-    expect(await screen.findByText('Ounces go from 0 to 15.9; 16 oz make a pound.')).toBeInTheDocument();
+    expect(await screen.findByText('Weight: ounces go from 0 to 15.9; 16 oz make a pound.')).toBeInTheDocument();
     expect(net.to('PATCH /api/crews/c1/catches/k1')).toHaveLength(0);
   });
 

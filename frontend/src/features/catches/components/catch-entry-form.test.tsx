@@ -80,9 +80,9 @@ function savedCatch(request: SeenRequest, extra: Partial<CatchView> = {}): Catch
   };
 }
 
-function renderForm() {
+function renderForm(unitPrefs: UnitPreferences = prefs) {
   return renderWithApp(
-    <CatchEntryForm userId="u1" crewId="c1" day={day} lake={lake} finds={finds} prefs={prefs} now={now} />,
+    <CatchEntryForm userId="u1" crewId="c1" day={day} lake={lake} finds={finds} prefs={unitPrefs} now={now} />,
   );
 }
 
@@ -213,6 +213,26 @@ describe('CatchEntryForm (fast keyboard entry)', () => {
     expect(screen.getByRole('textbox', { name: /weight/i })).toHaveAccessibleDescription(/16 oz make a pound/);
     expect(screen.getByRole('combobox', { name: /find/i })).toHaveAccessibleDescription(/No find by that name/);
     expect(net.to('POST /api/crews/c1/catches')).toHaveLength(0);
+  });
+
+  it('refuses 18,500 typed in decimal pounds (en-US groups thousands with the comma) instead of storing 18.5 lb', async () => {
+    const net = fakeNetwork({ 'GET /api/auth/csrf': csrf }).install();
+    const user = userEvent.setup();
+    const { sendQueue } = await import('../../../lib/send-queue');
+    const queuedBefore = (await sendQueue.entries('u1')).length;
+    renderForm({ ...prefs, weight: 'lb' });
+
+    await user.tab();
+    await user.tab();
+    await user.keyboard('18,500{Enter}');
+
+    expect(navigator.language).toBe('en-US'); // jsdom's locale: the comma is the group sign (CLDR en)
+    expect(screen.getByRole('textbox', { name: /weight/i })).toHaveAccessibleDescription(
+      expect.stringContaining("Weight: '18,500' is not a weight in pounds; write 18.5 or 18 lb 8 oz."),
+    );
+    expect(net.to('POST /api/crews/c1/catches')).toHaveLength(0);
+    // Refused before the send queue: nothing waits on the device to be sent later either.
+    expect(await sendQueue.entries('u1')).toHaveLength(queuedBefore);
   });
 
   it('attributes from coordinates, says to which find and how far, and flags a weight that does not fit', async () => {

@@ -90,16 +90,16 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
   const fish = readNumber(v.fishPerDay);
   if (fish === null || !Number.isInteger(fish) || fish < 1 || fish > 20)
     errors['rules.fishPerDay'] = 'A whole number of fish, 1 to 20.';
-  const minLength = v.minLength.trim() ? parseLength(v.minLength, prefs.length) : null;
+  const minLength = v.minLength.trim() ? parseLength(v.minLength, prefs.length, 'Minimum length') : null;
   if (minLength && !minLength.ok) errors['rules.minLengthIn'] = minLength.error;
-  const penalty = (text: string, key: string) => {
-    const parsed = parseWeight(text.trim() || '0', prefs.weight);
+  const penalty = (text: string, key: string, label: string) => {
+    const parsed = parseWeight(text.trim() || '0', prefs.weight, label);
     if (!parsed.ok) errors[key] = parsed.error;
     return parsed.ok ? entryToLb(parsed.entry) : 0;
   };
-  const dead = penalty(v.deadFishPenalty, 'rules.deadFishPenaltyLb');
-  const short = penalty(v.shortFishPenalty, 'rules.shortFishPenaltyLb');
-  const late = penalty(v.latePenalty, 'rules.latePenaltyLbPerMinute');
+  const dead = penalty(v.deadFishPenalty, 'rules.deadFishPenaltyLb', 'Dead-fish penalty');
+  const short = penalty(v.shortFishPenalty, 'rules.shortFishPenaltyLb', 'Short-fish penalty');
+  const late = penalty(v.latePenalty, 'rules.latePenaltyLbPerMinute', 'Late penalty per minute');
   const money = (text: string, key: string) => {
     if (!text.trim()) return null;
     const n = readNumber(text.replace(/^\$/, ''));
@@ -116,14 +116,14 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
     errors['field.fieldSize'] = 'The field size is a whole number of boats or anglers, from 1.';
   if (place !== null && fieldSize !== null && place > fieldSize)
     errors.finalPlace = `A place cannot be beyond the field of ${fieldSize}.`;
-  const bagWeight = (text: string, key: string) => {
+  const bagWeight = (text: string, key: string, label: string) => {
     if (!text.trim()) return null;
-    const parsed = parseWeight(text.trim(), prefs.weight);
+    const parsed = parseWeight(text.trim(), prefs.weight, label);
     if (!parsed.ok) errors[key] = parsed.error;
     return parsed.ok ? entryToLb(parsed.entry) : null;
   };
-  const winningLb = bagWeight(v.winningWeight, 'field.winningLb');
-  const cutLb = bagWeight(v.cutWeight, 'field.cutLb');
+  const winningLb = bagWeight(v.winningWeight, 'field.winningLb', 'Winning weight');
+  const cutLb = bagWeight(v.cutWeight, 'field.cutLb', 'Cut weight');
   const allDates = [...v.practiceDates, ...v.competitionDates];
   if (allDates.some((d) => !/^\d{4}-\d{2}-\d{2}$/.test(d))) errors.competitionDates = 'Every day needs a full date.';
   if (new Set(allDates).size !== allDates.length) errors.competitionDates = 'A date appears twice.';

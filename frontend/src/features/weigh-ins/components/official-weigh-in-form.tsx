@@ -9,6 +9,8 @@ import { entryToLb, parseOptional, parseWeight, readNumber, weightHint, weightIn
 import { useRecordWeighIn } from '../api/weigh-ins-api';
 import styles from './weigh-ins.module.css';
 
+const WEIGHT_LABELS = { grossLb: 'Gross on the scale', penaltyLb: 'Penalties', officialLb: 'Official weight' };
+
 /** The scale's own figures for a day; once saved they count instead of Shoalbook's computed bag. */
 export function OfficialWeighInForm({
   crewId,
@@ -46,7 +48,7 @@ export function OfficialWeighInForm({
   const submit = () => {
     const found: Record<string, string> = {};
     const weight = (key: 'grossLb' | 'penaltyLb' | 'officialLb') => {
-      const parsed = parseOptional(v[key], (t) => parseWeight(t, prefs.weight));
+      const parsed = parseOptional(v[key], (t) => parseWeight(t, prefs.weight, WEIGHT_LABELS[key]));
       if (!parsed.ok) {
         found[key] = parsed.error;
         return null;
@@ -76,9 +78,9 @@ export function OfficialWeighInForm({
     <FormStack onSubmit={submit} label="Official weigh-in">
       <FormError error={record.error} />
       <div className={styles.formGrid}>
-        <TextField label="Gross on the scale" caption={weightHint(prefs.weight)} {...f('grossLb')} />
-        <TextField label="Penalties" {...f('penaltyLb')} />
-        <TextField label="Official weight" {...f('officialLb')} />
+        <TextField label={WEIGHT_LABELS.grossLb} caption={weightHint(prefs.weight)} {...f('grossLb')} />
+        <TextField label={WEIGHT_LABELS.penaltyLb} {...f('penaltyLb')} />
+        <TextField label={WEIGHT_LABELS.officialLb} {...f('officialLb')} />
         <TextField label="Minutes late" inputMode="numeric" {...f('lateMinutes')} />
         <TextField label="Day place" inputMode="numeric" {...f('dayPlace')} />
       </div>
