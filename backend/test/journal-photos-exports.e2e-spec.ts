@@ -138,4 +138,60 @@ describe('photos and exports', () => {
       weight_entered: '2 lb 8 oz',
     });
   });
+
+  it('exports a lake’s finds as GPX 1.1 that the import reads back into a second lake unchanged (owner or angler only)', async () => {
+    const lake = await createLake(crew.angler, crew.crewId, { name: 'Round Trip Reservoir' });
+    const added = [
+      {
+        name: 'Rock & ridge',
+        lat: 32.9112,
+        lon: -96.2113,
+        kind: 'hard-bottom',
+        subKind: 'rock',
+        depthFt: 18,
+        notes: 'North lip',
+      },
+      { name: 'Milfoil edge', lat: 32.9201, lon: -96.2301, kind: 'vegetation', subKind: 'milfoil', notes: '' },
+    ];
+    for (const f of added) expectOk(await crew.angler.post(`${base}/finds`, { lakeId: lake.id, ...f }), 201);
+
+    const gpx = await crew.angler.agent.get(`${base}/lakes/${lake.id}/finds.gpx`).buffer(true);
+    expectOk(gpx);
+    expect(gpx.headers['content-type']).toMatch(/^application\/gpx\+xml/);
+    expect(gpx.headers['content-disposition']).toMatch(
+      /attachment; filename="shoalbook-round-trip-reservoir-finds-\d{4}-\d{2}-\d{2}\.gpx"/,
+    );
+    expect(gpx.headers['x-shoalbook-notice']).toMatch(/exact positions/);
+    expect((await crew.viewer.get(`${base}/lakes/${lake.id}/finds.gpx`)).status).toBe(403);
+    expect((await crew.angler.get(`${base}/lakes/00000000-0000-7000-8000-000000000000/finds.gpx`)).status).toBe(404);
+
+    // The import's own kind is 'other': every waypoint keeps the kind the file names.
+    const copy = await createLake(crew.angler, crew.crewId, { name: 'Copy Reservoir' });
+    const imported = await upload(
+      crew.angler,
+      `${base}/finds/import?lakeId=${copy.id}&kind=other`,
+      gpx.text,
+      'finds.gpx',
+    );
+    expectOk(imported, 201);
+    expect(imported.body).toMatchObject({ imported: 2, skipped: 0, errors: [] });
+    const listed = await crew.angler.get(`${base}/finds?lakeId=${copy.id}`);
+    expectOk(listed);
+    const items = (listed.body.items ?? listed.body) as Record<string, unknown>[];
+    const pick = (f: Record<string, unknown>) => ({
+      name: f.name,
+      lat: f.lat,
+      lon: f.lon,
+      kind: f.kind,
+      subKind: f.subKind,
+      notes: f.notes,
+      depthFt: f.depthFt == null ? null : Math.round((f.depthFt as number) * 1000) / 1000,
+    });
+    expect(items.map(pick).sort((a, b) => String(a.name).localeCompare(String(b.name)))).toEqual(
+      added
+        .map((f) => ({ depthFt: undefined, ...f }))
+        .map(pick)
+        .sort((a, b) => String(a.name).localeCompare(String(b.name))),
+    );
+  });
 });

@@ -210,6 +210,15 @@ describe('the journal, as the demo angler', () => {
     ]);
     const csv = readFileSync((await csvDownload.path())!, 'utf8');
     expect(csv).toContain('Long shell flat');
+
+    await page.getByLabel('Lake for the GPX file').selectOption({ label: LAKE });
+    const [gpxDownload] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Export finds (GPX)' }).click(),
+    ]);
+    const gpx = readFileSync((await gpxDownload.path())!, 'utf8');
+    expect(gpx).toMatch(/<gpx [^>]*xmlns="http:\/\/www.topografix.com\/GPX\/1\/1"/);
+    expect(gpx).toContain('<name>Long shell flat</name>');
   });
 
   it('the other journal screens pass axe: finds, catches, events', async () => {

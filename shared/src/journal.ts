@@ -461,6 +461,10 @@ export interface FindImportRow {
   lon: number | null;
   markedAt: string | null;
   depthFt: number | null;
+  /** The kind the file names for this waypoint (`<type>`, as Shoalbook's GPX export writes it); else the import's. */
+  kind: FindKind | null;
+  /** The waypoint's description (`<desc>`), kept as the find's notes. */
+  notes: string;
   error: string | null;
   duplicateOf: DuplicateOf | null;
 }

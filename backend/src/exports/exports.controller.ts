@@ -1,9 +1,10 @@
-import { Controller, Get, Header, Res } from '@nestjs/common';
+import { Controller, Get, Header, Param, Res } from '@nestjs/common';
 import { ApiCookieAuth, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { JournalExport } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import type { CrewAccess } from '../common/request-context';
+import { RecordIdPipe } from '../journal/record-id.pipe';
 import { JournalExportDto } from './dto/journal-export.dto';
 import { EXPORT_NOTICE, JournalExportService } from './journal-export.service';
 
@@ -45,5 +46,27 @@ export class ExportsController {
     );
     res.setHeader('X-Shoalbook-Notice', EXPORT_NOTICE);
     return this.exports.csv(access);
+  }
+
+  @Get('lakes/:lakeId/finds.gpx')
+  @ApiProduces('application/gpx+xml')
+  @ApiOperation({
+    summary:
+      "A lake's finds as GPX 1.1 waypoints, which the find import reads back (contains positions; owner or angler)",
+  })
+  @ApiOkResponse({
+    description: 'kind in <type>, notes in <desc>, depth (m) and sub-kind in extensions',
+    schema: { type: 'string' },
+  })
+  @Header('Content-Type', 'application/gpx+xml; charset=utf-8')
+  async gpx(
+    @CurrentCrew() access: CrewAccess,
+    @Param('lakeId', new RecordIdPipe('lake')) lakeId: string,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<string> {
+    const { fileName, gpx } = await this.exports.lakeFindsGpx(access, lakeId);
+    res.setHeader('Content-Disposition', `attachment; filename="${fileName}"`);
+    res.setHeader('X-Shoalbook-Notice', EXPORT_NOTICE);
+    return gpx;
   }
 }

@@ -14,7 +14,9 @@ import { Lake } from '../lakes/lake.entity';
 import { lakeView } from '../lakes/lake-view';
 import { WeighIn } from '../weigh-ins/weigh-in.entity';
 import { officialOf } from '../weigh-ins/weigh-ins.service';
+import { recordNotFound } from '../journal/journal-errors';
 import { csvLine } from './csv';
+import { findsToGpx } from './gpx-export';
 
 export const EXPORT_NOTICE =
   'This file contains the exact positions of your finds and catches. Keep it private: anyone who has it can go to your places.';
@@ -106,6 +108,28 @@ export class JournalExportService {
       })),
       finds,
       catches,
+    };
+  }
+
+  /** One lake's finds as GPX, named after the lake and the day (ASCII only, so any browser keeps the name). */
+  async lakeFindsGpx(access: CrewAccess, lakeId: string): Promise<{ fileName: string; gpx: string }> {
+    const lake = await this.em.findOne(Lake, { id: lakeId, crewId: access.crewId });
+    if (!lake) throw recordNotFound('lake');
+    const finds = await this.em.find(
+      Find,
+      { crewId: access.crewId, lakeId },
+      { orderBy: { markedAt: 'asc', id: 'asc' } },
+    );
+    const now = new Date();
+    const slug =
+      lake.name
+        .normalize('NFKD')
+        .replace(/[^A-Za-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '')
+        .toLowerCase() || 'lake';
+    return {
+      fileName: `shoalbook-${slug}-finds-${now.toISOString().slice(0, 10)}.gpx`,
+      gpx: findsToGpx(lake.name, finds, now),
     };
   }
 

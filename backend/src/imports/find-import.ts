@@ -33,6 +33,8 @@ export async function previewFindImport(
       lon: w.lon,
       markedAt: w.markedAt,
       depthFt: w.depthFt,
+      kind: w.kind,
+      notes: w.notes,
       error: w.error,
       duplicateOf: null,
     };
@@ -102,8 +104,10 @@ export async function commitFindImport(
         depthFt: w.depthFt,
         depthValue: w.depthM,
         depthUnit: w.depthM === null ? null : 'm',
-        kind: options.kind,
-        subKind: options.subKind,
+        // A kind named in the file wins (a round trip through our own export), with its own sub-kind.
+        kind: w.kind ?? options.kind,
+        subKind: w.kind ? w.subKind : options.subKind,
+        notes: w.notes,
         source: options.source,
         createdAt: now,
         updatedAt: now,

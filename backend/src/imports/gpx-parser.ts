@@ -1,5 +1,6 @@
 import { DOMParser, type Element, type Node } from '@xmldom/xmldom';
 import { units } from '@shoalbook/analytics';
+import { FIND_KINDS, FIND_SUB_KINDS, type FindKind } from '@shoalbook/shared';
 import { ImportFileError } from './import-error';
 
 /** Limits on a GPX upload (our choices: ample for a season's waypoints, small enough to parse in memory). */
@@ -8,6 +9,7 @@ export const GPX_LIMITS = Object.freeze({
   maxDepth: 32,
   maxWaypoints: 50_000,
   maxNameLength: 120,
+  maxNotesLength: 5000,
 });
 
 /** One `<wpt>` of the file, checked; `error` says why it cannot be imported. */
@@ -22,10 +24,18 @@ export interface GpxWaypoint {
   /** The depth as it was in the file (metres). */
   depthM: number | null;
   elevationM: number | null;
+  /** The waypoint's `<desc>` (GPX 1.1), kept as the find's notes. */
+  notes: string;
+  /** The waypoint's `<type>` when it names one of Shoalbook's kinds (as our own GPX export writes it). */
+  kind: FindKind | null;
+  /** The sub-kind from our own extension, when it belongs to `kind`; else ''. */
+  subKind: string;
   error: string | null;
 }
 
-const GPX_NAMESPACES = new Set(['http://www.topografix.com/GPX/1/1', 'http://www.topografix.com/GPX/1/0']);
+/** GPX 1.1 and 1.0, and no namespace at all, which several phone and desktop apps write. */
+const GPX_NAMESPACES = new Set(['http://www.topografix.com/GPX/1/1', 'http://www.topografix.com/GPX/1/0', '']);
+const KINDS: ReadonlySet<string> = new Set(FIND_KINDS);
 
 function childElements(el: Element): Element[] {
   const out: Element[] = [];
@@ -51,19 +61,24 @@ function treeDepth(root: Element): number {
   return max;
 }
 
-function findDepthExtension(wpt: Element): number | null {
+/** The first element of that local name anywhere under the waypoint's `<extensions>` (any namespace). */
+function extensionText(wpt: Element, localName: string): string | null {
   const ext = childElements(wpt).find((c) => c.localName === 'extensions');
   if (!ext) return null;
   const stack = [...childElements(ext)];
   while (stack.length) {
     const el = stack.pop()!;
-    if (el.localName === 'depth') {
-      const v = Number((el.textContent ?? '').trim());
-      return Number.isFinite(v) ? v : NaN;
-    }
+    if (el.localName === localName) return (el.textContent ?? '').trim();
     stack.push(...childElements(el));
   }
   return null;
+}
+
+function findDepthExtension(wpt: Element): number | null {
+  const text = extensionText(wpt, 'depth');
+  if (text === null) return null;
+  const v = Number(text);
+  return text !== '' && Number.isFinite(v) ? v : NaN;
 }
 
 function parseCoordinate(raw: string | null, name: 'lat' | 'lon'): { value: number | null; error: string | null } {
@@ -104,6 +119,9 @@ function waypoint(wpt: Element, index: number): GpxWaypoint {
     errors.push('The depth extension is not a depth between 0 and 400 m.');
     depthM = null;
   }
+  const type = childText(wpt, 'type') ?? '';
+  const kind = KINDS.has(type) ? (type as FindKind) : null;
+  const subKind = extensionText(wpt, 'subKind') ?? '';
   return {
     index,
     name,
@@ -113,12 +131,17 @@ function waypoint(wpt: Element, index: number): GpxWaypoint {
     depthFt: depthM === null ? null : units.mToFt(depthM),
     depthM,
     elevationM,
+    notes: (childText(wpt, 'desc') ?? '').slice(0, GPX_LIMITS.maxNotesLength),
+    kind,
+    subKind: kind && FIND_SUB_KINDS[kind].includes(subKind) ? subKind : '',
     error: errors.length ? errors.join(' ') : null,
   };
 }
 
 /**
- * Parse a GPX 1.1 (or 1.0) file's waypoints. Refuses any DOCTYPE (so no DTD and no entity of any
+ * Parse a GPX 1.1 (or 1.0, or namespace-less) file's waypoints. Our own reader on xmldom rather than
+ * @tmcw/togeojson: togeojson drops a waypoint whose coordinates do not parse, where the import preview must
+ * show that row and say why it cannot be imported. Refuses any DOCTYPE (so no DTD and no entity of any
  * kind, internal or external, is ever processed: no XXE, no entity expansion), files over 20 MB, trees
  * deeper than 32 levels and more than 50,000 waypoints. Per-waypoint problems are reported on the row.
  *
@@ -149,7 +172,7 @@ export function parseGpx(text: string): GpxWaypoint[] {
   if (!root || root.localName !== 'gpx' || !GPX_NAMESPACES.has(root.namespaceURI ?? '')) {
     throw new ImportFileError(
       'wrong_file_type',
-      'The file is XML but not GPX (the root must be <gpx> in the GPX 1.1 namespace).',
+      'The file is XML but not GPX (the root must be <gpx>, in the GPX 1.1 or 1.0 namespace or in none).',
     );
   }
   if (treeDepth(root) > GPX_LIMITS.maxDepth)

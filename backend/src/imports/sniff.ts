@@ -19,6 +19,8 @@ export async function sniffType(buffer: Buffer): Promise<FileType.FileTypeResult
  */
 export async function assertTextFile(buffer: Buffer, expected: string): Promise<string> {
   if (buffer.length === 0) throw new ImportFileError('empty_file', 'The file is empty.');
+  const utf16 = utf16Text(buffer, expected);
+  if (utf16 !== null) return utf16;
   const detected = await sniffType(buffer);
   if (detected && detected.ext !== 'xml') {
     throw new ImportFileError(
@@ -31,4 +33,28 @@ export async function assertTextFile(buffer: Buffer, expected: string): Promise<
   if (text.includes('\uFFFD'))
     throw new ImportFileError('wrong_file_type', `The file is not UTF-8 text, so it cannot be ${expected}.`);
   return text.replace(/^\uFEFF/, '');
+}
+
+/**
+ * Text that announces itself as UTF-16 with a byte-order mark (Unicode 15, §23.8: FF FE little-endian,
+ * FE FF big-endian) is decoded as such, before any sniffing: its zero bytes would otherwise read as binary.
+ */
+function utf16Text(buffer: Buffer, expected: string): string | null {
+  const encoding =
+    buffer[0] === 0xff && buffer[1] === 0xfe
+      ? 'utf-16le'
+      : buffer[0] === 0xfe && buffer[1] === 0xff
+        ? 'utf-16be'
+        : null;
+  if (!encoding) return null;
+  try {
+    const text = new TextDecoder(encoding, { fatal: true }).decode(buffer.subarray(2));
+    if (text.includes('\u0000')) throw new Error('NUL');
+    return text;
+  } catch {
+    throw new ImportFileError(
+      'wrong_file_type',
+      `The file starts like UTF-16 text but is not, so it cannot be ${expected}.`,
+    );
+  }
 }

@@ -78,6 +78,7 @@ export const OVERRIDES: Record<string, Expectation> = {
   // Journal exports carry positions: owners and anglers only, even though they are GETs.
   'GET /api/crews/{crewId}/export.json': crewWrite,
   'GET /api/crews/{crewId}/export.csv': crewWrite,
+  'GET /api/crews/{crewId}/lakes/{lakeId}/finds.gpx': crewWrite,
 };
 
 /** The expectation for a route, or undefined when it needs a row. */

@@ -7,8 +7,10 @@ import type {
   FindImportPreview,
   FindImportResult,
   FindImportRow,
+  FindKind,
   ImportRowError,
 } from '@shoalbook/shared';
+import { FIND_KINDS } from '@shoalbook/shared';
 
 const nullableNumber = { type: Number, nullable: true } as const;
 
@@ -27,6 +29,13 @@ export class FindImportRowDto implements FindImportRow {
   @ApiProperty(nullableNumber) lon: number | null;
   @ApiProperty({ type: String, format: 'date-time', nullable: true }) markedAt: string | null;
   @ApiProperty(nullableNumber) depthFt: number | null;
+  @ApiProperty({
+    enum: FIND_KINDS,
+    nullable: true,
+    description: "the kind the file's <type> names; null: the import's kind applies",
+  })
+  kind: FindKind | null;
+  @ApiProperty({ description: "the waypoint's <desc>, kept as the find's notes" }) notes: string;
   @ApiProperty({ type: String, nullable: true }) error: string | null;
   @ApiProperty({ type: DuplicateOfDto, nullable: true }) duplicateOf: DuplicateOfDto | null;
 }

@@ -163,7 +163,7 @@ export function GpxImport({
             ))}
           </Select>
           <FormControl.Caption>
-            Waypoints carry no kind; set it here and adjust finds one by one later.
+            For waypoints whose file names no kind of ours (a file exported from Shoalbook names each one).
           </FormControl.Caption>
         </FormControl>
         <FormControl>
@@ -193,8 +193,8 @@ export function GpxImport({
           }}
         />
         <Text as="p" size="small" id={`${fileId}-hint`}>
-          A GPX 1.1 waypoint file from your unit or mapping app, up to 20 MB. Names, times, positions and depths
-          (elevation) are read.
+          A GPX waypoint file from your unit or mapping app, up to 20 MB. Names, descriptions (kept as notes), times,
+          positions and depths are read.
         </Text>
         {problem ? (
           <Text size="small" role="alert" className={styles.errorList}>
@@ -227,7 +227,7 @@ export function GpxImport({
             <Label variant="attention">{counts.duplicate} within 15 m of an existing find</Label>
             <Label variant="danger">{counts.error} cannot be imported</Label>
           </div>
-          <GpxPreviewTable rows={preview.rows} prefs={prefs} timeZone={lake?.timeZone ?? 'UTC'} />
+          <GpxPreviewTable rows={preview.rows} prefs={prefs} timeZone={lake?.timeZone ?? 'UTC'} defaultKind={kind} />
           <FormControl>
             <Checkbox checked={skipDuplicates} onChange={(e) => setSkipDuplicates(e.target.checked)} />
             <FormControl.Label>Skip waypoints within 15 m of an existing find</FormControl.Label>

@@ -15,13 +15,15 @@ const row = (index: number, name: string, extra: Partial<FindImportRow> = {}): F
   lon: -86.2,
   markedAt: '2025-04-10T13:05:00Z',
   depthFt: 12,
+  kind: null,
+  notes: '',
   error: null,
   duplicateOf: null,
   ...extra,
 });
 
 const rows: FindImportRow[] = [
-  row(0, 'Shell flat'),
+  row(0, 'Shell flat', { kind: 'hard-bottom' }),
   row(1, 'Old bar', { duplicateOf: { findId: 'f9', name: 'North shell bar', distanceM: 8.6 } }),
   row(2, 'Broken one', {
     lat: null,
@@ -41,7 +43,7 @@ const rowNamed = (name: string) =>
 
 describe('GpxPreviewTable', () => {
   it('marks each waypoint ready, near an existing find (which, how far) or refused (why)', () => {
-    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="America/Chicago" />);
+    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="America/Chicago" defaultKind="vegetation" />);
 
     expect(within(rowNamed('Shell flat')).getByText('Ready')).toBeInTheDocument();
     const dup = rowNamed('Old bar');
@@ -54,8 +56,14 @@ describe('GpxPreviewTable', () => {
     expect(within(broken).getByText('Latitude 95.2 is outside -90 to 90.')).toBeInTheDocument();
   });
 
+  it('shows the kind the file names, and the import’s kind for the waypoints that name none', () => {
+    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="UTC" defaultKind="vegetation" />);
+    expect(within(rowNamed('Shell flat')).getByText('Hard bottom (from the file)')).toBeInTheDocument();
+    expect(within(rowNamed('Old bar')).getByText('Vegetation')).toBeInTheDocument();
+  });
+
   it('shows depth in the user’s unit and the time on the lake’s clock', () => {
-    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="America/Chicago" />);
+    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="America/Chicago" defaultKind="vegetation" />);
     const ready = rowNamed('Shell flat');
     // 12 ft × 0.3048 = 3.6576 m; 13:05 UTC is 08:05 CDT
     expect(within(ready).getByText('3.7 m')).toBeInTheDocument();
@@ -64,7 +72,7 @@ describe('GpxPreviewTable', () => {
 
   it('filters to the rows that need a look', async () => {
     const user = userEvent.setup();
-    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="UTC" />);
+    renderWithApp(<GpxPreviewTable rows={rows} prefs={prefs} timeZone="UTC" defaultKind="vegetation" />);
     await user.selectOptions(screen.getByRole('combobox', { name: 'Status' }), 'error');
     const body = within(screen.getByRole('table')).getAllByRole('row').slice(1);
     expect(body).toHaveLength(1);

@@ -1,4 +1,4 @@
-import type { UnitPreferences } from '@shoalbook/shared';
+import { FIND_KIND_LABELS, type FindKind, type UnitPreferences } from '@shoalbook/shared';
 import { Label } from '@primer/react';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo } from 'react';
@@ -40,10 +40,13 @@ export function GpxPreviewTable({
   rows,
   prefs,
   timeZone,
+  defaultKind,
 }: {
   rows: GpxPreviewRow[];
   prefs: UnitPreferences;
   timeZone: string;
+  /** The kind chosen for the import, for waypoints whose file names none. */
+  defaultKind: FindKind;
 }) {
   const columns = useMemo(
     () => [
@@ -69,6 +72,10 @@ export function GpxPreviewTable({
         header: 'Detail',
         enableSorting: false,
       }),
+      column.accessor((r) => FIND_KIND_LABELS[r.kind ?? defaultKind] + (r.kind ? ' (from the file)' : ''), {
+        id: 'kind',
+        header: 'Kind',
+      }),
       column.accessor((r) => r.depthFt ?? undefined, {
         id: 'depth',
         header: 'Depth',
@@ -91,7 +98,7 @@ export function GpxPreviewTable({
         enableSorting: false,
       }),
     ],
-    [prefs, timeZone],
+    [prefs, timeZone, defaultKind],
   );
   return (
     <DataTable

@@ -86,7 +86,7 @@ export function Component() {
       {section === 'overview' ? (
         <div className={styles.stack}>
           <EventSummary event={e} lake={lake.data} prefs={prefs} />
-          {canExport ? <ExportButtons crewId={crewId} /> : null}
+          {canExport ? <ExportButtons crewId={crewId} lakeId={e.lakeId} /> : null}
         </div>
       ) : null}
       {section === 'finds' && lake.data ? (
