@@ -252,7 +252,7 @@ describe('imports: GPX finds and CSV catches', () => {
       ].join('\r\n');
       const ok = await upload(crew.angler, `${base}/catches/import?eventId=${eventId}`, good, 'days.csv');
       expectOk(ok, 201);
-      expect(ok.body).toEqual({ imported: 2, errors: [] });
+      expect(ok.body).toEqual({ imported: 2, skipped: 0, errors: [] });
       const list = await crew.angler.get(`${base}/catches?eventId=${eventId}`);
       const kg = list.body.find((c: { notes: string }) => c.notes === 'by coordinates');
       expect(kg).toMatchObject({
@@ -325,8 +325,42 @@ describe('imports: GPX finds and CSV catches', () => {
       const boundaries = [header, file.split('\n')[1], file.split('\n')[3]].join('\n');
       const ok = await upload(crew.angler, `${base}/catches/import?eventId=${timed.id}`, boundaries, 'timed.csv');
       expectOk(ok, 201);
-      expect(ok.body).toEqual({ imported: 2, errors: [] });
+      expect(ok.body).toEqual({ imported: 2, skipped: 0, errors: [] });
       expect(await testEm(app).count(Catch, { eventId: timed.id })).toBe(before + 2);
+    });
+
+    it('imports the same file twice as once: rows already logged (same day, minute, species, weight) or repeated in the file are skipped', async () => {
+      const twice = await createEvent(crew.angler, crew.crewId, lakeId, { name: 'Twice Open' });
+      const file = [
+        header,
+        '2024-04-12,07:30,largemouth,3,lb-oz,4,18,in,weighed,,,,,,first',
+        '2024-04-12,07:30,largemouth,3.25,,,18,in,weighed,,,,,,the same fish typed in pounds',
+        '2024-04-12,07:30,largemouth,3.5,,,18,in,weighed,,,,,,another fish that minute',
+        '2024-04-13,07:30,largemouth,3.25,,,18,in,weighed,,,,,,the next day',
+      ].join('\n');
+      const first = await upload(crew.angler, `${base}/catches/import?eventId=${twice.id}`, file, 'twice.csv');
+      expectOk(first, 201);
+      expect(first.body).toEqual({ imported: 3, skipped: 1, errors: [] });
+      expect(await testEm(app).count(Catch, { eventId: twice.id })).toBe(3);
+
+      const preview = await upload(
+        crew.angler,
+        `${base}/catches/import/preview?eventId=${twice.id}`,
+        file,
+        'twice.csv',
+      );
+      expectOk(preview);
+      expect(preview.body).toMatchObject({ accepted: 4, rejected: 0, duplicates: 4 });
+      const logged = await testEm(app).find(Catch, { eventId: twice.id });
+      const rows = preview.body.rows as { duplicateOf: { catchId: string | null; line?: number } | null }[];
+      for (const r of rows) expect(logged.map((c) => c.id)).toContain(r.duplicateOf!.catchId);
+
+      const journalBefore = await journalCount(app, crew.crewId);
+      const again = await upload(crew.angler, `${base}/catches/import?eventId=${twice.id}`, file, 'twice.csv');
+      expectOk(again, 201);
+      expect(again.body).toEqual({ imported: 0, skipped: 4, errors: [] });
+      expect(await testEm(app).count(Catch, { eventId: twice.id })).toBe(3);
+      expect(await journalCount(app, crew.crewId)).toBe(journalBefore);
     });
 
     it('refuses unknown columns and binary files', async () => {

@@ -501,17 +501,29 @@ export interface CatchImportRow {
   findId: string | null;
   attributionDistanceM: number | null;
   weightFlagged: boolean;
+  /** The catch already logged, or the earlier line of this file, that this row repeats; skipped on import. */
+  duplicateOf: CatchDuplicateOf | null;
   errors: { field: string; message: string }[];
+}
+
+/** `catchId` of the logged catch, or null with the `line` of the file that came first. */
+export interface CatchDuplicateOf {
+  catchId: string | null;
+  line?: number;
 }
 
 export interface CatchImportPreview {
   rows: CatchImportRow[];
+  /** Rows without an error (duplicates included: they are skipped on import). */
   accepted: number;
   rejected: number;
+  duplicates: number;
 }
 
 export interface CatchImportResult {
   imported: number;
+  /** Rows skipped because they repeat a catch already logged or an earlier line. */
+  skipped: number;
   errors: ImportRowError[];
 }
 

@@ -117,7 +117,8 @@ export class CatchesController {
     const parsed = await readCatchCsvUpload(req.file!.buffer);
     const days = await this.em.find(CompetitionDay, { crewId: access.crewId, eventId: event.id });
     const ctx = await this.catches.lakeContext(this.em, access.crewId, event);
-    return previewOf(await checkCatchRows(access.crewId, event.id, days, ctx, parsed));
+    const existing = await this.catches.loggedCatchIdentities(this.em, access.crewId, event.id);
+    return previewOf(await checkCatchRows(access.crewId, event.id, days, ctx, parsed, existing));
   }
 
   @Post('import')

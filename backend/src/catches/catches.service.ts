@@ -6,6 +6,7 @@ import { CompetitionDay } from '../events/competition-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';
 import { recordNotFound, unknownReference } from '../journal/journal-errors';
+import type { CatchIdentity } from '../imports/catch-duplicates';
 import { canSeePositions } from '../journal/positions';
 import { Lake } from '../lakes/lake.entity';
 import { Photo } from '../photos/photo.entity';
@@ -112,6 +113,15 @@ export class CatchesService {
     const event = await em.findOneOrFail(TournamentEvent, { id: day.eventId, crewId });
     const lake = await em.findOneOrFail(Lake, { id: event.lakeId, crewId });
     return { lake, day, event, finds: findsInDatabase(em, crewId, lake.id), photoIds: this.photoIds(em, crewId) };
+  }
+
+  /** For an import's duplicate check: the event's catches already logged, only the fields that identify a fish. */
+  async loggedCatchIdentities(em: EntityManager, crewId: string, eventId: string): Promise<CatchIdentity[]> {
+    return em.find(
+      Catch,
+      { crewId, eventId },
+      { fields: ['id', 'competitionDayId', 'caughtAt', 'species', 'weightLb'] },
+    );
   }
 
   /** For an import: the event's lake and all its finds, loaded once for thousands of rows. */

@@ -8,6 +8,7 @@ import { LogCatchDto } from '../catches/dto/catch.dto';
 import { toFieldErrors } from '../common/pipes/api-validation.pipe';
 import type { CompetitionDay } from '../events/competition-day.entity';
 import { FieldProblems } from '../journal/journal-errors';
+import { type CatchIdentity, findCatchDuplicates } from './catch-duplicates';
 import { ImportFileError } from './import-error';
 
 /** Limits on a catch CSV (our choices). */
@@ -129,7 +130,8 @@ export interface CheckedCatchRow {
 
 /**
  * Check every row against the same DTO and rules as the form (LogCatchDto, applyCatchInput), for the
- * event's competition days; nothing is written here.
+ * event's competition days, and mark the rows that repeat a catch of `existing` or an earlier line;
+ * nothing is written here.
  */
 export async function checkCatchRows(
   crewId: string,
@@ -137,6 +139,7 @@ export async function checkCatchRows(
   days: CompetitionDay[],
   ctx: ImportCatchContext,
   parsed: ParsedCsv,
+  existing: readonly CatchIdentity[],
 ): Promise<CheckedCatchRow[]> {
   const dayByDate = new Map(days.map((d) => [d.date, d]));
   const findsByName = new Map<string, string[]>();
@@ -189,18 +192,26 @@ export async function checkCatchRows(
         findId: record?.findId ?? null,
         attributionDistanceM: record?.attributionDistanceM ?? null,
         weightFlagged: record?.weightFlagged ?? false,
+        duplicateOf: null,
         errors: Object.entries(problems.errors).flatMap(([field, messages]) =>
           messages.map((message) => ({ field, message })),
         ),
       },
     });
   }
+  const valid = out.filter((r) => r.record);
+  const duplicates = findCatchDuplicates(
+    existing,
+    valid.map((r) => ({ ...r.record!, id: null, line: r.preview.line })),
+  );
+  valid.forEach((r, i) => (r.preview.duplicateOf = duplicates[i]!));
   return out;
 }
 
 export function previewOf(rows: CheckedCatchRow[]): CatchImportPreview {
   const rejected = rows.filter((r) => r.preview.errors.length).length;
-  return { rows: rows.map((r) => r.preview), accepted: rows.length - rejected, rejected };
+  const duplicates = rows.filter((r) => r.preview.duplicateOf).length;
+  return { rows: rows.map((r) => r.preview), accepted: rows.length - rejected, rejected, duplicates };
 }
 
 /** The downloadable template: the header and one example row. */

@@ -115,7 +115,9 @@ describe('parseGpx', () => {
       },
     ];
     const text = findsToGpx('Test Lake', finds, new Date('2025-05-01T00:00:00Z'));
-    expect(text).toMatch(/^<\?xml version="1.0" encoding="UTF-8"\?>\n<gpx [^>]*xmlns="http:\/\/www.topografix.com\/GPX\/1\/1"/);
+    expect(text).toMatch(
+      /^<\?xml version="1.0" encoding="UTF-8"\?>\n<gpx [^>]*xmlns="http:\/\/www.topografix.com\/GPX\/1\/1"/,
+    );
     expect(text.match(/xmlns:sb=/g)).toHaveLength(1); // declared once, on the root
     const rows = parseGpx(text);
     expect(rows).toHaveLength(2);

@@ -263,7 +263,7 @@ describe('catch CSV parser and row checks under fuzzing (fast-check)', () => {
           expect(parsed.message.length).toBeGreaterThan(0);
           return;
         }
-        const checked = await checkCatchRows('c', 'e', [day], ctx, parsed);
+        const checked = await checkCatchRows('c', 'e', [day], ctx, parsed, []);
         expect(checked).toHaveLength(parsed.rows.length);
         for (const [i, row] of checked.entries()) {
           expect(row.preview).toMatchObject({ index: i, line: i + 2 });

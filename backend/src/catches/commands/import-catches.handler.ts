@@ -30,7 +30,8 @@ export class ImportCatchesHandler implements ICommandHandler<ImportCatchesComman
       if (!event) throw recordNotFound('event');
       const days = await tx.find(CompetitionDay, { crewId: access.crewId, eventId });
       const ctx = await this.catches.lakeContext(tx, access.crewId, event);
-      const rows = await checkCatchRows(access.crewId, event.id, days, ctx, parsed);
+      const existing = await this.catches.loggedCatchIdentities(tx, access.crewId, event.id);
+      const rows = await checkCatchRows(access.crewId, event.id, days, ctx, parsed, existing);
       const bad = rows.filter((r) => r.preview.errors.length);
       if (bad.length) {
         const fieldErrors: Record<string, string[]> = {};
@@ -44,13 +45,14 @@ export class ImportCatchesHandler implements ICommandHandler<ImportCatchesComman
         );
       }
       // The one who imports the file logged its catches.
-      const records = rows.map((r) => Object.assign(r.record!, { loggedBy: access.userId }));
+      const fresh = rows.filter((r) => !r.preview.duplicateOf);
+      const records = fresh.map((r) => Object.assign(r.record!, { loggedBy: access.userId }));
       await insertRecordsBulk(tx, log, 'Catch', records, (c) => ({
         type: 'CatchLogged',
         aggregateType: 'catch',
         aggregateId: c.id,
       }));
-      return { imported: records.length, errors: [] };
+      return { imported: records.length, skipped: rows.length - fresh.length, errors: [] };
     });
   }
 }

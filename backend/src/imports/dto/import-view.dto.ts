@@ -3,6 +3,7 @@ import type {
   CatchImportPreview,
   CatchImportResult,
   CatchImportRow,
+  CatchDuplicateOf,
   DuplicateOf,
   FindImportPreview,
   FindImportResult,
@@ -65,6 +66,12 @@ export class FieldMessageDto {
   @ApiProperty() message: string;
 }
 
+export class CatchDuplicateOfDto implements CatchDuplicateOf {
+  @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'the logged catch; null: an earlier line' })
+  catchId: string | null;
+  @ApiPropertyOptional({ description: 'the earlier line of the same file' }) line?: number;
+}
+
 export class CatchImportRowDto implements CatchImportRow {
   @ApiProperty() index: number;
   @ApiProperty() line: number;
@@ -75,6 +82,7 @@ export class CatchImportRowDto implements CatchImportRow {
   @ApiProperty({ type: String, format: 'uuid', nullable: true }) findId: string | null;
   @ApiProperty(nullableNumber) attributionDistanceM: number | null;
   @ApiProperty() weightFlagged: boolean;
+  @ApiProperty({ type: () => CatchDuplicateOfDto, nullable: true }) duplicateOf: CatchDuplicateOfDto | null;
   @ApiProperty({ type: [FieldMessageDto] }) errors: FieldMessageDto[];
 }
 
@@ -82,9 +90,12 @@ export class CatchImportPreviewDto implements CatchImportPreview {
   @ApiProperty({ type: [CatchImportRowDto] }) rows: CatchImportRowDto[];
   @ApiProperty() accepted: number;
   @ApiProperty() rejected: number;
+  @ApiProperty({ description: 'rows repeating a logged catch or an earlier line; skipped on import' })
+  duplicates: number;
 }
 
 export class CatchImportResultDto implements CatchImportResult {
   @ApiProperty() imported: number;
+  @ApiProperty({ description: 'rows skipped as duplicates' }) skipped: number;
   @ApiProperty({ type: [ImportRowErrorDto] }) errors: ImportRowErrorDto[];
 }

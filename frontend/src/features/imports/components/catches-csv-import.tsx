@@ -139,13 +139,18 @@ export function CatchesCsvImport({
         <Banner
           variant="success"
           title={`${result.imported} catches imported`}
-          description="Every row is in, in one go."
+          description={
+            result.skipped
+              ? `${result.skipped} rows were already logged (same day, minute, species and weight) and were skipped.`
+              : 'Every row is in, in one go.'
+          }
         />
       ) : null}
       {preview ? (
         <>
           <div className={styles.summary} aria-live="polite">
             <Label variant="success">{preview.accepted} rows ready</Label>
+            <Label variant="attention">{preview.duplicates} already logged</Label>
             <Label variant="danger">{preview.rejected} rows with errors</Label>
           </div>
           <CsvPreviewTable rows={preview.rows} prefs={prefs} timeZone={timeZone} />
@@ -169,14 +174,16 @@ export function CatchesCsvImport({
             <Button
               variant="primary"
               onClick={commit}
-              disabled={progress !== null || preview.accepted === 0 || preview.rejected > 0}
+              disabled={progress !== null || preview.accepted - preview.duplicates === 0 || preview.rejected > 0}
             >
-              {`Import ${preview.accepted} catches`}
+              {`Import ${preview.accepted - preview.duplicates} catches`}
             </Button>
             <Text size="small">
               {preview.rejected > 0
                 ? 'Fix the rows above and check again; nothing is imported while a row is wrong.'
-                : 'All rows go in together.'}
+                : preview.duplicates
+                  ? 'All new rows go in together; the ones already logged are skipped.'
+                  : 'All rows go in together.'}
             </Text>
           </div>
         </>

@@ -9,6 +9,15 @@ import { formatLength, formatWeight } from '../../../lib/units';
 
 const column = createColumnHelper<CsvPreviewRow>();
 
+/** Which catch, already logged or earlier in this file, a row repeats (same day, minute, species and weight). */
+export function duplicateText(row: CsvPreviewRow): string {
+  const d = row.duplicateOf;
+  if (!d) return '';
+  return d.catchId
+    ? 'Same day, minute, species and weight as a catch already logged; skipped'
+    : `Repeats line ${d.line}; skipped`;
+}
+
 /** Every row of a catch CSV as the server read it: its values in the user's units, or what is wrong with it. */
 export function CsvPreviewTable({
   rows,
@@ -22,27 +31,32 @@ export function CsvPreviewTable({
   const columns = useMemo(
     () => [
       column.accessor('line', { header: 'Line', meta: { numeric: true } }),
-      column.accessor((r) => (r.errors.length ? 'error' : 'ready'), {
+      column.accessor((r) => (r.errors.length ? 'error' : r.duplicateOf ? 'duplicate' : 'ready'), {
         id: 'status',
         header: 'Status',
         meta: {
           filterOptions: [
             { value: 'ready', label: 'Ready' },
+            { value: 'duplicate', label: 'Already logged' },
             { value: 'error', label: 'Needs fixing' },
           ],
         },
         cell: (info) =>
           info.getValue() === 'error' ? (
             <Label variant="danger">Needs fixing</Label>
+          ) : info.getValue() === 'duplicate' ? (
+            <Label variant="attention">Already logged</Label>
           ) : (
             <Label variant="success">Ready</Label>
           ),
       }),
-      column.accessor((r) => r.errors.map((e) => (e.field ? `${e.field}: ${e.message}` : e.message)).join('; '), {
-        id: 'problems',
-        header: 'What is wrong',
-        enableSorting: false,
-      }),
+      column.accessor(
+        (r) =>
+          r.errors.length
+            ? r.errors.map((e) => (e.field ? `${e.field}: ${e.message}` : e.message)).join('; ')
+            : duplicateText(r),
+        { id: 'problems', header: 'What to look at', enableSorting: false },
+      ),
       column.accessor((r) => r.caughtAt ?? '', {
         id: 'caughtAt',
         header: 'Time',
