@@ -210,6 +210,26 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     expect(description.join(' ')).toMatch(/from the 06:30 start to the 15:00 check-in .*05:00 is before the start/);
     const unchanged = await apiCall<{ caughtAt: string }>(page, 'GET', `${crewApi}/catches/${catchId}`);
     expect(unchanged.caughtAt).toBe('2025-06-14T11:48:00.000Z'); // 06:48 CDT = UTC−5 (IANA tz database)
+
+    // A corrected weight stays in the catch's history beside the weight as first recorded, with who and when.
+    await page.reload();
+    const history = page.getByRole('region', { name: 'History of this catch' });
+    await history.getByText(/^Weight: .+ as first recorded, by .+, \d{2}:\d{2}/).waitFor();
+    await page.getByRole('textbox', { name: /^Weight/ }).fill('2 lb 8 oz');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await page.getByText('Changes saved').waitFor();
+    await history.getByText(/^Weight: .+ → .+, by .+, \d{2}:\d{2}/).waitFor();
+    const changes = await apiCall<{ field: string; from: number | null; to: number }[]>(
+      page,
+      'GET',
+      `${crewApi}/catches/${catchId}/history`,
+    );
+    expect(changes.filter((c) => c.field === 'weightLb').map((c) => [c.field, c.from, c.to])).toEqual([
+      ['weightLb', null, 2.35],
+      ['weightLb', 2.35, 2.5], // 2 lb 8 oz = 2.5 lb (16 oz to the pound)
+    ]);
+    await expectNoSeriousAxe(page, 'catch history');
+    await screenshot(page, 'journal-catch-history-desk');
   });
 
   it('keeps notes for a practice day', async () => {

@@ -604,3 +604,36 @@ export const JOURNAL_EVENT_TYPES = [
   'StopDeleted',
 ] as const;
 export type JournalEventType = (typeof JOURNAL_EVENT_TYPES)[number];
+
+// ---------------------------------------------------------------------------------------------
+// A record's history, read back from the journal: every change to a figure stays there.
+
+/** The figures of a catch whose every change is shown as its history. */
+export const CATCH_HISTORY_FIELDS = ['weightLb', 'lengthIn'] as const;
+/** The official figures of a day's weigh-in whose every change is shown as its history. */
+export const WEIGH_IN_HISTORY_FIELDS = [
+  'grossLb',
+  'penaltyLb',
+  'officialLb',
+  'lateMinutes',
+  'dayPlace',
+  'fieldSize',
+  'winningLb',
+  'cutLb',
+] as const;
+export type CatchHistoryField = (typeof CATCH_HISTORY_FIELDS)[number];
+export type WeighInHistoryField = (typeof WEIGH_IN_HISTORY_FIELDS)[number];
+
+/** One change to one figure, oldest first in a history; weights in lb, lengths in inches (canonical). */
+export interface RecordChange<F extends string = CatchHistoryField | WeighInHistoryField> {
+  field: F;
+  /** null when the figure had no value before (always so for the first recording). */
+  from: number | null;
+  to: number | null;
+  /** When the change was written (ISO-8601 UTC). */
+  at: string;
+  /** The crew member who made it (display name); null if the account no longer exists. */
+  byName: string | null;
+  /** The record's first recording rather than a later change. */
+  first: boolean;
+}

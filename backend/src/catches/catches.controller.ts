@@ -28,7 +28,13 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
-import type { CatchImportPreview, CatchImportResult, CatchView } from '@shoalbook/shared';
+import type {
+  CatchHistoryField,
+  CatchImportPreview,
+  CatchImportResult,
+  CatchView,
+  RecordChange,
+} from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
 import type { CrewAccess } from '../common/request-context';
@@ -38,6 +44,7 @@ import { catchCsvTemplate, checkCatchRows, CSV_LIMITS, previewOf } from '../impo
 import { readCatchCsvUpload } from '../imports/read-upload';
 import { UploadInterceptor } from '../imports/upload.interceptor';
 import { recordNotFound } from '../journal/journal-errors';
+import { CatchChangeDto } from '../journal/record-change.dto';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { CatchesService } from './catches.service';
 import {
@@ -144,6 +151,19 @@ export class CatchesController {
     @Param('catchId', new RecordIdPipe('catch')) catchId: string,
   ): Promise<CatchView> {
     return this.catches.get(access, catchId);
+  }
+
+  @Get(':catchId/history')
+  @ApiOperation({
+    summary:
+      "Every change to the catch's weight and length, oldest first, with who made it and when (from the journal)",
+  })
+  @ApiOkResponse({ type: [CatchChangeDto] })
+  history(
+    @CurrentCrew() access: CrewAccess,
+    @Param('catchId', new RecordIdPipe('catch')) catchId: string,
+  ): Promise<RecordChange<CatchHistoryField>[]> {
+    return this.catches.changes(access, catchId);
   }
 
   @Patch(':catchId')

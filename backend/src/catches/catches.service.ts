@@ -1,10 +1,11 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
-import type { CatchView } from '@shoalbook/shared';
+import { CATCH_HISTORY_FIELDS, type CatchHistoryField, type CatchView, type RecordChange } from '@shoalbook/shared';
 import type { CrewAccess } from '../common/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';
+import { RecordHistoryService } from '../journal-events/record-history.service';
 import { recordNotFound, unknownReference } from '../journal/journal-errors';
 import type { CatchIdentity } from '../imports/catch-duplicates';
 import { canSeePositions } from '../journal/positions';
@@ -23,7 +24,15 @@ export class CatchesService {
   constructor(
     private readonly em: EntityManager,
     private readonly sky: SkyService,
+    private readonly history: RecordHistoryService,
   ) {}
+
+  /** Every change to the catch's weight and length, as its journal kept them (a deleted catch's too). */
+  async changes(access: CrewAccess, catchId: string): Promise<RecordChange<CatchHistoryField>[]> {
+    const changes = await this.history.changes(access.crewId, 'catch', catchId, CATCH_HISTORY_FIELDS);
+    if (!changes) throw recordNotFound('catch');
+    return changes;
+  }
 
   async list(
     access: CrewAccess,

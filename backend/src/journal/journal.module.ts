@@ -11,6 +11,7 @@ import { FIND_COMMAND_HANDLERS } from '../finds/commands';
 import { FindsController } from '../finds/finds.controller';
 import { FindsService } from '../finds/finds.service';
 import { JournalEventsService } from '../journal-events/journal-events.service';
+import { RecordHistoryService } from '../journal-events/record-history.service';
 import { LAKE_COMMAND_HANDLERS } from '../lakes/commands';
 import { LakesController } from '../lakes/lakes.controller';
 import { LakesService } from '../lakes/lakes.service';
@@ -45,6 +46,7 @@ import { WeighInsService } from '../weigh-ins/weigh-ins.service';
   ],
   providers: [
     JournalEventsService,
+    RecordHistoryService,
     SkyService,
     LakesService,
     EventsService,

@@ -2,9 +2,10 @@ import { Body, Controller, Get, Param, Put } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import { ApiConflictResponse, ApiCookieAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { WeighInsView } from '@shoalbook/shared';
+import type { RecordChange, WeighInHistoryField, WeighInsView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import type { CrewAccess } from '../common/request-context';
+import { WeighInChangeDto } from '../journal/record-change.dto';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { RecordWeighInCommand } from './commands/record-weigh-in.command';
 import { RecordWeighInDto } from './weigh-in.dto';
@@ -49,5 +50,18 @@ export class WeighInsController {
     @Body() dto: RecordWeighInDto,
   ): Promise<VersionedWeighIn & { competitionDayId: string }> {
     return this.commands.execute(new RecordWeighInCommand(access, dayId, dto));
+  }
+
+  @Get('competition-days/:dayId/weigh-in/history')
+  @ApiOperation({
+    summary:
+      "Every change to a day's official weigh-in figures, oldest first, with who made it and when (from the journal)",
+  })
+  @ApiOkResponse({ type: [WeighInChangeDto] })
+  history(
+    @CurrentCrew() access: CrewAccess,
+    @Param('dayId', new RecordIdPipe('competition day')) dayId: string,
+  ): Promise<RecordChange<WeighInHistoryField>[]> {
+    return this.weighIns.changes(access, dayId);
   }
 }

@@ -1,12 +1,20 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
-import type { OfficialWeighIn, WeighInsView } from '@shoalbook/shared';
+import {
+  WEIGH_IN_HISTORY_FIELDS,
+  type OfficialWeighIn,
+  type RecordChange,
+  type WeighInHistoryField,
+  type WeighInsView,
+} from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
 import { CatchesService } from '../catches/catches.service';
 import type { CrewAccess } from '../common/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { eventView } from '../events/event-views';
 import { EventsService } from '../events/events.service';
+import { recordNotFound } from '../journal/journal-errors';
+import { RecordHistoryService } from '../journal-events/record-history.service';
 import { bagOfDay, differenceOf } from './bag-rule';
 import { WeighIn } from './weigh-in.entity';
 
@@ -41,7 +49,17 @@ export class WeighInsService {
     private readonly em: EntityManager,
     private readonly events: EventsService,
     private readonly catches: CatchesService,
+    private readonly history: RecordHistoryService,
   ) {}
+
+  /** Every change to a day's official figures, as the journal kept them; empty before the first recording. */
+  async changes(access: CrewAccess, dayId: string): Promise<RecordChange<WeighInHistoryField>[]> {
+    const day = await this.em.findOne(CompetitionDay, { id: dayId, crewId: access.crewId }, { fields: ['id'] });
+    if (!day) throw recordNotFound('competition day');
+    const weighIn = await this.em.findOne(WeighIn, { competitionDayId: day.id, crewId: access.crewId });
+    if (!weighIn) return [];
+    return (await this.history.changes(access.crewId, 'weighIn', weighIn.id, WEIGH_IN_HISTORY_FIELDS)) ?? [];
+  }
 
   async forEvent(access: CrewAccess, eventId: string): Promise<WeighInsView> {
     const event = await this.events.get(access.crewId, eventId);

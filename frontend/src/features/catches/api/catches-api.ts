@@ -1,4 +1,4 @@
-import type { Fate, Species } from '@shoalbook/shared';
+import type { CatchHistoryField, Fate, RecordChange, Species } from '@shoalbook/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
@@ -52,6 +52,14 @@ export function useCatch(crewId: string, catchId: string) {
   return useQuery({
     queryKey: catchKey(crewId, catchId),
     queryFn: () => api.get<CatchWithSky>(catchPath(crewId, catchId)),
+  });
+}
+
+/** Every change to the catch's weight and length, from the crew's journal (refreshed with the catch). */
+export function useCatchHistory(crewId: string, catchId: string) {
+  return useQuery({
+    queryKey: [...catchKey(crewId, catchId), 'history'] as const,
+    queryFn: () => api.get<RecordChange<CatchHistoryField>[]>(`${catchPath(crewId, catchId)}/history`),
   });
 }
 

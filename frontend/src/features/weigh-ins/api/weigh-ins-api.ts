@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys } from '../../../lib/journal-keys';
+import type { RecordChange, WeighInHistoryField } from '@shoalbook/shared';
 import type { RecordWeighInRequest, WeighInsView } from '../../../lib/journal-types';
 
 /** GET /events/:eventId/weigh-ins: each day's counted bag (from the catches and the event's rules) and the totals. */
@@ -8,6 +9,17 @@ export function useWeighIns(crewId: string, eventId: string) {
   return useQuery({
     queryKey: journalKeys.weighIns(crewId, eventId),
     queryFn: () => api.get<WeighInsView>(crewApiPath(crewId, `/events/${encodeURIComponent(eventId)}/weigh-ins`)),
+  });
+}
+
+/** Every change to a day's official figures, from the crew's journal; refreshed with the event's weigh-ins. */
+export function useWeighInHistory(crewId: string, eventId: string, dayId: string) {
+  return useQuery({
+    queryKey: [...journalKeys.weighIns(crewId, eventId), 'history', dayId] as const,
+    queryFn: () =>
+      api.get<RecordChange<WeighInHistoryField>[]>(
+        crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in/history`),
+      ),
   });
 }
 

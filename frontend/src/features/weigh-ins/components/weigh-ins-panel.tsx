@@ -8,6 +8,7 @@ import { useWeighIns } from '../api/weigh-ins-api';
 import { officialBesideLog, signedWeight } from '../official-figures';
 import { FishStateLabel } from './fish-state-label';
 import { OfficialWeighInForm } from './official-weigh-in-form';
+import { WeighInHistory } from './weigh-in-history';
 import styles from './weigh-ins.module.css';
 
 /**
@@ -159,6 +160,19 @@ export function WeighInsPanel({
               No fish logged for this day yet.
             </Text>
           )}
+          {day.official ? (
+            <Details className={styles.details}>
+              <Details.Summary>History of the official figures</Details.Summary>
+              <WeighInHistory
+                crewId={crewId}
+                eventId={eventId}
+                dayId={day.competitionDayId}
+                date={day.date}
+                prefs={prefs}
+                timeZone={timeZone}
+              />
+            </Details>
+          ) : null}
           {canWrite ? (
             <Details className={styles.details}>
               <Details.Summary>Enter the official figures</Details.Summary>

@@ -8,6 +8,7 @@ import { journalPaths } from '../../../../../config/journal-paths';
 import {
   CatchEditForm,
   CatchFacts,
+  CatchHistory,
   CatchSide,
   catchName,
   useCatch,
@@ -98,7 +99,15 @@ export function Component() {
         ) : (
           <CatchFacts catchView={c} prefs={prefs} timeZone={zone} />
         )}
-        <CatchSide crewId={crewId} catchView={c} timeZone={zone} />
+        <CatchSide crewId={crewId} catchView={c} timeZone={zone}>
+          <CatchHistory
+            crewId={crewId}
+            catchId={c.id}
+            competitionDate={c.competitionDate}
+            prefs={prefs}
+            timeZone={zone}
+          />
+        </CatchSide>
       </div>
     </div>
   );
