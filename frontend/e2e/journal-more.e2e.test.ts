@@ -281,6 +281,37 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await page.getByRole('heading', { level: 2, name: LAKE }).waitFor();
   });
 
+  it('chooses finds in the table and sets their kind, or deletes them, together', async () => {
+    const { page } = browser;
+    await page.goto(`${crewPath}/finds?lakeId=${lakeId}`);
+    const table = page.getByRole('table', { name: 'Practice finds' });
+    await table.getByRole('link', { name: 'Hydrilla 07' }).waitFor();
+    await page.getByRole('textbox', { name: 'Filter' }).fill('Hydrilla');
+    await page.getByRole('checkbox', { name: /^Select all \d+ rows that match$/ }).check();
+    const bar = page.getByRole('region', { name: 'Chosen finds' });
+    const chosen = Number((await bar.getByText(/^\d+ finds chosen$/).textContent())!.split(' ')[0]);
+    expect(chosen).toBeGreaterThanOrEqual(2);
+    await bar.getByRole('combobox', { name: 'Kind', exact: true }).selectOption('vegetation');
+    await bar.getByRole('combobox', { name: 'Sub-kind' }).selectOption('hydrilla');
+    await expectNoSeriousAxe(page, 'finds chosen');
+    await screenshot(page, 'journal-finds-bulk');
+    await bar.getByRole('button', { name: 'Set kind' }).click();
+    await page.getByText(`${chosen} finds are now vegetation.`).waitFor();
+    await table.getByRole('row').filter({ hasText: 'Hydrilla 07' }).getByRole('cell', { name: 'hydrilla', exact: true }).waitFor();
+
+    await page.getByRole('textbox', { name: 'Filter' }).fill('');
+    await page.getByRole('checkbox', { name: 'Select Hump 09' }).check();
+    await page.getByRole('checkbox', { name: 'Select Road bed 13' }).check();
+    await bar.getByRole('button', { name: 'Delete 2 finds' }).click();
+    const dialog = page.getByRole('alertdialog', { name: 'Delete 2 finds?' });
+    await dialog.getByText(/Catches and stops at these finds stay/).waitFor();
+    await dialog.getByRole('button', { name: 'Delete 2 finds' }).click();
+    await page.getByText(/^2 finds deleted\./).waitFor();
+    await table.getByRole('link', { name: 'Hump 09' }).waitFor({ state: 'detached' });
+    await table.getByRole('link', { name: 'Road bed 13' }).waitFor({ state: 'detached' });
+    await table.getByRole('link', { name: 'Ledge 11' }).waitFor();
+  });
+
   it('shows a progress bar while a 2,000-waypoint GPX file goes up, then the preview', async () => {
     const { page } = browser;
     const file = join(tmp, 'practice-2000.gpx');

@@ -469,6 +469,18 @@ export interface FindImportRow {
   duplicateOf: DuplicateOf | null;
 }
 
+/** Answer of POST /finds/bulk-update. */
+export interface BulkUpdateFindsResult {
+  updated: number;
+}
+
+/** Answer of POST /finds/bulk-delete: the catches and stops that lost their find stay in the journal. */
+export interface BulkDeleteFindsResult {
+  deleted: number;
+  catchesUnattached: number;
+  stopsUnattached: number;
+}
+
 export interface FindImportPreview {
   rows: FindImportRow[];
   /** Rows without an error (duplicates included: they are skipped on commit unless skipDuplicates=false). */

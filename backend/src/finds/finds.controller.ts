@@ -14,6 +14,7 @@ import {
 } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import {
+  ApiBadRequestResponse,
   ApiBody,
   ApiConflictResponse,
   ApiConsumes,
@@ -26,7 +27,13 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
-import type { FindImportPreview, FindImportResult, FindView } from '@shoalbook/shared';
+import type {
+  BulkDeleteFindsResult,
+  BulkUpdateFindsResult,
+  FindImportPreview,
+  FindImportResult,
+  FindView,
+} from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
 import type { CrewAccess } from '../common/request-context';
@@ -40,7 +47,14 @@ import { RecordIdPipe } from '../journal/record-id.pipe';
 import { Lake } from '../lakes/lake.entity';
 import { EntityManager } from '@mikro-orm/mariadb';
 import { AddFindCommand, DeleteFindCommand, UpdateFindCommand } from './commands/find.commands';
+import { BulkDeleteFindsCommand, BulkUpdateFindsCommand } from './commands/bulk-finds.commands';
 import { ImportFindsCommand } from './commands/import-finds.command';
+import {
+  BulkDeleteFindsResultDto,
+  BulkFindsDto,
+  BulkUpdateFindsDto,
+  BulkUpdateFindsResultDto,
+} from './dto/bulk-finds.dto';
 import { AddFindDto, FindListQueryDto, UpdateFindDto } from './dto/find.dto';
 import { FindImportOptionsDto } from './dto/find-import.dto';
 import { FindViewDto } from './dto/find-view.dto';
@@ -99,6 +113,27 @@ export class FindsController {
   @ApiCreatedResponse({ type: FindViewDto })
   create(@CurrentCrew() access: CrewAccess, @Body() dto: AddFindDto): Promise<FindView> {
     return this.commands.execute(new AddFindCommand(access, dto));
+  }
+
+  @Post('bulk-update')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Set the kind (and sub-kind) or the event of many finds at once: all of them or none' })
+  @ApiOkResponse({ type: BulkUpdateFindsResultDto })
+  @ApiBadRequestResponse({
+    type: ApiErrorDto,
+    description: 'a find not in the crew, a sub-kind of another kind, an event on another lake',
+  })
+  bulkUpdate(@CurrentCrew() access: CrewAccess, @Body() dto: BulkUpdateFindsDto): Promise<BulkUpdateFindsResult> {
+    return this.commands.execute(new BulkUpdateFindsCommand(access, dto));
+  }
+
+  @Post('bulk-delete')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Delete many finds at once; their catches and stops stay, with no find' })
+  @ApiOkResponse({ type: BulkDeleteFindsResultDto })
+  @ApiBadRequestResponse({ type: ApiErrorDto, description: 'a find not in the crew: nothing is deleted' })
+  bulkDelete(@CurrentCrew() access: CrewAccess, @Body() dto: BulkFindsDto): Promise<BulkDeleteFindsResult> {
+    return this.commands.execute(new BulkDeleteFindsCommand(access, dto.findIds));
   }
 
   @Post('import/preview')

@@ -1,11 +1,10 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import type { FindView } from '@shoalbook/shared';
-import { Catch } from '../../catches/catch.entity';
-import { Stop } from '../../stops/stop.entity';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
 import { assertVersion, idTaken, recordNotFound, unknownReference } from '../../journal/journal-errors';
 import { Lake } from '../../lakes/lake.entity';
+import { deleteFinds } from '../delete-finds';
 import { Find } from '../find.entity';
 import { applyFindInput } from '../find-input';
 import { FindsService } from '../finds.service';
@@ -80,36 +79,7 @@ export class DeleteFindHandler implements ICommandHandler<DeleteFindCommand> {
     await this.journal.transaction(access.crewId, access.userId, async (tx, log) => {
       const find = await tx.findOne(Find, { id: findId, crewId: access.crewId });
       if (!find) throw recordNotFound('find');
-      const catches = await tx.find(Catch, { crewId: access.crewId, findId });
-      for (const c of catches) {
-        c.findId = null;
-        c.attributionDistanceM = null;
-      }
-      await tx.flush();
-      for (const c of catches)
-        log.record({
-          type: 'CatchUpdated',
-          aggregateType: 'catch',
-          aggregateId: c.id,
-          payload: recordState(tx, 'Catch', c),
-        });
-      // Its stops stay (the angler fished there), at the find's position with no find.
-      const stops = await tx.find(Stop, { crewId: access.crewId, findId });
-      for (const s of stops) {
-        s.findId = null;
-        s.lat ??= find.lat;
-        s.lon ??= find.lon;
-      }
-      await tx.flush();
-      for (const s of stops)
-        log.record({
-          type: 'StopUpdated',
-          aggregateType: 'stop',
-          aggregateId: s.id,
-          payload: recordState(tx, 'Stop', s),
-        });
-      tx.remove(find);
-      log.record({ type: 'FindDeleted', aggregateType: 'find', aggregateId: find.id, payload: { id: find.id } });
+      await deleteFinds(tx, log, access.crewId, [find]);
     });
   }
 }

@@ -80,7 +80,7 @@ export class DeleteLakeHandler implements ICommandHandler<DeleteLakeCommand> {
       const events = await tx.count(TournamentEvent, { crewId: access.crewId, lakeId });
       const finds = await tx.count(Find, { crewId: access.crewId, lakeId });
       if (events || finds)
-        throw inUse(`The lake still has ${events} event(s) and ${finds} find(s); delete those first.`);
+        throw inUse(`The lake still has ${events} event(s) and ${finds} find(s); delete those first (the finds list deletes many at once: select them, then delete).`);
       tx.remove(lake);
       log.record({ type: 'LakeDeleted', aggregateType: 'lake', aggregateId: lake.id, payload: { id: lake.id } });
     });

@@ -1,5 +1,5 @@
 import { SearchIcon, TriangleDownIcon, TriangleUpIcon } from '@primer/octicons-react';
-import { ActionList, ActionMenu, FormControl, Select, Text, TextInput } from '@primer/react';
+import { ActionList, ActionMenu, Checkbox, FormControl, Select, Text, TextInput } from '@primer/react';
 import {
   flexRender,
   getCoreRowModel,
@@ -10,6 +10,7 @@ import {
   type ColumnFiltersState,
   type FilterFn,
   type Row,
+  type RowSelectionState,
   type SortingState,
   type VisibilityState,
 } from '@tanstack/react-table';
@@ -52,6 +53,42 @@ export interface DataTableProps<T> {
   toolbar?: ReactNode;
   /** Marks a row (e.g. a flagged weight); returned class is added to the <tr>. */
   rowClassName?: (row: T) => string | undefined;
+  /** Rows can be chosen for a bulk action: a checkbox per row and one for every row the filters match. */
+  selection?: RowSelection<T>;
+}
+
+export interface RowSelection<T> {
+  /** Chosen row ids (getRowId) → true. */
+  selected: RowSelectionState;
+  onChange: (selected: RowSelectionState) => void;
+  /** How a row is called in its checkbox's label: "Select <name>". */
+  rowLabel: (row: T) => string;
+}
+
+const SELECT_COLUMN = 'select';
+
+/** The checkbox column of a table whose rows can be chosen; "all" means all rows the filters match. */
+function selectColumn<T>(rowLabel: (row: T) => string): ColumnDef<T> {
+  return {
+    id: SELECT_COLUMN,
+    enableSorting: false,
+    enableHiding: false,
+    header: ({ table }) => (
+      <Checkbox
+        aria-label={`Select all ${table.getFilteredRowModel().rows.length} rows that match`}
+        checked={table.getIsAllRowsSelected()}
+        indeterminate={table.getIsSomeRowsSelected()}
+        onChange={table.getToggleAllRowsSelectedHandler()}
+      />
+    ),
+    cell: ({ row }) => (
+      <Checkbox
+        aria-label={`Select ${rowLabel(row.original)}`}
+        checked={row.getIsSelected()}
+        onChange={row.getToggleSelectedHandler()}
+      />
+    ),
+  };
 }
 
 const textIncludes: FilterFn<unknown> = (row, columnId, filter: string) => {
@@ -79,20 +116,30 @@ export function DataTable<T>({
   height = 520,
   toolbar,
   rowClassName,
+  selection,
 }: DataTableProps<T>) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
   const [globalFilter, setGlobalFilter] = useState('');
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [columnVisibility, setColumnVisibility] = useState<VisibilityState>(initialHidden);
   const filterId = useId();
+  const rowLabel = selection?.rowLabel;
 
   const table = useReactTable({
     data,
     columns: useMemo(
-      () => columns.map((c) => (c.meta?.filterOptions ? { ...c, filterFn: exactValue as FilterFn<T> } : c)),
-      [columns],
+      () => [
+        ...(rowLabel ? [selectColumn(rowLabel)] : []),
+        ...columns.map((c) => (c.meta?.filterOptions ? { ...c, filterFn: exactValue as FilterFn<T> } : c)),
+      ],
+      [columns, rowLabel],
     ),
-    state: { sorting, globalFilter, columnFilters, columnVisibility },
+    state: { sorting, globalFilter, columnFilters, columnVisibility, rowSelection: selection?.selected ?? {} },
+    enableRowSelection: Boolean(selection),
+    onRowSelectionChange: (updater) => {
+      if (!selection) return;
+      selection.onChange(typeof updater === 'function' ? updater(selection.selected) : updater);
+    },
     onSortingChange: setSorting,
     onGlobalFilterChange: setGlobalFilter,
     onColumnFiltersChange: setColumnFilters,

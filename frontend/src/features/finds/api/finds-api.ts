@@ -1,4 +1,11 @@
-import type { FindKind, FoundHow, HardnessGrade, VegetationDensity } from '@shoalbook/shared';
+import type {
+  BulkDeleteFindsResult,
+  BulkUpdateFindsResult,
+  FindKind,
+  FoundHow,
+  HardnessGrade,
+  VegetationDensity,
+} from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
@@ -74,3 +81,29 @@ export function useDeleteFind(crewId: string) {
 
 // Photos are shared with the catch forms, so they live in lib; re-exported for the find screens.
 export { photoUrl, uploadPhoto } from '../../../lib/photos';
+
+/** Changes for POST /finds/bulk-update: a kind (with its sub-kind), an event (null: none), or both. */
+export interface BulkFindChanges {
+  kind?: FindKind;
+  subKind?: string;
+  eventId?: string | null;
+}
+
+/** A bulk change touches finds, their catches and stops, and every report: the crew's cached data is refetched. */
+export function useBulkUpdateFinds(crewId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ findIds, ...changes }: BulkFindChanges & { findIds: string[] }) =>
+      api.post<BulkUpdateFindsResult>(crewApiPath(crewId, '/finds/bulk-update'), { findIds, ...changes }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.crew(crewId) }),
+  });
+}
+
+export function useBulkDeleteFinds(crewId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (findIds: string[]) =>
+      api.post<BulkDeleteFindsResult>(crewApiPath(crewId, '/finds/bulk-delete'), { findIds }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.crew(crewId) }),
+  });
+}

@@ -1,6 +1,7 @@
 import type { FindKind, FindView, UnitPreferences } from '@shoalbook/shared';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { useState } from 'react';
 import { describe, expect, it } from 'vitest';
 import { withTestViewport } from '../../../components/data-table/test-viewport';
 import { renderWithApp } from '../../../testing/render';
@@ -100,5 +101,30 @@ describe('FindsTable', () => {
     expect(drawn).toBeGreaterThan(5);
     expect(drawn).toBeLessThan(100);
     expect(screen.getByText('5000 rows')).toBeInTheDocument();
+  });
+
+  it('chooses rows one by one, or every row the filters match at once', async () => {
+    const user = userEvent.setup();
+    let chosen: Record<string, boolean> = {};
+    function Chooser() {
+      const [selected, setSelected] = useState<Record<string, boolean>>({});
+      chosen = selected;
+      return (
+        <FindsTable
+          crewId="c1"
+          finds={finds}
+          prefs={feet}
+          timeZoneOf={() => 'UTC'}
+          selection={{ selected, onChange: setSelected }}
+        />
+      );
+    }
+    renderWithApp(<Chooser />);
+    await user.click(screen.getByRole('checkbox', { name: 'Select Bait ball' }));
+    expect(Object.keys(chosen)).toEqual([finds[3]!.id]);
+
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Kind' }), 'hard-bottom');
+    await user.click(screen.getByRole('checkbox', { name: 'Select all 2 rows that match' }));
+    expect(Object.keys(chosen).sort()).toEqual([finds[0]!.id, finds[2]!.id, finds[3]!.id].sort());
   });
 });

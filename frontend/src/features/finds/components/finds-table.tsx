@@ -3,7 +3,7 @@ import { Link as PrimerLink } from '@primer/react';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { DataTable } from '../../../components/data-table/data-table';
+import { DataTable, type RowSelection } from '../../../components/data-table/data-table';
 import { journalPaths } from '../../../config/journal-paths';
 import { clockTime, localDate } from '../../../lib/lake-time';
 import type { FindWithSky } from '../../../lib/journal-types';
@@ -11,6 +11,7 @@ import { formatDepth, formatTemperature } from '../../../lib/units';
 import { foundHowLabel, kindLabel, positionText, VEGETATION_LABELS } from './find-labels';
 
 const column = createColumnHelper<FindWithSky>();
+const findLabel = (f: FindWithSky) => f.name || 'unnamed find';
 
 /**
  * Every find of a lake or event: sortable by any column, filterable by text and by kind, columns chosen
@@ -22,6 +23,7 @@ export function FindsTable({
   prefs,
   timeZoneOf,
   toolbar,
+  selection,
 }: {
   crewId: string;
   finds: FindWithSky[];
@@ -29,6 +31,8 @@ export function FindsTable({
   /** The lake's zone for a find (times are shown on the lake's clock). */
   timeZoneOf: (find: FindWithSky) => string;
   toolbar?: ReactNode;
+  /** Chosen finds for a bulk action (writers only). */
+  selection?: Omit<RowSelection<FindWithSky>, 'rowLabel'>;
 }) {
   const columns = useMemo(
     () => [
@@ -114,6 +118,7 @@ export function FindsTable({
       initialHidden={{ frequency: false, foundHow: false, waterTemp: false, notes: false, position: false }}
       filterPlaceholder="Filter by name, sub-kind or notes"
       toolbar={toolbar}
+      selection={selection ? { ...selection, rowLabel: findLabel } : undefined}
     />
   );
 }

@@ -1,9 +1,11 @@
 import { PlusIcon, UploadIcon } from '@primer/octicons-react';
 import { Button, FormControl, Select } from '@primer/react';
+import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../../../components/feedback/query-states';
 import { journalPaths } from '../../../../../config/journal-paths';
-import { FindsTable, useFinds } from '../../../../../features/finds';
+import { useEvents } from '../../../../../features/events';
+import { FindsBulkBar, FindsTable, useFinds } from '../../../../../features/finds';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLakes } from '../../../../../features/lakes';
 import { JournalHeader, useJournalPage } from './journal-page';
@@ -17,6 +19,10 @@ export function Component() {
   const lakeId = search.get('lakeId') ?? lakes.data?.[0]?.id ?? '';
   const lake = lakes.data?.find((l) => l.id === lakeId);
   const finds = useFinds(crewId, { lakeId: lakeId || undefined });
+  const events = useEvents(crewId, lakeId || undefined);
+  // Chosen finds, by id; only those still listed count (a find deleted elsewhere drops out).
+  const [selected, setSelected] = useState<Record<string, boolean>>({});
+  const chosen = (finds.data ?? []).filter((f) => selected[f.id]).map((f) => f.id);
 
   const actions =
     canWrite && lake ? (
@@ -44,7 +50,13 @@ export function Component() {
         <div className={styles.dayPicker}>
           <FormControl>
             <FormControl.Label>Lake</FormControl.Label>
-            <Select value={lakeId} onChange={(e) => setSearch({ lakeId: e.target.value })}>
+            <Select
+              value={lakeId}
+              onChange={(e) => {
+                setSelected({});
+                setSearch({ lakeId: e.target.value });
+              }}
+            >
               {lakes.data.map((l) => (
                 <Select.Option key={l.id} value={l.id}>
                   {l.name}
@@ -63,8 +75,17 @@ export function Component() {
             : 'Finds appear here once an angler records them.'}
         </EmptyState>
       ) : null}
+      {lake && finds.data?.length && canWrite ? (
+        <FindsBulkBar crewId={crewId} findIds={chosen} events={events.data ?? []} onDone={() => setSelected({})} />
+      ) : null}
       {lake && finds.data?.length ? (
-        <FindsTable crewId={crewId} finds={finds.data} prefs={prefs} timeZoneOf={() => lake.timeZone} />
+        <FindsTable
+          crewId={crewId}
+          finds={finds.data}
+          prefs={prefs}
+          timeZoneOf={() => lake.timeZone}
+          selection={canWrite ? { selected, onChange: setSelected } : undefined}
+        />
       ) : null}
     </div>
   );
