@@ -297,7 +297,11 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await screenshot(page, 'journal-finds-bulk');
     await bar.getByRole('button', { name: 'Set kind' }).click();
     await page.getByText(`${chosen} finds are now vegetation.`).waitFor();
-    await table.getByRole('row').filter({ hasText: 'Hydrilla 07' }).getByRole('cell', { name: 'hydrilla', exact: true }).waitFor();
+    await table
+      .getByRole('row')
+      .filter({ hasText: 'Hydrilla 07' })
+      .getByRole('cell', { name: 'hydrilla', exact: true })
+      .waitFor();
 
     await page.getByRole('textbox', { name: 'Filter' }).fill('');
     await page.getByRole('checkbox', { name: 'Select Hump 09' }).check();
