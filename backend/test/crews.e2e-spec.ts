@@ -5,6 +5,10 @@ import { Membership } from '../src/crews/membership.entity';
 import { addMember, crewWithMembers, type CrewFixture, newUser } from './utils/api-client';
 import { createTestApp, testEm } from './utils/test-app';
 
+function expectStatus(res: { status: number; body: unknown }, status: number): void {
+  expect(res.status, JSON.stringify(res.body)).toBe(status);
+}
+
 describe('crews, members and roles', () => {
   let app: INestApplication;
   let a: CrewFixture;
@@ -141,6 +145,40 @@ describe('crews, members and roles', () => {
     const nowLeave = await crew.owner.delete(`/api/crews/${crew.crewId}/members/${crew.owner.userId}`);
     expect(nowLeave.status).toBe(204);
     expect((await crew.owner.get(`/api/crews/${crew.crewId}`)).status).toBe(404);
+  });
+
+  it('hands the crew to another member in one step: they own it, the old owner stays as angler or viewer, or leaves', async () => {
+    const crew = await crewWithMembers(app, 'Hand-over');
+    const path = `/api/crews/${crew.crewId}/hand-over`;
+    const roleOf = async (userId: string) =>
+      (await testEm(app).findOne(Membership, { crew: crew.crewId, user: userId }))?.role ?? null;
+
+    const handed = await crew.owner.post(path, { userId: crew.angler.userId, stayAs: 'viewer' });
+    expect(handed.status).toBe(200);
+    expect(handed.body.find((m: { userId: string }) => m.userId === crew.angler.userId).role).toBe('owner');
+    expect(await roleOf(crew.angler.userId)).toBe('owner');
+    expect(await roleOf(crew.owner.userId)).toBe('viewer');
+    // The old owner is a viewer now: no second hand-over.
+    expect((await crew.owner.post(path, { userId: crew.viewer.userId, stayAs: 'angler' })).status).toBe(403);
+
+    // Bad input changes nothing: oneself, an unknown member, an unknown role.
+    const self = await crew.angler.post(path, { userId: crew.angler.userId, stayAs: 'angler' });
+    expect(self.status).toBe(400);
+    expect(self.body.fieldErrors).toHaveProperty('userId');
+    const stranger = await newUser(app);
+    expect((await crew.angler.post(path, { userId: stranger.userId, stayAs: 'angler' })).status).toBe(404);
+    const badRole = await crew.angler.post(path, { userId: crew.viewer.userId, stayAs: 'owner' });
+    expect(badRole.status).toBe(400);
+    expect(badRole.body.fieldErrors).toHaveProperty('stayAs');
+    expect(await roleOf(crew.angler.userId)).toBe('owner');
+    expect(await roleOf(crew.viewer.userId)).toBe('viewer');
+
+    // Handing over and leaving: the new owner is the only owner, the old one is no member.
+    expectStatus(await crew.angler.post(path, { userId: crew.viewer.userId, stayAs: 'leave' }), 200);
+    expect(await roleOf(crew.viewer.userId)).toBe('owner');
+    expect(await roleOf(crew.angler.userId)).toBeNull();
+    expect((await crew.angler.get(`/api/crews/${crew.crewId}`)).status).toBe(404);
+    expect(await testEm(app).count(Membership, { crew: crew.crewId, role: 'owner' })).toBe(1);
   });
 
   it('lets any member leave, and lets the owner remove a member', async () => {

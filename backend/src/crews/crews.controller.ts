@@ -5,13 +5,14 @@ import {
   ApiCookieAuth,
   ApiCreatedResponse,
   ApiNoContentResponse,
+  ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
   ApiServiceUnavailableResponse,
   ApiTags,
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
-import type { CrewView } from '@shoalbook/shared';
+import type { CrewView, MemberView } from '@shoalbook/shared';
 import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
@@ -19,9 +20,17 @@ import type { CrewAccess } from '../common/request-context';
 import type { User } from '../users/user.entity';
 import { CreateCrewCommand } from './commands/create-crew.command';
 import { DeleteCrewCommand } from './commands/delete-crew.command';
+import { HandOverCrewCommand } from './commands/hand-over-crew.command';
 import { toCrewView } from './crew-views';
 import { CrewsService } from './crews.service';
-import { CreateCrewDto, CrewViewDto, DeleteCrewDto, UpdateCrewDto } from './dto/crew.dto';
+import {
+  CreateCrewDto,
+  CrewViewDto,
+  DeleteCrewDto,
+  HandOverCrewDto,
+  MemberViewDto,
+  UpdateCrewDto,
+} from './dto/crew.dto';
 
 @ApiTags('crews')
 @ApiCookieAuth()
@@ -75,6 +84,21 @@ export class CrewController {
   @ApiBadRequestResponse({ type: ApiErrorDto })
   update(@CurrentCrew() access: CrewAccess, @Body() dto: UpdateCrewDto): Promise<CrewView> {
     return this.crews.update(access, dto);
+  }
+
+  @Post('hand-over')
+  @CrewRoles('owner')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({
+    summary: 'Hand the crew to another member (owner): they become an owner, you an angler, a viewer, or no member',
+  })
+  @ApiOkResponse({ type: [MemberViewDto], description: 'the members after the hand-over' })
+  @ApiBadRequestResponse({ type: ApiErrorDto, description: 'yourself, or not a UUID (fieldErrors.userId)' })
+  @ApiNotFoundResponse({ type: ApiErrorDto, description: 'that person is not a member of the crew' })
+  handOver(@CurrentCrew() access: CrewAccess, @Body() dto: HandOverCrewDto): Promise<MemberView[]> {
+    return this.commands.execute(
+      new HandOverCrewCommand(access.crewId, access.userId, dto.userId, dto.stayAs === 'leave' ? null : dto.stayAs),
+    );
   }
 
   @Delete()

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsEmail, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsEmail, IsIn, IsNotEmpty, IsString, IsUUID, MaxLength } from 'class-validator';
 import {
   CREW_ROLES,
   type ChangeRoleRequest,
@@ -47,6 +47,19 @@ export class DeleteCrewDto {
 
 export class ChangeRoleDto implements ChangeRoleRequest {
   @ApiProperty({ enum: CREW_ROLES }) @IsIn(CREW_ROLES, roleMessage) role: CrewRole;
+}
+
+export class HandOverCrewDto {
+  @ApiProperty({ format: 'uuid', description: 'the member who becomes an owner' })
+  @IsUUID('all', { message: 'Choose a member of the crew.' })
+  userId: string;
+
+  @ApiProperty({
+    enum: ['angler', 'viewer', 'leave'],
+    description: 'what the one handing over becomes: an angler, a viewer, or no member (leave)',
+  })
+  @IsIn(['angler', 'viewer', 'leave'], { message: 'Stay as an angler or a viewer, or leave the crew.' })
+  stayAs: 'angler' | 'viewer' | 'leave';
 }
 
 export class CreateInviteDto implements CreateInviteRequest {

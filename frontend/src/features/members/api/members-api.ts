@@ -37,3 +37,11 @@ export function createInvite(crewId: string, body: CreateInviteRequest): Promise
 export function revokeInvite(crewId: string, inviteId: string): Promise<void> {
   return api.delete(`${crewPath(crewId)}/invites/${encodeURIComponent(inviteId)}`);
 }
+
+/** What the owner handing the crew over becomes. */
+export type StayAs = 'angler' | 'viewer' | 'leave';
+
+/** POST /api/crews/:crewId/hand-over (owners): the member becomes an owner and the caller steps down, in one step. */
+export function handOverCrew(crewId: string, userId: string, stayAs: StayAs): Promise<MemberView[]> {
+  return api.post<MemberView[]>(`${crewPath(crewId)}/hand-over`, { userId, stayAs });
+}

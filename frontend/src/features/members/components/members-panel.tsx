@@ -5,6 +5,7 @@ import { useCallback, useState } from 'react';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { FormError } from '../../../components/form/form-error';
 import { changeMemberRole, invitesQuery, membersQuery, removeMember, revokeInvite } from '../api/members-api';
+import { HandOverForm } from './hand-over-form';
 import { InviteForm } from './invite-form';
 import { MembersTable } from './members-table';
 import { PendingInvites } from './pending-invites';
@@ -13,12 +14,17 @@ import styles from './members-panel.module.css';
 /** Members, and for owners the pending invites and the invite form. */
 export function MembersPanel({
   crewId,
+  crewName,
   ownUserId,
   canManage,
+  onLeft,
 }: {
   crewId: string;
+  crewName: string;
   ownUserId: string;
   canManage: boolean;
+  /** After the owner handed the crew over and left it. */
+  onLeft: () => void;
 }) {
   const queryClient = useQueryClient();
   const members = useQuery(membersQuery(crewId));
@@ -82,6 +88,25 @@ export function MembersPanel({
       </section>
 
       {canManage ? <InvitesSection crewId={crewId} /> : null}
+
+      {canManage && members.data ? (
+        <section aria-labelledby="hand-over-heading" className={styles.section}>
+          <Heading as="h2" id="hand-over-heading" variant="medium">
+            Hand the crew over
+          </Heading>
+          <Text as="p" className={styles.lead}>
+            Give the crew to another member in one step, when you stop running it: the journal, members and invites go
+            with it.
+          </Text>
+          <HandOverForm
+            crewId={crewId}
+            crewName={crewName}
+            ownUserId={ownUserId}
+            members={members.data}
+            onLeft={onLeft}
+          />
+        </section>
+      ) : null}
 
       {toRemove ? (
         <ConfirmationDialog

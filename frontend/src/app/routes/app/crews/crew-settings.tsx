@@ -20,7 +20,13 @@ export function Component() {
 
   return (
     <>
-      <MembersPanel crewId={crew.id} ownUserId={me.user.id} canManage={owner} />
+      <MembersPanel
+        crewId={crew.id}
+        crewName={crew.name}
+        ownUserId={me.user.id}
+        canManage={owner}
+        onLeft={() => navigate(paths.home.href())}
+      />
       {owner ? (
         <section aria-labelledby="crew-settings-heading" className={styles.section}>
           <Heading as="h2" id="crew-settings-heading" variant="medium">
