@@ -34,6 +34,33 @@ describe('site administration', () => {
     expect((await new ApiClient(app).get('/api/admin/users')).status).toBe(401);
   });
 
+  it('finds accounts by part of the e-mail or name, any case, newest first, in pages with the total', async () => {
+    const tag = `srch${Date.now().toString(36)}`;
+    const first = await newUser(app, `${tag}-first`);
+    await new Promise((resolve) => setTimeout(resolve, 5)); // a later createdAt, so "newest first" is defined
+    const second = await newUser(app, `${tag}-second`);
+    await testEm(app).nativeUpdate(User, { id: second.userId }, { displayName: 'Ripple 100%_Done' });
+
+    const byMail = await admin.get(`/api/admin/users?q=${tag.toUpperCase()}`);
+    expect(byMail.status).toBe(200);
+    expect(byMail.body.map((u: { id: string }) => u.id)).toEqual([second.userId, first.userId]);
+    expect(byMail.headers['x-total-count']).toBe('2');
+
+    const page = await admin.get(`/api/admin/users?q=${tag}&limit=1&offset=1`);
+    expect(page.body.map((u: { id: string }) => u.id)).toEqual([first.userId]);
+    expect(page.headers['x-total-count']).toBe('2');
+
+    // LIKE's wildcards in the search text are plain characters: "0%_d" matches only the name that has them.
+    const literal = await admin.get(`/api/admin/users?q=${encodeURIComponent('0%_d')}`);
+    expect(literal.body.map((u: { id: string }) => u.id)).toEqual([second.userId]);
+    // Unescaped, "%" would match every account.
+    const percent = await admin.get(`/api/admin/users?q=${encodeURIComponent('%')}`);
+    expect(percent.body.map((u: { id: string }) => u.id)).toEqual([second.userId]);
+
+    expect((await admin.get('/api/admin/users?limit=0')).status).toBe(400);
+    expect((await admin.get(`/api/admin/users?q=${'x'.repeat(255)}`)).status).toBe(400);
+  });
+
   it('disables an account: its sessions end and sign-in is refused; enabling lets it back in', async () => {
     const user = await newUser(app);
     const res = await admin.patch(`/api/admin/users/${user.userId}`, { disabled: true });

@@ -183,6 +183,12 @@ describe('demo accounts and their roles', () => {
     }
     await page.getByRole('button', { name: 'Disable the account of rival@demo.test' }).waitFor();
     expect(await page.getByRole('button', { name: /the account of admin@demo\.test/ }).count()).toBe(0);
+    await page.getByRole('combobox', { name: 'Site role of rival@demo.test' }).waitFor();
+    expect(await page.getByRole('combobox', { name: 'Site role of admin@demo.test' }).count()).toBe(0);
+    await page.getByRole('textbox', { name: 'Search accounts' }).fill('RIVAL');
+    await page.getByText(/^Showing 1–1 of 1 account$/).waitFor();
+    await page.getByRole('cell', { name: 'owner@demo.test', exact: true }).waitFor({ state: 'detached' });
+    await page.getByRole('cell', { name: 'rival@demo.test', exact: true }).waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);
     await screenshot(page, 'admin-accounts');
     await signOut(page);

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Query, Res } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiConflictResponse,
@@ -10,13 +10,14 @@ import {
   ApiTags,
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
+import type { Response } from 'express';
 import type { AdminUserView } from '@shoalbook/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
 import { SiteAdminOnly } from '../common/guards/site-admin.guard';
 import type { User } from '../users/user.entity';
 import { AdminService } from './admin.service';
-import { AdminUpdateUserDto, AdminUserViewDto } from './dto/admin.dto';
+import { AdminUpdateUserDto, AdminUserListQueryDto, AdminUserViewDto } from './dto/admin.dto';
 
 @ApiTags('admin')
 @ApiCookieAuth()
@@ -27,10 +28,20 @@ export class AdminController {
   constructor(private readonly admin: AdminService) {}
 
   @Get()
-  @ApiOperation({ summary: 'Every account (site admin)' })
-  @ApiOkResponse({ type: [AdminUserViewDto] })
-  list(): Promise<AdminUserView[]> {
-    return this.admin.list();
+  @ApiOperation({
+    summary: 'Accounts, newest first, searchable by e-mail or name (site admin); X-Total-Count has the total',
+  })
+  @ApiOkResponse({
+    type: [AdminUserViewDto],
+    headers: { 'X-Total-Count': { schema: { type: 'integer' }, description: 'accounts matching q' } },
+  })
+  async list(
+    @Query() query: AdminUserListQueryDto,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<AdminUserView[]> {
+    const { views, total } = await this.admin.list(query);
+    res.setHeader('X-Total-Count', String(total));
+    return views;
   }
 
   @Patch(':userId')

@@ -24,9 +24,22 @@ export class AdminService {
     private readonly sessions: SessionsService,
   ) {}
 
-  async list(): Promise<AdminUserView[]> {
-    const users = await this.em.find(User, {}, { orderBy: { createdAt: 'asc', id: 'asc' } });
-    return users.map(toAdminView);
+  /** Newest first; `q` matches part of the e-mail (stored case-folded) or of the display name. */
+  async list(query: {
+    q?: string;
+    limit?: number;
+    offset?: number;
+  }): Promise<{ views: AdminUserView[]; total: number }> {
+    const q = query.q?.trim() ?? '';
+    // LIKE's own wildcards in the search text are searched for, not obeyed.
+    const pattern = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const where = q ? { $or: [{ email: { $like: pattern.toLowerCase() } }, { displayName: { $like: pattern } }] } : {};
+    const [users, total] = await this.em.findAndCount(User, where, {
+      orderBy: { createdAt: 'desc', id: 'desc' },
+      limit: query.limit ?? 100,
+      offset: query.offset ?? 0,
+    });
+    return { views: users.map(toAdminView), total };
   }
 
   async update(adminId: string, userId: string, changes: AdminUpdateUserRequest): Promise<AdminUserView> {

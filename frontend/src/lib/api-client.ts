@@ -90,6 +90,14 @@ export class ApiClient {
       return kept as T;
     }
   }
+  /** A GET of a paged list: its rows and the X-Total-Count the server sends beside them. */
+  async getPage<T>(path: string): Promise<{ items: T[]; total: number }> {
+    const response = await this.send('GET', path, {}, null);
+    if (!response.ok) throw new ApiRequestError(await readError(response));
+    const items = (await readBody(response)) as T[];
+    const total = Number(response.headers.get('X-Total-Count') ?? items.length);
+    return { items, total: Number.isFinite(total) ? total : items.length };
+  }
   post<T>(path: string, body?: unknown, options: Omit<RequestOptions, 'body'> = {}): Promise<T> {
     return this.request<T>('POST', path, { ...options, body });
   }

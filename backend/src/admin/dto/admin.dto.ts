@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsIn } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { type AdminUpdateUserRequest, type AdminUserView, SITE_ROLES, type SiteRole } from '@shoalbook/shared';
 import { IsOmittable } from '../../common/dto/omittable';
 
@@ -22,4 +23,30 @@ export class AdminUpdateUserDto implements AdminUpdateUserRequest {
   @IsOmittable()
   @IsIn(SITE_ROLES, { message: `The site role is one of ${SITE_ROLES.join(', ')}.` })
   siteRole?: SiteRole;
+}
+
+export const ADMIN_PAGE_MAX = 500;
+
+/** GET /admin/users: newest first, optionally only the accounts whose e-mail or name contains `q`. */
+export class AdminUserListQueryDto {
+  @ApiPropertyOptional({ description: 'part of an e-mail address or a display name (any case)', maxLength: 254 })
+  @IsOptional()
+  @IsString()
+  @MaxLength(254)
+  q?: string;
+
+  @ApiPropertyOptional({ minimum: 1, maximum: ADMIN_PAGE_MAX, default: 100 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(ADMIN_PAGE_MAX)
+  limit?: number;
+
+  @ApiPropertyOptional({ minimum: 0, default: 0 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(0)
+  offset?: number;
 }

@@ -1,6 +1,7 @@
 import type { SiteRole } from '@shoalbook/shared';
-import { queryOptions } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { queryString } from '../../../lib/journal-keys';
 
 /** One account as the site admin sees it (GET /api/admin/users). */
 export interface AdminAccountRow {
@@ -12,11 +13,17 @@ export interface AdminAccountRow {
   createdAt: string;
 }
 
-/** GET /api/admin/users (site admins only; 403 for everyone else). */
-export const accountsQuery = queryOptions({
-  queryKey: ['admin', 'users'],
-  queryFn: () => api.get<AdminAccountRow[]>('/admin/users'),
-});
+/** Accounts per page of the admin screen. */
+export const ACCOUNTS_PAGE = 50;
+
+/** GET /api/admin/users (site admins only; 403 for everyone else): newest first, `q` in e-mail or name. */
+export const accountsQuery = (q: string, offset: number) =>
+  queryOptions({
+    queryKey: ['admin', 'users', { q, offset }],
+    queryFn: () =>
+      api.getPage<AdminAccountRow>(`/admin/users${queryString({ q: q.trim(), limit: ACCOUNTS_PAGE, offset })}`),
+    placeholderData: keepPreviousData,
+  });
 
 /** PATCH /api/admin/users/:userId: disabling ends that person's sessions at once. */
 export function updateAccountStatus(

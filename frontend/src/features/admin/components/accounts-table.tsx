@@ -1,4 +1,5 @@
-import { Button, Label, Text } from '@primer/react';
+import type { SiteRole } from '@shoalbook/shared';
+import { Button, Label, Select, Text } from '@primer/react';
 import {
   createColumnHelper,
   flexRender,
@@ -15,19 +16,21 @@ import styles from './accounts-table.module.css';
 const column = createColumnHelper<AdminAccountRow>();
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
-/** Every account with its status and a disable / enable button (not for one's own account). */
+/** Accounts with their site role (a picker) and status (a disable / enable button); neither for one's own account. */
 export function AccountsTable({
   accounts,
   ownUserId,
   busyUserId,
   onToggleDisabled,
+  onChangeSiteRole,
 }: {
   accounts: AdminAccountRow[];
   ownUserId: string;
   busyUserId?: string | null;
   onToggleDisabled: (account: AdminAccountRow) => void;
+  onChangeSiteRole: (account: AdminAccountRow, role: SiteRole) => void;
 }) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'email', desc: false }]);
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
   const columns = useMemo(
     () => [
       column.accessor('displayName', { header: 'Name' }),
@@ -37,7 +40,22 @@ export function AccountsTable({
       }),
       column.accessor('siteRole', {
         header: 'Site role',
-        cell: (i) => (i.getValue() === 'admin' ? <Label variant="accent">Admin</Label> : <Text>User</Text>),
+        cell: (i) => {
+          const account = i.row.original;
+          if (account.id === ownUserId) return <Label variant="accent">Admin</Label>;
+          return (
+            <Select
+              size="small"
+              aria-label={`Site role of ${account.email}`}
+              value={account.siteRole}
+              disabled={busyUserId === account.id}
+              onChange={(e) => onChangeSiteRole(account, e.target.value as SiteRole)}
+            >
+              <Select.Option value="user">User</Select.Option>
+              <Select.Option value="admin">Admin</Select.Option>
+            </Select>
+          );
+        },
       }),
       column.accessor('createdAt', { header: 'Joined', cell: (i) => dateFormat.format(new Date(i.getValue())) }),
       column.accessor('disabled', {
@@ -65,7 +83,7 @@ export function AccountsTable({
         },
       }),
     ],
-    [ownUserId, busyUserId, onToggleDisabled],
+    [ownUserId, busyUserId, onToggleDisabled, onChangeSiteRole],
   );
   const table = useReactTable({
     data: accounts,
