@@ -142,6 +142,27 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     expect(await apiCall<unknown[]>(page, 'GET', `${crewApi}/catches?eventId=${eventId}`)).toHaveLength(10);
   });
 
+  it('keeps the day on screen current: a catch logged elsewhere appears within seconds, without a reload', async () => {
+    const { page } = browser;
+    await page.goto(`${crewPath}/events/${eventId}?section=days`);
+    const table = page.getByRole('table', { name: 'Catches of the day' });
+    await table.getByRole('columnheader', { name: 'Time' }).waitFor();
+    const rows = table.locator('tbody tr');
+    await expect.poll(() => rows.count(), { timeout: 15_000 }).toBe(10);
+    // Another member's write: it goes past this page's query cache, so only the day's refetch can show it.
+    const [day] = await apiCall<{ id: string }[]>(page, 'GET', `${crewApi}/events/${eventId}/competition-days`);
+    await apiCall(page, 'POST', `${crewApi}/catches`, {
+      competitionDayId: day!.id,
+      caughtAt: '14:20',
+      species: 'spotted',
+      weightLb: 1.85,
+      fate: 'released',
+    });
+    // The day asks again every 5 s while visible; allow for a slow shared machine.
+    await expect.poll(() => rows.count(), { timeout: 15_000 }).toBe(11);
+    await page.getByRole('cell', { name: '14:20' }).first().waitFor();
+  });
+
   it('shows the solunar period of every catch and edits one; a stale save offers to reload the latest', async () => {
     const { page } = browser;
     await page.goto(`${crewPath}/events/${eventId}?section=days`);

@@ -41,3 +41,10 @@ export function queryString(params: Record<string, string | number | boolean | u
   const text = search.toString();
   return text ? `?${text}` : '';
 }
+
+/**
+ * How often a competition day's screen asks again while it is visible, so two members logging the same day see
+ * each other's entries within seconds. TanStack Query pauses the interval while the page is hidden
+ * (`refetchIntervalInBackground` stays false).
+ */
+export const LIVE_DAY_REFETCH_MS = 5_000;

@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { liveQuery } from 'dexie';
 import { useEffect, useState } from 'react';
 import type { SendEntry } from '../device-db';
-import { journalKeys } from '../journal-keys';
+import { refreshCrewJournal } from '../crew-cache';
 import { BACKGROUND_SYNC_TAG, sendQueue } from './runtime';
 
 /** The signed-in user's entries, live: they change as the queue drains or the angler acts. */
@@ -36,7 +36,7 @@ export function useSendQueueDrain(userId: string | undefined): void {
       if ((event.data as { type?: string } | null)?.type === BACKGROUND_SYNC_TAG) drain(true);
     };
     const stopSent = sendQueue.onSent((entry) => {
-      void queryClient.invalidateQueries({ queryKey: journalKeys.crew(entry.crewId) });
+      void refreshCrewJournal(queryClient, entry.crewId);
     });
     window.addEventListener('online', online);
     document.addEventListener('visibilitychange', visible);

@@ -1,7 +1,8 @@
 import type { CatchHistoryField, Fate, RecordChange, Species } from '@shoalbook/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import { crewApiPath, journalKeys, LIVE_DAY_REFETCH_MS, queryString } from '../../../lib/journal-keys';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import type { DepthEntry, LengthEntry, TemperatureEntry, WeightEntry } from '../../../lib/units';
 
@@ -39,11 +40,17 @@ export type CatchChanges = Partial<Omit<CatchInput, 'competitionDayId' | 'findId
 const catchPath = (crewId: string, catchId: string) => crewApiPath(crewId, `/catches/${encodeURIComponent(catchId)}`);
 const catchKey = (crewId: string, catchId: string) => [...journalKeys.allCatches(crewId), 'one', catchId] as const;
 
-export function useCatches(crewId: string, filter: { eventId?: string; competitionDayId?: string }) {
+/** The crew's catches of an event or a day; `live` keeps a day on screen current with other members' entries. */
+export function useCatches(
+  crewId: string,
+  filter: { eventId?: string; competitionDayId?: string },
+  { live = false }: { live?: boolean } = {},
+) {
   return useQuery({
     queryKey: journalKeys.catches(crewId, filter),
     queryFn: () => api.get<CatchWithSky[]>(crewApiPath(crewId, `/catches${queryString(filter)}`)),
     enabled: Boolean(filter.eventId || filter.competitionDayId),
+    refetchInterval: live ? LIVE_DAY_REFETCH_MS : false,
   });
 }
 
@@ -70,10 +77,7 @@ export function useUpdateCatch(crewId: string, catchId: string) {
     mutationFn: (changes: CatchChanges) => api.patch<CatchWithSky>(catchPath(crewId, catchId), changes),
     onSuccess: (saved) => {
       queryClient.setQueryData(catchKey(crewId, catchId), saved);
-      return Promise.all([
-        queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.allWeighIns(crewId) }),
-      ]);
+      return refreshCrewJournal(queryClient, crewId);
     },
   });
 }
@@ -83,11 +87,7 @@ export function useLogCatch(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CatchInput) => api.post<CatchWithSky>(crewApiPath(crewId, '/catches'), input),
-    onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.allWeighIns(crewId) }),
-      ]),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }
 
@@ -95,10 +95,6 @@ export function useDeleteCatch(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (catchId: string) => api.delete(catchPath(crewId, catchId)),
-    onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.allWeighIns(crewId) }),
-      ]),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }

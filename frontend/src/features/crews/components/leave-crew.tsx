@@ -2,6 +2,7 @@ import { Button, ConfirmationDialog, Text } from '@primer/react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormError } from '../../../components/form/form-error';
+import { forgetCrew } from '../../../lib/crew-cache';
 import { leaveCrew } from '../api/crews-api';
 
 /** Leave the crew, after a confirmation; the server refuses when the last owner tries. */
@@ -22,6 +23,7 @@ export function LeaveCrew({
     mutationFn: () => leaveCrew(crewId, ownUserId),
     onSuccess: async () => {
       queryClient.removeQueries({ queryKey: ['crews', crewId] });
+      await forgetCrew(queryClient, crewId);
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: ['crews'] }),
         queryClient.invalidateQueries({ queryKey: ['me'] }),

@@ -2,6 +2,7 @@ import type { EventRules, FieldContext, EventView } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 import type { CompetitionDayView, PracticeDayView } from '../../../lib/journal-types';
 import type { TemperatureEntry } from '../../../lib/units';
 
@@ -68,11 +69,7 @@ export function useSaveEvent(crewId: string, eventId?: string) {
     },
     onSuccess: async (event) => {
       queryClient.setQueryData(journalKeys.event(crewId, event.id), event);
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: journalKeys.allEvents(crewId) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, event.id) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.weighIns(crewId, event.id) }),
-      ]);
+      await refreshCrewJournal(queryClient, crewId);
     },
   });
 }
@@ -81,12 +78,12 @@ export function useDeleteEvent(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (eventId: string) => api.delete(eventPath(crewId, eventId)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.allEvents(crewId) }),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }
 
 /** PATCH /competition-days/:dayId: start and check-in clock times, weather, water temperature (°F). */
-export function useUpdateCompetitionDay(crewId: string, eventId: string) {
+export function useUpdateCompetitionDay(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({
@@ -100,12 +97,12 @@ export function useUpdateCompetitionDay(crewId: string, eventId: string) {
       weatherNotes?: string;
       waterTemp?: TemperatureEntry | null;
     }) => api.patch<CompetitionDayView>(crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}`), body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }
 
 /** PATCH /practice-days/:dayId: the day's notes and water temperature (as typed, with its unit); 409 when the version is stale. */
-export function useUpdatePracticeDay(crewId: string, eventId: string) {
+export function useUpdatePracticeDay(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({
@@ -117,6 +114,6 @@ export function useUpdatePracticeDay(crewId: string, eventId: string) {
       notes?: string;
       waterTemp?: TemperatureEntry | null;
     }) => api.patch<PracticeDayView>(crewApiPath(crewId, `/practice-days/${encodeURIComponent(dayId)}`), body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.days(crewId, eventId) }),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }

@@ -13,12 +13,10 @@ import styles from './event-form.module.css';
 /** Start and check-in times (lake clock), weather and water temperature of one competition day. */
 export function CompetitionDayForm({
   crewId,
-  eventId,
   day,
   prefs,
 }: {
   crewId: string;
-  eventId: string;
   day: CompetitionDayView;
   prefs: UnitPreferences;
 }) {
@@ -30,7 +28,7 @@ export function CompetitionDayForm({
   });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [saved, setSaved] = useState(false);
-  const update = useUpdateCompetitionDay(crewId, eventId);
+  const update = useUpdateCompetitionDay(crewId);
   const set = (key: keyof typeof values) => (e: { target: { value: string } }) => {
     setSaved(false);
     setValues((v) => ({ ...v, [key]: e.target.value }));

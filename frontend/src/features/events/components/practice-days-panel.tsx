@@ -51,7 +51,6 @@ export function PracticeDaysPanel({
                 <PracticeDayForm
                   key={`${day.id}:${reloads}`}
                   crewId={crewId}
-                  eventId={eventId}
                   day={day}
                   prefs={prefs}
                   onReload={() => void days.refetch().then(() => setReloads((n) => n + 1))}
@@ -84,13 +83,11 @@ function PracticeDayNotes({ day, prefs }: { day: PracticeDayView; prefs: UnitPre
 /** Notes and water temperature of one practice day; saved with the version it was loaded with. */
 export function PracticeDayForm({
   crewId,
-  eventId,
   day,
   prefs,
   onReload,
 }: {
   crewId: string;
-  eventId: string;
   day: PracticeDayView;
   prefs: UnitPreferences;
   onReload: () => void;
@@ -104,7 +101,7 @@ export function PracticeDayForm({
   const [startTemp] = useState(waterTemp);
   const [error, setError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
-  const update = useUpdatePracticeDay(crewId, eventId);
+  const update = useUpdatePracticeDay(crewId);
   const label = dayLabel(day.date);
 
   const submit = () => {

@@ -9,6 +9,7 @@ import type {
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 import type { FindWithSky } from '../../../lib/journal-types';
 import type { DepthEntry, TemperatureEntry } from '../../../lib/units';
 
@@ -66,7 +67,7 @@ export function useSaveFind(crewId: string, findId?: string) {
     },
     onSuccess: (find) => {
       queryClient.setQueryData(journalKeys.find(crewId, find.id), find);
-      return queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) });
+      return refreshCrewJournal(queryClient, crewId);
     },
   });
 }
@@ -75,7 +76,7 @@ export function useDeleteFind(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (findId: string) => api.delete(findPath(crewId, findId)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) }),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }
 

@@ -1,7 +1,8 @@
 import type { FindKind } from '@shoalbook/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { API_BASE } from '../../../lib/api-client';
-import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import { crewApiPath, queryString } from '../../../lib/journal-keys';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 import type { CsvPreview, GpxPreview, ImportResult } from '../../../lib/journal-types';
 import { uploadFile, type UploadProgress } from '../../../lib/upload';
 
@@ -64,12 +65,7 @@ export function catchesTemplateUrl(crewId: string): string {
 /** After an import: the lists it changed must be read again. */
 export function useAfterImport(crewId: string) {
   const queryClient = useQueryClient();
-  return () =>
-    Promise.all([
-      queryClient.invalidateQueries({ queryKey: journalKeys.allFinds(crewId) }),
-      queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
-      queryClient.invalidateQueries({ queryKey: journalKeys.allWeighIns(crewId) }),
-    ]);
+  return () => refreshCrewJournal(queryClient, crewId);
 }
 
 /** A file the import should refuse before sending it: wrong type or too big. */

@@ -2,6 +2,7 @@ import type { LakeView } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys } from '../../../lib/journal-keys';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 
 /** Body of POST /lakes and PATCH /lakes/:lakeId (contract: positions WGS84 decimal degrees, area in acres). */
 export interface LakeInput {
@@ -44,7 +45,7 @@ export function useSaveLake(crewId: string, lakeId?: string) {
         : api.post<LakeView>(crewApiPath(crewId, '/lakes'), input),
     onSuccess: (lake) => {
       queryClient.setQueryData(journalKeys.lake(crewId, lake.id), lake);
-      return queryClient.invalidateQueries({ queryKey: journalKeys.lakes(crewId) });
+      return refreshCrewJournal(queryClient, crewId);
     },
   });
 }
@@ -53,6 +54,6 @@ export function useDeleteLake(crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (lakeId: string) => api.delete(crewApiPath(crewId, `/lakes/${encodeURIComponent(lakeId)}`)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: journalKeys.lakes(crewId) }),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }

@@ -134,7 +134,7 @@ export function LiveBagPanel({
   rules: EventRules;
   prefs: UnitPreferences;
 }) {
-  const weighIns = useWeighIns(crewId, eventId);
+  const weighIns = useWeighIns(crewId, eventId, { live: true });
   const body = () => {
     if (weighIns.isPending) return <LoadingState label="Counting the bag…" />;
     if (weighIns.isError) return <ErrorState error={weighIns.error} onRetry={() => weighIns.refetch()} />;

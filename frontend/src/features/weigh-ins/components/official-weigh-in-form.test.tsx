@@ -11,7 +11,7 @@ const csrf = { status: 200, body: { csrfToken: 'tok' } };
 const path = 'PUT /api/crews/c1/competition-days/d1/weigh-in';
 
 function renderForm() {
-  return renderWithApp(<OfficialWeighInForm crewId="c1" eventId="e1" dayId="d1" official={null} prefs={prefs} />);
+  return renderWithApp(<OfficialWeighInForm crewId="c1" dayId="d1" official={null} prefs={prefs} />);
 }
 
 describe('OfficialWeighInForm (numbers read by the locale)', () => {

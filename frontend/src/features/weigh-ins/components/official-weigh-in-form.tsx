@@ -14,13 +14,11 @@ const WEIGHT_LABELS = { grossLb: 'Gross on the scale', penaltyLb: 'Penalties', o
 /** The scale's own figures for a day; once saved they count instead of Shoalbook's computed bag. */
 export function OfficialWeighInForm({
   crewId,
-  eventId,
   dayId,
   official,
   prefs,
 }: {
   crewId: string;
-  eventId: string;
   dayId: string;
   official: OfficialWeighIn | null;
   prefs: UnitPreferences;
@@ -34,7 +32,7 @@ export function OfficialWeighInForm({
   });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [saved, setSaved] = useState(false);
-  const record = useRecordWeighIn(crewId, eventId);
+  const record = useRecordWeighIn(crewId);
   const f = (key: keyof typeof v) => ({
     name: key,
     value: v[key],

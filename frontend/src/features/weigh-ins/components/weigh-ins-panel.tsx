@@ -176,13 +176,7 @@ export function WeighInsPanel({
           {canWrite ? (
             <Details className={styles.details}>
               <Details.Summary>Enter the official figures</Details.Summary>
-              <OfficialWeighInForm
-                crewId={crewId}
-                eventId={eventId}
-                dayId={day.competitionDayId}
-                official={day.official}
-                prefs={prefs}
-              />
+              <OfficialWeighInForm crewId={crewId} dayId={day.competitionDayId} official={day.official} prefs={prefs} />
             </Details>
           ) : null}
         </section>

@@ -1,11 +1,13 @@
 import type { CrewView } from '@shoalbook/shared';
 import { Banner, Label, LinkButton, UnderlineNav } from '@primer/react';
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import { Link as RouterLink, Outlet, useLocation, useOutletContext, useParams } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../../../components/feedback/query-states';
 import { paths } from '../../../../config/paths';
 import { crewQuery } from '../../../../features/crews/api/crews-api';
 import { isApiError } from '../../../../lib/api-client';
+import { forgetCrew } from '../../../../lib/crew-cache';
 import { ROLE_LABELS } from '../../../../lib/authorization';
 import { CREW_SECTIONS } from './crew-sections';
 import styles from './crew.module.css';
@@ -25,10 +27,16 @@ export function Component() {
   const { crewId = '' } = useParams();
   const { pathname } = useLocation();
   const crew = useQuery(crewQuery(crewId));
+  const queryClient = useQueryClient();
+  const notAMember = crew.isError && isApiError(crew.error, 404);
+  // Removed from the crew (or it was deleted): what this device kept of its journal goes too.
+  useEffect(() => {
+    if (notAMember) void forgetCrew(queryClient, crewId);
+  }, [notAMember, queryClient, crewId]);
 
   if (crew.isPending) return <LoadingState label="Opening the crew…" />;
   if (crew.isError) {
-    if (isApiError(crew.error, 404)) {
+    if (notAMember) {
       return (
         <Banner
           variant="warning"

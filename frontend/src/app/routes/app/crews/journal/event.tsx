@@ -205,7 +205,7 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
       {canWrite ? (
         <Details className={styles.details}>
           <Details.Summary>Start, check-in, weather and water of this day</Details.Summary>
-          <CompetitionDayForm key={day.id} crewId={crewId} eventId={event.id} day={day} prefs={prefs} />
+          <CompetitionDayForm key={day.id} crewId={crewId} day={day} prefs={prefs} />
         </Details>
       ) : null}
       {canWrite ? (
@@ -255,7 +255,7 @@ function DayCatches({
   canWrite: boolean;
   finds: Parameters<typeof CatchesTable>[0]['finds'];
 }) {
-  const catches = useCatches(crewId, { competitionDayId: dayId });
+  const catches = useCatches(crewId, { competitionDayId: dayId }, { live: true });
   if (catches.isPending) return <LoadingState label="Loading catches…" />;
   if (catches.isError) return <ErrorState error={catches.error} onRetry={() => catches.refetch()} />;
   return (
