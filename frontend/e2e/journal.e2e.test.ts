@@ -234,6 +234,10 @@ describe('the journal, as the demo angler', () => {
       await expectNoSeriousAxe(page, section);
       await screenshot(page, `journal-${section}`);
     }
+    // The events list tells each event's fish and weight by the one bag rule: three fish, one dead (9.57 − 0.25).
+    const row = page.getByRole('row').filter({ has: page.getByRole('link', { name: EVENT }) });
+    await row.getByRole('cell', { name: '3 (3 counted)', exact: true }).waitFor();
+    await row.getByRole('cell', { name: '9.32 lb', exact: true }).waitFor();
     await page.goto(`${eventUrl}?section=finds`);
     await page.getByRole('link', { name: 'Long shell flat' }).click();
     await page.getByRole('heading', { name: 'Long shell flat', level: 2 }).waitFor();

@@ -411,6 +411,19 @@ export interface ComputedBag {
   netLb: number;
 }
 
+/** One event's line in the events list: its fish and its weight, by the one bag rule and the official figures. */
+export interface EventTally {
+  eventId: string;
+  /** Every catch logged on its competition days. */
+  fishCaught: number;
+  /** Fish in the counted bags. */
+  fishCounted: number;
+  /** Sum over days of the official weight where entered, else the computed net. */
+  totalLb: number;
+  /** Every competition day has its official weight entered. */
+  allOfficial: boolean;
+}
+
 /** Official figure minus Shoalbook's own computation (null where the official one is not entered). */
 export interface OfficialDifference {
   grossLb: number | null;

@@ -1,5 +1,13 @@
 import { daySummary, type DayBag, type FishVerdict } from '@shoalbook/analytics';
-import type { BagFishVerdict, BagView, ComputedBag, EventRules, Fate, OfficialDifference, OfficialWeighIn } from '@shoalbook/shared';
+import type {
+  BagFishVerdict,
+  BagView,
+  ComputedBag,
+  EventRules,
+  Fate,
+  OfficialDifference,
+  OfficialWeighIn,
+} from '@shoalbook/shared';
 
 /** What the bag rule reads of a catch (a Catch entity, a report's catch fact or a projector row). */
 export interface BagCatch {

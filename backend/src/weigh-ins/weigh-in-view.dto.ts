@@ -1,4 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsOptional, IsUUID } from 'class-validator';
 import {
   EVENT_FORMATS,
   FISH_STATES,
@@ -7,6 +8,7 @@ import {
   type BagView,
   type ComputedBag,
   type EventFormat,
+  type EventTally,
   type FishState,
   type OfficialDifference,
   type OfficialWeighIn,
@@ -103,4 +105,17 @@ export class WeighInTotalsDto {
 export class WeighInsViewDto implements WeighInsView {
   @ApiProperty({ type: [WeighInDayViewDto] }) days: WeighInDayViewDto[];
   @ApiProperty({ type: WeighInTotalsDto }) totals: WeighInTotalsDto;
+}
+
+export class EventTallyQueryDto {
+  @ApiPropertyOptional({ format: 'uuid' }) @IsOptional() @IsUUID() lakeId?: string;
+}
+
+export class EventTallyDto implements EventTally {
+  @ApiProperty({ format: 'uuid' }) eventId: string;
+  @ApiProperty({ description: 'every catch logged on its competition days' }) fishCaught: number;
+  @ApiProperty({ description: 'fish in the counted bags' }) fishCounted: number;
+  @ApiProperty({ description: 'official weight where entered, else the computed net, summed over days' })
+  totalLb: number;
+  @ApiProperty({ description: 'every competition day has its official weight' }) allOfficial: boolean;
 }

@@ -25,17 +25,32 @@ export class RecordWeighInDto implements RecordWeighInRequest {
   @Min(0)
   @Max(1440)
   lateMinutes?: number | null;
-  @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 10_000, description: "the day's field size (boats or anglers)" })
+  @ApiPropertyOptional({
+    nullable: true,
+    minimum: 1,
+    maximum: 10_000,
+    description: "the day's field size (boats or anglers)",
+  })
   @IsOptional()
   @IsInt({ message: 'The field size must be a whole number of boats or anglers.' })
   @Min(1, { message: 'The field size must be at least 1.' })
   @Max(10_000, { message: 'The field size must be at most 10000.' })
   fieldSize?: number | null;
-  @ApiPropertyOptional({ nullable: true, description: "the day's winning weight, lb", minimum: RANGES.bagLb.min, maximum: RANGES.bagLb.max })
+  @ApiPropertyOptional({
+    nullable: true,
+    description: "the day's winning weight, lb",
+    minimum: RANGES.bagLb.min,
+    maximum: RANGES.bagLb.max,
+  })
   @IsOptional()
   @InRange(RANGES.bagLb)
   winningLb?: number | null;
-  @ApiPropertyOptional({ nullable: true, description: "the day's cut weight, lb", minimum: RANGES.bagLb.min, maximum: RANGES.bagLb.max })
+  @ApiPropertyOptional({
+    nullable: true,
+    description: "the day's cut weight, lb",
+    minimum: RANGES.bagLb.min,
+    maximum: RANGES.bagLb.max,
+  })
   @IsOptional()
   @InRange(RANGES.bagLb)
   cutLb?: number | null;

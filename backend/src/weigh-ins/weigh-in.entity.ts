@@ -4,7 +4,17 @@ import { Entity, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 /** The official figures of one competition day, as the organiser announced them (all optional). */
 @Entity({ tableName: 'weigh_ins' })
 export class WeighIn {
-  [OptionalProps]?: 'grossLb' | 'penaltyLb' | 'officialLb' | 'dayPlace' | 'lateMinutes' | 'fieldSize' | 'winningLb' | 'cutLb' | 'version' | 'updatedAt';
+  [OptionalProps]?:
+    | 'grossLb'
+    | 'penaltyLb'
+    | 'officialLb'
+    | 'dayPlace'
+    | 'lateMinutes'
+    | 'fieldSize'
+    | 'winningLb'
+    | 'cutLb'
+    | 'version'
+    | 'updatedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

@@ -1,15 +1,15 @@
-import { Body, Controller, Get, Param, Put } from '@nestjs/common';
+import { Body, Controller, Get, Param, Put, Query } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import { ApiConflictResponse, ApiCookieAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { RecordChange, WeighInHistoryField, WeighInsView } from '@shoalbook/shared';
+import type { EventTally, RecordChange, WeighInHistoryField, WeighInsView } from '@shoalbook/shared';
 import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
 import type { CrewAccess } from '../common/request-context';
 import { WeighInChangeDto } from '../journal/record-change.dto';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { RecordWeighInCommand } from './commands/record-weigh-in.command';
 import { RecordWeighInDto } from './weigh-in.dto';
-import { RecordedWeighInDto, WeighInsViewDto } from './weigh-in-view.dto';
+import { EventTallyDto, EventTallyQueryDto, RecordedWeighInDto, WeighInsViewDto } from './weigh-in-view.dto';
 import { type VersionedWeighIn, WeighInsService } from './weigh-ins.service';
 
 @ApiTags('weigh-ins')
@@ -21,6 +21,15 @@ export class WeighInsController {
     private readonly commands: CommandBus,
     private readonly weighIns: WeighInsService,
   ) {}
+
+  @Get('event-tallies')
+  @ApiOperation({
+    summary: 'Fish caught and counted and the total weight (official where entered) of every event, or of one lake’s',
+  })
+  @ApiOkResponse({ type: [EventTallyDto] })
+  tallies(@CurrentCrew() access: CrewAccess, @Query() query: EventTallyQueryDto): Promise<EventTally[]> {
+    return this.weighIns.tallies(access, query.lakeId);
+  }
 
   @Get('events/:eventId/weigh-ins')
   @ApiOperation({

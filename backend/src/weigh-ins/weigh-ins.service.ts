@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import {
   WEIGH_IN_HISTORY_FIELDS,
+  type EventTally,
   type OfficialWeighIn,
   type RecordChange,
   type WeighInHistoryField,
@@ -13,6 +14,7 @@ import type { CrewAccess } from '../common/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { eventView } from '../events/event-views';
 import { EventsService } from '../events/events.service';
+import { TournamentEvent } from '../events/tournament-event.entity';
 import { recordNotFound } from '../journal/journal-errors';
 import { RecordHistoryService } from '../journal-events/record-history.service';
 import { bagOfDay, differenceOf } from './bag-rule';
@@ -39,6 +41,18 @@ export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
 
 const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 
+/** Map.groupBy, which Node 20 lacks. */
+function groupBy<T>(items: readonly T[], key: (item: T) => string): Map<string, T[]> {
+  const groups = new Map<string, T[]>();
+  for (const item of items) {
+    const k = key(item);
+    const group = groups.get(k);
+    if (group) group.push(item);
+    else groups.set(k, [item]);
+  }
+  return groups;
+}
+
 /**
  * The event's weigh-ins: per day the bag by the one bag rule beside the official figures and their difference,
  * and the totals (official where entered). Neither figure ever overwrites the other.
@@ -59,6 +73,44 @@ export class WeighInsService {
     const weighIn = await this.em.findOne(WeighIn, { competitionDayId: day.id, crewId: access.crewId });
     if (!weighIn) return [];
     return (await this.history.changes(access.crewId, 'weighIn', weighIn.id, WEIGH_IN_HISTORY_FIELDS)) ?? [];
+  }
+
+  /**
+   * Fish and weight of every event of the crew (or of one lake), for the events list: three queries for all
+   * of them, each day through the one bag rule, official weights where entered.
+   */
+  async tallies(access: CrewAccess, lakeId?: string): Promise<EventTally[]> {
+    const { crewId } = access;
+    const events = await this.em.find(TournamentEvent, { crewId, ...(lakeId ? { lakeId } : {}) });
+    if (!events.length) return [];
+    const days = await this.em.find(CompetitionDay, { crewId, eventId: { $in: events.map((e) => e.id) } });
+    const dayIds = days.map((d) => d.id);
+    const catches = dayIds.length ? await this.em.find(Catch, { crewId, competitionDayId: { $in: dayIds } }) : [];
+    const weighIns = new Map(
+      (dayIds.length ? await this.em.find(WeighIn, { crewId, competitionDayId: { $in: dayIds } }) : []).map((w) => [
+        w.competitionDayId,
+        w,
+      ]),
+    );
+    const catchesOfDay = groupBy(catches, (c) => c.competitionDayId);
+    const daysOfEvent = groupBy(days, (d) => d.eventId);
+    return events.map((event) => {
+      const rules = eventView(event).rules;
+      const tally: EventTally = { eventId: event.id, fishCaught: 0, fishCounted: 0, totalLb: 0, allOfficial: true };
+      const eventDays = daysOfEvent.get(event.id) ?? [];
+      if (!eventDays.length) tally.allOfficial = false;
+      for (const day of eventDays) {
+        const dayCatches = catchesOfDay.get(day.id) ?? [];
+        const official = officialOf(weighIns.get(day.id));
+        const bag = bagOfDay(dayCatches, rules, official?.lateMinutes ?? null);
+        tally.fishCaught += dayCatches.length;
+        tally.fishCounted += bag.counted.length;
+        tally.totalLb += official?.officialLb ?? bag.netLb;
+        if (official?.officialLb == null) tally.allOfficial = false;
+      }
+      tally.totalLb = clean(tally.totalLb);
+      return tally;
+    });
   }
 
   async forEvent(access: CrewAccess, eventId: string): Promise<WeighInsView> {

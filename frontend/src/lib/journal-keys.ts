@@ -25,6 +25,9 @@ export const journalKeys = {
   allCatches: (crewId: string) => ['crew', crewId, 'catches'] as const,
   weighIns: (crewId: string, eventId: string) => ['crew', crewId, 'weigh-ins', eventId] as const,
   allWeighIns: (crewId: string) => ['crew', crewId, 'weigh-ins'] as const,
+  /** Under weigh-ins, so whatever refreshes the weigh-ins after a catch refreshes the events list's figures too. */
+  eventTallies: (crewId: string, lakeId?: string) =>
+    ['crew', crewId, 'weigh-ins', 'tallies', { lakeId: lakeId ?? null }] as const,
   sky: (crewId: string, lakeId: string, date: string) => ['crew', crewId, 'sky', lakeId, date] as const,
 };
 

@@ -40,7 +40,16 @@ export class RecordWeighInHandler implements ICommandHandler<RecordWeighInComman
         );
       }
       const weighIn = existing ?? tx.create(WeighIn, { crewId: access.crewId, competitionDayId: day.id });
-      for (const key of ['grossLb', 'penaltyLb', 'officialLb', 'dayPlace', 'lateMinutes', 'fieldSize', 'winningLb', 'cutLb'] as const)
+      for (const key of [
+        'grossLb',
+        'penaltyLb',
+        'officialLb',
+        'dayPlace',
+        'lateMinutes',
+        'fieldSize',
+        'winningLb',
+        'cutLb',
+      ] as const)
         if (input[key] !== undefined) weighIn[key] = input[key];
       // An update that changes nothing still records the decision, with a new version.
       weighIn.updatedAt = new Date();

@@ -1,4 +1,4 @@
-import type { EventRules, FieldContext, EventView } from '@shoalbook/shared';
+import type { EventRules, EventTally, FieldContext, EventView } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
@@ -35,6 +35,15 @@ export const eventQuery = (crewId: string, eventId: string) =>
     queryKey: journalKeys.event(crewId, eventId),
     queryFn: () => api.get<EventView>(eventPath(crewId, eventId)),
   });
+
+/** Fish caught and counted and the total weight of each event (GET /event-tallies), by event id. */
+export function useEventTallies(crewId: string, lakeId?: string) {
+  return useQuery({
+    queryKey: journalKeys.eventTallies(crewId, lakeId),
+    queryFn: () => api.get<EventTally[]>(crewApiPath(crewId, `/event-tallies${queryString({ lakeId })}`)),
+    select: (tallies) => new Map(tallies.map((t) => [t.eventId, t])),
+  });
+}
 
 export function useEvents(crewId: string, lakeId?: string) {
   return useQuery(eventsQuery(crewId, lakeId));

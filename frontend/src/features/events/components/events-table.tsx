@@ -7,7 +7,9 @@ import { DataTable } from '../../../components/data-table/data-table';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { journalPaths } from '../../../config/journal-paths';
 import { dayLabel } from '../../../lib/lake-time';
-import { useEvents } from '../api/events-api';
+import { useUnitPreferences } from '../../../lib/journal-access';
+import { formatWeight } from '../../../lib/units';
+import { useEventTallies, useEvents } from '../api/events-api';
 
 const column = createColumnHelper<EventView>();
 
@@ -24,6 +26,8 @@ export function EventsTable({
   canWrite: boolean;
 }) {
   const events = useEvents(crewId, lakeId);
+  const tallies = useEventTallies(crewId, lakeId);
+  const prefs = useUnitPreferences();
   const lakeNames = useMemo(() => new Map(lakes.map((l) => [l.id, l.name])), [lakes]);
   const columns = useMemo(
     () => [
@@ -57,6 +61,27 @@ export function EventsTable({
         header: 'Practice days',
         meta: { numeric: true },
       }),
+      column.accessor((e) => tallies.data?.get(e.id)?.fishCaught, {
+        id: 'fish',
+        header: 'Fish',
+        meta: { numeric: true, label: 'Fish caught (counted)' },
+        sortUndefined: 'last',
+        cell: (info) => {
+          const t = tallies.data?.get(info.row.original.id);
+          return t ? `${t.fishCaught} (${t.fishCounted} counted)` : '—';
+        },
+      }),
+      column.accessor((e) => tallies.data?.get(e.id)?.totalLb, {
+        id: 'weight',
+        header: 'Weight',
+        meta: { numeric: true, label: 'Total weight' },
+        sortUndefined: 'last',
+        cell: (info) => {
+          const t = tallies.data?.get(info.row.original.id);
+          if (!t || (t.fishCaught === 0 && t.totalLb === 0)) return '—';
+          return `${formatWeight(t.totalLb, prefs.weight)}${t.allOfficial ? ' (official)' : ''}`;
+        },
+      }),
       column.accessor('finalPlace', {
         header: 'Final place',
         meta: { numeric: true },
@@ -64,7 +89,7 @@ export function EventsTable({
         sortUndefined: 'last',
       }),
     ],
-    [crewId, lakeNames, lakes, lakeId],
+    [crewId, lakeNames, lakes, lakeId, tallies.data, prefs],
   );
 
   if (events.isPending) return <LoadingState label="Loading events…" />;
@@ -94,7 +119,7 @@ export function EventsTable({
       caption="Events"
       getRowId={(e) => e.id}
       initialSorting={[{ id: 'firstDay', desc: true }]}
-      initialHidden={{ lake: !lakeId }}
+      initialHidden={{ lake: !lakeId, practice: false, organiser: false }}
       filterPlaceholder="Filter by name or organiser"
       height={400}
     />
