@@ -1,6 +1,16 @@
 import { type ArgumentMetadata, HttpStatus, ValidationPipe, type ValidationError } from '@nestjs/common';
 import { ApiException, ErrorCode } from '../errors/api-errors';
 
+/**
+ * class-validator's own messages start with the property ("startTime must be a string"); a message shown
+ * beside a field under its label reads better without it ("Must be a string").
+ */
+export function withoutFieldName(message: string, property: string): string {
+  if (!message.startsWith(`${property} `)) return message;
+  const rest = message.slice(property.length + 1);
+  return rest.charAt(0).toUpperCase() + rest.slice(1);
+}
+
 /** Flatten class-validator errors into `{ "units.weight": ["…"] }`, with readable words for unknown fields. */
 export function toFieldErrors(errors: ValidationError[], prefix = ''): Record<string, string[]> {
   const out: Record<string, string[]> = {};
@@ -8,7 +18,7 @@ export function toFieldErrors(errors: ValidationError[], prefix = ''): Record<st
     const path = prefix ? `${prefix}.${e.property}` : e.property;
     const constraints = e.constraints ?? {};
     const messages = Object.entries(constraints).map(([name, msg]) =>
-      name === 'whitelistValidation' ? 'This field is not accepted.' : msg,
+      name === 'whitelistValidation' ? 'This field is not accepted.' : withoutFieldName(msg, e.property),
     );
     if (messages.length) out[path] = messages;
     if (e.children?.length) Object.assign(out, toFieldErrors(e.children, path));
