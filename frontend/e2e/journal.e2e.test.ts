@@ -177,6 +177,24 @@ describe('the journal, as the demo angler', () => {
     await expectNoSeriousAxe(page, 'weigh-ins');
     await screenshot(page, 'journal-weigh-ins-desk');
 
+    // The scale's slip, entered and then corrected: both stay in the day's history, with who and when (the
+    // date is named too, as the change was made on another day than the competition day).
+    const day = page.getByRole('region', { name: 'Sat, 12 Apr 2025' });
+    await day.getByText('Enter the official figures').click();
+    const official = day.getByRole('textbox', { name: 'Official weight' });
+    await official.fill('9.35');
+    await day.getByRole('button', { name: 'Save official figures' }).click();
+    await day.getByText('Saved; the official figures now count.').waitFor();
+    await official.fill('9.30');
+    await day.getByRole('button', { name: 'Save official figures' }).click();
+    await day.getByText('Saved; the official figures now count.').waitFor();
+    await day.getByText('Who changed the official figures, and when').click();
+    const history = day.getByRole('region', { name: 'History of the official figures' });
+    await history.getByText(/^Official weight: 9\.35 lb → 9\.3 ?0? lb, by .+, \d{2}:\d{2} on .+$/).waitFor();
+    await history.getByText(/^Official weight: 9\.35 lb as first recorded, by .+, \d{2}:\d{2} on .+$/).waitFor();
+    await expectNoSeriousAxe(page, 'weigh-in history');
+    await screenshot(page, 'journal-weigh-in-history-desk');
+
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'journal-weigh-ins-phone');
     await page.goto(`${eventUrl}?section=days`);

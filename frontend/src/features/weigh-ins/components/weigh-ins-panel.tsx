@@ -162,7 +162,7 @@ export function WeighInsPanel({
           )}
           {day.official ? (
             <Details className={styles.details}>
-              <Details.Summary>History of the official figures</Details.Summary>
+              <Details.Summary>Who changed the official figures, and when</Details.Summary>
               <WeighInHistory
                 crewId={crewId}
                 eventId={eventId}
