@@ -41,6 +41,9 @@ export default defineConfig({
         navigateFallback: '/index.html',
         navigateFallbackDenylist: [/^\/api(\/|$)/],
         cleanupOutdatedCaches: true,
+        // The worker takes charge of the tab that installed it, so the screens loaded later in that first visit
+        // (code-split chunks) come from the cache too once the signal goes.
+        clientsClaim: true,
         // Background sync wakes the open app to drain its send queue (public/sw-send-queue.js).
         importScripts: ['/sw-send-queue.js'],
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,

@@ -1,0 +1,153 @@
+import { CSRF_HEADER } from '@shoalbook/shared';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
+import { openBrowser, screenshot, signIn, type Browser } from './support/browser';
+import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+
+// Invented for this test: a lake and an event with one competition day from 06:30 to 15:00 (America/Chicago).
+const LAKE = 'Cattail Narrows (offline test)';
+const EVENT = 'Cattail Offline Test Open';
+const PHONE = { width: 390, height: 844 };
+
+/** The JSON API through the browser's own session (cookie and CSRF token), for setting the scene and checking it. */
+async function apiCall<T>(page: Page, method: 'GET' | 'POST' | 'PATCH', path: string, data?: unknown): Promise<T> {
+  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
+  const response = await page.request.fetch(`/api${path}`, {
+    method,
+    data,
+    headers: { [CSRF_HEADER]: csrf.csrfToken },
+  });
+  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
+  return (await response.json()) as T;
+}
+
+/** Fill the catch form by its labels and log it; without signal the form says "waiting to send" for it. */
+async function logCatchOffline(page: Page, c: { time: string; weight: string; length: string }) {
+  const form = page.getByRole('form', { name: /Log a catch/ });
+  await form.getByRole('textbox', { name: /^Time/ }).fill(c.time);
+  await form.getByRole('textbox', { name: /^Weight/ }).fill(c.weight);
+  await form.getByRole('textbox', { name: /^Length/ }).fill(c.length);
+  await form.getByRole('button', { name: 'Log catch' }).click();
+  await form
+    .getByRole('status')
+    .filter({ hasText: 'Waiting to send' })
+    .filter({ hasText: `at ${c.time}` })
+    .waitFor({ timeout: 30_000 });
+}
+
+describe('on the water without signal: catches kept on the phone, sent once when the network is back', () => {
+  let browser: Browser;
+  let crewApi = '';
+  let eventId = '';
+  let dayUrl = '';
+
+  beforeAll(async () => {
+    browser = await openBrowser(PHONE);
+    const { page } = browser;
+    await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
+    crewApi = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
+    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/lakes`, {
+      name: LAKE,
+      region: 'Test county',
+      timeZone: 'America/Chicago',
+      lat: 32.512,
+      lon: -95.104,
+      areaAcres: null,
+      notes: '',
+    });
+    const event = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/events`, {
+      lakeId: lake.id,
+      name: EVENT,
+      organiser: 'Test trail',
+      practiceDates: [],
+      competitionDates: ['2025-07-19'],
+      rules: {
+        fishPerDay: 5,
+        minLengthIn: 12,
+        deadFishPenaltyLb: 0.25,
+        shortFishPenaltyLb: 0.25,
+        latePenaltyLbPerMinute: 1,
+      },
+      entryFee: null,
+      payout: null,
+      finalPlace: null,
+      notes: '',
+    });
+    eventId = event.id;
+    const [day] = await apiCall<{ id: string; version: number }[]>(
+      page,
+      'GET',
+      `${crewApi}/events/${eventId}/competition-days`,
+    );
+    await apiCall(page, 'PATCH', `${crewApi}/competition-days/${day.id}`, {
+      version: day.version,
+      startTime: '06:30',
+      checkInTime: '15:00',
+    });
+    dayUrl = `${crewApi}/events/${eventId}?section=days`;
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  beforeEach((context) => {
+    onTestFailed(() => {
+      const page = browser.context.pages().at(-1);
+      if (page) return screenshot(page, `offline-failed-${context.task.name.slice(0, 40).replace(/\W+/g, '-')}`);
+    });
+  });
+
+  it(
+    'logs three catches offline, keeps them through a closed tab, opens offline and sends each exactly once',
+    { timeout: 240_000 },
+    async () => {
+      const { context, page } = browser;
+      await page.goto(dayUrl);
+      await page.getByRole('form', { name: /Log a catch/ }).waitFor();
+      // The service worker must have the shell before the network goes: wait until it controls this page.
+      await page.evaluate(async () => {
+        await navigator.serviceWorker.ready;
+        if (!navigator.serviceWorker.controller)
+          await new Promise((resolve) => navigator.serviceWorker.addEventListener('controllerchange', resolve));
+      });
+      expect(await apiCall<unknown[]>(page, 'GET', `${crewApi}/catches?eventId=${eventId}`)).toHaveLength(0);
+
+      await context.setOffline(true);
+      await logCatchOffline(page, { time: '07:12', weight: '3.41', length: '17' });
+      await logCatchOffline(page, { time: '08:03', weight: '2.27', length: '15.5' });
+      await logCatchOffline(page, { time: '09:48', weight: '4.06', length: '18.5' });
+      await page.getByRole('button', { name: /^3 waiting to send/ }).waitFor();
+      await screenshot(page, 'offline-three-waiting-phone');
+
+      // Close the tab and open the app in a new one, still offline: the service worker serves the shell and the
+      // entries come back from IndexedDB.
+      await page.close();
+      const again = await context.newPage();
+      await again.goto(dayUrl);
+      const waiting = again.getByRole('region', { name: 'Not sent yet' });
+      await waiting.getByText('Waiting to send').first().waitFor({ timeout: 30_000 });
+      await expect(waiting.getByRole('listitem').count()).resolves.toBe(3);
+      for (const time of ['07:12', '08:03', '09:48']) await waiting.getByText(`at ${time}`).waitFor();
+      await again.getByRole('button', { name: /^3 waiting to send/ }).waitFor();
+      const noScroll = await again.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
+      expect(noScroll, 'no horizontal scroll at 390 px').toBe(true);
+      await screenshot(again, 'offline-reopened-phone');
+
+      await context.setOffline(false);
+      await waiting.waitFor({ state: 'detached', timeout: 60_000 });
+      const table = again.getByRole('table', { name: 'Catches of the day' });
+      for (const time of ['07:12', '08:03', '09:48']) await table.getByRole('row').filter({ hasText: time }).waitFor();
+      await expect(again.getByRole('button', { name: /waiting to send/ }).count()).resolves.toBe(0);
+      await screenshot(again, 'offline-sent-phone');
+
+      // Exactly three on the server, each as typed (in whatever weight unit the angler's preferences say).
+      const catches = await apiCall<{ entered?: { weight: { value: number } } }[]>(
+        again,
+        'GET',
+        `${crewApi}/catches?eventId=${eventId}`,
+      );
+      expect(catches).toHaveLength(3);
+      expect(catches.map((c) => c.entered?.weight.value).sort()).toEqual([2.27, 3.41, 4.06]);
+    },
+  );
+});
