@@ -1,3 +1,3 @@
-export { deviceDb, queueWrite, sendQueue } from './runtime';
+export { deviceDb, queueWrite, sendFromForm, sendQueue, type FormSendResult } from './runtime';
 export { DeviceStorageFullError } from './send-queue';
 export { useSendEntries, useSendQueueDrain } from './use-send-queue';

@@ -2,6 +2,7 @@ import { IDEMPOTENCY_KEY_HEADER } from '@shoalbook/shared';
 import { api } from '../api-client';
 import { DeviceDb } from '../device-db';
 import { deviceReadCache } from '../offline-reads';
+import type { SendEntry } from '../device-db';
 import { SendQueue, type NewEntry, type Transport } from './send-queue';
 
 /** The app's one device database. */
@@ -45,4 +46,23 @@ export async function queueWrite(entry: NewEntry, waitMs = FIRST_ATTEMPT_WAIT_MS
   void sendQueue.drain(entry.userId).catch(() => undefined);
   requestBackgroundSync();
   return { stored, first };
+}
+
+/** What a form learns from {@link sendFromForm}: the server's answer, or that the write waits on the phone. */
+export type FormSendResult<T> = { kind: 'sent'; answer: T } | { kind: 'waiting'; entry: SendEntry };
+
+/**
+ * A write from a form that still shows what was typed: kept in the send queue and tried at once. Sent: the
+ * server's answer. Refused: the entry leaves the queue and the refusal is thrown, for the form to show beside
+ * the values it still holds (nothing typed is lost). No answer yet: 'waiting', and the queue sends it later.
+ */
+export async function sendFromForm<T>(entry: NewEntry, waitMs = FIRST_ATTEMPT_WAIT_MS): Promise<FormSendResult<T>> {
+  const { stored, first } = await queueWrite(entry, waitMs);
+  const outcome = await first;
+  if (outcome.kind === 'sent') return { kind: 'sent', answer: outcome.answer as T };
+  if (outcome.kind === 'refused') {
+    await sendQueue.discard(stored.seq!);
+    throw outcome.failure;
+  }
+  return { kind: 'waiting', entry: stored };
 }

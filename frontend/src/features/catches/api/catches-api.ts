@@ -3,6 +3,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, LIVE_DAY_REFETCH_MS, queryString } from '../../../lib/journal-keys';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
+import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import type { DepthEntry, LengthEntry, TemperatureEntry, WeightEntry } from '../../../lib/units';
 
@@ -70,13 +71,29 @@ export function useCatchHistory(crewId: string, catchId: string) {
   });
 }
 
-/** Save changes to a catch; lists and the weigh-in are refreshed (a changed weight or fate recounts the bag). */
-export function useUpdateCatch(crewId: string, catchId: string) {
+/**
+ * Save changes to a catch through the send queue (on the water there may be no signal): the answer when the
+ * server has it at once, else 'waiting' while the queue keeps the change. Lists and the weigh-in are refreshed
+ * (a changed weight or fate recounts the bag); the queue refreshes them again when a waiting change is sent.
+ */
+export function useUpdateCatch(userId: string, crewId: string, catchId: string, label = 'Changes to a catch') {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (changes: CatchChanges) => api.patch<CatchWithSky>(catchPath(crewId, catchId), changes),
-    onSuccess: (saved) => {
-      queryClient.setQueryData(catchKey(crewId, catchId), saved);
+    mutationFn: (changes: CatchChanges): Promise<FormSendResult<CatchWithSky>> => {
+      return sendFromForm<CatchWithSky>({
+        userId,
+        crewId,
+        kind: 'edit-catch',
+        method: 'PATCH',
+        path: catchPath(crewId, catchId),
+        body: changes,
+        recordId: catchId,
+        label,
+      });
+    },
+    onSuccess: (result) => {
+      if (result.kind !== 'sent') return;
+      queryClient.setQueryData(catchKey(crewId, catchId), result.answer);
       return refreshCrewJournal(queryClient, crewId);
     },
   });

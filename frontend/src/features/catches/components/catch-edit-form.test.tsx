@@ -68,6 +68,7 @@ const logged: CatchView = {
 function renderForm(onReload = vi.fn(), onSaved = vi.fn()) {
   renderWithApp(
     <CatchEditForm
+      userId="u1"
       crewId="c1"
       catchView={logged}
       finds={finds}

@@ -135,6 +135,7 @@ export function catchChanges(
  * to reload their version.
  */
 export function CatchEditForm({
+  userId,
   crewId,
   catchView,
   finds,
@@ -144,6 +145,8 @@ export function CatchEditForm({
   onReload,
   onEdit,
 }: {
+  /** Whose send queue keeps the changes until the server has them. */
+  userId: string;
   crewId: string;
   catchView: CatchWithSky;
   finds: FindView[];
@@ -163,12 +166,14 @@ export function CatchEditForm({
   });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [unchanged, setUnchanged] = useState(false);
-  const update = useUpdateCatch(crewId, catchView.id);
+  const [waiting, setWaiting] = useState(false);
+  const update = useUpdateCatch(userId, crewId, catchView.id, `Changes to the catch at ${start.caughtAt}`);
   const listId = useId();
   const stale = isStaleVersion(update.error);
 
   const set = (key: keyof Values) => (e: { target: { value: string } }) => {
     setUnchanged(false);
+    setWaiting(false);
     onEdit?.();
     setValues((v) => ({ ...v, [key]: e.target.value }));
   };
@@ -232,7 +237,10 @@ export function CatchEditForm({
       return;
     }
     // mutateAsync, not mutate's callbacks: saving bumps the version, which remounts this form before they would run.
-    update.mutateAsync(changes).then(onSaved, () => undefined);
+    update.mutateAsync(changes).then(
+      (result) => (result.kind === 'sent' ? onSaved(result.answer) : setWaiting(true)),
+      () => undefined,
+    );
   };
 
   const weightEntered = typedAs(catchView.entered?.weight, prefs.weight);
@@ -332,6 +340,14 @@ export function CatchEditForm({
         </Button>
         <div role="status" aria-live="polite">
           {unchanged ? <Text size="small">Nothing has changed yet, so there is nothing to save.</Text> : null}
+          {waiting ? (
+            <>
+              <Label variant="attention">Waiting to send</Label>{' '}
+              <Text size="small">
+                Saved on this phone. The changes go to the server by themselves once there is signal.
+              </Text>
+            </>
+          ) : null}
         </div>
       </FormActions>
     </FormStack>

@@ -18,6 +18,7 @@ import { useEvent } from '../../../../../features/events';
 import { useFinds } from '../../../../../features/finds';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLake } from '../../../../../features/lakes';
+import { useSignedInMe } from '../../../../../lib/auth';
 import { dayLabel } from '../../../../../lib/lake-time';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
@@ -25,6 +26,7 @@ import styles from './journal.module.css';
 /** /crews/:crewId/catches/:catchId: one catch with its sun and moon and photo; writers correct or delete it here. */
 export function Component() {
   const { crewId, canWrite, prefs } = useJournalPage();
+  const me = useSignedInMe();
   const catchId = useParam('catchId');
   const navigate = useNavigate();
   const found = useCatch(crewId, catchId);
@@ -84,6 +86,7 @@ export function Component() {
         {canWrite ? (
           <CatchEditForm
             key={c.version}
+            userId={me.user.id}
             crewId={crewId}
             catchView={c}
             finds={finds.data}
