@@ -300,7 +300,9 @@ describe('CatchEntryForm without signal', () => {
     expect(screen.getByRole('textbox', { name: /weight/i })).toHaveValue('');
     const { sendQueue } = await import('../../../lib/send-queue');
     const [queued] = await sendQueue.entries('u1');
-    expect(queued).toMatchObject({ state: 'waiting', kind: 'log-catch', scope: 'd1', attempts: 1 });
+    expect(queued).toMatchObject({ state: 'waiting', kind: 'log-catch', scope: 'd1' });
+    // Tried at least once; the jittered backoff may already have tried again on a slow machine.
+    expect(queued.attempts).toBeGreaterThanOrEqual(1);
 
     online = true;
     await sendQueue.drain('u1', { now: true });
