@@ -132,6 +132,35 @@ describe('demo accounts and their roles', () => {
     await signOut(page);
   });
 
+  it('dark screens chosen on the account page are kept on this device, and pass axe (contrast included)', async () => {
+    const { page } = browser;
+    await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
+    await page.goto('/account');
+    await page.getByRole('radio', { name: /^Dark/ }).check();
+    const background = () => page.evaluate(() => getComputedStyle(document.querySelector('.sb-root')!).backgroundColor);
+    const mode = () =>
+      page.evaluate(() => document.querySelector('[data-color-mode]')!.getAttribute('data-color-mode'));
+    await expect(mode()).resolves.toBe('dark');
+    await page.reload();
+    await page.getByRole('heading', { level: 1, name: 'Your account' }).waitFor();
+    await expect(page.getByRole('radio', { name: /^Dark/ }).isChecked()).resolves.toBe(true);
+    // Primer's dark ground (#0d1117) rather than white.
+    await expect(background()).resolves.toBe('rgb(13, 17, 23)');
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await page.goto(`${demoCrewPath}/events`);
+    await page.getByRole('table').first().waitFor();
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await screenshot(page, 'dark-events');
+    await page.goto(`${demoCrewPath}/reports`);
+    await page.getByRole('navigation', { name: 'Reports' }).getByRole('link', { name: 'Hit rates' }).click();
+    await page.locator('.sb-whisker').first().waitFor();
+    await screenshot(page, 'dark-reports');
+    await page.goto('/account');
+    await page.getByRole('radio', { name: /^As this device is set/ }).check();
+    await expect(mode()).resolves.toBe('auto');
+    await signOut(page);
+  });
+
   for (const who of [
     { email: 'angler@demo.test', role: 'Angler' },
     { email: 'viewer@demo.test', role: 'Viewer' },

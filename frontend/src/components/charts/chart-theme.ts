@@ -1,10 +1,11 @@
 /**
- * Shoalbook's chart look. SVG needs plain colours, so the values mirror our CSS tokens: text in the
- * default foreground (#1f2328 on white ≈ 15:1), grid lines light enough not to compete with the data.
+ * Shoalbook's chart look. nivo writes these into style attributes, so the theme's CSS tokens work and follow
+ * light and dark screens: text in the default foreground (#1f2328 on white ≈ 15:1 in light), grid lines in the
+ * muted border colour so they do not compete with the data. The fallbacks are the light values.
  */
-export const CHART_TEXT = '#1f2328';
-export const CHART_MUTED_TEXT = '#59636e';
-export const CHART_GRID = '#d1d9e0';
+export const CHART_TEXT = 'var(--fgColor-default, #1f2328)';
+export const CHART_MUTED_TEXT = 'var(--fgColor-muted, #59636e)';
+export const CHART_GRID = 'var(--borderColor-muted, #d1d9e0)';
 
 export const chartTheme = {
   text: { fontFamily: "'Roboto Slab', Georgia, serif", fontSize: 12, fill: CHART_TEXT },
@@ -15,5 +16,5 @@ export const chartTheme = {
   },
   grid: { line: { stroke: CHART_GRID, strokeWidth: 1 } },
   labels: { text: { fontSize: 12, fontWeight: 600 } },
-  tooltip: { container: { fontSize: 13, color: CHART_TEXT } },
+  tooltip: { container: { fontSize: 13, color: CHART_TEXT, background: 'var(--bgColor-default, #ffffff)' } },
 };

@@ -2,6 +2,7 @@ import { Heading, Text } from '@primer/react';
 import { PageHeader } from '../../../components/layouts/page-header';
 import { ChangePasswordForm } from '../../../features/account/components/change-password-form';
 import { ProfileForm } from '../../../features/account/components/profile-form';
+import { AppearanceForm } from '../../../features/account/components/appearance-form';
 import { UnitsForm } from '../../../features/account/components/units-form';
 import { useSignedInMe } from '../../../lib/auth';
 import styles from './pages.module.css';
@@ -28,6 +29,15 @@ export function Component() {
             switching back and forth never rounds anything away.
           </Text>
           <UnitsForm units={me.user.units} />
+        </section>
+        <section aria-labelledby="appearance-heading" className={styles.section}>
+          <Heading as="h2" id="appearance-heading" variant="medium">
+            Appearance
+          </Heading>
+          <Text as="p" className={styles.sectionLead}>
+            Kept on this device only: a phone on the water and a computer at home can differ.
+          </Text>
+          <AppearanceForm />
         </section>
         <section aria-labelledby="password-heading" className={styles.section}>
           <Heading as="h2" id="password-heading" variant="medium">

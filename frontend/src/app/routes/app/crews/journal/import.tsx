@@ -36,7 +36,10 @@ export function Component() {
   }
   return (
     <>
-      <JournalHeader title="Files" lead="Import waypoints and catches from files, or export the journal and a lake's finds." />
+      <JournalHeader
+        title="Files"
+        lead="Import waypoints and catches from files, or export the journal and a lake's finds."
+      />
       <UnderlineNav aria-label="File tasks" className={styles.sectionNav}>
         {tab('gpx', 'Finds from GPX')}
         {tab('csv', 'Catches from CSV')}
