@@ -28,6 +28,8 @@ export const journalKeys = {
   /** Under weigh-ins, so whatever refreshes the weigh-ins after a catch refreshes the events list's figures too. */
   eventTallies: (crewId: string, lakeId?: string) =>
     ['crew', crewId, 'weigh-ins', 'tallies', { lakeId: lakeId ?? null }] as const,
+  stops: (crewId: string, competitionDayId: string) => ['crew', crewId, 'stops', { competitionDayId }] as const,
+  allStops: (crewId: string) => ['crew', crewId, 'stops'] as const,
   sky: (crewId: string, lakeId: string, date: string) => ['crew', crewId, 'sky', lakeId, date] as const,
 };
 

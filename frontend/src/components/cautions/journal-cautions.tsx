@@ -37,6 +37,17 @@ export function OnPlaneCaution() {
   );
 }
 
+/** Beside "arrived here" / "left": between stops the boat runs on plane again. */
+export function MovingOnCaution() {
+  return (
+    <Caution icon="alert" title="Running to the next stop">
+      Common practice: life jacket on and the engine cut-off link clipped to you before the hull comes up, rods stowed
+      and the phone put away before you run. Local boating law, the rules of navigation and the event&rsquo;s rules come
+      first; leave the water when lightning is near.
+    </Caution>
+  );
+}
+
 /** Beside catch entry: the fish comes first, the log second. */
 export function FishCareCaution() {
   return (

@@ -1,6 +1,7 @@
 import type { CatchView, FindView, LakeView, UnitPreferences } from '@shoalbook/shared';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { useState } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
 import { renderWithApp } from '../../../testing/render';
@@ -312,5 +313,61 @@ describe('CatchEntryForm without signal', () => {
     // The retry carried the same key as the attempt that failed.
     const keys = net.seen.filter((r) => r.method === 'POST').map((r) => r.headers['idempotency-key']);
     expect(new Set(keys).size).toBe(1);
+  });
+});
+
+describe('CatchEntryForm with an open stop', () => {
+  /** The form beside a stop the test can close, as the competition day composes them. */
+  function WithStop() {
+    const [open, setOpen] = useState(true);
+    return (
+      <>
+        <button type="button" onClick={() => setOpen(false)}>
+          Leave the stop
+        </button>
+        <CatchEntryForm
+          userId="u1"
+          crewId="c1"
+          day={day}
+          lake={lake}
+          finds={finds}
+          prefs={prefs}
+          now={now}
+          stopDefaults={
+            open ? { stopId: 's1', findId: 'f2', place: 'Rock pile', lure: 'jig', technique: 'dragging' } : null
+          }
+        />
+      </>
+    );
+  }
+
+  it("starts from the stop's find, lure and technique; leaving clears the find and keeps the lure", async () => {
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({ status: 201, body: savedCatch(request) }),
+    }).install();
+    const user = userEvent.setup();
+    renderWithApp(<WithStop />);
+    expect(screen.getByRole('combobox', { name: /find/i })).toHaveValue('Rock pile (Hard bottom, 14 ft)');
+    expect(screen.getByRole('textbox', { name: 'Lure' })).toHaveValue('jig');
+    expect(screen.getByRole('textbox', { name: 'Technique' })).toHaveValue('dragging');
+
+    // The angler changes the lure for this fish: the catch keeps its own, the stop's stays the default.
+    await user.clear(screen.getByRole('textbox', { name: 'Lure' }));
+    await user.type(screen.getByRole('textbox', { name: 'Lure' }), 'spoon');
+    await user.type(screen.getByRole('textbox', { name: /weight/i }), '2-4{Enter}');
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
+    expect(net.to('POST /api/crews/c1/catches')[0].body).toMatchObject({
+      findId: 'f2',
+      lure: 'spoon',
+      technique: 'dragging',
+    });
+    // The next fish starts at the stop's find again.
+    await screen.findByText(/Logged 2 lb 4\.0 oz largemouth at 07:42, from Rock pile/);
+    expect(screen.getByRole('combobox', { name: /find/i })).toHaveValue('Rock pile (Hard bottom, 14 ft)');
+
+    await user.click(screen.getByRole('button', { name: 'Leave the stop' }));
+    expect(screen.getByRole('combobox', { name: /find/i })).toHaveValue('');
+    expect(screen.getByRole('textbox', { name: 'Technique' })).toHaveValue('dragging');
   });
 });

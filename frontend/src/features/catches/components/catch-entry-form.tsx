@@ -103,6 +103,7 @@ export function CatchEntryForm({
   lake,
   finds,
   prefs,
+  stopDefaults = null,
   now = () => new Date(),
 }: {
   userId: string;
@@ -111,24 +112,53 @@ export function CatchEntryForm({
   lake: LakeView;
   finds: FindView[];
   prefs: UnitPreferences;
+  /**
+   * The angler's open stop: its find, lure and technique fill the form when the stop opens and after each fish
+   * (the catch keeps its own once logged; the stop's are only the default).
+   */
+  stopDefaults?: { stopId: string; findId: string | null; place: string; lure: string; technique: string } | null;
   /** The clock (replaceable in tests). */
   now?: () => Date;
 }) {
+  const stopFind = () => {
+    const find = stopDefaults?.findId ? finds.find((f) => f.id === stopDefaults.findId) : undefined;
+    return find ? findOptionLabel(find, prefs) : '';
+  };
   const fresh = (keep?: Values): Values => ({
     caughtAt: clockTime(now(), lake.timeZone),
     species: keep?.species ?? lastSpecies(),
     weight: '',
     length: '',
-    find: '',
+    find: stopFind(),
     lat: '',
     lon: '',
     fate: 'weighed',
-    lure: keep?.lure ?? '',
-    technique: keep?.technique ?? '',
+    lure: keep?.lure ?? stopDefaults?.lure ?? '',
+    technique: keep?.technique ?? stopDefaults?.technique ?? '',
     depth: '',
     waterTemp: keep?.waterTemp ?? '',
   });
   const [values, setValues] = useState<Values>(() => fresh());
+  // A newly opened (or edited) stop brings its defaults (state adjusted while rendering, as React advises, not in an effect).
+  const defaultsKey = stopDefaults
+    ? [stopDefaults.stopId, stopDefaults.findId, stopDefaults.lure, stopDefaults.technique].join('\n')
+    : null;
+  const [defaultsOf, setDefaultsOf] = useState({ key: defaultsKey, find: stopFind() });
+  if (defaultsKey !== defaultsOf.key) {
+    const find = stopFind();
+    setDefaultsOf({ key: defaultsKey, find });
+    setValues((v) =>
+      stopDefaults
+        ? {
+            ...v,
+            find: find || v.find,
+            lure: stopDefaults.lure || v.lure,
+            technique: stopDefaults.technique || v.technique,
+          }
+        : // The stop closed: its find no longer applies (lure and technique stay, as between fish).
+          { ...v, find: v.find === defaultsOf.find ? '' : v.find },
+    );
+  }
   const [byCoordinates, setByCoordinates] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [logged, setLogged] = useState<CatchWithSky | null>(null);
@@ -439,6 +469,7 @@ export function CatchEntryForm({
             autoComplete="off"
             validationStatus={status('lure')}
           />,
+          stopDefaults?.lure ? `Default of the stop at ${stopDefaults.place}` : undefined,
         )}
         {field(
           'technique',
@@ -450,6 +481,7 @@ export function CatchEntryForm({
             autoComplete="off"
             validationStatus={status('technique')}
           />,
+          stopDefaults?.technique ? `Default of the stop at ${stopDefaults.place}` : undefined,
         )}
         {field(
           'depth',

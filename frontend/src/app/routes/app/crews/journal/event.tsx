@@ -18,6 +18,7 @@ import { FindsTable, useFinds } from '../../../../../features/finds';
 import { ExportButtons } from '../../../../../features/imports';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLake } from '../../../../../features/lakes';
+import { StopsPanel, useOpenStop } from '../../../../../features/stops';
 import { LiveBagPanel, WeighInsPanel } from '../../../../../features/weigh-ins';
 import { WaitingEntries } from '../../../../../components/send-queue/waiting-entries';
 import { useSignedInMe } from '../../../../../lib/auth';
@@ -171,18 +172,20 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   const me = useSignedInMe();
   const days = useEventDays(crewId, event.id);
   const finds = useFinds(crewId, { lakeId: lake.id });
+  const dayId = search.get('day');
+  const day = days.data?.competition.find((d) => d.id === dayId) ?? days.data?.competition[0];
+  const catches = useCatches(crewId, { competitionDayId: day?.id });
+  const openStop = useOpenStop(crewId, day?.id ?? '', me.user.id);
   if (days.isPending) return <LoadingState label="Loading the days…" />;
   if (days.isError) return <ErrorState error={days.error} onRetry={() => days.refetch()} />;
   const competition = days.data.competition;
-  if (competition.length === 0) {
+  if (!day) {
     return (
       <EmptyState title="No competition days">
         Edit the event and add its competition days; catches are logged per day.
       </EmptyState>
     );
   }
-  const dayId = search.get('day');
-  const day = competition.find((d) => d.id === dayId) ?? competition[0];
   return (
     <div className={styles.stack}>
       <SegmentedControl aria-label="Competition day">
@@ -208,6 +211,16 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
           <CompetitionDayForm key={day.id} crewId={crewId} day={day} prefs={prefs} />
         </Details>
       ) : null}
+      <StopsPanel
+        crewId={crewId}
+        userId={me.user.id}
+        day={day}
+        lake={lake}
+        finds={finds.data ?? []}
+        catches={catches.data ?? []}
+        prefs={prefs}
+        canWrite={canWrite}
+      />
       {canWrite ? (
         finds.isPending ? (
           <LoadingState label="Loading finds for the list…" />
@@ -220,6 +233,17 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
             lake={lake}
             finds={finds.data ?? []}
             prefs={prefs}
+            stopDefaults={
+              openStop
+                ? {
+                    stopId: openStop.id,
+                    findId: openStop.findId,
+                    place: openStop.findName ?? 'no find',
+                    lure: openStop.lure,
+                    technique: openStop.technique,
+                  }
+                : null
+            }
           />
         )
       ) : null}

@@ -1,0 +1,246 @@
+import { CSRF_HEADER } from '@shoalbook/shared';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
+import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser } from './support/browser';
+import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+
+// Invented for this test: one competition day on 2025-06-14 from 06:30 to 15:00 (America/Chicago), two finds.
+const LAKE = 'Brushline Reservoir (stops test)';
+const EVENT = 'Brushline Stops Test Classic';
+const SHELL = 'Shell hump north';
+const GRASS = 'Grass line south';
+const PHONE = { width: 390, height: 844 };
+const DESK = { width: 1280, height: 900 };
+
+async function apiCall<T>(page: Page, method: 'GET' | 'POST' | 'PATCH', path: string, data?: unknown): Promise<T> {
+  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
+  const response = await page.request.fetch(`/api${path}`, {
+    method,
+    data,
+    headers: { [CSRF_HEADER]: csrf.csrfToken },
+  });
+  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
+  return (await response.json()) as T;
+}
+
+describe('stops on a competition day: arrive, catch, leave, the timeline and the live bag', () => {
+  let browser: Browser;
+  let crewPath = '';
+  let dayUrl = '';
+
+  beforeAll(async () => {
+    browser = await openBrowser(DESK);
+    const { page } = browser;
+    await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
+    crewPath = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
+    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/lakes`, {
+      name: LAKE,
+      region: 'Test county',
+      timeZone: 'America/Chicago',
+      lat: 31.684,
+      lon: -94.318,
+      areaAcres: null,
+      notes: '',
+    });
+    const event = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/events`, {
+      lakeId: lake.id,
+      name: EVENT,
+      organiser: 'Test trail',
+      practiceDates: ['2025-06-12'],
+      competitionDates: ['2025-06-14'],
+      rules: {
+        fishPerDay: 5,
+        minLengthIn: 12,
+        deadFishPenaltyLb: 0.25,
+        shortFishPenaltyLb: 0.25,
+        latePenaltyLbPerMinute: 1,
+      },
+      entryFee: null,
+      payout: null,
+      finalPlace: null,
+      notes: '',
+    });
+    const [day] = await apiCall<{ id: string; version: number }[]>(
+      page,
+      'GET',
+      `${crewPath}/events/${event.id}/competition-days`,
+    );
+    await apiCall(page, 'PATCH', `${crewPath}/competition-days/${day.id}`, {
+      version: day.version,
+      startTime: '06:30',
+      checkInTime: '15:00',
+    });
+    for (const [name, lat, kind] of [
+      [SHELL, 31.69, 'hard-bottom'],
+      [GRASS, 31.675, 'vegetation'],
+    ] as const)
+      await apiCall(page, 'POST', `${crewPath}/finds`, {
+        lakeId: lake.id,
+        eventId: event.id,
+        practiceDate: '2025-06-12',
+        name,
+        lat,
+        lon: -94.32,
+        kind,
+      });
+    dayUrl = `${crewPath}/events/${event.id}?section=days`;
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  beforeEach((context) => {
+    onTestFailed(() => screenshot(browser.page, `stops-failed-${context.task.name.slice(0, 40).replace(/\W+/g, '-')}`));
+  });
+
+  const stops = (page: Page) => page.getByRole('region', { name: 'Stops and the day' });
+  const timeline = (page: Page) => stops(page).getByRole('img', { name: /^Day timeline/ });
+
+  it('arrives at a find, sets its lure, logs a catch there and leaves; the timeline and the live bag follow', async () => {
+    const { page } = browser;
+    await page.goto(dayUrl);
+    await stops(page).getByText('No stops yet.', { exact: false }).waitFor();
+    await expect(timeline(page).getAttribute('aria-label')).resolves.toBe('Day timeline: 0 stops, 0 catches.');
+    // The running caution sits beside the arrive and leave buttons.
+    await stops(page).getByRole('complementary', { name: 'Running to the next stop' }).waitFor();
+
+    await stops(page).getByRole('combobox', { name: 'Where' }).selectOption({ label: SHELL });
+    await stops(page)
+      .getByRole('textbox', { name: /^Arrived at/ })
+      .fill('07:00');
+    await stops(page).getByRole('button', { name: 'Arrived here' }).click();
+    await stops(page).getByText(`Here: ${SHELL} since 07:00`).waitFor();
+    await stops(page).getByText('since 07:00, still there').waitFor();
+
+    // The stop's lure and technique become the catch form's defaults while it is open.
+    await stops(page).getByRole('button', { name: 'Edit the stop at 07:00' }).click();
+    const edit = page.getByRole('form', { name: 'Edit the stop at 07:00' });
+    await edit.getByRole('textbox', { name: 'Lure' }).fill('drop-shot, shad colour');
+    await edit.getByRole('textbox', { name: 'Technique' }).fill('vertical over shell');
+    await edit.getByRole('textbox', { name: /^Water/ }).fill('78.5');
+    await edit.getByRole('button', { name: 'Save stop' }).click();
+    await edit.waitFor({ state: 'detached' });
+    await stops(page).getByText('Lure drop-shot, shad colour').waitFor();
+    await stops(page).getByText('Water 78.5 °F', { exact: false }).waitFor();
+    const catchForm = page.getByRole('form', { name: /Log a catch/ });
+    await expect
+      .poll(() => catchForm.getByRole('textbox', { name: 'Lure' }).inputValue())
+      .toBe('drop-shot, shad colour');
+    await expect(catchForm.getByRole('textbox', { name: 'Technique' }).inputValue()).resolves.toBe(
+      'vertical over shell',
+    );
+
+    await catchForm.getByRole('textbox', { name: /^Time/ }).fill('07:25');
+    await catchForm.getByRole('textbox', { name: /^Weight/ }).fill('3.40');
+    await catchForm.getByRole('textbox', { name: /^Length/ }).fill('17');
+    // The open stop's find is the catch's find unless the angler types another.
+    await expect(catchForm.getByRole('combobox', { name: /^Find/ }).inputValue()).resolves.toMatch(
+      new RegExp(`^${SHELL} \\(`),
+    );
+    await catchForm.getByRole('button', { name: 'Log catch' }).click();
+    await page.getByRole('status').filter({ hasText: 'at 07:25' }).waitFor();
+
+    // The live bag counts it; the stop holds it; the timeline shows one stop and one catch.
+    const live = page.getByRole('region', { name: 'Live bag' });
+    await live.getByText('1 of 5', { exact: true }).waitFor();
+    await live.getByText('3.40 lb', { exact: true }).first().waitFor();
+    await stops(page).getByText('1 fish', { exact: true }).waitFor();
+    await expect
+      .poll(() => timeline(page).getAttribute('aria-label'))
+      .toBe('Day timeline: 1 stop, 1 catch, 0 stops without a bite.');
+    // The catch kept the stop's lure as its own.
+    const row = page.getByRole('table', { name: 'Catches of the day' }).getByRole('row').filter({ hasText: '07:25' });
+    await row.getByText('drop-shot, shad colour').waitFor();
+
+    await stops(page)
+      .getByRole('textbox', { name: /^Left at/ })
+      .fill('08:05');
+    await stops(page).getByRole('button', { name: 'Left', exact: true }).click();
+    await stops(page).getByText(`Left ${SHELL} at 08:05 after 65 min.`).waitFor();
+    await stops(page).getByText('07:00–08:05 (65 min)').waitFor();
+    // With the stop closed the form offers "Arrived here" again.
+    await stops(page).getByRole('button', { name: 'Arrived here' }).waitFor();
+  });
+
+  it('a second find fished without a bite is a stop of its own; bad times are refused beside the field', async () => {
+    const { page } = browser;
+    // Before the day's 06:30 start: refused, named, nothing written.
+    await stops(page).getByRole('combobox', { name: 'Where' }).selectOption({ label: GRASS });
+    await stops(page)
+      .getByRole('textbox', { name: /^Arrived at/ })
+      .fill('05:50');
+    await stops(page).getByRole('button', { name: 'Arrived here' }).click();
+    await stops(page)
+      .getByText(/lies outside the competition day 2025-06-14 \(06:30 to 15:00\)/)
+      .first()
+      .waitFor();
+    await expect(
+      stops(page)
+        .getByRole('list', { name: /^Stops of/ })
+        .getByRole('listitem')
+        .count(),
+    ).resolves.toBe(1);
+
+    await stops(page)
+      .getByRole('textbox', { name: /^Arrived at/ })
+      .fill('08:20');
+    await stops(page).getByRole('button', { name: 'Arrived here' }).click();
+    await stops(page).getByText(`Here: ${GRASS} since 08:20`).waitFor();
+    await stops(page).getByText('here now').waitFor();
+    await stops(page)
+      .getByRole('textbox', { name: /^Left at/ })
+      .fill('09:10');
+    await stops(page).getByRole('button', { name: 'Left', exact: true }).click();
+    await stops(page).getByText('fished, no bite').waitFor();
+
+    // A place that is no find: the position goes with it.
+    await stops(page).getByRole('combobox', { name: 'Where' }).selectOption({ label: 'No find (give the position)' });
+    await stops(page)
+      .getByRole('textbox', { name: /^Arrived at/ })
+      .fill('09:30');
+    await stops(page).getByRole('button', { name: 'Arrived here' }).click();
+    await stops(page).getByText('Latitude in decimal degrees, -90 to 90.').first().waitFor();
+    await stops(page).getByRole('textbox', { name: 'Latitude' }).fill('31.68012');
+    await stops(page).getByRole('textbox', { name: 'Longitude' }).fill('-94.31044');
+    await stops(page).getByRole('button', { name: 'Arrived here' }).click();
+    await stops(page).getByText('Here: No find (31.68012, -94.31044) since 09:30').waitFor();
+    await stops(page)
+      .getByRole('textbox', { name: /^Left at/ })
+      .fill('09:45');
+    await stops(page).getByRole('button', { name: 'Left', exact: true }).click();
+    await stops(page).getByText('09:30–09:45 (15 min)').waitFor();
+    await expect
+      .poll(() => timeline(page).getAttribute('aria-label'))
+      .toBe('Day timeline: 3 stops, 1 catch, 2 stops without a bite.');
+
+    await expect(seriousAxeViolations(page)).resolves.toEqual([]);
+    await screenshot(page, 'stops-day-desk');
+    await page.setViewportSize(PHONE);
+    await stops(page).scrollIntoViewIfNeeded();
+    await expect(seriousAxeViolations(page)).resolves.toEqual([]);
+    await screenshot(page, 'stops-day-phone');
+    await page.setViewportSize(DESK);
+  });
+
+  it('deleting a stop keeps its catch, now in no stop, and says so', async () => {
+    const { page } = browser;
+    await stops(page)
+      .getByRole('button', { name: `Delete the stop at ${SHELL}, 07:00` })
+      .click();
+    const dialog = page.getByRole('alertdialog');
+    await dialog.getByText('Its 1 catch stay in the journal, unattached', { exact: false }).waitFor();
+    await dialog.getByRole('button', { name: 'Delete' }).click();
+    await stops(page).getByText('Stop deleted; its 1 catch is kept and now in no stop.').waitFor();
+    await stops(page).getByText('1 catch of this day is in no stop', { exact: false }).waitFor();
+    await expect
+      .poll(() => timeline(page).getAttribute('aria-label'))
+      .toBe('Day timeline: 2 stops, 1 catch, 2 stops without a bite, 1 catch in no stop.');
+    // The catch itself is untouched, and still in the bag.
+    await page
+      .getByRole('table', { name: 'Catches of the day' })
+      .getByRole('row')
+      .filter({ hasText: '07:25' })
+      .waitFor();
+    await page.getByRole('region', { name: 'Live bag' }).getByText('1 of 5', { exact: true }).waitFor();
+  });
+});

@@ -1,0 +1,207 @@
+import type { CatchView, CompetitionDayView, FindView, LakeView, StopView, UnitPreferences } from '@shoalbook/shared';
+import { PencilIcon } from '@primer/octicons-react';
+import { Button, Heading, Label, Text } from '@primer/react';
+import { useState } from 'react';
+import { ErrorState, LoadingState } from '../../../components/feedback/query-states';
+import { DeleteRecordButton } from '../../../components/journal-forms/confirm-delete-dialog';
+import { clockTime } from '../../../lib/lake-time';
+import { formatTemperature, formatWeight } from '../../../lib/units';
+import { useDayStops, useDeleteStop } from '../api/stops-api';
+import { ArriveLeave } from './arrive-leave';
+import { DayTimeline } from './day-timeline';
+import { layoutDay } from './day-timeline-model';
+import { StopEditForm } from './stop-edit-form';
+import { stopPlace, stopSpan, toCheckText } from './stop-fields';
+import styles from './stops.module.css';
+
+/** The signed-in angler's stop still open on a day (the one "Left" closes and whose lure the catch form takes). */
+export function openStopOf(stops: StopView[] | undefined, userId: string): StopView | null {
+  return stops?.find((s) => !s.leftAt && s.loggedBy?.userId === userId) ?? null;
+}
+
+/** The open stop of the signed-in angler on a day, from the same query as the stops panel. */
+export function useOpenStop(crewId: string, dayId: string, userId: string): StopView | null {
+  return openStopOf(useDayStops(crewId, dayId).data, userId);
+}
+
+function timelineSummary(stops: StopView[], catches: CatchView[], loose: number): string {
+  const fished = stops.filter((s) => s.catchIds.length === 0).length;
+  const parts = [
+    `${stops.length} stop${stops.length === 1 ? '' : 's'}`,
+    `${catches.length} catch${catches.length === 1 ? '' : 'es'}`,
+  ];
+  if (stops.length) parts.push(`${fished} stop${fished === 1 ? '' : 's'} without a bite`);
+  if (loose) parts.push(`${loose} catch${loose === 1 ? '' : 'es'} in no stop`);
+  return `Day timeline: ${parts.join(', ')}.`;
+}
+
+/**
+ * Stops of one competition day: the day as a timeline, the quick "Arrived here" / "Left" buttons with the
+ * running caution, and every stop with what it held, to edit or delete. A stop without a fish stays on the
+ * list as "fished, no bite": that is what makes the hit rates honest.
+ */
+export function StopsPanel({
+  crewId,
+  userId,
+  day,
+  lake,
+  finds,
+  catches,
+  prefs,
+  canWrite,
+}: {
+  crewId: string;
+  userId: string;
+  day: CompetitionDayView;
+  lake: LakeView;
+  finds: FindView[];
+  catches: CatchView[];
+  prefs: UnitPreferences;
+  canWrite: boolean;
+}) {
+  const stops = useDayStops(crewId, day.id);
+  const remove = useDeleteStop(crewId);
+  const [editing, setEditing] = useState<string | null>(null);
+  const [said, setSaid] = useState<string | null>(null);
+
+  const body = () => {
+    if (stops.isPending) return <LoadingState label="Loading the stops…" />;
+    if (stops.isError) return <ErrorState error={stops.error} onRetry={() => stops.refetch()} />;
+    const list = stops.data;
+    const stopOfCatch = new Map(list.flatMap((s) => s.catchIds.map((id) => [id, s.id] as const)));
+    const toCheck = new Set(list.flatMap((s) => s.catchesToCheck.map((c) => c.catchId)));
+    const model = layoutDay(
+      day,
+      lake.timeZone,
+      list.map((s) => ({
+        id: s.id,
+        label: s.findName ?? 'No find',
+        arrivedAt: s.arrivedAt,
+        leftAt: s.leftAt,
+        anglerId: s.loggedBy?.userId ?? null,
+        anglerName: s.loggedBy?.displayName ?? null,
+        toCheck: s.catchesToCheck.length,
+      })),
+      catches.map((c) => ({
+        id: c.id,
+        caughtAt: c.caughtAt,
+        label: formatWeight(c.weightLb, prefs.weight),
+        stopId: stopOfCatch.get(c.id) ?? null,
+        toCheck: toCheck.has(c.id),
+      })),
+      new Date(),
+    );
+    const loose = catches.filter((c) => !stopOfCatch.has(c.id)).length;
+    const open = openStopOf(list, userId);
+    return (
+      <>
+        <DayTimeline model={model} timeZone={lake.timeZone} summary={timelineSummary(list, catches, loose)} />
+        {canWrite ? (
+          <ArriveLeave
+            key={open?.id ?? 'none'}
+            crewId={crewId}
+            day={day}
+            lake={lake}
+            finds={finds}
+            open={open}
+            onLogged={setSaid}
+          />
+        ) : null}
+        <div role="status" aria-live="polite">
+          {said ? <Text>{said}</Text> : null}
+        </div>
+        {list.length === 0 ? (
+          <Text as="p" className={styles.muted}>
+            No stops yet. Log each place you fish, bite or no bite: a find tried without a fish is what makes a hit rate
+            honest.
+          </Text>
+        ) : (
+          <ol className={styles.list} aria-label={`Stops of ${day.date}`}>
+            {list.map((s) => {
+              const check = toCheckText(s);
+              return (
+                <li key={s.id} className={styles.stop}>
+                  <div className={styles.stopHead}>
+                    <span>
+                      <span className={styles.stopTitle}>{stopSpan(s, lake.timeZone)}</span> · {stopPlace(s)}{' '}
+                      {s.catchIds.length ? (
+                        <Label variant="success">{s.catchIds.length} fish</Label>
+                      ) : s.leftAt ? (
+                        <Label variant="secondary">fished, no bite</Label>
+                      ) : (
+                        <Label variant="accent">here now</Label>
+                      )}
+                    </span>
+                    {canWrite ? (
+                      <span className={styles.stopActions}>
+                        <Button
+                          size="small"
+                          leadingVisual={PencilIcon}
+                          aria-label={`Edit the stop at ${clockTime(s.arrivedAt, lake.timeZone)}`}
+                          onClick={() => setEditing(editing === s.id ? null : s.id)}
+                        >
+                          Edit
+                        </Button>
+                        <DeleteRecordButton
+                          compact
+                          record={`the stop at ${stopPlace(s)}, ${clockTime(s.arrivedAt, lake.timeZone)}`}
+                          consequence={
+                            s.catchIds.length
+                              ? `Its ${s.catchIds.length} catch${s.catchIds.length === 1 ? '' : 'es'} stay in the journal, unattached: they are then in no stop.`
+                              : 'It has no catches. The find then counts as fished only through its other stops.'
+                          }
+                          onDelete={async () => {
+                            const answer = await remove.mutateAsync(s.id);
+                            setSaid(answer.message);
+                          }}
+                        />
+                      </span>
+                    ) : null}
+                  </div>
+                  <div className={styles.facts}>
+                    {s.waterTempF !== null ? (
+                      <span>Water {formatTemperature(s.waterTempF, prefs.temperature)}</span>
+                    ) : null}
+                    {s.lure ? <span>Lure {s.lure}</span> : null}
+                    {s.technique ? <span>Technique {s.technique}</span> : null}
+                    {s.loggedBy ? <span>Logged by {s.loggedBy.displayName}</span> : null}
+                  </div>
+                  {check ? (
+                    <Text size="small" className={styles.check}>
+                      <Label variant="attention">To check</Label> {check}
+                    </Text>
+                  ) : null}
+                  {editing === s.id ? (
+                    <StopEditForm
+                      crewId={crewId}
+                      stop={s}
+                      lake={lake}
+                      finds={finds}
+                      prefs={prefs}
+                      onDone={() => setEditing(null)}
+                    />
+                  ) : null}
+                </li>
+              );
+            })}
+          </ol>
+        )}
+        {loose ? (
+          <Text as="p" size="small" className={styles.muted}>
+            {loose} catch{loose === 1 ? '' : 'es'} of this day {loose === 1 ? 'is' : 'are'} in no stop (logged outside
+            every stop&rsquo;s span).
+          </Text>
+        ) : null}
+      </>
+    );
+  };
+
+  return (
+    <section aria-labelledby={`stops-${day.id}`} className={styles.panel}>
+      <Heading as="h3" id={`stops-${day.id}`} className={styles.heading}>
+        Stops and the day
+      </Heading>
+      {body()}
+    </section>
+  );
+}
