@@ -5,8 +5,9 @@ import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser } f
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
 
 // Invented for this test: one competition day on 2025-06-14 from 06:30 to 15:00 (America/Chicago), two finds.
-const LAKE = 'Brushline Reservoir (stops test)';
-const EVENT = 'Brushline Stops Test Classic';
+// Named to sort after the demo's lakes, so the reports' default lake stays the demo's main one.
+const LAKE = 'Willet Flowage (stops test)';
+const EVENT = 'Willet Stops Test Classic';
 const SHELL = 'Shell hump north';
 const GRASS = 'Grass line south';
 const PHONE = { width: 390, height: 844 };
