@@ -85,8 +85,8 @@ export interface Rate {
  * One group of the hit-rate report.
  *
  * For the find groupings (kind, subKind, depthBand, hardness, temperatureBand) the unit is the find fished in an
- * event: a find counts as fished in an event when it was marked in that event's practice or produced a catch in
- * it (the journal records no visits without a bite). `producing` = finds with at least one fish / finds fished;
+ * event: a find counts as fished in an event when it has a stop on one of the event's competition days or produced a
+ * catch in it (ADR 0008; a practice mark alone does not count). `producing` = finds with at least one fish / finds fished;
  * `weighed` = finds with a weighed fish / finds fished.
  *
  * For the catch groupings (solunarPeriod, timeOfDay) the unit is the catch, since one find's catches fall in
@@ -109,6 +109,13 @@ export interface HitRateGroupView {
   weighed: Rate;
   /** Share of all fish of the report in this group (catch groupings; for find groupings too, for reference). */
   shareOfFish: Rate;
+  /** Time on the group's finds over their stops, whole seconds (0 for the catch groupings). */
+  secondsFished: number;
+  /**
+   * Fish per hour fished: the group's fish in the events with stops recorded over that time; null without any
+   * timed stop (catch groupings, or events whose fished counts are derived from catches).
+   */
+  fishPerHour: number | null;
   /** 1 = best by the shrunk rate (producing for find groupings, share of fish for catch groupings). */
   rank: number;
 }
@@ -123,9 +130,19 @@ export interface HitRatesView {
     findsFished: number;
     findsProducing: number;
     fishCount: number;
+    /** Of `fishCount`, the fish in a day's counted bag (the one bag rule). */
+    countedCount: number;
     weightLb: number;
     producing: Rate;
+    secondsFished: number;
+    fishPerHour: number | null;
   };
+  /**
+   * Events in the selection whose competition days have catches but no stops (logged before stops existed): their
+   * finds count as fished by the catches alone (one stop per find and day with a catch), so their figures are
+   * "derived from catches" and have no time fished.
+   */
+  derivedEvents: number;
   /** Plain-words readings, e.g. "Hard bottom produced on 14 of 40 finds fished (35 %, 22–50 %)." */
   readings: string[];
   /** Events the figures cover. */
@@ -139,9 +156,11 @@ export interface ReportEventRef {
   firstDate: string | null;
   season: Season | null;
   year: number | null;
+  /** Catches but no stops on its competition days: "fished" is derived from the catches (see HitRatesView). */
+  derivedFromCatches: boolean;
 }
 
-export type EventRate = Rate & { findsFished: number };
+export type EventRate = Rate & { findsFished: number; fishPerHour: number | null };
 
 export interface LakeComparisonView {
   lake: { id: string; name: string };
@@ -243,7 +262,13 @@ export interface EventRecapView {
    * officialLb: per day the official weight where recorded, else the computed net; differenceLb = officialLb −
    * netLb; standing: the final place and the total against the event's field.
    */
-  totals: { netLb: number; officialLb: number; differenceLb: number; finalPlace: number | null; standing: StandingView };
+  totals: {
+    netLb: number;
+    officialLb: number;
+    differenceLb: number;
+    finalPlace: number | null;
+    standing: StandingView;
+  };
   producingFinds: {
     findId: string;
     name: string;
@@ -255,7 +280,15 @@ export interface EventRecapView {
   /** Every fish by time; cumulativeBagLb = that day's best legal bag so far (the bag as it stood after the fish). */
   timeline: { catchId: string; caughtAt: string; weightLb: number; cumulativeBagLb: number; day: string }[];
   bigFish: ReportFish | null;
+  /** Fish caught (every fate) and, of them, in a day's counted bag. */
+  fishCaught: number;
+  fishCounted: number;
   findsFished: number;
+  /** Time on finds over the event's stops (whole seconds), and the fish caught in stops per hour of it. */
+  secondsFished: number;
+  fishPerHour: number | null;
+  /** Catches but no stops: findsFished counts the finds with a catch (derived from catches), and no time is known. */
+  derivedFromCatches: boolean;
   /** Finds marked in the event's practice. */
   findsPracticed: number;
   /** Practice finds that produced a fish / practice finds. */
@@ -278,6 +311,11 @@ export interface PaidOffFindView {
   /** True when the find was marked in this event's practice (false: an older find that produced here). */
   practiced: boolean;
   fished: boolean;
+  /** Stops on the find in the event; derived from catches (one per day with a catch) where no stops were logged. */
+  stopCount: number;
+  /** Time on the find over its stops, whole minutes; null when derived from catches. */
+  minutesFished: number | null;
+  fishPerHour: number | null;
   fishCount: number;
   weighedCount: number;
   weightLb: number;
@@ -289,6 +327,8 @@ export interface EventFindsView {
   finds: PaidOffFindView[];
   /** Finds with a fish / finds fished. */
   paidOff: Rate;
+  /** See EventRecapView.derivedFromCatches. */
+  derivedFromCatches: boolean;
 }
 
 export interface TimingCatch {

@@ -33,3 +33,11 @@ export function ranks(rates: readonly Rate[]): number[] {
   order.forEach((o, rank) => (out[o.i] = rank + 1));
   return out;
 }
+
+/**
+ * Fish per hour fished: `fish` over `seconds` on the finds; null without any time (no timed stop, or figures
+ * derived from catches, which carry no time).
+ */
+export function fishPerHour(fish: number, seconds: number): number | null {
+  return seconds > 0 ? (fish * 3600) / seconds : null;
+}

@@ -10,6 +10,8 @@ export interface ReportEvent extends ReportEventRef {
   rules: EventRules;
   finalPlace: number | null;
   field: FieldContext;
+  /** Stops are logged on its competition days (the time-fished figures mean something). */
+  stopsRecorded: boolean;
 }
 
 const json = <T>(v: unknown): T => (typeof v === 'string' ? (JSON.parse(v) as T) : (v as T));
@@ -25,6 +27,11 @@ const FILTER_CONDITIONS: readonly [keyof ReportFilters, string][] = [
   ['from', 'e.first_date >= ?'],
   ['to', 'e.first_date <= ?'],
 ];
+
+/** SQL (on rm_event alias e): the event has at least one stop (rm_stop). */
+export const STOPS_RECORDED = 'EXISTS (SELECT 1 FROM rm_stop st WHERE st.crew_id = e.crew_id AND st.event_id = e.id)';
+
+const isTrue = (v: unknown) => v === true || Number(v) === 1;
 
 /** `WHERE …` on rm_event (alias e) for the crew and the filters, with its parameters. */
 export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
@@ -43,7 +50,10 @@ export async function selectEvents(
   extra: { ids?: string[] } = {},
 ): Promise<ReportEvent[]> {
   const where = eventWhere(crewId, f);
-  let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place, e.field_size, e.winning_lb, e.cut_lb FROM rm_event e WHERE ${where.sql}`;
+  let sql = `SELECT e.id, e.lake_id, e.name, e.first_date, e.season, e.year, e.practice_dates, e.competition_dates, e.rules, e.final_place, e.field_size, e.winning_lb, e.cut_lb,
+         ${STOPS_RECORDED} AS stops_recorded,
+         EXISTS (SELECT 1 FROM rm_catch_fact c WHERE c.crew_id = e.crew_id AND c.event_id = e.id) AS has_catches
+    FROM rm_event e WHERE ${where.sql}`;
   const params = [...where.params];
   if (extra.ids) {
     if (!extra.ids.length) return [];
@@ -68,6 +78,9 @@ export async function selectEvents(
       winningLb: r.winning_lb === null ? null : Number(r.winning_lb),
       cutLb: r.cut_lb === null ? null : Number(r.cut_lb),
     },
+    stopsRecorded: isTrue(r.stops_recorded),
+    // Logged before stops existed: catches, and not one stop.
+    derivedFromCatches: isTrue(r.has_catches) && !isTrue(r.stops_recorded),
   }));
 }
 

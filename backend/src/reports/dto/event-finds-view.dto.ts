@@ -22,6 +22,16 @@ export class PaidOffFindViewDto implements PaidOffFindView {
   @ApiProperty({ description: 'marked in this event’s practice (false: an older find that produced here)' })
   practiced: boolean;
   @ApiProperty() fished: boolean;
+  @ApiProperty({
+    type: 'integer',
+    minimum: 0,
+    description: 'stops on the find; derived from catches (one per day with a catch) where none were logged',
+  })
+  stopCount: number;
+  @ApiProperty({ type: 'integer', nullable: true, minimum: 0, description: 'null when derived from catches' })
+  minutesFished: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'fish per hour fished; null without timed stops' })
+  fishPerHour: number | null;
   @ApiProperty({ type: 'integer', minimum: 0 }) fishCount: number;
   @ApiProperty({ type: 'integer', minimum: 0 }) weighedCount: number;
   @ApiProperty({ minimum: 0, description: 'lb' }) weightLb: number;
@@ -32,4 +42,6 @@ export class PaidOffFindViewDto implements PaidOffFindView {
 export class EventFindsViewDto implements EventFindsView {
   @ApiProperty({ type: [PaidOffFindViewDto] }) finds: PaidOffFindViewDto[];
   @ApiProperty({ type: RateDto, description: 'finds with a fish / finds fished' }) paidOff: RateDto;
+  @ApiProperty({ description: 'catches but no stops: fished is derived from the catches, with no time fished' })
+  derivedFromCatches: boolean;
 }

@@ -139,7 +139,15 @@ export class EventRecapViewDto implements Recap {
   @ApiProperty({ type: [ProducingFindDto], description: 'heaviest first' }) producingFinds: ProducingFindDto[];
   @ApiProperty({ type: [TimelinePointDto], description: 'every fish by time' }) timeline: TimelinePointDto[];
   @ApiProperty({ type: ReportFishDto, nullable: true }) bigFish: ReportFishDto | null;
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'every fate' }) fishCaught: number;
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'in a day’s counted bag' }) fishCounted: number;
   @ApiProperty({ type: 'integer', minimum: 0 }) findsFished: number;
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'time on finds over the stops, whole seconds' })
+  secondsFished: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'fish per hour fished; null without timed stops' })
+  fishPerHour: number | null;
+  @ApiProperty({ description: 'catches but no stops: fished is derived from the catches, with no time fished' })
+  derivedFromCatches: boolean;
   @ApiProperty({ type: 'integer', minimum: 0, description: 'finds marked in the event’s practice' })
   findsPracticed: number;
   @ApiProperty({ type: RateDto, description: 'practice finds that produced a fish / practice finds' })

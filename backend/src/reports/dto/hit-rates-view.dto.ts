@@ -27,6 +27,13 @@ export class HitRateGroupViewDto implements HitRateGroupView {
   producing: RateDto;
   @ApiProperty({ type: RateDto }) weighed: RateDto;
   @ApiProperty({ type: RateDto }) shareOfFish: RateDto;
+  @ApiProperty({ ...count, description: 'time on the finds over their stops, whole seconds' }) secondsFished: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'fish per hour fished (stops with a leaving time); null without timed stops',
+  })
+  fishPerHour: number | null;
   @ApiProperty({ type: 'integer', minimum: 1, description: '1 = best by the shrunk rate' }) rank: number;
 }
 
@@ -35,8 +42,16 @@ export class HitRatesOverallDto {
   @ApiProperty(count) findsFished: number;
   @ApiProperty(count) findsProducing: number;
   @ApiProperty(count) fishCount: number;
+  @ApiProperty({ ...count, description: 'of fishCount, fish in a counted bag' }) countedCount: number;
   @ApiProperty({ minimum: 0, description: 'lb' }) weightLb: number;
   @ApiProperty({ type: RateDto }) producing: RateDto;
+  @ApiProperty(count) secondsFished: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'fish per hour fished (stops with a leaving time); null without timed stops',
+  })
+  fishPerHour: number | null;
 }
 
 export class HitRatesViewDto implements HitRatesView {
@@ -46,4 +61,9 @@ export class HitRatesViewDto implements HitRatesView {
   @ApiProperty({ type: HitRatesOverallDto }) overall: HitRatesOverallDto;
   @ApiProperty({ type: [String], description: 'plain-words readings' }) readings: string[];
   @ApiProperty({ ...count, description: 'events the figures cover' }) eventCount: number;
+  @ApiProperty({
+    ...count,
+    description: 'events with catches but no stops: their fished counts are derived from the catches',
+  })
+  derivedEvents: number;
 }

@@ -29,6 +29,8 @@ export class ReportEventRefDto implements ReportEventRef {
   firstDate: string | null;
   @ApiProperty({ enum: SEASONS, nullable: true }) season: Season | null;
   @ApiProperty({ type: 'integer', nullable: true }) year: number | null;
+  @ApiProperty({ description: 'catches but no stops: fished is derived from the catches, with no time fished' })
+  derivedFromCatches: boolean;
 }
 
 @ApiExtraModels(EventRateDto)

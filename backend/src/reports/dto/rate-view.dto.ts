@@ -22,4 +22,6 @@ export class RateDto implements Rate {
 
 export class EventRateDto extends RateDto implements EventRate {
   @ApiProperty({ type: 'integer', minimum: 0, description: '0 for the catch groupings' }) findsFished: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'fish per hour fished; null without timed stops' })
+  fishPerHour: number | null;
 }

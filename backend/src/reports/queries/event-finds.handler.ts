@@ -3,7 +3,7 @@ import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import type { EventFindsView, FindKind, PaidOffFindView } from '@shoalbook/shared';
 import { fromMicroLb } from '../../projections/rows';
 import { outcomeOf } from '../outcome';
-import { singleRate } from '../rates';
+import { fishPerHour, singleRate } from '../rates';
 import { selectEvents } from '../report-events';
 import { GetEventFindsQuery } from './event-finds.query';
 
@@ -20,6 +20,9 @@ export class GetEventFindsHandler implements IQueryHandler<GetEventFindsQuery, E
     if (!event) return null;
     const rows: Record<string, unknown>[] = await this.em.execute(
       `SELECT o.find_id, o.practiced, o.fished, o.fish_count, o.weighed_count, o.weight_ulb, o.first_bite_at,
+              o.stop_count, o.seconds_fished,
+              (SELECT COUNT(DISTINCT c.competition_day_id) FROM rm_catch_fact c
+                WHERE c.crew_id = o.crew_id AND c.event_id = o.event_id AND c.find_id = o.find_id) AS catch_days,
               f.name, f.kind, f.sub_kind, f.depth_ft, f.hardness, f.water_temp_f
          FROM rm_find_outcome o JOIN rm_find f ON f.id = o.find_id AND f.crew_id = o.crew_id
         WHERE o.crew_id = ? AND o.event_id = ?
@@ -29,6 +32,7 @@ export class GetEventFindsHandler implements IQueryHandler<GetEventFindsQuery, E
     const finds: PaidOffFindView[] = rows.map((r) => {
       const base = { fished: isTrue(r.fished), fishCount: Number(r.fish_count), weighedCount: Number(r.weighed_count) };
       const bite = r.first_bite_at;
+      const seconds = Number(r.seconds_fished);
       return {
         findId: String(r.find_id),
         name: String(r.name),
@@ -39,6 +43,10 @@ export class GetEventFindsHandler implements IQueryHandler<GetEventFindsQuery, E
         waterTempF: numOrNull(r.water_temp_f),
         practiced: isTrue(r.practiced),
         ...base,
+        // Before stops existed: one stop per day with a catch, and no time on the find.
+        stopCount: event.derivedFromCatches ? Number(r.catch_days) : Number(r.stop_count),
+        minutesFished: event.derivedFromCatches ? null : Math.round(seconds / 60),
+        fishPerHour: event.derivedFromCatches ? null : fishPerHour(base.fishCount, seconds),
         weightLb: fromMicroLb(Number(r.weight_ulb)),
         firstBiteAt:
           bite === null || bite === undefined
@@ -50,6 +58,10 @@ export class GetEventFindsHandler implements IQueryHandler<GetEventFindsQuery, E
       };
     });
     const fished = finds.filter((f) => f.fished);
-    return { finds, paidOff: singleRate(fished.filter((f) => f.fishCount > 0).length, fished.length) };
+    return {
+      finds,
+      paidOff: singleRate(fished.filter((f) => f.fishCount > 0).length, fished.length),
+      derivedFromCatches: event.derivedFromCatches,
+    };
   }
 }

@@ -3,7 +3,7 @@ import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import type { EventRecapView, FindKind, RecapDay } from '@shoalbook/shared';
 import { fromMicroLb } from '../../projections/rows';
 import { bagOfDay, differenceOf } from '../../weigh-ins/bag-rule';
-import { singleRate } from '../rates';
+import { fishPerHour, singleRate } from '../rates';
 import { percent, plural } from '../readings';
 import { reportFish, selectCatches, type ReportCatch } from '../report-catches';
 import { standingOf } from '../standing';
@@ -82,7 +82,7 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
     }
 
     const outcomes: Record<string, unknown>[] = await this.em.execute(
-      `SELECT o.find_id, o.practiced, o.fished, o.fish_count, o.weight_ulb, f.name, f.kind, f.sub_kind
+      `SELECT o.find_id, o.practiced, o.fished, o.fish_count, o.weight_ulb, o.seconds_fished, f.name, f.kind, f.sub_kind
          FROM rm_find_outcome o JOIN rm_find f ON f.id = o.find_id AND f.crew_id = o.crew_id
         WHERE o.crew_id = ? AND o.event_id = ?`,
       [crewId, eventId],
@@ -107,6 +107,11 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
     );
 
     const netLb = clean(days.reduce((s, d) => s + d.netLb, 0));
+    const fishCounted = days.reduce((s, d) => s + d.counted.length, 0);
+    const findsFished = outcomes.filter((o) => isTrue(o.fished)).length;
+    const secondsFished = outcomes.reduce((s, o) => s + Number(o.seconds_fished), 0);
+    // Fish from finds over the time on finds (a fish with no find was not caught in any find's time).
+    const findFish = outcomes.reduce((s, o) => s + Number(o.fish_count), 0);
     const officialLb = clean(days.reduce((s, d) => s + (d.official?.officialLb ?? d.netLb), 0));
     const readings: string[] = [];
     if (!catches.length)
@@ -115,8 +120,16 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
       );
     else {
       readings.push(
-        `${plural(catches.length, 'fish', 'fish')} caught over ${plural(days.length, 'day')}; ${netLb.toFixed(2)} lb counted after penalties.`,
+        `${plural(catches.length, 'fish', 'fish')} caught, ${fishCounted} counted over ${plural(days.length, 'day')}; the counted bags make ${netLb.toFixed(2)} lb after penalties.`,
       );
+      if (event.derivedFromCatches)
+        readings.push(
+          `No stops were logged for this event: ${plural(findsFished, 'find')} count as fished because they produced (derived from catches), so the finds tried without a bite are missing and no time fished is known.`,
+        );
+      else if (secondsFished > 0)
+        readings.push(
+          `${plural(findsFished, 'find')} fished for ${(secondsFished / 3600).toFixed(1)} h in all: ${fishPerHour(findFish, secondsFished)!.toFixed(2)} fish per hour on finds.`,
+        );
       if (practiced.length)
         readings.push(
           `${share.successes} of ${plural(practiced.length, 'practice find')} produced a fish (${percent(share.rate)}).`,
@@ -149,7 +162,12 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
       producingFinds,
       timeline,
       bigFish: big ? reportFish(big) : null,
-      findsFished: outcomes.filter((o) => isTrue(o.fished)).length,
+      fishCaught: catches.length,
+      fishCounted,
+      findsFished,
+      secondsFished,
+      fishPerHour: event.derivedFromCatches ? null : fishPerHour(findFish, secondsFished),
+      derivedFromCatches: event.derivedFromCatches,
       findsPracticed: practiced.length,
       shareOfPracticePaidOff: share,
       readings,

@@ -4,9 +4,9 @@ import { CATCH_UNIT_GROUPINGS, type HitRateGroupView, type HitRatesView } from '
 import { depthBandLabels, temperatureBandLabels } from '@shoalbook/analytics';
 import { fromMicroLb } from '../../projections/rows';
 import { GROUPING_PLURALS, groupLabel } from '../labels';
-import { groupRates, ranks, singleRate } from '../rates';
+import { fishPerHour, groupRates, ranks, singleRate } from '../rates';
 import { catchShareReading, findRateReading, noSpreadReading, smallSampleReading } from '../readings';
-import { eventWhere } from '../report-events';
+import { eventWhere, STOPS_RECORDED } from '../report-events';
 import { GetHitRatesQuery } from './hit-rates.query';
 
 /** Below this many finds fished a group's rank is flagged as resting mostly on the overall rate (our choice). */
@@ -23,6 +23,9 @@ interface Sums {
   fishCount: number;
   weighedCount: number;
   weightUlb: number;
+  secondsFished: number;
+  /** Fish in the events with stops recorded: the ones timed by secondsFished. */
+  timedFish: number;
 }
 
 /** Sort order of keys: bands shallow→deep / cold→warm, numbers ascending, not recorded last. */
@@ -56,11 +59,13 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
     // One round trip: the sums per group, and a first row counting the selected events (an event with no finds has no sums).
     const rows: Record<string, unknown>[] = await this.em.execute(
       `SELECT '#events' AS grouping, '' AS group_key, 0 AS finds, 0 AS finds_fished, 0 AS finds_producing, 0 AS finds_weighed, 0 AS fish_count,
-              0 AS weighed_count, 0 AS weight_ulb, COUNT(*) AS events
+              0 AS weighed_count, 0 AS weight_ulb, 0 AS seconds_fished, 0 AS timed_fish, COUNT(*) AS events,
+              SUM(NOT ${STOPS_RECORDED} AND EXISTS (SELECT 1 FROM rm_catch_fact c WHERE c.crew_id = e.crew_id AND c.event_id = e.id)) AS derived
          FROM rm_event e WHERE ${where.sql}
        UNION ALL
        SELECT s.grouping, s.group_key, SUM(s.finds), SUM(s.finds_fished), SUM(s.finds_producing), SUM(s.finds_weighed), SUM(s.fish_count),
-              SUM(s.weighed_count), SUM(s.weight_ulb), COUNT(DISTINCT s.event_id)
+              SUM(s.weighed_count), SUM(s.weight_ulb), SUM(s.seconds_fished),
+              SUM(CASE WHEN ${STOPS_RECORDED} THEN s.fish_count ELSE 0 END), COUNT(DISTINCT s.event_id), 0
          FROM rm_event e JOIN rm_group_stats s ON s.event_id = e.id AND s.crew_id = e.crew_id
         WHERE ${where.sql} AND s.grouping IN (?, 'kind')
         GROUP BY s.grouping, s.group_key`,
@@ -78,11 +83,15 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
           fishCount: Number(r.fish_count),
           weighedCount: Number(r.weighed_count),
           weightUlb: Number(r.weight_ulb),
+          secondsFished: Number(r.seconds_fished),
+          timedFish: Number(r.timed_fish),
         }))
         .sort((a, b) => keyOrder(by)(a.key, b.key));
     const groups = sums(by);
     const kinds = sums('kind');
-    const eventCount = Number(rows.find((r) => r.grouping === '#events')?.events ?? 0);
+    const eventRow = rows.find((r) => r.grouping === '#events');
+    const eventCount = Number(eventRow?.events ?? 0);
+    const derivedEvents = Number(eventRow?.derived ?? 0);
 
     const total = (list: Sums[], f: keyof Omit<Sums, 'key'>) => list.reduce((s, g) => s + g[f], 0);
     const overall = {
@@ -92,8 +101,12 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       // The headline counts what the table below it counts: for the catch groupings that includes catches with no
       // find; for the find groupings each find sits in one row, so the rows sum to the same as the kinds.
       fishCount: total(groups, 'fishCount'),
+      countedCount: total(groups, 'weighedCount'),
       weightLb: fromMicroLb(total(groups, 'weightUlb')),
       producing: singleRate(total(kinds, 'findsProducing'), total(kinds, 'findsFished')),
+      // Time is on finds, so the kinds carry it (the catch groupings have none).
+      secondsFished: total(kinds, 'secondsFished'),
+      fishPerHour: fishPerHour(total(kinds, 'timedFish'), total(kinds, 'secondsFished')),
     };
 
     const catchUnit = CATCH_UNIT_GROUPINGS.includes(by);
@@ -120,6 +133,8 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       producing: producing[i]!,
       weighed: weighed[i]!,
       shareOfFish: share[i]!,
+      secondsFished: g.secondsFished,
+      fishPerHour: catchUnit ? null : fishPerHour(g.timedFish, g.secondsFished),
       rank: rank[i]!,
     }));
 
@@ -144,6 +159,6 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       if (adjusted.length > 1 && Math.max(...adjusted) - Math.min(...adjusted) < NO_SPREAD)
         readings.push(noSpreadReading(GROUPING_PLURALS[by] ?? 'the groups', adjusted[0]!));
     }
-    return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount };
+    return { by, unit: catchUnit ? 'catch' : 'find', groups: views, overall, readings, eventCount, derivedEvents };
   }
 }

@@ -5,7 +5,7 @@ import { compareProportions } from '@shoalbook/analytics';
 import { CATCH_UNIT_GROUPINGS, type EventRate, type LakeComparisonView } from '@shoalbook/shared';
 import { ApiException, ErrorCode } from '../../common/errors/api-errors';
 import { eventLabel, groupLabel } from '../labels';
-import { groupRates } from '../rates';
+import { fishPerHour, groupRates } from '../rates';
 import { differenceText, percent, pValueText } from '../readings';
 import { findLake, placeholders, selectEvents } from '../report-events';
 import { GetLakeComparisonQuery } from './lake-comparison.query';
@@ -22,7 +22,14 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       selectEvents(this.em, crewId, { ...filters, lakeId }, { ids: eventIds }),
     ]);
     if (!lake) throw new ApiException(HttpStatus.NOT_FOUND, 'No such lake in this crew.', ErrorCode.notFound);
-    const refs = events.map(({ id, name, firstDate, season, year }) => ({ id, name, firstDate, season, year }));
+    const refs = events.map(({ id, name, firstDate, season, year, derivedFromCatches }) => ({
+      id,
+      name,
+      firstDate,
+      season,
+      year,
+      derivedFromCatches,
+    }));
     const view: LakeComparisonView = {
       lake: { id: lake.id, name: lake.name },
       by,
@@ -34,7 +41,7 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
 
     const catchUnit = CATCH_UNIT_GROUPINGS.includes(by);
     const rows: Record<string, unknown>[] = await this.em.execute(
-      `SELECT event_id, group_key, finds_fished, finds_producing, fish_count FROM rm_group_stats
+      `SELECT event_id, group_key, finds_fished, finds_producing, fish_count, seconds_fished FROM rm_group_stats
         WHERE crew_id = ? AND grouping = ? AND event_id IN (${placeholders(events.length)})`,
       [crewId, by, ...events.map((e) => e.id)],
     );
@@ -42,6 +49,7 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       a === '' ? 1 : b === '' ? -1 : a.localeCompare(b, 'en', { numeric: true }),
     );
     const cell = new Map<string, { successes: number; trials: number }>();
+    const perHour = new Map<string, number | null>();
     const fishByEvent = new Map<string, number>();
     for (const r of rows)
       fishByEvent.set(String(r.event_id), (fishByEvent.get(String(r.event_id)) ?? 0) + Number(r.fish_count));
@@ -49,6 +57,10 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       const successes = catchUnit ? Number(r.fish_count) : Number(r.finds_producing);
       const trials = catchUnit ? (fishByEvent.get(String(r.event_id)) ?? 0) : Number(r.finds_fished);
       cell.set(`${String(r.event_id)}|${String(r.group_key)}`, { successes, trials });
+      perHour.set(
+        `${String(r.event_id)}|${String(r.group_key)}`,
+        catchUnit ? null : fishPerHour(Number(r.fish_count), Number(r.seconds_fished)),
+      );
     }
     const count = (eventId: string, key: string) =>
       cell.get(`${eventId}|${key}`) ?? { successes: 0, trials: catchUnit ? (fishByEvent.get(eventId) ?? 0) : 0 };
@@ -59,7 +71,17 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       const rates = groupRates(keys.map((k) => count(e.id, k)));
       perEventRates.set(
         e.id,
-        new Map(keys.map((k, i) => [k, { ...rates[i]!, findsFished: catchUnit ? 0 : rates[i]!.trials }])),
+        new Map(
+          keys.map((k, i) => [
+            k,
+            {
+              ...rates[i]!,
+              findsFished: catchUnit ? 0 : rates[i]!.trials,
+              // An event derived from catches has no time fished; its seconds are 0, so this is null there.
+              fishPerHour: perHour.get(`${e.id}|${k}`) ?? null,
+            },
+          ]),
+        ),
       );
     }
     view.groups = keys.map((k) => ({

@@ -3,7 +3,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import type { UnitPreferences } from '@shoalbook/shared';
 import { formatWeight } from '../../../lib/units';
 import type { HitRateGroup, Rate } from '../api/report-types';
-import { FEW_FINDS, percent, percentRange } from './report-labels';
+import { FEW_FINDS, hoursMinutes, percent, percentRange, perHour } from './report-labels';
 import { ReportTable } from './report-table';
 import styles from './reports.module.css';
 
@@ -88,6 +88,16 @@ function findColumns() {
     column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
     column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
     ...rateColumns((g) => g.producing, { id: 'rate', rate: 'Hit rate', range: 'Range', adjusted: 'Adjusted' }),
+    column.accessor('secondsFished', {
+      header: 'Time fished',
+      cell: (info) => (info.getValue() ? hoursMinutes(info.getValue()) : '—'),
+      meta: { numeric: true },
+    }),
+    column.accessor('fishPerHour', {
+      header: 'Fish per hour',
+      cell: (info) => perHour(info.getValue()),
+      meta: { numeric: true },
+    }),
     rankColumn,
   ];
 }

@@ -1,7 +1,7 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { ComparedEvent, LakeComparisonGroup } from '../api/report-types';
 import { eventLabel } from './lake-comparison-chart';
-import { percent, percentRange } from './report-labels';
+import { percent, percentRange, perHour } from './report-labels';
 import { ReportTable } from './report-table';
 
 const column = createColumnHelper<LakeComparisonGroup>();
@@ -13,12 +13,14 @@ export function LakeComparisonTable({ events, groups }: { events: ComparedEvent[
     ...events.map((event) =>
       column.accessor((g) => g.perEvent[event.id]?.rate ?? null, {
         id: event.id,
-        header: eventLabel(event),
+        // The header says when an event's "fished" is derived from catches (no stops logged).
+        header: event.derivedFromCatches ? `${eventLabel(event)} (derived from catches)` : eventLabel(event),
         sortUndefined: 'last',
         cell: (info) => {
           const rate = info.row.original.perEvent[event.id];
           if (!rate || rate.findsFished === 0) return '—';
-          return `${percent(rate.rate)} (${percentRange(rate.lower, rate.upper)}; ${rate.successes} of ${rate.findsFished})`;
+          const hourly = rate.fishPerHour !== null ? `; ${perHour(rate.fishPerHour)}` : '';
+          return `${percent(rate.rate)} (${percentRange(rate.lower, rate.upper)}; ${rate.successes} of ${rate.findsFished}${hourly})`;
         },
         meta: { numeric: true },
       }),
@@ -28,7 +30,7 @@ export function LakeComparisonTable({ events, groups }: { events: ComparedEvent[
     <ReportTable
       data={groups}
       columns={columns}
-      caption="Hit rate per event: share of finds fished that produced, likely range, and produced of fished."
+      caption="Hit rate per event: share of finds fished that produced, likely range, produced of fished, and fish per hour fished where stops were logged."
       getRowId={(g) => g.key ?? 'not-recorded'}
     />
   );

@@ -27,6 +27,9 @@ function row(
     waterTempF: 84,
     practiced: true,
     fished: outcome !== 'not-fished',
+    stopCount: outcome === 'not-fished' ? 0 : 1,
+    minutesFished: outcome === 'not-fished' ? 0 : 45,
+    fishPerHour: outcome === 'not-fished' ? null : fishCount / 0.75,
     fishCount,
     weighedCount: outcome === 'weighed' ? fishCount : 0,
     weightLb,
@@ -61,7 +64,7 @@ describe('PaidOffFindsTable', () => {
     const user = userEvent.setup();
     renderWithApp(<PaidOffFindsTable finds={finds} crewId="crew-1" units={units} timeZone="America/Chicago" />);
     await user.click(screen.getByRole('button', { name: 'Fish' }));
-    expect(screen.getByRole('columnheader', { name: /^Fish/ })).toHaveAttribute('aria-sort', 'descending');
+    expect(screen.getByRole('columnheader', { name: /^Fish(?! per hour)/ })).toHaveAttribute('aria-sort', 'descending');
     expect(names().slice(0, 3)).toEqual(['Shell flat', 'Channel swing', 'Rock pile']);
     await user.click(screen.getByRole('button', { name: 'Fish' }));
     expect(names().at(-1)).toBe('Shell flat');

@@ -8,7 +8,7 @@ import { formatDepth, formatTemperature, formatWeight } from '../../../lib/units
 import { FIND_OUTCOMES, type EventFindRow } from '../api/report-types';
 import { findHref } from '../report-paths';
 import { OutcomeBadge } from './outcome-badge';
-import { OUTCOME_LABELS } from './report-labels';
+import { OUTCOME_LABELS, perHour } from './report-labels';
 
 const column = createColumnHelper<EventFindRow>();
 
@@ -56,7 +56,18 @@ export function PaidOffFindsTable({
       sortingFn: (a, b) => OUTCOME_ORDER[a.original.outcome] - OUTCOME_ORDER[b.original.outcome],
       meta: { filterOptions: FIND_OUTCOMES.map((o) => ({ value: o, label: OUTCOME_LABELS[o] })) },
     }),
+    column.accessor('stopCount', { header: 'Stops', meta: { numeric: true } }),
+    column.accessor('minutesFished', {
+      header: 'Time fished',
+      cell: (info) => (info.getValue() === null ? '—' : `${info.getValue()} min`),
+      meta: { numeric: true },
+    }),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
+    column.accessor('fishPerHour', {
+      header: 'Fish per hour',
+      cell: (info) => perHour(info.getValue()),
+      meta: { numeric: true },
+    }),
     column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
     column.accessor('weightLb', {
       header: 'Weight',

@@ -40,3 +40,16 @@ export function points(difference: number): string {
   const value = Math.round(difference * 100);
   return `${value > 0 ? '+' : value < 0 ? '−' : '±'}${Math.abs(value)} points`;
 }
+
+/** Fish per hour fished, "1.25 /h"; a dash where no time was logged (no stops, or derived from catches). */
+export function perHour(value: number | null | undefined): string {
+  return value === null || value === undefined ? '—' : `${value.toFixed(2)} /h`;
+}
+
+/** Hours and minutes for time fished: "3 h 05 min", "40 min". */
+export function hoursMinutes(seconds: number): string {
+  const minutes = Math.round(seconds / 60);
+  const h = Math.floor(minutes / 60);
+  const m = minutes % 60;
+  return h ? `${h} h ${String(m).padStart(2, '0')} min` : `${m} min`;
+}

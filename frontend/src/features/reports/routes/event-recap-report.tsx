@@ -16,7 +16,8 @@ import { ProducingFindsTable } from '../components/producing-finds-table';
 import { ReadingsList } from '../components/readings-list';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
-import { percent, percentRange } from '../components/report-labels';
+import { DerivedBadge, DerivedNote } from '../components/derived-note';
+import { hoursMinutes, percent, percentRange, perHour } from '../components/report-labels';
 import { useReportsContext } from '../components/reports-context';
 import styles from '../components/reports.module.css';
 import { SendRecapButton } from '../components/send-recap-dialog';
@@ -168,6 +169,23 @@ export function Component() {
             )}
           </div>
           <div className={styles.card}>
+            <span className={styles.muted}>Fish</span>
+            <span className={styles.figure}>
+              {data.fishCaught} caught, {data.fishCounted} counted
+            </span>
+            <span className={styles.muted}>
+              {data.derivedFromCatches ? (
+                <>
+                  {data.findsFished} finds fished <DerivedBadge />
+                </>
+              ) : data.fishPerHour !== null ? (
+                `${perHour(data.fishPerHour)} on finds over ${hoursMinutes(data.secondsFished)} fished at ${data.findsFished} finds`
+              ) : (
+                `${data.findsFished} finds fished; no stop has a leaving time yet`
+              )}
+            </span>
+          </div>
+          <div className={styles.card}>
             <span className={styles.muted}>Practice that paid off</span>
             <span className={styles.figure}>{percent(paid.rate)}</span>
             <span className={styles.muted}>
@@ -176,6 +194,8 @@ export function Component() {
             </span>
           </div>
         </div>
+
+        <DerivedNote events={data.derivedFromCatches ? 1 : 0} />
 
         <ReadingsList readings={data.readings ?? []} title="The event in plain words" />
 

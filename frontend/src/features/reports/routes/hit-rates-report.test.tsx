@@ -50,6 +50,38 @@ function reportFor(url: URL) {
 }
 
 describe('Hit-rate report', () => {
+  it('says what the headline counts (fish caught and counted) and the fish per hour fished, per group too', async () => {
+    net = network();
+    await renderReports('/crews/crew-1/reports/hit-rates');
+    // 14 + 3 + 2 = 19 of 68 finds produced; the kit gives each producing find 2 fish (1 counted) and each find
+    // fished half an hour: 38 fish over 34 h = 1.12 fish per hour; hard bottom 28 fish over 20 h = 1.40.
+    expect(
+      await screen.findByText(
+        /^Overall, 19 of 68 finds fished produced a fish \(28 %, likely .*\); 38 fish caught, 19 counted, 1\.12 \/h over 34 h 00 min fished\.$/,
+      ),
+    ).toBeInTheDocument();
+    const table = await screen.findByRole('table');
+    expect(within(table).getByRole('columnheader', { name: /Fish per hour/ })).toBeInTheDocument();
+    const hard = within(table)
+      .getAllByRole('row')
+      .find((r) => within(r).queryByRole('rowheader')?.textContent === 'Hard bottom')!;
+    expect(within(hard).getByText('1.40 /h')).toBeInTheDocument();
+    expect(within(hard).getByText('20 h 00 min')).toBeInTheDocument();
+    expect(screen.queryByText('derived from catches')).not.toBeInTheDocument();
+  });
+
+  it('marks the figures derived from catches when an event of the selection has catches but no stops', async () => {
+    net = fakeNetwork({
+      'GET /api/auth/me': { status: 200, body: me },
+      'GET /api/crews/crew-1/lakes': { status: 200, body: lakes },
+      'GET /api/crews/crew-1/events': { status: 200, body: events },
+      'GET /api/crews/crew-1/reports/hit-rates': { status: 200, body: { ...byKind, derivedEvents: 1 } },
+    }).install();
+    await renderReports('/crews/crew-1/reports/hit-rates');
+    expect(await screen.findByText('derived from catches')).toBeInTheDocument();
+    expect(screen.getByText(/One event here has catches but no stops/)).toBeInTheDocument();
+  });
+
   it('shows the groups in a table, the chart with a whisker per group, and the readings in plain words', async () => {
     net = network();
     const { container } = await renderReports('/crews/crew-1/reports/hit-rates');

@@ -12,7 +12,15 @@ import { HitRatesTable } from '../components/hit-rates-table';
 import { ReadingsList } from '../components/readings-list';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
-import { CATCH_BASED_GROUPINGS, GROUPING_LABELS, percent, percentRange } from '../components/report-labels';
+import { DerivedNote } from '../components/derived-note';
+import {
+  CATCH_BASED_GROUPINGS,
+  GROUPING_LABELS,
+  hoursMinutes,
+  percent,
+  percentRange,
+  perHour,
+} from '../components/report-labels';
 import { useReportsContext } from '../components/reports-context';
 import styles from '../components/reports.module.css';
 import { journalHref } from '../report-paths';
@@ -70,9 +78,10 @@ export function Component() {
         <div className={styles.stack}>
           <Text as="p" className={styles.muted}>
             {catchBased
-              ? `${report.data.overall.fishCount} fish, ${formatWeight(report.data.overall.weightLb, units.weight)} in all. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
-              : `Overall, ${report.data.overall.findsProducing} of ${report.data.overall.findsFished} finds fished produced a fish (${percent(report.data.overall.producing.rate)}, likely ${percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}).`}
+              ? `${report.data.overall.fishCount} fish caught, ${report.data.overall.countedCount} counted, ${formatWeight(report.data.overall.weightLb, units.weight)} in all. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
+              : `Overall, ${report.data.overall.findsProducing} of ${report.data.overall.findsFished} finds fished produced a fish (${percent(report.data.overall.producing.rate)}, likely ${percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}); ${report.data.overall.fishCount} fish caught, ${report.data.overall.countedCount} counted${report.data.overall.fishPerHour !== null ? `, ${perHour(report.data.overall.fishPerHour)} over ${hoursMinutes(report.data.overall.secondsFished)} fished` : ''}.`}
           </Text>
+          <DerivedNote events={report.data.derivedEvents} />
           <div className={styles.splitEven}>
             <div className={styles.panel}>
               <Heading as="h4" variant="small" className={styles.panelTitle}>

@@ -6,7 +6,7 @@ import { comparison, lakes, me, events, rate, renderReports, withLaidOutElements
 
 withLaidOutElements(1200, 700);
 
-const withFished = (k: number, n: number) => ({ ...rate(k, n), findsFished: n });
+const withFished = (k: number, n: number) => ({ ...rate(k, n), findsFished: n, fishPerHour: null });
 const vegetationChange = comparison(
   'vegetation',
   'Vegetation',
@@ -34,8 +34,22 @@ const report: LakeComparisonReport = {
   lake: { id: 'lake-a', name: 'Test Reservoir' },
   by: 'kind',
   events: [
-    { id: 'ev-1', name: 'Summer Test Open', firstDate: '2023-06-10', season: 'summer', year: 2023 },
-    { id: 'ev-2', name: 'Summer Test Open', firstDate: '2024-06-15', season: 'summer', year: 2024 },
+    {
+      id: 'ev-1',
+      name: 'Summer Test Open',
+      firstDate: '2023-06-10',
+      season: 'summer',
+      year: 2023,
+      derivedFromCatches: false,
+    },
+    {
+      id: 'ev-2',
+      name: 'Summer Test Open',
+      firstDate: '2024-06-15',
+      season: 'summer',
+      year: 2024,
+      derivedFromCatches: false,
+    },
   ],
   groups: [
     { key: 'hard-bottom', label: 'Hard bottom', perEvent: { 'ev-1': withFished(14, 40), 'ev-2': withFished(12, 38) } },

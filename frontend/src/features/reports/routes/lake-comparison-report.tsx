@@ -9,6 +9,7 @@ import { useLakeComparison } from '../api/reports-api';
 import { ComparisonsList } from '../components/comparisons-list';
 import { GroupingSwitch, readGrouping } from '../components/grouping-switch';
 import { LakeComparisonChart } from '../components/lake-comparison-chart';
+import { DerivedNote } from '../components/derived-note';
 import { LakeComparisonTable } from '../components/lake-comparison-table';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
@@ -100,6 +101,7 @@ export function Component() {
             <ComparisonsList comparisons={comparisons} />
           </div>
         </div>
+        <DerivedNote events={compared.filter((e) => e.derivedFromCatches).length} />
         <LakeComparisonTable events={compared} groups={groups} />
       </div>
     );

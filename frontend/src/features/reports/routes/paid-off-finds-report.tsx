@@ -6,6 +6,7 @@ import { isApiError } from '../../../lib/api-client';
 import { useUnitPreferences } from '../../../lib/journal-access';
 import { filterQuery, useReportFilters } from '../api/report-filters';
 import { useEventFinds } from '../api/reports-api';
+import { DerivedNote } from '../components/derived-note';
 import { PaidOffFindsTable } from '../components/paid-off-finds-table';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
@@ -53,13 +54,14 @@ export function Component() {
       <div className={styles.stack}>
         <div>
           <Text as="p" className={`${styles.figure} ${styles.flush}`}>
-            {percent(paid.rate)} of practice paid off
+            {percent(paid.rate)} of the finds fished paid off
           </Text>
           <Text as="p" className={`${styles.muted} ${styles.flush}`}>
-            {paid.successes} of {paid.trials} finds gave fish on competition days (likely between{' '}
-            {percentRange(paid.lower, paid.upper)}).
+            {paid.successes} of {paid.trials} finds fished (visited by a stop, or with a catch) gave fish on competition
+            days (likely between {percentRange(paid.lower, paid.upper)}).
           </Text>
         </div>
+        <DerivedNote events={report.data.derivedFromCatches ? 1 : 0} />
         <PaidOffFindsTable finds={report.data.finds} crewId={crew.id} units={units} timeZone={timeZone} />
       </div>
     );

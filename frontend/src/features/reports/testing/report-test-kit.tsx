@@ -147,6 +147,9 @@ export function hitRates(groups: Array<[string, string, number, number]>, readin
     producing: rate(successes, trials, shrunk[i].shrunk),
     weighed: rate(Math.max(0, successes - 1), trials),
     shareOfFish: rate(successes * 2, Math.max(1, totalFish)),
+    // Half an hour on each find fished.
+    secondsFished: trials * 1800,
+    fishPerHour: trials ? (successes * 2) / (trials / 2) : null,
     rank: order.indexOf(key) + 1,
   }));
   const s = groups.reduce((acc, g) => acc + g[2], 0);
@@ -160,11 +163,15 @@ export function hitRates(groups: Array<[string, string, number, number]>, readin
       findsFished: t,
       findsProducing: s,
       fishCount: totalFish,
+      countedCount: s,
       weightLb: s * 6.5,
       producing: rate(s, t),
+      secondsFished: t * 1800,
+      fishPerHour: t ? totalFish / (t / 2) : null,
     },
     readings,
     eventCount: 2,
+    derivedEvents: 0,
   };
 }
 
