@@ -9,6 +9,7 @@ import { DEMO_CREW_NAME } from '../src/database/seeders/demo-accounts';
 import { JournalDemoSeeder } from '../src/database/seeders/journal-demo.seeder';
 import { Find } from '../src/finds/find.entity';
 import { JournalEvent } from '../src/journal-events/journal-event.entity';
+import { Stop } from '../src/stops/stop.entity';
 import { Lake } from '../src/lakes/lake.entity';
 import { crewWithMembers, type CrewFixture } from './utils/api-client';
 import { createTestApp, testEm } from './utils/test-app';
@@ -49,8 +50,10 @@ describe('demo journal seeding', () => {
       EventCreated: demo.events.length,
       FindAdded: demo.finds.length,
       CatchLogged: demo.catches.length,
+      StopLogged: demo.stops.length,
       WeighInRecorded: demo.weighIns.length,
     });
+    expect(await em.count(Stop, { crewId })).toBe(demo.stops.length);
     const event = await em.findOneOrFail(JournalEvent, { crewId, type: 'EventCreated' }, { orderBy: { seq: 'asc' } });
     expect((event.payload.competitionDays as unknown[]).length).toBeGreaterThan(0);
 

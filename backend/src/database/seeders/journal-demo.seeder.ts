@@ -14,6 +14,7 @@ import { insertRecordsBulk } from '../../imports/bulk-insert';
 import { JournalRecorder } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
 import { Lake } from '../../lakes/lake.entity';
+import { Stop } from '../../stops/stop.entity';
 import { User } from '../../users/user.entity';
 import { WeighIn } from '../../weigh-ins/weigh-in.entity';
 import { DEMO_CREW_NAME } from './demo-accounts';
@@ -32,6 +33,9 @@ export class JournalDemoSeeder extends Seeder {
     if (!crew) return;
     if (await sql.count(Lake, { crewId: crew.id })) return;
     const owner = context?.users?.['owner@demo.test'] ?? (await sql.findOne(User, { email: 'owner@demo.test' }));
+    const angler = context?.users?.['angler@demo.test'] ?? (await sql.findOne(User, { email: 'angler@demo.test' }));
+    // The boat's two anglers: the demo's owner and angler accounts.
+    const loggedBy = (who: 'owner' | 'angler' | undefined) => (who === 'angler' ? angler : owner)?.id ?? null;
     const j = demoJournal();
     // Fresh ids, so the demo can be loaded for more than one crew (tests) without key clashes.
     const ids = new Map<string, string>();
@@ -188,6 +192,7 @@ export class JournalDemoSeeder extends Seeder {
           waterTempUnit: c.waterTempF === null ? null : 'F',
           fate: c.fate,
           notes: c.notes ?? '',
+          loggedBy: loggedBy(c.angler),
         });
         row.weightFlagged = flagWeight(row);
         return row;
@@ -196,6 +201,31 @@ export class JournalDemoSeeder extends Seeder {
         type: 'CatchLogged',
         aggregateType: 'catch',
         aggregateId: c.id,
+      }));
+
+      const stops = j.stops.map((st) =>
+        Object.assign(new Stop(), {
+          ...stamp,
+          id: id(st.id),
+          crewId: crew.id,
+          eventId: id(st.eventId),
+          competitionDayId: id(st.competitionDayId),
+          findId: idOrNull(st.findId),
+          lat: st.lat,
+          lon: st.lon,
+          arrivedAt: new Date(st.arrivedAt),
+          leftAt: new Date(st.leftAt),
+          waterTempF: st.waterTempF,
+          lure: st.lure,
+          technique: st.technique,
+          notes: '',
+          loggedById: loggedBy(st.angler),
+        }),
+      );
+      await insertRecordsBulk(tx, log, 'Stop', stops, (st) => ({
+        type: 'StopLogged',
+        aggregateType: 'stop',
+        aggregateId: st.id,
       }));
 
       const weighIns = j.weighIns.map((w) =>
