@@ -47,7 +47,7 @@ describe('the reports, as the demo angler', () => {
   it('shows hit rates by kind with a whisker per group, the numbers and the readings', async () => {
     const { page } = browser;
     await openReport(page, 'Hit rates');
-    const table = page.getByRole('table');
+    const table = page.getByRole('table', { name: /^Hit rates by group/ });
     await table.waitFor();
     const groups = (await table.getByRole('rowheader').allTextContents()).map((t) =>
       t.replace(/few (finds|fish)$/, ''),
@@ -141,7 +141,7 @@ describe('the reports, as the demo angler', () => {
   it('lists every find of the event with its outcome, filterable, linked to the find', async () => {
     const { page } = browser;
     await page.getByRole('link', { name: 'Every find of this event' }).click();
-    await page.getByText(/of practice paid off/).waitFor();
+    await page.getByText(/of the finds fished paid off/).waitFor();
     const table = page.getByRole('table');
     await table.waitFor();
     const all = await table.locator('tbody tr:not([aria-hidden])').count();

@@ -28,6 +28,7 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
   let browser: Browser;
   let crewPath = '';
   let dayUrl = '';
+  let unitsBefore: unknown = null;
 
   beforeAll(async () => {
     browser = await openBrowser(DESK);
@@ -35,6 +36,10 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
     await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
     await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
     crewPath = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
+    // Other tests change this account's units; the figures below are in pounds and inches. Put back afterwards.
+    const me = await apiCall<{ user: { units: unknown } }>(page, 'GET', '/auth/me');
+    unitsBefore = me.user.units;
+    await apiCall(page, 'PATCH', '/auth/me', { units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } });
     const lake = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/lakes`, {
       name: LAKE,
       region: 'Test county',
@@ -88,6 +93,7 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
     dayUrl = `${crewPath}/events/${event.id}?section=days`;
   });
   afterAll(async () => {
+    if (unitsBefore) await apiCall(browser.page, 'PATCH', '/auth/me', { units: unitsBefore });
     await browser?.close();
   });
   beforeEach((context) => {
@@ -243,5 +249,26 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
       .filter({ hasText: '07:25' })
       .waitFor();
     await page.getByRole('region', { name: 'Live bag' }).getByText('1 of 5', { exact: true }).waitFor();
+  });
+  it('a demo competition day shows its logged stops, the tries without a bite and the time-fished reports', async () => {
+    const { page } = browser;
+    await page.goto(`${crewPath}/events`);
+    await page.getByRole('link', { name: 'Corvane Dog Days Classic 2024' }).click();
+    await page.getByRole('navigation', { name: 'Event sections' }).getByRole('link', { name: 'Days' }).click();
+    await stops(page).getByText('fished, no bite').first().waitFor();
+    await expect(timeline(page).getAttribute('aria-label')).resolves.toMatch(
+      /^Day timeline: \d+ stops, \d+ catches, [1-9]\d* stops? without a bite/,
+    );
+    await expect(seriousAxeViolations(page)).resolves.toEqual([]);
+    await screenshot(page, 'stops-demo-day-desk');
+
+    // The reports: fish per hour fished, and the older event without stops marked as derived from catches.
+    await page.getByRole('navigation', { name: 'Crew sections' }).getByRole('link', { name: 'Reports' }).click();
+    await page.getByRole('link', { name: 'Hit rates' }).first().click();
+    await page.getByRole('columnheader', { name: /Fish per hour/ }).waitFor();
+    await page.getByText(/fish caught, \d+ counted/).waitFor();
+    await page.getByText('derived from catches').first().waitFor();
+    await expect(seriousAxeViolations(page)).resolves.toEqual([]);
+    await screenshot(page, 'stops-demo-hit-rates');
   });
 });

@@ -88,16 +88,6 @@ function findColumns() {
     column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
     column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
     ...rateColumns((g) => g.producing, { id: 'rate', rate: 'Hit rate', range: 'Range', adjusted: 'Adjusted' }),
-    column.accessor('secondsFished', {
-      header: 'Time fished',
-      cell: (info) => (info.getValue() ? hoursMinutes(info.getValue()) : '—'),
-      meta: { numeric: true },
-    }),
-    column.accessor('fishPerHour', {
-      header: 'Fish per hour',
-      cell: (info) => perHour(info.getValue()),
-      meta: { numeric: true },
-    }),
     rankColumn,
   ];
 }
@@ -120,4 +110,32 @@ function catchColumns(units: UnitPreferences) {
     }),
     rankColumn,
   ];
+}
+
+/**
+ * Time on the finds of each group and the fish per hour fished (over the stops logged), beside the hit rates:
+ * a table of its own, so the hit-rate table keeps fitting beside its chart.
+ */
+export function HitRatesTimeTable({ groups }: { groups: HitRateGroup[] }) {
+  return (
+    <ReportTable
+      data={groups}
+      columns={[
+        column.accessor('label', { header: 'Group' }),
+        column.accessor('secondsFished', {
+          header: 'Time fished',
+          cell: (info) => (info.getValue() ? hoursMinutes(info.getValue()) : '—'),
+          meta: { numeric: true },
+        }),
+        column.accessor('fishPerHour', {
+          header: 'Fish per hour',
+          cell: (info) => perHour(info.getValue()),
+          meta: { numeric: true },
+          sortUndefined: 'last',
+        }),
+      ]}
+      caption="Time on the finds by group, over the stops logged, and the fish caught per hour of it. A dash: no stop with a leaving time (or figures derived from catches)."
+      getRowId={(g) => g.key ?? 'not-recorded'}
+    />
+  );
 }

@@ -60,8 +60,7 @@ describe('Hit-rate report', () => {
         /^Overall, 19 of 68 finds fished produced a fish \(28 %, likely .*\); 38 fish caught, 19 counted, 1\.12 \/h over 34 h 00 min fished\.$/,
       ),
     ).toBeInTheDocument();
-    const table = await screen.findByRole('table');
-    expect(within(table).getByRole('columnheader', { name: /Fish per hour/ })).toBeInTheDocument();
+    const table = await screen.findByRole('table', { name: /^Time on the finds by group/ });
     const hard = within(table)
       .getAllByRole('row')
       .find((r) => within(r).queryByRole('rowheader')?.textContent === 'Hard bottom')!;
@@ -85,7 +84,7 @@ describe('Hit-rate report', () => {
   it('shows the groups in a table, the chart with a whisker per group, and the readings in plain words', async () => {
     net = network();
     const { container } = await renderReports('/crews/crew-1/reports/hit-rates');
-    const table = await screen.findByRole('table');
+    const table = await screen.findByRole('table', { name: /^(Hit rates|Fish) by group/ });
     const rows = within(table).getAllByRole('row').slice(1);
     const hard = rows.find((r) => within(r).getByRole('rowheader').textContent === 'Hard bottom')!;
     expect(within(hard).getByText('35 %')).toBeInTheDocument();
@@ -105,7 +104,7 @@ describe('Hit-rate report', () => {
   it('lists the groups in the order of the API’s small-sample-aware rank, with the adjusted rate beside the raw one', async () => {
     net = network();
     await renderReports('/crews/crew-1/reports/hit-rates');
-    const table = await screen.findByRole('table');
+    const table = await screen.findByRole('table', { name: /^(Hit rates|Fish) by group/ });
     const shown = within(table)
       .getAllByRole('rowheader')
       .map((h) => h.textContent?.replace('few finds', ''));
@@ -121,7 +120,7 @@ describe('Hit-rate report', () => {
     net = network();
     const user = userEvent.setup();
     const { router } = await renderReports('/crews/crew-1/reports/hit-rates?season=summer');
-    await screen.findByRole('table');
+    await screen.findByRole('table', { name: /^(Hit rates|Fish) by group/ });
     expect(screen.getByRole('combobox', { name: 'Season' })).toHaveValue('summer');
     expect(lastUrl(net).searchParams.get('season')).toBe('summer');
 
@@ -137,7 +136,9 @@ describe('Hit-rate report', () => {
 
     await user.click(screen.getByRole('button', { name: 'Depth' }));
     await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('by')).toBe('depthBand'));
-    await screen.findByRole('rowheader', { name: '10–20 ft' });
+    await within(await screen.findByRole('table', { name: /^Hit rates by group/ })).findByRole('rowheader', {
+      name: '10–20 ft',
+    });
     expect(lastUrl(net).searchParams.get('by')).toBe('depthBand');
     expect(new URLSearchParams(router.state.location.search).get('lakeId')).toBe('lake-a');
 
@@ -148,7 +149,7 @@ describe('Hit-rate report', () => {
   it('drops malformed filters from the address instead of sending them on', async () => {
     net = network();
     await renderReports('/crews/crew-1/reports/hit-rates?season=monsoon&year=24&from=yesterday&lakeId=lake-b');
-    await screen.findByRole('table');
+    await screen.findByRole('table', { name: /^(Hit rates|Fish) by group/ });
     const sent = lastUrl(net).searchParams;
     expect([...sent.keys()].sort()).toEqual(['by', 'lakeId']);
     expect(sent.get('lakeId')).toBe('lake-b');

@@ -8,7 +8,7 @@ import { useReportFilters } from '../api/report-filters';
 import { useHitRates } from '../api/reports-api';
 import { GroupingSwitch, readGrouping } from '../components/grouping-switch';
 import { HitRateChart } from '../components/hit-rate-chart';
-import { HitRatesTable } from '../components/hit-rates-table';
+import { HitRatesTable, HitRatesTimeTable } from '../components/hit-rates-table';
 import { ReadingsList } from '../components/readings-list';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
@@ -96,6 +96,7 @@ export function Component() {
             </div>
             <div className={styles.panel}>
               <HitRatesTable groups={report.data.groups} catchBased={catchBased} units={units} />
+              {catchBased ? null : <HitRatesTimeTable groups={report.data.groups} />}
             </div>
           </div>
         </div>
