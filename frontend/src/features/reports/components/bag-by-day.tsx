@@ -94,14 +94,21 @@ export function BagByDay({ days, units, timeZone }: { days: RecapDay[]; units: U
           <Heading as="h5" variant="small">
             Not counted ({notCounted(day).length})
           </Heading>
-          <FishChips fish={notCounted(day)} kind="culled" units={units} timeZone={timeZone} />
+          <FishChips
+            fish={notCounted(day)}
+            kind="culled"
+            units={units}
+            timeZone={timeZone}
+          />
           <dl className={styles.dl}>
             <dt>Bag (gross)</dt>
             <dd>{officialBesideLog(day.official?.grossLb, day.grossLb, units.weight)}</dd>
             <dt>Penalties</dt>
             <dd>
               {penaltyItems(day.penalties, units)}
-              {day.official?.penaltyLb != null ? ` (scale ${formatWeight(day.official.penaltyLb, units.weight)})` : ''}
+              {day.official?.penaltyLb != null
+                ? ` (scale ${formatWeight(day.official.penaltyLb, units.weight)})`
+                : ''}
             </dd>
             <dt>Net</dt>
             <dd>
