@@ -129,7 +129,7 @@ describe('queries follow writes', () => {
         </MemoryRouter>
       </AppProvider>,
     );
-    expect(await screen.findByText(/0 of 1 finds gave fish/)).toBeInTheDocument();
+    expect(await screen.findByText(/0 of 1 finds fished .*gave fish/)).toBeInTheDocument();
 
     const user = userEvent.setup();
     await user.click(screen.getByRole('textbox', { name: /weight/i }));
@@ -138,7 +138,7 @@ describe('queries follow writes', () => {
     await user.keyboard('North shell bar{Enter}');
 
     await waitFor(() => expect(posted).toHaveLength(1));
-    expect(await screen.findByText(/1 of 1 finds gave fish/)).toBeInTheDocument();
+    expect(await screen.findByText(/1 of 1 finds fished .*gave fish/)).toBeInTheDocument();
     expect(net.to('GET /api/crews/c1/reports/events/e1/finds')).toHaveLength(2);
   });
 

@@ -1,12 +1,12 @@
 import type { LogStopRequest, StopDeletedView, StopView, UpdateStopRequest } from '@shoalbook/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { refreshCrewJournal } from '../../../lib/crew-cache';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
 
 /**
  * Every stop write of the front end goes through this module (one function per route), so the send queue on
- * the device can take them over in one place. A stop changes which catches it holds, so every write also
- * refreshes the catch lists (their stop marks) but not the weigh-ins: a stop never changes the bag.
+ * the device can take them over in one place.
  */
 const stopsPath = (crewId: string) => crewApiPath(crewId, '/stops');
 const stopPath = (crewId: string, stopId: string) => crewApiPath(crewId, `/stops/${encodeURIComponent(stopId)}`);
@@ -24,11 +24,8 @@ function useStopWrite<TInput, TAnswer>(crewId: string, send: (input: TInput) => 
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: send,
-    onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: journalKeys.allStops(crewId) }),
-        queryClient.invalidateQueries({ queryKey: journalKeys.allCatches(crewId) }),
-      ]),
+    // A stop changes which finds count as fished: the reports follow, as after every journal write.
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
   });
 }
 
