@@ -252,10 +252,11 @@ describe('the journal, as the demo angler', () => {
       await expectNoSeriousAxe(page, section);
       await screenshot(page, `journal-${section}`);
     }
-    // The events list tells each event's fish and weight by the one bag rule: three fish, one dead (9.57 − 0.25).
+    // The events list tells each event's fish by the one bag rule (three fish, all counted) and its weight as the
+    // weigh-in screen totals it: the official 9.30 lb entered from the scale slip above, not the log's 9.32 lb.
     const row = page.getByRole('row').filter({ has: page.getByRole('link', { name: EVENT }) });
     await row.getByRole('cell', { name: '3 (3 counted)', exact: true }).waitFor();
-    await row.getByRole('cell', { name: '9.32 lb', exact: true }).waitFor();
+    await row.getByRole('cell', { name: '9.30 lb (official)', exact: true }).waitFor();
     await page.goto(`${eventUrl}?section=finds`);
     await page.getByRole('link', { name: 'Long shell flat' }).click();
     await page.getByRole('heading', { name: 'Long shell flat', level: 2 }).waitFor();
