@@ -39,7 +39,7 @@ describe('site administration', () => {
     const first = await newUser(app, `${tag}-first`);
     await new Promise((resolve) => setTimeout(resolve, 5)); // a later createdAt, so "newest first" is defined
     const second = await newUser(app, `${tag}-second`);
-    await testEm(app).nativeUpdate(User, { id: second.userId }, { displayName: 'Ripple 100%_Done' });
+    await testEm(app).nativeUpdate(User, { id: second.userId }, { displayName: `Ripple ${tag}%_Done` });
 
     const byMail = await admin.get(`/api/admin/users?q=${tag.toUpperCase()}`);
     expect(byMail.status).toBe(200);
@@ -50,11 +50,11 @@ describe('site administration', () => {
     expect(page.body.map((u: { id: string }) => u.id)).toEqual([first.userId]);
     expect(page.headers['x-total-count']).toBe('2');
 
-    // LIKE's wildcards in the search text are plain characters: "0%_d" matches only the name that has them.
-    const literal = await admin.get(`/api/admin/users?q=${encodeURIComponent('0%_d')}`);
+    // LIKE's wildcards in the search text are plain characters: "<tag>%_d" matches only the name that has them;
+    // unescaped, "<tag>%" would match the first account's e-mail too.
+    const literal = await admin.get(`/api/admin/users?q=${encodeURIComponent(`${tag}%_d`)}`);
     expect(literal.body.map((u: { id: string }) => u.id)).toEqual([second.userId]);
-    // Unescaped, "%" would match every account.
-    const percent = await admin.get(`/api/admin/users?q=${encodeURIComponent('%')}`);
+    const percent = await admin.get(`/api/admin/users?q=${encodeURIComponent(`${tag}%`)}`);
     expect(percent.body.map((u: { id: string }) => u.id)).toEqual([second.userId]);
 
     expect((await admin.get('/api/admin/users?limit=0')).status).toBe(400);
