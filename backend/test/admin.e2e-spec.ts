@@ -67,9 +67,12 @@ describe('site administration', () => {
     expect(res.status).toBe(200);
     expect(res.body.disabled).toBe(true);
     expect((await user.get('/api/auth/me')).status).toBe(401);
+    // No account enumeration (OWASP ASVS 4.0.3 2.2.x): a disabled account answers like a wrong password.
     const signIn = await new ApiClient(app).signIn(user.email, user.password);
-    expect(signIn.status).toBe(403);
-    expect(signIn.body.code).toBe('account_disabled');
+    const wrong = await new ApiClient(app).signIn(user.email, 'not the password at all');
+    expect(signIn.status).toBe(401);
+    expect(signIn.body.code).toBe('wrong_credentials');
+    expect({ ...signIn.body, requestId: undefined }).toEqual({ ...wrong.body, requestId: undefined });
     await admin.patch(`/api/admin/users/${user.userId}`, { disabled: false });
     expect((await new ApiClient(app).signIn(user.email, user.password)).status).toBe(200);
   });

@@ -5,6 +5,7 @@ import { CSRF_HEADER } from '@shoalbook/shared';
 import { Session } from '../src/auth/session.entity';
 import { User } from '../src/users/user.entity';
 import { ApiClient, GOOD_PASSWORD, newUser, uniqueEmail } from './utils/api-client';
+import { waitForMail } from './utils/outbox';
 import { createTestApp, testEm } from './utils/test-app';
 
 function expectApiError(body: unknown, statusCode: number) {
@@ -29,7 +30,7 @@ describe('accounts and sessions', () => {
   const countUsers = (email: string) => testEm(app).count(User, { email });
 
   describe('sign-up', () => {
-    it('creates the account, signs in with an httpOnly SameSite=Lax cookie, and GET /me answers', async () => {
+    it('creates the account (202, no session yet); signing in sets an httpOnly SameSite=Lax cookie and GET /me answers', async () => {
       const client = new ApiClient(app);
       const email = uniqueEmail('signup');
       const res = await client.post('/api/auth/sign-up', {
@@ -37,22 +38,32 @@ describe('accounts and sessions', () => {
         password: GOOD_PASSWORD,
         displayName: '  Jo Tester ',
       });
-      expect(res.status).toBe(201);
-      expect(res.body.user).toMatchObject({
+      expect(res.status).toBe(202);
+      expect(res.body).toEqual({ message: expect.stringMatching(/sign in/) });
+      expect(res.headers['set-cookie'] ?? []).not.toEqual(
+        expect.arrayContaining([expect.stringMatching(/^sb_session=/)]),
+      );
+      const signIn = await client.post('/api/auth/sign-in', { email, password: GOOD_PASSWORD });
+      expect(signIn.status).toBe(200);
+      expect(signIn.body.user).toMatchObject({
         email,
         displayName: 'Jo Tester',
         siteRole: 'user',
         units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' },
       });
-      expect(res.body.crews).toEqual([]);
-      const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('sb_session='))!;
+      expect(signIn.body.crews).toEqual([]);
+      const cookie = ([] as string[])
+        .concat(signIn.headers['set-cookie'] ?? [])
+        .find((c) => c.startsWith('sb_session='))!;
       expect(cookie).toMatch(/HttpOnly/i);
       expect(cookie).toMatch(/SameSite=Lax/i);
       expect(cookie).not.toMatch(/Secure/i);
       const me = await client.get('/api/auth/me');
       expect(me.status).toBe(200);
       expect(me.body.user.email).toBe(email);
-      expect(res.body.user).not.toHaveProperty('passwordHash');
+      expect(signIn.body.user).not.toHaveProperty('passwordHash');
+      const welcome = await waitForMail(email);
+      expect(welcome.subject).toMatch(/account is ready/);
     });
 
     it('stores an argon2id hash with at least the OWASP minimum parameters, and only the session token hash', async () => {
@@ -68,18 +79,29 @@ describe('accounts and sessions', () => {
       expect(sessions[0]!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     });
 
-    it('refuses a duplicate e-mail (any case) with 409 and creates nothing', async () => {
+    // OWASP ASVS 4.0.3 2.2.x and the OWASP Authentication cheat sheet (account enumeration): a taken address
+    // gets the same answer as a free one; its owner hears of the attempt by e-mail.
+    it('answers a taken address (any spelling) exactly like a free one, keeps the account, and mails its owner', async () => {
       const first = await newUser(app);
-      const res = await new ApiClient(app).post('/api/auth/sign-up', {
+      const taken = await new ApiClient(app).post('/api/auth/sign-up', {
         email: first.email.toUpperCase(),
-        password: GOOD_PASSWORD,
+        password: 'another pass phrase here',
         displayName: 'Copy',
       });
-      expect(res.status).toBe(409);
-      expectApiError(res.body, 409);
-      expect(res.body.code).toBe('email_taken');
-      expect(res.body.fieldErrors.email[0]).toMatch(/already exists/);
+      const free = await new ApiClient(app).post('/api/auth/sign-up', {
+        email: uniqueEmail('free'),
+        password: 'another pass phrase here',
+        displayName: 'Copy',
+      });
+      expect(taken.status).toBe(202);
+      expect({ status: taken.status, body: taken.body }).toEqual({ status: free.status, body: free.body });
       expect(await countUsers(first.email)).toBe(1);
+      const user = await testEm(app).findOneOrFail(User, { email: first.email });
+      expect(user.displayName).toBe('Test Angler');
+      expect((await first.signIn(first.email, GOOD_PASSWORD)).status).toBe(200);
+      const notice = await waitForMail(first.email, 2);
+      expect(notice.subject).toMatch(/tried to sign up/);
+      expect(notice.text).toMatch(/already has one/);
     });
 
     const badBodies: Array<[string, unknown, string]> = [

@@ -138,6 +138,6 @@ describe('serving the built front end', () => {
       password: 'a fine long passphrase',
       displayName: 'Static',
     });
-    expect(signUp.status).toBe(201);
+    expect(signUp.status).toBe(202);
   });
 });

@@ -4,6 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuthToken } from '../src/auth/auth-token.entity';
 import { ApiClient, newUser, uniqueEmail } from './utils/api-client';
 import { messagesTo, tokenFromMail, waitForMail } from './utils/outbox';
+
+const RESET_SUBJECT = /new Shoalbook password/;
 import { createTestApp, testEm } from './utils/test-app';
 
 const NEW_PASSWORD = 'slow-rolled spinnerbait';
@@ -25,7 +27,7 @@ describe('password reset by e-mail', () => {
     expect(known.status).toBe(202);
     expect(ghost.status).toBe(202);
     expect(ghost.body).toEqual(known.body);
-    await waitForMail(user.email);
+    await waitForMail(user.email, 1, RESET_SUBJECT);
     expect(messagesTo(unknown)).toHaveLength(0);
   });
 
@@ -34,7 +36,7 @@ describe('password reset by e-mail', () => {
     const other = new ApiClient(app);
     await other.signIn(user.email, user.password);
     await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
-    const mail = await waitForMail(user.email);
+    const mail = await waitForMail(user.email, 1, RESET_SUBJECT);
     expect(mail.subject).toMatch(/new Shoalbook password/);
     expect(mail.html).toContain('/reset-password?token=');
     const token = tokenFromMail(mail, '/reset-password');
@@ -67,7 +69,7 @@ describe('password reset by e-mail', () => {
   it('refuses an expired token and a made-up one, changing nothing', async () => {
     const user = await newUser(app);
     await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
-    const token = tokenFromMail(await waitForMail(user.email), '/reset-password');
+    const token = tokenFromMail(await waitForMail(user.email, 1, RESET_SUBJECT), '/reset-password');
     await testEm(app).nativeUpdate(AuthToken, { user: user.userId }, { expiresAt: new Date(Date.now() - 1000) });
     for (const t of [token, 'made-up-token']) {
       const res = await new ApiClient(app).post('/api/auth/password-reset/confirm', {

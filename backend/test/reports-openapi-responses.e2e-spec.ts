@@ -123,7 +123,7 @@ describe('report answers match their OpenAPI response schemas', () => {
       { crewId, eventId: events[0]!.id },
       { body: { userIds: [demo.angler.userId] }, status: 202 },
     );
-    await waitForMail(demo.angler.email);
+    await waitForMail(demo.angler.email, 1, /recap|Recap/);
     expect(problems).toEqual([]);
   });
 

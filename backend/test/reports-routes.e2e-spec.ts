@@ -290,7 +290,7 @@ describe('report routes', () => {
     const sent = await crew.owner.post(path, { userIds: [crew.viewer.userId] });
     expect(sent.status, JSON.stringify(sent.body)).toBe(202);
     expect(sent.body).toEqual({ sent: 1 });
-    const mail = await waitForMail(crew.viewer.email);
+    const mail = await waitForMail(crew.viewer.email, 1, /recap|Recap/);
     expect(mail.text).toContain(`/crews/${crew.crewId}/reports/events/${events[0]!.id}`);
     const recap = (await get<EventRecapView>(crew.owner, `events/${events[0]!.id}/recap`)).body;
     expect(mail.text).toContain(

@@ -5,8 +5,6 @@ import {
   ApiBadRequestResponse,
   ApiConflictResponse,
   ApiCookieAuth,
-  ApiCreatedResponse,
-  ApiForbiddenResponse,
   ApiNoContentResponse,
   ApiOkResponse,
   ApiOperation,
@@ -39,6 +37,9 @@ import {
 } from './dto/auth.dto';
 import { SessionsService } from './sessions.service';
 
+export const SIGN_UP_MESSAGE =
+  'Thanks. If this address was free, the account is ready: sign in with it. Either way, a message about it is on its way to the address.';
+
 @ApiTags('auth')
 @ApiCookieAuth()
 @ApiBadRequestResponse({ type: ApiErrorDto, description: 'Invalid input; fieldErrors name the fields.' })
@@ -66,17 +67,16 @@ export class AuthController {
   @Public()
   @AuthThrottle()
   @Post('sign-up')
-  @ApiOperation({ summary: 'Create an account and sign in' })
-  @ApiCreatedResponse({ type: MeResponseDto })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'The e-mail address has an account (code email_taken).' })
-  async signUp(
-    @Body() dto: SignUpDto,
-    @Req() req: Request,
-    @Res({ passthrough: true }) res: Response,
-  ): Promise<MeResponse> {
-    const user = await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName));
-    await this.startSession(user, req, res);
-    return this.users.me(user);
+  @HttpCode(HttpStatus.ACCEPTED)
+  @ApiOperation({
+    summary: 'Create an account (then sign in with it)',
+    description:
+      'The same answer whether or not the address already has an account (no account enumeration, OWASP ASVS 4.0.3 2.2.x / the Authentication cheat sheet); the owner of a taken address is told by e-mail. Sign in afterwards with the same address and password.',
+  })
+  @ApiAcceptedResponse({ type: MessageResponseDto })
+  async signUp(@Body() dto: SignUpDto): Promise<MessageResponseDto> {
+    await this.commands.execute(new SignUpCommand(dto.email, dto.password, dto.displayName));
+    return { message: SIGN_UP_MESSAGE };
   }
 
   @Public()
@@ -85,8 +85,10 @@ export class AuthController {
   @HttpCode(HttpStatus.OK)
   @ApiOperation({ summary: 'Sign in; starts a new session' })
   @ApiOkResponse({ type: MeResponseDto })
-  @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'E-mail or password is wrong.' })
-  @ApiForbiddenResponse({ type: ApiErrorDto, description: 'The account is disabled.' })
+  @ApiUnauthorizedResponse({
+    type: ApiErrorDto,
+    description: 'E-mail or password is wrong, or the account is disabled (one answer for all three).',
+  })
   async signIn(
     @Body() dto: SignInDto,
     @Req() req: Request,
@@ -161,8 +163,8 @@ export class AuthController {
   @HttpCode(HttpStatus.ACCEPTED)
   @ApiOperation({ summary: 'E-mail a reset link (the same answer whether or not the address has an account)' })
   @ApiAcceptedResponse({ type: MessageResponseDto })
-  async requestReset(@Body() dto: PasswordResetRequestDto): Promise<MessageResponseDto> {
-    await this.auth.requestPasswordReset(dto.email);
+  requestReset(@Body() dto: PasswordResetRequestDto): MessageResponseDto {
+    this.auth.requestPasswordReset(dto.email);
     return {
       message: 'If an account uses this address, a link to set a new password is on its way. It works for 30 minutes.',
     };

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
+import { BackgroundWork } from '../common/background-work';
 import { CsrfService } from '../common/csrf/csrf.service';
 import { CrewsModule } from '../crews/crews.module';
 import { UsersModule } from '../users/users.module';
@@ -16,6 +17,7 @@ import { SessionsService } from './sessions.service';
   controllers: [AuthController],
   providers: [
     AuthService,
+    BackgroundWork,
     SessionsService,
     AccountDeletionService,
     ExpiredCredentialsCleanup,

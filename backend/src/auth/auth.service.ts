@@ -1,12 +1,14 @@
 import { EntityManager } from '@mikro-orm/mariadb';
-import { HttpStatus, Injectable, Logger } from '@nestjs/common';
+import { HttpStatus, Injectable } from '@nestjs/common';
 import { AppConfig } from '../config/app-config.service';
+import { BackgroundWork } from '../common/background-work';
 import { ApiException, ErrorCode, fieldError } from '../common/errors/api-errors';
 import { hashToken, randomToken } from '../common/tokens';
 import { MailService } from '../mail/mail.service';
 import { passwordResetMail } from '../mail/templates/password-reset.template';
 import { decoyHash, hashPassword, verifyPassword } from '../users/passwords/password-hasher';
 import { passwordProblem } from '../users/passwords/password-policy';
+import { canonicalEmail } from '../users/canonical-email';
 import { User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import { AuthToken } from './auth-token.entity';
@@ -20,27 +22,22 @@ export const WRONG_CREDENTIALS = 'E-mail or password is wrong.';
 /** Sign-in and passwords. Sign-up is a command (SignUpCommand). */
 @Injectable()
 export class AuthService {
-  private readonly logger = new Logger(AuthService.name);
-
   constructor(
     private readonly em: EntityManager,
     private readonly users: UsersService,
     private readonly sessions: SessionsService,
     private readonly mail: MailService,
     private readonly config: AppConfig,
+    private readonly background: BackgroundWork,
   ) {}
 
-  /** Check the credentials; the same answer and the same work whether or not the e-mail exists. */
+  /** Check the credentials; the same answer and the same work whether the e-mail is unknown, disabled or wrong. */
   async signIn(email: string, password: string): Promise<User> {
     const user = await this.users.findByEmail(email);
     const ok = await verifyPassword(user?.passwordHash ?? (await decoyHash()), password);
-    if (!user || !ok) throw new ApiException(HttpStatus.UNAUTHORIZED, WRONG_CREDENTIALS, ErrorCode.wrongCredentials);
-    if (user.disabled)
-      throw new ApiException(
-        HttpStatus.FORBIDDEN,
-        'This account is disabled. Ask the site admin.',
-        ErrorCode.accountDisabled,
-      );
+    // A disabled account answers like a wrong password, so the answer does not tell that the account exists.
+    if (!user || !ok || user.disabled)
+      throw new ApiException(HttpStatus.UNAUTHORIZED, WRONG_CREDENTIALS, ErrorCode.wrongCredentials);
     return user;
   }
 
@@ -64,27 +61,28 @@ export class AuthService {
   }
 
   /**
-   * E-mail a reset link if the account exists. The caller answers the same either way, and the mail is
-   * sent in the background so that the answer's timing does not tell either.
+   * E-mail a reset link if the account exists. Runs after the request has been answered (BackgroundWork), so
+   * the answer is the same and takes as long whether or not the address has an account.
    */
-  async requestPasswordReset(email: string): Promise<void> {
-    const user = await this.users.findByEmail(email);
+  requestPasswordReset(email: string): void {
+    this.background.run('password-reset request', () => this.sendResetLink(email));
+  }
+
+  private async sendResetLink(email: string): Promise<void> {
+    const em = this.em.fork();
+    const user = await em.findOne(User, { email: canonicalEmail(email) });
     if (!user || user.disabled) return;
     const token = randomToken(32);
-    this.em.create(AuthToken, {
+    em.create(AuthToken, {
       tokenHash: hashToken(token),
       purpose: 'password_reset',
       user,
       expiresAt: new Date(Date.now() + RESET_TOKEN_MINUTES * 60_000),
     });
-    await this.em.flush();
+    await em.flush();
     const link = `${this.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
     const message = passwordResetMail({ displayName: user.displayName, link, validMinutes: RESET_TOKEN_MINUTES });
-    this.mail
-      .send(user.email, message)
-      .catch((e: unknown) =>
-        this.logger.error(`password-reset e-mail failed: ${e instanceof Error ? e.message : String(e)}`),
-      );
+    await this.mail.send(user.email, message);
   }
 
   /** Use a reset token once: set the password, end every session, void the user's other reset links. */

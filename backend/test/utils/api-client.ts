@@ -78,15 +78,13 @@ export class ApiClient {
     this.sessionCookie = cookie.split(';')[0]!;
   }
 
-  /** Sign up through the API (fails the test on anything but 201). */
+  /** Sign up through the API, then sign in as a browser would (fails the test on anything but 202 then 200). */
   async signUp(email = uniqueEmail(), password = GOOD_PASSWORD, displayName = 'Test Angler'): Promise<this> {
     const res = await this.post('/api/auth/sign-up', { email, password, displayName });
-    if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
-    this.me = res.body as MeResponse;
-    this.email = email;
-    this.password = password;
-    this.captureSession(res);
-    await this.refreshCsrf();
+    if (res.status !== 202) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+    const signedIn = await this.signIn(email, password);
+    if (signedIn.status !== 200)
+      throw new Error(`sign-in after sign-up failed: ${signedIn.status} ${JSON.stringify(signedIn.body)}`);
     return this;
   }
 

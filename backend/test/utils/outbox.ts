@@ -21,15 +21,21 @@ export function readOutbox(): StoredMessage[] {
     .sort((a, b) => a.receivedAt.localeCompare(b.receivedAt));
 }
 
-export function messagesTo(address: string): StoredMessage[] {
-  return readOutbox().filter((m) => m.envelopeTo.includes(address));
+/** Messages to `address`, optionally only those whose subject matches (a new account's welcome comes first). */
+export function messagesTo(address: string, subject?: RegExp): StoredMessage[] {
+  return readOutbox().filter((m) => m.envelopeTo.includes(address) && (!subject || subject.test(m.subject)));
 }
 
 /** Wait for the `count`-th message to `address` (some mails are sent in the background). */
-export async function waitForMail(address: string, count = 1, timeoutMs = 10_000): Promise<StoredMessage> {
+export async function waitForMail(
+  address: string,
+  count = 1,
+  subject?: RegExp,
+  timeoutMs = 10_000,
+): Promise<StoredMessage> {
   const end = Date.now() + timeoutMs;
   for (;;) {
-    const found = messagesTo(address);
+    const found = messagesTo(address, subject);
     if (found.length >= count) return found[count - 1]!;
     if (Date.now() > end) throw new Error(`no e-mail #${count} to ${address} within ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 50));

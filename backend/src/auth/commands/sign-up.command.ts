@@ -1,8 +1,10 @@
 import { Command } from '@nestjs/cqrs';
-import type { User } from '../../users/user.entity';
 
-/** Create an account (the password already checked against the policy) and return it. */
-export class SignUpCommand extends Command<User> {
+/**
+ * Create an account for a free address; for a taken one, tell its owner by e-mail. The caller answers the
+ * same either way (no account enumeration), so the command returns nothing.
+ */
+export class SignUpCommand extends Command<void> {
   constructor(
     readonly email: string,
     readonly password: string,

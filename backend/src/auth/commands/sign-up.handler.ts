@@ -1,36 +1,54 @@
 import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/mariadb';
-import { HttpStatus } from '@nestjs/common';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { ApiException, ErrorCode, fieldError } from '../../common/errors/api-errors';
+import { BackgroundWork } from '../../common/background-work';
+import { fieldError } from '../../common/errors/api-errors';
+import { AppConfig } from '../../config/app-config.service';
+import { MailService } from '../../mail/mail.service';
+import { accountExistsMail, welcomeMail } from '../../mail/templates/sign-up.template';
 import { hashPassword } from '../../users/passwords/password-hasher';
 import { passwordProblem } from '../../users/passwords/password-policy';
 import { User } from '../../users/user.entity';
 import { SignUpCommand } from './sign-up.command';
 
-function emailTaken(): ApiException {
-  const message = 'An account with this e-mail address already exists. Sign in, or reset the password.';
-  return new ApiException(HttpStatus.CONFLICT, message, ErrorCode.emailTaken, { email: [message] });
-}
-
 @CommandHandler(SignUpCommand)
 export class SignUpHandler implements ICommandHandler<SignUpCommand> {
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly mail: MailService,
+    private readonly config: AppConfig,
+    private readonly background: BackgroundWork,
+  ) {}
 
-  async execute({ email, password, displayName }: SignUpCommand): Promise<User> {
+  async execute({ email, password, displayName }: SignUpCommand): Promise<void> {
     const problem = passwordProblem(password, { email });
     if (problem) throw fieldError('password', problem);
-    if (await this.em.count(User, { email })) throw emailTaken();
-    const user = this.em.create(User, { email, displayName, passwordHash: await hashPassword(password) });
+    // Hashed for a taken address too, so both answers cost the same.
+    const passwordHash = await hashPassword(password);
+    const existing = await this.em.findOne(User, { email });
+    if (existing) return this.tellOwner(existing);
+    const user = this.em.create(User, { email, displayName, passwordHash });
     try {
       await this.em.flush();
     } catch (e) {
-      // Two sign-ups racing for one address: the unique index decides.
-      if (e instanceof UniqueConstraintViolationException) {
-        this.em.clear();
-        throw emailTaken();
-      }
-      throw e;
+      // Two sign-ups racing for one address: the unique index decides, and the loser is told like any other.
+      if (!(e instanceof UniqueConstraintViolationException)) throw e;
+      this.em.clear();
+      const winner = await this.em.findOne(User, { email });
+      return winner ? this.tellOwner(winner) : undefined;
     }
-    return user;
+    const signInLink = `${this.config.appUrl}/sign-in`;
+    this.background.run('welcome e-mail', () =>
+      this.mail.send(user.email, welcomeMail({ displayName: user.displayName, signInLink })),
+    );
+  }
+
+  private tellOwner(owner: User): void {
+    const { appUrl } = this.config;
+    const message = accountExistsMail({
+      displayName: owner.displayName,
+      signInLink: `${appUrl}/sign-in`,
+      resetLink: `${appUrl}/reset-password`,
+    });
+    this.background.run('account-exists e-mail', () => this.mail.send(owner.email, message));
   }
 }

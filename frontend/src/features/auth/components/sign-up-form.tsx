@@ -1,5 +1,5 @@
 import { PASSWORD_MIN_LENGTH, type MeResponse } from '@shoalbook/shared';
-import { Button } from '@primer/react';
+import { Banner, Button } from '@primer/react';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormError } from '../../../components/form/form-error';
@@ -8,7 +8,7 @@ import { TextField } from '../../../components/form/text-field';
 import { rememberSignedIn } from '../../../lib/auth';
 import { signUp } from '../api/auth-api';
 
-/** Name, e-mail and password for a new account; the server checks them and signs the person in. */
+/** Name, e-mail and password for a new account; the server checks them, then the form signs the person in. */
 export function SignUpForm({
   onSignedUp,
   defaultEmail = '',
@@ -22,11 +22,16 @@ export function SignUpForm({
   const [password, setPassword] = useState('');
   const mutation = useMutation({
     mutationFn: signUp,
-    onSuccess: (me) => {
-      rememberSignedIn(queryClient, me);
-      onSignedUp(me);
+    onSuccess: (result) => {
+      if (!('signedIn' in result)) return;
+      rememberSignedIn(queryClient, result.signedIn);
+      onSignedUp(result.signedIn);
     },
   });
+
+  if (mutation.data && 'checkMail' in mutation.data) {
+    return <Banner variant="info" title="Check your inbox" description={mutation.data.checkMail} />;
+  }
 
   return (
     <FormStack
