@@ -63,7 +63,7 @@ try {
   const secs = ((Date.now() - started) / 1000).toFixed(1);
   log(`Shoalbook is running on http://127.0.0.1:${p.port}  (ready in ${secs} s)`);
   log(
-    `API docs: http://127.0.0.1:${p.port}/api/docs   e-mail outbox (development only): http://127.0.0.1:${p.port}/dev/outbox`,
+    `API docs: http://127.0.0.1:${p.port}/api/docs   e-mail outbox (sign in as admin@demo.test): http://127.0.0.1:${p.port}/dev/outbox`,
   );
   log('Demo accounts (password: shoalbook-demo):');
   for (const [email, what] of DEMO_ACCOUNTS) log(`  ${email.padEnd(18)} ${what}`);

@@ -55,7 +55,8 @@ export class AppModule {
         IdempotencyModule,
         ProjectionsModule,
         ReportsModule,
-        ...(raw.NODE_ENV === 'production' ? [] : [DevOutboxModule]),
+        // It holds reset and invite links: mounted only in development (npm start), and only for a site admin.
+        ...(raw.NODE_ENV === 'development' ? [DevOutboxModule] : []),
         ...(serveFrontend
           ? [
               ServeStaticModule.forRoot({

@@ -7,6 +7,7 @@ import { SESSION_COOKIE } from './auth/session-cookie';
 import { CsrfService } from './common/csrf/csrf.service';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { jsonBodyMiddleware } from './common/middleware/json-body.middleware';
+import { docsAccessMiddleware } from './common/middleware/docs-access.middleware';
 import { noStoreMiddleware } from './common/middleware/no-store.middleware';
 import { requestIdMiddleware } from './common/middleware/request-id.middleware';
 import { ApiValidationPipe } from './common/pipes/api-validation.pipe';
@@ -61,7 +62,7 @@ export function configureApp(app: INestApplication): INestApplication {
     new DocumentBuilder()
       .setTitle('Shoalbook API')
       .setDescription(
-        `The crew journal's API. Sign in to get the ${SESSION_COOKIE} cookie; fetch GET /api/auth/csrf and send its token in the ${CSRF_HEADER} header of every POST, PUT, PATCH and DELETE. Every error has the ApiError shape.`,
+        `The crew journal's API. Sign in to get the ${SESSION_COOKIE} cookie (__Host-${SESSION_COOKIE} over HTTPS); fetch GET /api/auth/csrf and send its token in the ${CSRF_HEADER} header of every POST, PUT, PATCH and DELETE. Every error has the ApiError shape.`,
       )
       .setVersion('0.1.0')
       .addCookieAuth(SESSION_COOKIE)
@@ -69,6 +70,7 @@ export function configureApp(app: INestApplication): INestApplication {
       .build(),
     { operationIdFactory: (controller, method) => `${controller.replace(/Controller$/, '')}_${method}` },
   );
+  app.use([`/${API_PREFIX}/docs`, `/${API_PREFIX}/docs-json`], docsAccessMiddleware(app));
   SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, {
     jsonDocumentUrl: `${API_PREFIX}/docs-json`,
     raw: ['json'],

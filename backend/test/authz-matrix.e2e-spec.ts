@@ -9,7 +9,16 @@ import { Crew } from '../src/crews/crew.entity';
 import { Invite } from '../src/crews/invite.entity';
 import { User } from '../src/users/user.entity';
 import { addMember, crewWithMembers, type CrewFixture, makeAdmin, newUser } from './utils/api-client';
-import { ACTORS, type Actor, expectationFor, OVERRIDES, OWNER_ONLY, type Outcome } from './utils/authz-expectations';
+import {
+  ACTORS,
+  type Actor,
+  expectationFor,
+  OVERRIDES,
+  OWNER_ONLY,
+  type Outcome,
+  type Profile,
+  PROFILE_ROWS,
+} from './utils/authz-expectations';
 import { createTestApp, testEm } from './utils/test-app';
 
 interface Operation {
@@ -36,13 +45,38 @@ const SAMPLE_BODIES: Record<string, () => object> = {
   'PATCH /api/admin/users/{userId}': () => ({ disabled: false }),
 };
 
-function classify(res: Response): Outcome {
+/**
+ * Every route the server answers, from Nest's router (Express's route table), as "METHOD /api/path" with
+ * {param} like the OpenAPI document. Swagger UI's own files under /api/docs/ count as GET /api/docs.
+ */
+function routerRoutes(app: INestApplication): string[] {
+  const stack = (app.getHttpAdapter().getInstance() as { router: { stack: RouteLayer[] } }).router.stack;
+  const keys = stack.flatMap((layer) => {
+    // Nest mounts its middleware (MikroORM's request context) as route layers for every method at /api and
+    // /api/{*all}: middleware, not endpoints. An endpoint names its methods.
+    if (!layer.route || Object.keys(layer.route.methods).length > 5) return [];
+    const path = String(layer.route.path)
+      .replace(/:(\w+)/g, '{$1}')
+      .replace(/^\/api\/docs\/.*$/, '/api/docs');
+    return Object.keys(layer.route.methods)
+      .filter((m) => ['get', 'post', 'put', 'patch', 'delete'].includes(m))
+      .map((m) => `${m.toUpperCase()} ${path}`);
+  });
+  return [...new Set(keys)];
+}
+interface RouteLayer {
+  route?: { path: unknown; methods: Record<string, boolean> };
+}
+
+function classify(res: Response): Outcome | 'absent' {
   const body = res.body as { code?: string; message?: string };
   if (res.status >= 500) throw new Error(`server error ${res.status}: ${JSON.stringify(body)}`);
   if (res.status === 401 && body.code === 'unauthenticated') return 'anon';
   if (res.status === 403 && body.code === 'csrf_invalid') throw new Error('the matrix sent a bad CSRF token');
   if (res.status === 403 && body.code === 'forbidden') return 'forbidden';
   if (res.status === 404 && body.message === 'No such crew.') return 'hidden';
+  // Nest's answer for a path no route matches ("Cannot GET /api/…"): the route is not mounted.
+  if (res.status === 404 && /^Cannot [A-Z]+ \//.test(body.message ?? '')) return 'absent';
   return 'passed';
 }
 
@@ -142,9 +176,21 @@ describe('authorisation matrix from the OpenAPI document', () => {
     for (const row of [...Object.keys(OVERRIDES), ...OWNER_ONLY]) expect(keys, `stale row ${row}`).toContain(row);
   });
 
-  it('gives every route × actor the expected answer', async () => {
+  it("has a row for every route in Nest's router too (a route missing from the document still needs one)", () => {
+    const documented = new Set(operations.map((o) => o.key));
+    const routes = routerRoutes(app);
+    expect(routes).toEqual(expect.arrayContaining(['GET /api/health', 'GET /api/docs', 'GET /api/docs-json']));
+    const missing = routes.filter((key) => !documented.has(key) && !PROFILE_ROWS[key]);
+    expect(missing, 'routes without a matrix row (add them to test/utils/authz-expectations.ts)').toEqual([]);
+  });
+
+  // Every route × six actors, each with a fresh session: minutes on a loaded shared machine, not a speed target.
+  it('gives every route × actor the expected answer', { timeout: 300_000 }, async () => {
     const failures: string[] = [];
-    for (const op of operations) {
+    const profileOps = Object.keys(PROFILE_ROWS)
+      .filter((key) => PROFILE_ROWS[key]!.test !== 'absent')
+      .map((key) => ({ key, method: 'get', path: key.split(' ')[1]! }));
+    for (const op of [...operations, ...profileOps]) {
       const expected = expectationFor(op.key);
       if (!expected) {
         failures.push(`${op.key}: no expectation row (add it to test/utils/authz-expectations.ts)`);
@@ -176,6 +222,35 @@ describe('authorisation matrix from the OpenAPI document', () => {
       }
     }
     expect(failures).toEqual([]);
-    // Every route × six actors, each with a fresh session: minutes on a loaded shared machine, not a speed target.
-  }, 180_000);
+  });
+
+  // The rows whose audience depends on the profile, in each profile: the development mail page only for a
+  // site admin in development, the docs for anyone in development and test but only a site admin in
+  // production (OWASP ASVS 4.0.3 4.1.1 and 14.3.2).
+  it.each(['development', 'test', 'production'] as Profile[])(
+    'answers the dev mail page and the docs as their rows say in the %s profile',
+    async (profile) => {
+      const other = profile === 'test' ? app : await createTestApp({ NODE_ENV: profile });
+      const failures: string[] = [];
+      try {
+        for (const [key, rows] of Object.entries(PROFILE_ROWS)) {
+          const expected = rows[profile];
+          for (const actor of ACTORS) {
+            const { cookie } = await credentials(actor);
+            const res = await request(other.getHttpServer()).get(key.split(' ')[1]!).set('Cookie', cookie);
+            const got = classify(res);
+            const want = expected === 'absent' ? 'absent' : expected[actor];
+            if (got !== want) failures.push(`${key} as ${actor}: expected ${want}, got ${got} (${res.status})`);
+          }
+        }
+        const mounted = routerRoutes(other);
+        for (const [key, rows] of Object.entries(PROFILE_ROWS))
+          if ((rows[profile] !== 'absent') !== mounted.includes(key))
+            failures.push(`${key}: mounted=${mounted.includes(key)} in ${profile}`);
+      } finally {
+        if (other !== app) await other.close();
+      }
+      expect(failures).toEqual([]);
+    },
+  );
 });

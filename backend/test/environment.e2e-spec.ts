@@ -7,33 +7,52 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AppModule } from '../src/app.module';
 import { APP_OPTIONS, configureApp } from '../src/configure-app';
-import { ApiClient, newUser, uniqueEmail } from './utils/api-client';
+import { ApiClient, makeAdmin, newUser, uniqueEmail } from './utils/api-client';
 import { createTestApp } from './utils/test-app';
 
 describe('the development outbox', () => {
   let app: INestApplication;
   beforeAll(async () => {
-    app = await createTestApp();
+    app = await createTestApp({ NODE_ENV: 'development' });
   });
   afterAll(async () => {
     await app.close();
   });
 
-  it('lists the fake SMTP server’s messages, newest first', async () => {
+  it('lists the fake SMTP server’s messages, newest first, to a signed-in site admin', async () => {
+    const admin = await newUser(app, 'admin');
+    await makeAdmin(app, admin.userId);
     const user = await newUser(app);
     await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
     await new ApiClient(app).post('/api/auth/password-reset/request', { email: user.email });
     let mine: Array<{ to: string; subject: string; receivedAt: string; text: string }> = [];
-    for (let i = 0; i < 100 && mine.length < 2; i++) {
-      const res = await request(app.getHttpServer()).get('/api/dev/outbox');
+    const resets = () => mine.filter((m) => /new Shoalbook password/.test(m.subject)).length;
+    for (let i = 0; i < 100 && resets() < 2; i++) {
+      const res = await admin.get('/api/dev/outbox');
       expect(res.status).toBe(200);
       mine = res.body.filter((m: { to: string }) => m.to.includes(user.email));
-      if (mine.length < 2) await new Promise((r) => setTimeout(r, 50));
+      if (resets() < 2) await new Promise((r) => setTimeout(r, 50));
     }
-    expect(mine).toHaveLength(2);
+    expect(mine.filter((m) => /new Shoalbook password/.test(m.subject))).toHaveLength(2);
+    mine = mine.filter((m) => /new Shoalbook password/.test(m.subject));
     expect(mine[0]!.subject).toBe('Set a new Shoalbook password');
     expect(mine[0]!.receivedAt >= mine[1]!.receivedAt).toBe(true);
     expect(mine[0]!.text).toContain('/reset-password?token=');
+  });
+});
+
+describe('the development outbox outside development', () => {
+  it('is refused to anyone but a signed-in site admin, and not mounted in the test profile', async () => {
+    const dev = await createTestApp({ NODE_ENV: 'development' });
+    const test = await createTestApp();
+    try {
+      expect((await request(dev.getHttpServer()).get('/api/dev/outbox')).status).toBe(401);
+      expect((await (await newUser(dev)).get('/api/dev/outbox')).status).toBe(403);
+      expect((await request(test.getHttpServer()).get('/api/dev/outbox')).status).toBe(404);
+    } finally {
+      await dev.close();
+      await test.close();
+    }
   });
 });
 

@@ -98,6 +98,9 @@ describe('photos and exports', () => {
       weight: { value: 2, unit: 'lb-oz', ounces: 8 },
       fate: 'weighed',
       lure: '=cmd|" /C calc"!A0',
+      // Past the plain lead characters: leading spaces before =, and a full-width ＋ (OWASP CSV Injection).
+      technique: '  =1+1',
+      notes: '＋HYPERLINK("http://evil.test")',
     });
     expectOk(c, 201);
 
@@ -122,7 +125,8 @@ describe('photos and exports', () => {
     expect(rows[0]).toMatchObject({ record_type: 'notice' });
     expect(rows[0]!.notes).toMatch(/exact positions/);
     const cells = rows.flatMap((r) => Object.values(r));
-    for (const cell of cells) expect(cell).not.toMatch(/^[=+@\t\r]/);
+    // OWASP "CSV Injection": no cell may start (after whitespace) with a formula sign, ASCII or full-width.
+    for (const cell of cells) expect(cell).not.toMatch(/^(?:[\t\r]|\s*[=+@\uFF1D\uFF0B\uFF0D\uFF20])/u);
     for (const cell of cells) if (cell.startsWith('-')) expect(cell).toMatch(/^-\d+(\.\d+)?(e-?\d+)?$/); // negative numbers only
     expect(rows.find((r) => r.record_type === 'lake' && r.id === lake.id)!.name).toBe(
       `'=HYPERLINK("http://evil.test","lake")`,
@@ -135,6 +139,8 @@ describe('photos and exports', () => {
     });
     expect(rows.find((r) => r.record_type === 'catch')).toMatchObject({
       lure: `'=cmd|" /C calc"!A0`,
+      technique: "'  =1+1",
+      notes: `'＋HYPERLINK("http://evil.test")`,
       weight_entered: '2 lb 8 oz',
     });
   });

@@ -3,7 +3,6 @@ import { Reflector } from '@nestjs/core';
 import type { Request } from 'express';
 import { IS_PUBLIC_KEY } from '../common/decorators/public.decorator';
 import { ApiException, ErrorCode } from '../common/errors/api-errors';
-import { SESSION_COOKIE } from './session-cookie';
 import { SessionsService } from './sessions.service';
 
 /** Global guard: loads the session from the cookie; refuses anonymous callers unless the route is @Public(). */
@@ -17,7 +16,7 @@ export class SessionGuard implements CanActivate {
   async canActivate(context: ExecutionContext): Promise<boolean> {
     if (context.getType() !== 'http') return true;
     const req = context.switchToHttp().getRequest<Request>();
-    const token = req.cookies?.[SESSION_COOKIE] as string | undefined;
+    const token = req.cookies?.[this.sessions.cookieName] as string | undefined;
     const session = token ? await this.sessions.resolve(token) : null;
     if (session) {
       req.authSession = session;

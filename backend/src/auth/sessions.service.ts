@@ -5,7 +5,7 @@ import { AppConfig } from '../config/app-config.service';
 import { hashToken, randomToken } from '../common/tokens';
 import type { User } from '../users/user.entity';
 import { Session } from './session.entity';
-import { SESSION_COOKIE } from './session-cookie';
+import { cookieName, SESSION_COOKIE } from './session-cookie';
 
 /** Touch `lastSeenAt` at most this often, so reads do not write on every request. */
 const TOUCH_EVERY_MS = 60_000;
@@ -73,15 +73,20 @@ export class SessionsService {
     );
   }
 
+  /** `__Host-sb_session` over HTTPS, `sb_session` on loopback HTTP. */
+  get cookieName(): string {
+    return cookieName(SESSION_COOKIE, this.config.secureCookies);
+  }
+
   private cookieOptions(): CookieOptions {
     return { httpOnly: true, sameSite: 'lax', secure: this.config.secureCookies, path: '/' };
   }
 
   setCookie(res: Response, token: string): void {
-    res.cookie(SESSION_COOKIE, token, { ...this.cookieOptions(), maxAge: this.absoluteMs });
+    res.cookie(this.cookieName, token, { ...this.cookieOptions(), maxAge: this.absoluteMs });
   }
 
   clearCookie(res: Response): void {
-    res.clearCookie(SESSION_COOKIE, this.cookieOptions());
+    res.clearCookie(this.cookieName, this.cookieOptions());
   }
 }

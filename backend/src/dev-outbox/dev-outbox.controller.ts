@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { Controller, Get } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiProperty, ApiTags } from '@nestjs/swagger';
 import type { OutboxMessage } from '@shoalbook/shared';
-import { Public } from '../common/decorators/public.decorator';
+import { SiteAdminOnly } from '../common/guards/site-admin.guard';
 import { AppConfig } from '../config/app-config.service';
 
 export class OutboxMessageDto implements OutboxMessage {
@@ -16,15 +16,21 @@ export class OutboxMessageDto implements OutboxMessage {
   @ApiProperty() html: string;
 }
 
-/** Development only: the messages the local fake SMTP server received. Not registered in production. */
+/**
+ * Development only: the messages the local fake SMTP server received. They carry password-reset and invite
+ * links, so only a signed-in site admin reads them (OWASP ASVS 4.0.3 4.1.1 / 14.3.2: no secrets or debug
+ * features open to anyone); mounted in the development profile alone.
+ */
 @ApiTags('dev')
+@SiteAdminOnly()
 @Controller('dev/outbox')
 export class DevOutboxController {
   constructor(private readonly config: AppConfig) {}
 
-  @Public()
   @Get()
-  @ApiOperation({ summary: 'E-mails caught by the local fake SMTP server, newest first (development only)' })
+  @ApiOperation({
+    summary: 'E-mails caught by the local fake SMTP server, newest first (development only; site admins)',
+  })
   @ApiOkResponse({ type: [OutboxMessageDto] })
   async list(): Promise<OutboxMessage[]> {
     const dir = this.config.get('MAIL_OUTBOX_DIR');

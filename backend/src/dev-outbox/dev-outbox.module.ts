@@ -1,6 +1,6 @@
 import { Module } from '@nestjs/common';
 import { DevOutboxController } from './dev-outbox.controller';
 
-/** Registered only outside production (see AppModule). */
+/** Registered only in the development profile (see AppModule). */
 @Module({ controllers: [DevOutboxController] })
 export class DevOutboxModule {}

@@ -1,24 +1,28 @@
+import Papa from 'papaparse';
+
 /**
- * OWASP CSV injection: a cell a spreadsheet would read as a formula (starting with =, +, -, @, a tab or
- * a carriage return) is prefixed with a single quote, so it shows as text. Applied to every text cell;
- * numbers are written as numbers (a negative number is data, not a formula).
+ * Cells a spreadsheet would read as a formula (OWASP "CSV Injection"): a leading =, +, -, @, tab or carriage
+ * return, and also those four signs after leading whitespace (spreadsheets skip it) or in their full-width
+ * forms ＝ ＋ － ＠ (U+FF1D, U+FF0B, U+FF0D, U+FF20), which some spreadsheets normalise to the ASCII ones.
  */
-export function neutraliseCell(value: string): string {
-  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-}
+export const FORMULA_LEAD = /^(?:[\t\r]|\s*[=+\-@\uFF1D\uFF0B\uFF0D\uFF20])/u;
 
-function quote(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
-
-/** One CSV cell (RFC 4180 quoting) from any value. */
-export function csvCell(value: unknown): string {
+/** What papaparse writes for a value: numbers stay numbers (a negative number is data, not a formula). */
+function cellValue(value: unknown): string | number | boolean {
   if (value === null || value === undefined) return '';
-  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-  if (typeof value === 'boolean') return value ? 'true' : 'false';
-  return quote(neutraliseCell(typeof value === 'string' ? value : JSON.stringify(value)));
+  if (typeof value === 'number') return Number.isFinite(value) ? value : '';
+  if (typeof value === 'boolean' || typeof value === 'string') return value;
+  return JSON.stringify(value);
 }
 
-export function csvLine(values: unknown[]): string {
-  return values.map(csvCell).join(',');
+/**
+ * A whole CSV document (RFC 4180: CRLF line ends, quoting by papaparse's unparse), with every text cell that
+ * matches FORMULA_LEAD prefixed by a single quote (papaparse's escapeFormulae) so it shows as text.
+ */
+export function toCsv(columns: readonly string[], rows: unknown[][]): string {
+  const csv = Papa.unparse(
+    { fields: [...columns], data: rows.map((r) => r.map(cellValue)) },
+    { escapeFormulae: FORMULA_LEAD, newline: '\r\n' },
+  );
+  return `${csv}\r\n`;
 }

@@ -15,7 +15,7 @@ import { lakeView } from '../lakes/lake-view';
 import { WeighIn } from '../weigh-ins/weigh-in.entity';
 import { officialOf } from '../weigh-ins/weigh-ins.service';
 import { recordNotFound } from '../journal/journal-errors';
-import { csvLine } from './csv';
+import { toCsv } from './csv';
 import { findsToGpx } from './gpx-export';
 
 export const EXPORT_NOTICE =
@@ -135,8 +135,8 @@ export class JournalExportService {
 
   async csv(access: CrewAccess): Promise<string> {
     const j = await this.json(access);
-    const lines = [CSV_COLUMNS.join(',')];
-    const row = (values: Partial<Record<Column, unknown>>) => lines.push(csvLine(CSV_COLUMNS.map((c) => values[c])));
+    const rows: unknown[][] = [];
+    const row = (values: Partial<Record<Column, unknown>>) => rows.push(CSV_COLUMNS.map((c) => values[c]));
     row({ record_type: 'notice', notes: j.notice });
     for (const l of j.lakes)
       row({
@@ -188,7 +188,7 @@ export class JournalExportService {
     }
     for (const f of j.finds) row(findRow(f));
     for (const c of j.catches) row(catchRow(c));
-    return lines.join('\r\n') + '\r\n';
+    return toCsv(CSV_COLUMNS, rows);
   }
 }
 

@@ -5,7 +5,9 @@
  * - Routes under /api/crews/{crewId}/… need no row: the crew default applies (members read, owners
  *   and anglers write, viewers 403, everyone else 404, anonymous 401). Add a row to OWNER_ONLY or
  *   OVERRIDES only where a crew route differs.
- * - Every other route needs a row in OVERRIDES; the test fails for a route without one.
+ * - Every other route needs a row in OVERRIDES, or in PROFILE_ROWS when who may call it depends on the
+ *   profile; the test fails for a route without one. Routes are taken from the OpenAPI document and from
+ *   Nest's router (Express's route table), so a route left out of the document needs a row too.
  */
 export const ACTORS = ['anonymous', 'nonMember', 'viewer', 'angler', 'owner', 'admin'] as const;
 export type Actor = (typeof ACTORS)[number];
@@ -76,15 +78,29 @@ export const OVERRIDES: Record<string, Expectation> = {
   'GET /api/admin/users': adminOnly,
   'PATCH /api/admin/users/{userId}': adminOnly,
   'POST /api/admin/projections/rebuild': adminOnly,
-  'GET /api/dev/outbox': everyone,
   // Journal exports carry positions: owners and anglers only, even though they are GETs.
   'GET /api/crews/{crewId}/export.json': crewWrite,
   'GET /api/crews/{crewId}/export.csv': crewWrite,
   'GET /api/crews/{crewId}/lakes/{lakeId}/finds.gpx': crewWrite,
 };
 
-/** The expectation for a route, or undefined when it needs a row. */
+export type Profile = 'development' | 'test' | 'production';
+
+/**
+ * Routes whose audience depends on the profile (NODE_ENV); 'absent' = not mounted, 404 for everyone.
+ * The development mail page holds reset and invite links: development only, site admins only. The API docs:
+ * open in development and test, site admins only in production (OWASP ASVS 4.0.3 14.3.2).
+ */
+export const PROFILE_ROWS: Record<string, Record<Profile, Expectation | 'absent'>> = {
+  'GET /api/dev/outbox': { development: adminOnly, test: 'absent', production: 'absent' },
+  'GET /api/docs': { development: everyone, test: everyone, production: adminOnly },
+  'GET /api/docs-json': { development: everyone, test: everyone, production: adminOnly },
+};
+
+/** The expectation for a route in the test profile, or undefined when it needs a row. */
 export function expectationFor(key: string): Expectation | undefined {
+  const byProfile = PROFILE_ROWS[key]?.test;
+  if (byProfile) return byProfile === 'absent' ? undefined : byProfile;
   if (OVERRIDES[key]) return OVERRIDES[key];
   const [method, path] = key.split(' ') as [string, string];
   if (!path.startsWith('/api/crews/{crewId}')) return undefined;

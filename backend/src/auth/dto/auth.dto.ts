@@ -9,6 +9,7 @@ import {
   type SignUpRequest,
 } from '@shoalbook/shared';
 import { NormaliseEmail, Trim } from '../../common/dto/common-transforms';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const EMAIL_MAX = 254;
 const emailRules = [
@@ -32,6 +33,7 @@ export class SignUpDto implements SignUpRequest {
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH }) @NewPassword() password: string;
   @ApiProperty({ maxLength: 80 })
   @Trim()
+  @NoControlCharacters()
   @IsString({ message: 'Enter a name.' })
   @IsNotEmpty({ message: 'Enter a name.' })
   @MaxLength(80, { message: 'Use at most 80 characters.' })

@@ -25,6 +25,7 @@ import { ListPageDto } from '../../journal/list-query.dto';
 import { CLIENT_ID } from '../../common/dto/client-id';
 import { IsOmittable } from '../../common/dto/omittable';
 import { InRange, RANGES } from '../../measurements/ranges';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -85,8 +86,18 @@ export class LogCatchDto implements LogCatchRequest {
   @ValidateNested()
   @Type(() => EnteredWeightDto)
   weight?: EnteredWeightDto;
-  @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) lure?: string;
-  @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @IsString() @MaxLength(120) technique?: string;
+  @ApiPropertyOptional({ maxLength: 120 })
+  @IsOptional()
+  @IsString()
+  @NoControlCharacters()
+  @MaxLength(120)
+  lure?: string;
+  @ApiPropertyOptional({ maxLength: 120 })
+  @IsOptional()
+  @IsString()
+  @NoControlCharacters()
+  @MaxLength(120)
+  technique?: string;
   @ApiPropertyOptional({
     nullable: true,
     description: 'feet',
@@ -118,7 +129,12 @@ export class LogCatchDto implements LogCatchRequest {
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
   @ApiProperty({ enum: FATES }) @IsIn([...FATES]) fate: Fate;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOptional()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() photoId?: string | null;
 }
 

@@ -2,7 +2,7 @@ import { ForbiddenException } from '@nestjs/common';
 import { doubleCsrf } from 'csrf-csrf';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { CSRF_HEADER } from '@shoalbook/shared';
-import { SESSION_COOKIE } from '../../auth/session-cookie';
+import { cookieName, SESSION_COOKIE } from '../../auth/session-cookie';
 import { ErrorCode } from '../errors/api-errors';
 import { sendApiError } from '../filters/api-exception.filter';
 
@@ -23,8 +23,9 @@ export interface CsrfProtection {
 export function createCsrfProtection(secret: string, secureCookies: boolean): CsrfProtection {
   const { generateCsrfToken, validateRequest } = doubleCsrf({
     getSecret: () => secret,
-    getSessionIdentifier: (req) => (req.cookies?.[SESSION_COOKIE] as string | undefined) ?? '',
-    cookieName: CSRF_COOKIE,
+    getSessionIdentifier: (req) =>
+      (req.cookies?.[cookieName(SESSION_COOKIE, secureCookies)] as string | undefined) ?? '',
+    cookieName: cookieName(CSRF_COOKIE, secureCookies),
     cookieOptions: { sameSite: 'lax', secure: secureCookies, httpOnly: true, path: '/' },
     size: 32,
     getCsrfTokenFromRequest: (req) => req.headers[CSRF_HEADER] as string | undefined,

@@ -14,12 +14,14 @@ import {
 } from '@shoalbook/shared';
 import { NormaliseEmail, Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const roleMessage = { message: `The role is one of ${CREW_ROLES.join(', ')}.` };
 const nameRules = (target: object, key: string | symbol) =>
   [
     Trim(),
     IsString({ message: 'Enter a name.' }),
+    NoControlCharacters(),
     IsNotEmpty({ message: 'Enter a name.' }),
     MaxLength(80, { message: 'Use at most 80 characters.' }),
   ].forEach((d) => d(target, key));
@@ -39,6 +41,7 @@ export class UpdateCrewDto implements UpdateCrewRequest {
 export class DeleteCrewDto {
   @ApiProperty({ maxLength: 80, description: 'The crew’s name, typed again to confirm the deletion.' })
   @Trim()
+  @NoControlCharacters()
   @IsString({ message: 'Type the crew’s name to confirm.' })
   @IsNotEmpty({ message: 'Type the crew’s name to confirm.' })
   @MaxLength(80, { message: 'Use at most 80 characters.' })

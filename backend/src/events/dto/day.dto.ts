@@ -5,11 +5,17 @@ import { IsInt, IsObject, IsOptional, IsString, Matches, MaxLength, Min, Validat
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
 import { IsOmittable } from '../../common/dto/omittable';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 export class UpdatePracticeDayDto implements UpdatePracticeDayRequest {
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOmittable()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
   @ApiPropertyOptional({
     nullable: true,
     description: '°F',
@@ -37,7 +43,12 @@ export class UpdateCompetitionDayDto implements UpdateCompetitionDayRequest {
   @IsOptional()
   @Matches(HHMM, { message: 'Write the time as HH:MM (24-hour).' })
   checkInTime?: string | null;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) weatherNotes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOmittable()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  weatherNotes?: string;
   @ApiPropertyOptional({
     nullable: true,
     description: '°F',

@@ -29,6 +29,7 @@ import {
 import { Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
 import { FieldContextDto } from './field-context.dto';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -80,8 +81,20 @@ export class EventRulesDto implements Partial<EventRules> {
 
 export class CreateEventDto implements CreateEventRequest {
   @ApiProperty({ format: 'uuid' }) @IsUUID() lakeId: string;
-  @ApiProperty({ maxLength: 160 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(160) name: string;
-  @ApiPropertyOptional({ maxLength: 160 }) @IsOmittable() @Trim() @IsString() @MaxLength(160) organiser?: string;
+  @ApiProperty({ maxLength: 160 })
+  @Trim()
+  @IsString()
+  @NoControlCharacters()
+  @IsNotEmpty()
+  @MaxLength(160)
+  name: string;
+  @ApiPropertyOptional({ maxLength: 160 })
+  @IsOmittable()
+  @Trim()
+  @IsString()
+  @NoControlCharacters()
+  @MaxLength(160)
+  organiser?: string;
   @ApiPropertyOptional({ type: [String], example: ['2024-04-10', '2024-04-11'] })
   @IsOmittable()
   @IsArray()
@@ -110,7 +123,12 @@ export class CreateEventDto implements CreateEventRequest {
   @ValidateNested()
   @Type(() => FieldContextDto)
   field?: FieldContextDto;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOmittable()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */

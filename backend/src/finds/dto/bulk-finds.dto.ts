@@ -12,6 +12,7 @@ import {
   MaxLength,
   ValidateIf,
 } from 'class-validator';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 /** Enough for the largest lake's imported waypoints in one go (a GPX import takes up to 50,000). */
 export const BULK_FINDS_MAX = 50_000;
@@ -32,6 +33,7 @@ export class BulkUpdateFindsDto extends BulkFindsDto {
   @ApiPropertyOptional({ description: "a sub-kind of `kind` ('' for none); only with kind" })
   @IsOptional()
   @IsString()
+  @NoControlCharacters()
   @MaxLength(40)
   subKind?: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true, description: 'the event on the same lake, or null for none' })

@@ -32,6 +32,7 @@ import { Trim } from '../../common/dto/common-transforms';
 import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
 import { ListPageDto } from '../../journal/list-query.dto';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const finite = { allowNaN: false, allowInfinity: false };
 const INSTANT = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/;
@@ -45,7 +46,13 @@ export class AddFindDto implements AddFindRequest {
   @IsOptional()
   @Matches(DATE, { message: 'Write the date as YYYY-MM-DD.' })
   practiceDate?: string | null;
-  @ApiProperty({ maxLength: 120 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(120) name: string;
+  @ApiProperty({ maxLength: 120 })
+  @Trim()
+  @IsString()
+  @NoControlCharacters()
+  @IsNotEmpty()
+  @MaxLength(120)
+  name: string;
   @ApiPropertyOptional({ nullable: true, description: 'ISO-8601 instant with a zone' })
   @IsOptional()
   @Matches(INSTANT, { message: 'Give an ISO-8601 date-time with a zone, e.g. 2024-04-12T14:03:00Z.' })
@@ -71,6 +78,7 @@ export class AddFindDto implements AddFindRequest {
   @ApiPropertyOptional({ description: 'one of the sub-kinds of the kind (FIND_SUB_KINDS), or empty' })
   @IsOptional()
   @IsString()
+  @NoControlCharacters()
   @MaxLength(40)
   subKind?: string;
   @ApiPropertyOptional({ nullable: true, minimum: 1, maximum: 5 })
@@ -116,7 +124,12 @@ export class AddFindDto implements AddFindRequest {
   @ValidateNested()
   @Type(() => EnteredTemperatureDto)
   waterTemp?: EnteredTemperatureDto | null;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOptional()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() photoId?: string | null;
 }
 

@@ -14,6 +14,7 @@ import {
   type ValidatorConstraintInterface,
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -28,8 +29,20 @@ export class IanaZoneConstraint implements ValidatorConstraintInterface {
 }
 
 export class CreateLakeDto implements CreateLakeRequest {
-  @ApiProperty({ maxLength: 120 }) @Trim() @IsString() @IsNotEmpty() @MaxLength(120) name: string;
-  @ApiPropertyOptional({ maxLength: 120 }) @IsOptional() @Trim() @IsString() @MaxLength(120) region?: string;
+  @ApiProperty({ maxLength: 120 })
+  @Trim()
+  @IsString()
+  @NoControlCharacters()
+  @IsNotEmpty()
+  @MaxLength(120)
+  name: string;
+  @ApiPropertyOptional({ maxLength: 120 })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @NoControlCharacters()
+  @MaxLength(120)
+  region?: string;
   @ApiProperty({ example: 'America/Chicago' }) @IsString() @Validate(IanaZoneConstraint) timeZone: string;
   @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
   @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
@@ -39,7 +52,12 @@ export class CreateLakeDto implements CreateLakeRequest {
   @Min(0)
   @Max(10_000_000)
   areaAcres?: number | null;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOptional() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOptional()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
 }
 
 /** Fields left out stay as they are; a null is checked, so a required field cannot be nulled (nullable ones say so themselves). */

@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs
 import type { LogStopRequest } from '@shoalbook/shared';
 import { IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
 import { CLIENT_ID } from '../../common/dto/client-id';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 import { IsOmittable } from '../../common/dto/omittable';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
@@ -50,14 +51,21 @@ export class LogStopDto implements LogStopRequest {
   @ApiPropertyOptional({ maxLength: 120, description: 'default lure of the catches logged in the stop' })
   @IsOmittable()
   @IsString()
+  @NoControlCharacters()
   @MaxLength(120)
   lure?: string;
   @ApiPropertyOptional({ maxLength: 120, description: 'default technique of the catches logged in the stop' })
   @IsOmittable()
   @IsString()
+  @NoControlCharacters()
   @MaxLength(120)
   technique?: string;
-  @ApiPropertyOptional({ maxLength: 5000 }) @IsOmittable() @IsString() @MaxLength(5000) notes?: string;
+  @ApiPropertyOptional({ maxLength: 5000 })
+  @IsOmittable()
+  @IsString()
+  @NoControlCharacters({ multiline: true })
+  @MaxLength(5000)
+  notes?: string;
 }
 
 /** Fields left out stay as they are. */

@@ -4,6 +4,7 @@ import { IsIn, IsNotEmpty, IsObject, IsString, MaxLength, ValidateNested } from 
 import { DEPTH_UNITS, LENGTH_UNITS, TEMPERATURE_UNITS, type UnitPreferences, WEIGHT_UNITS } from '@shoalbook/shared';
 import { Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
+import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 /** Any subset of the unit preferences; the rest stay as they are. */
 export class UpdateUnitsDto implements Partial<UnitPreferences> {
@@ -32,6 +33,7 @@ export class UpdateMeDto {
   @ApiPropertyOptional({ maxLength: 80 })
   @IsOmittable()
   @Trim()
+  @NoControlCharacters()
   @IsString({ message: 'Enter a name.' })
   @IsNotEmpty({ message: 'Enter a name.' })
   @MaxLength(80, { message: 'Use at most 80 characters.' })

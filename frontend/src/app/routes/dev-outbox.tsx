@@ -1,4 +1,4 @@
-import { Banner, Button, Text } from '@primer/react';
+import { Banner, Button, Link, Text } from '@primer/react';
 import { SyncIcon } from '@primer/octicons-react';
 import { useQuery } from '@tanstack/react-query';
 import { Link as RouterLink } from 'react-router-dom';
@@ -41,6 +41,20 @@ export function Component() {
               variant="info"
               title="No outbox here"
               description="The outbox exists only while Shoalbook runs in development mode. In production, mail goes to real inboxes."
+            />
+          ) : isApiError(outbox.error, 401) || isApiError(outbox.error, 403) ? (
+            <Banner
+              variant="warning"
+              title="Only the site admin reads the outbox"
+              description={
+                <>
+                  The messages hold password-reset and invite links, so they are shown to a signed-in site admin only.
+                  In the demo, sign in as admin@demo.test.{' '}
+                  <Link as={RouterLink} to={paths.signIn.href(paths.devOutbox.href())} inline>
+                    Sign in as the site admin
+                  </Link>
+                </>
+              }
             />
           ) : (
             <ErrorState
