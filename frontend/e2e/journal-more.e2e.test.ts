@@ -2,10 +2,17 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { largeGpx, sampleFilePath } from '@shoalbook/fixtures';
-import { CSRF_HEADER } from '@shoalbook/shared';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
-import { openBrowser, screenshot, seriousAxeViolations, signIn, signOut, type Browser } from './support/browser';
+import {
+  openBrowser,
+  screenshot,
+  seriousAxeViolations,
+  signIn,
+  signOut,
+  type Browser,
+  apiCall,
+} from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
 
 // Invented for this test. The lake sits at the point the fixtures' sample files assume (fixtures/README.md):
@@ -17,18 +24,6 @@ const DESK = { width: 1280, height: 900 };
 
 async function expectNoSeriousAxe(page: Page, screen: string) {
   expect(await seriousAxeViolations(page), `axe on ${screen}`).toEqual([]);
-}
-
-/** The JSON API through the browser's own session (cookie and CSRF token), for setting the scene quickly. */
-async function apiCall<T>(page: Page, method: 'GET' | 'POST' | 'PATCH', path: string, data?: unknown): Promise<T> {
-  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
-  const response = await page.request.fetch(`/api${path}`, {
-    method,
-    data,
-    headers: { [CSRF_HEADER]: csrf.csrfToken },
-  });
-  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
-  return (await response.json()) as T;
 }
 
 describe('the journal, more: CSV import, catch editing, deletes, practice notes, a large GPX file, the viewer', () => {

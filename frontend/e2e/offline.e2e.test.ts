@@ -1,25 +1,12 @@
-import { CSRF_HEADER } from '@shoalbook/shared';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
-import { openBrowser, screenshot, signIn, type Browser } from './support/browser';
+import { openBrowser, screenshot, signIn, type Browser, apiCall } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
 
 // Invented for this test: a lake and an event with one competition day from 06:30 to 15:00 (America/Chicago).
 const LAKE = 'Cattail Narrows (offline test)';
 const EVENT = 'Cattail Offline Test Open';
 const PHONE = { width: 390, height: 844 };
-
-/** The JSON API through the browser's own session (cookie and CSRF token), for setting the scene and checking it. */
-async function apiCall<T>(page: Page, method: 'GET' | 'POST' | 'PATCH', path: string, data?: unknown): Promise<T> {
-  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
-  const response = await page.request.fetch(`/api${path}`, {
-    method,
-    data,
-    headers: { [CSRF_HEADER]: csrf.csrfToken },
-  });
-  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
-  return (await response.json()) as T;
-}
 
 /** Fill the catch form by its labels and log it; without signal the form says "waiting to send" for it. */
 async function logCatchOffline(page: Page, c: { time: string; weight: string; length: string }) {

@@ -1,7 +1,6 @@
-import { CSRF_HEADER } from '@shoalbook/shared';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
-import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser } from './support/browser';
+import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser, apiCall } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
 
 // Invented for this test: one competition day on 2025-06-14 from 06:30 to 15:00 (America/Chicago), two finds.
@@ -12,17 +11,6 @@ const SHELL = 'Shell hump north';
 const GRASS = 'Grass line south';
 const PHONE = { width: 390, height: 844 };
 const DESK = { width: 1280, height: 900 };
-
-async function apiCall<T>(page: Page, method: 'GET' | 'POST' | 'PATCH', path: string, data?: unknown): Promise<T> {
-  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
-  const response = await page.request.fetch(`/api${path}`, {
-    method,
-    data,
-    headers: { [CSRF_HEADER]: csrf.csrfToken },
-  });
-  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
-  return (await response.json()) as T;
-}
 
 describe('stops on a competition day: arrive, catch, leave, the timeline and the live bag', () => {
   let browser: Browser;

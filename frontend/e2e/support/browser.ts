@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { CSRF_HEADER } from '@shoalbook/shared';
 import { BASE_URL } from './stack';
 
 const HERE = dirname(fileURLToPath(import.meta.url));
@@ -103,4 +104,21 @@ export async function seriousAxeViolations(page: Page): Promise<string[]> {
 export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENSHOTS, { recursive: true });
   await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage: true });
+}
+
+/** The JSON API through the browser's own session (cookie and CSRF token), for setting the scene and checking it. */
+export async function apiCall<T>(
+  page: Page,
+  method: 'GET' | 'POST' | 'PATCH',
+  path: string,
+  data?: unknown,
+): Promise<T> {
+  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
+  const response = await page.request.fetch(`/api${path}`, {
+    method,
+    data,
+    headers: { [CSRF_HEADER]: csrf.csrfToken },
+  });
+  if (!response.ok()) throw new Error(`${method} ${path} → ${response.status()}: ${await response.text()}`);
+  return (await response.json()) as T;
 }
