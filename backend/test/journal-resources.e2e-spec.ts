@@ -169,6 +169,51 @@ describe('journal resources: CRUD, validation, versions and the journal_event ro
       expect((created.payload.competitionDays as unknown[]).length).toBe(2);
     });
 
+    it('keeps the launch ramp of an event (both coordinates), clears it with null and refuses half or out-of-range ones, writing nothing', async () => {
+      const lake = await createLake(crew.angler, crew.crewId);
+      const event = await createEvent(crew.angler, crew.crewId, lake.id);
+      expect(event.ramp).toBeNull();
+      const set = await crew.angler.patch(`${base}/events/${event.id}`, {
+        ramp: { lat: 33.2104, lon: -96.0987 },
+        version: event.version,
+      });
+      expectOk(set);
+      expect(set.body.ramp).toEqual({ lat: 33.2104, lon: -96.0987 });
+      expect((await crew.viewer.get(`${base}/events/${event.id}`)).body.ramp).toEqual({ lat: 33.2104, lon: -96.0987 });
+
+      const before = await journalCount(app, crew.crewId);
+      expectFieldError(
+        await crew.angler.patch(`${base}/events/${event.id}`, { ramp: { lat: 33.2 }, version: set.body.version }),
+        'ramp.lon',
+      );
+      expectFieldError(
+        await crew.angler.patch(`${base}/events/${event.id}`, {
+          ramp: { lat: 95, lon: -96.1 },
+          version: set.body.version,
+        }),
+        'ramp.lat',
+        /within -90 to 90/,
+      );
+      expectFieldError(
+        await crew.angler.patch(`${base}/events/${event.id}`, { ramp: 'the north ramp', version: set.body.version }),
+        'ramp',
+      );
+      expect(await journalCount(app, crew.crewId)).toBe(before);
+      expect((await crew.viewer.get(`${base}/events/${event.id}`)).body.ramp).toEqual({ lat: 33.2104, lon: -96.0987 });
+
+      const cleared = await crew.angler.patch(`${base}/events/${event.id}`, { ramp: null, version: set.body.version });
+      expectOk(cleared);
+      expect(cleared.body.ramp).toBeNull();
+      const created = await crew.angler.post(`${base}/events`, {
+        lakeId: lake.id,
+        name: 'With a ramp',
+        competitionDates: ['2024-05-02'],
+        ramp: { lat: 33.2, lon: -96.1 },
+      });
+      expectOk(created, 201);
+      expect(created.body.ramp).toEqual({ lat: 33.2, lon: -96.1 });
+    });
+
     it('refuses impossible dates, a date both practice and competition, and another crew’s lake', async () => {
       const lake = await createLake(crew.angler, crew.crewId);
       expectFieldError(

@@ -58,6 +58,12 @@ export interface FieldContext {
   cutLb: number | null;
 }
 
+/** Where the boats launch and check in (WGS 84 decimal degrees): the end point of the run back. */
+export interface RampPosition {
+  lat: number;
+  lon: number;
+}
+
 export interface EventView {
   id: string;
   lakeId: string;
@@ -72,6 +78,8 @@ export interface EventView {
   finalPlace: number | null;
   /** The event's field (results sheet); optional so fixtures can build views without it. */
   field?: FieldContext;
+  /** The launch and check-in ramp, if the angler gave it (null: not given); optional so fixtures can omit it. */
+  ramp?: RampPosition | null;
   notes: string;
   /** Always set by the API. */
   version?: number;
@@ -247,6 +255,8 @@ export interface CreateEventRequest {
   payout?: number | null;
   finalPlace?: number | null;
   field?: Partial<FieldContext>;
+  /** Both coordinates together; null clears it. */
+  ramp?: RampPosition | null;
   notes?: string;
 }
 /** lakeId cannot change. Dropping a date with finds or catches on it gets 409 "day_in_use". */

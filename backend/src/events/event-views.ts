@@ -24,6 +24,7 @@ export function eventView(e: TournamentEvent): EventView {
     payout: e.payout,
     finalPlace: e.finalPlace,
     field: { fieldSize: e.fieldSize, winningLb: e.winningLb, cutLb: e.cutLb },
+    ramp: e.rampLat !== null && e.rampLon !== null ? { lat: e.rampLat, lon: e.rampLon } : null,
     notes: e.notes,
     version: e.version,
   };

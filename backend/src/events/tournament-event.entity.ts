@@ -25,6 +25,8 @@ export class TournamentEvent {
     | 'fieldSize'
     | 'winningLb'
     | 'cutLb'
+    | 'rampLat'
+    | 'rampLon'
     | 'notes'
     | 'version'
     | 'createdAt'
@@ -89,6 +91,13 @@ export class TournamentEvent {
 
   @Property({ type: 'double', nullable: true })
   cutLb: number | null = null;
+
+  /** The launch and check-in ramp (WGS 84): both set or both null, so the run back has an end point. */
+  @Property({ type: 'double', nullable: true })
+  rampLat: number | null = null;
+
+  @Property({ type: 'double', nullable: true })
+  rampLon: number | null = null;
 
   @Property({ type: 'text' })
   notes: string = '';

@@ -84,6 +84,8 @@ export class JournalDemoSeeder extends Seeder {
           fieldSize: e.field?.fieldSize ?? null,
           winningLb: e.field?.winningLb ?? null,
           cutLb: e.field?.cutLb ?? null,
+          rampLat: e.ramp?.lat ?? null,
+          rampLon: e.ramp?.lon ?? null,
           notes: e.notes,
         }),
       );

@@ -53,6 +53,12 @@ function applyField(event: TournamentEvent, input: CreateEventDto | UpdateEventD
   if (f.cutLb !== undefined) event.cutLb = f.cutLb;
 }
 
+function applyRamp(event: TournamentEvent, input: CreateEventDto | UpdateEventDto): void {
+  if (input.ramp === undefined) return;
+  event.rampLat = input.ramp?.lat ?? null;
+  event.rampLon = input.ramp?.lon ?? null;
+}
+
 /** The event's state with its days, as its journal events carry it. */
 export async function eventState(tx: EntityManager, event: TournamentEvent): Promise<Record<string, unknown>> {
   const practiceDays = await tx.find(PracticeDay, { eventId: event.id }, { orderBy: { date: 'asc' } });
@@ -89,6 +95,7 @@ export class CreateEventHandler implements ICommandHandler<CreateEventCommand> {
       });
       applyRules(event, input);
       applyField(event, input);
+      applyRamp(event, input);
       // Foreign keys are plain columns, so the ORM cannot order the inserts: the event goes first.
       await tx.flush();
       for (const date of practice) tx.create(PracticeDay, { crewId: access.crewId, eventId: event.id, date });
@@ -142,6 +149,7 @@ export class UpdateEventHandler implements ICommandHandler<UpdateEventCommand> {
       event.competitionDates = competition;
       applyRules(event, input);
       applyField(event, input);
+      applyRamp(event, input);
       // A change to the days alone still bumps the event's version, so the journal sees one new state.
       event.updatedAt = new Date();
       await tx.flush();

@@ -1,6 +1,14 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { EVENT_FORMATS, type CompetitionDayView, type EventFormat, type EventRules, type EventView, type PracticeDayView } from '@shoalbook/shared';
+import {
+  EVENT_FORMATS,
+  type CompetitionDayView,
+  type EventFormat,
+  type EventRules,
+  type EventView,
+  type PracticeDayView,
+} from '@shoalbook/shared';
 import { FieldContextViewDto } from './field-context.dto';
+import { RampPositionViewDto } from './ramp-position.dto';
 import { EnteredTemperatureDto } from '../../measurements/entered-value.dto';
 
 /** The rules as stored (every field set; defaults are common practice). */
@@ -26,6 +34,8 @@ export class EventViewDto implements EventView {
   @ApiProperty({ type: Number, nullable: true }) payout: number | null;
   @ApiProperty({ type: Number, nullable: true }) finalPlace: number | null;
   @ApiProperty({ type: FieldContextViewDto }) field: FieldContextViewDto;
+  @ApiProperty({ type: RampPositionViewDto, nullable: true, description: 'the launch and check-in ramp' })
+  ramp: RampPositionViewDto | null;
   @ApiProperty() notes: string;
   @ApiProperty() version: number;
 }

@@ -29,6 +29,7 @@ import {
 import { Trim } from '../../common/dto/common-transforms';
 import { IsOmittable } from '../../common/dto/omittable';
 import { FieldContextDto } from './field-context.dto';
+import { RampPositionDto } from './ramp-position.dto';
 import { NoControlCharacters } from '../../common/dto/no-control-characters';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -123,6 +124,16 @@ export class CreateEventDto implements CreateEventRequest {
   @ValidateNested()
   @Type(() => FieldContextDto)
   field?: FieldContextDto;
+  @ApiPropertyOptional({
+    type: RampPositionDto,
+    nullable: true,
+    description: 'the launch and check-in ramp (both coordinates); null clears it',
+  })
+  @IsOptional()
+  @IsObject({ message: 'The ramp is an object with lat and lon, or null.' })
+  @ValidateNested()
+  @Type(() => RampPositionDto)
+  ramp?: RampPositionDto | null;
   @ApiPropertyOptional({ maxLength: 5000 })
   @IsOmittable()
   @IsString()

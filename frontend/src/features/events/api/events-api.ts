@@ -1,4 +1,4 @@
-import type { EventRules, EventTally, FieldContext, EventView } from '@shoalbook/shared';
+import type { EventRules, EventTally, FieldContext, EventView, RampPosition } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
@@ -18,6 +18,8 @@ export interface EventInput {
   payout: number | null;
   finalPlace: number | null;
   field: FieldContext;
+  /** The launch and check-in ramp; null clears it. */
+  ramp: RampPosition | null;
   notes: string;
 }
 

@@ -45,6 +45,8 @@ interface EventFormValues {
   fieldSize: string;
   winningWeight: string;
   cutWeight: string;
+  rampLat: string;
+  rampLon: string;
   notes: string;
 }
 
@@ -77,6 +79,8 @@ export function initialEventValues(
     fieldSize: event?.field?.fieldSize != null ? String(event.field.fieldSize) : '',
     winningWeight: weightInputValue(event?.field?.winningLb ?? null, prefs.weight),
     cutWeight: weightInputValue(event?.field?.cutLb ?? null, prefs.weight),
+    rampLat: event?.ramp ? String(event.ramp.lat) : '',
+    rampLon: event?.ramp ? String(event.ramp.lon) : '',
     notes: event?.notes ?? '',
   };
 }
@@ -124,6 +128,7 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
   };
   const winningLb = bagWeight(v.winningWeight, 'field.winningLb', 'Winning weight');
   const cutLb = bagWeight(v.cutWeight, 'field.cutLb', 'Cut weight');
+  const ramp = readRamp(v, errors);
   const allDates = [...v.practiceDates, ...v.competitionDates];
   if (allDates.some((d) => !/^\d{4}-\d{2}-\d{2}$/.test(d))) errors.competitionDates = 'Every day needs a full date.';
   if (new Set(allDates).size !== allDates.length) errors.competitionDates = 'A date appears twice.';
@@ -145,12 +150,25 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
         format: v.format,
       },
       field: { fieldSize, winningLb, cutLb },
+      ramp,
       entryFee,
       payout,
       finalPlace: place,
       notes: v.notes.trim(),
     },
   };
+}
+
+/** The ramp's two coordinates, both or neither (null clears it); a problem goes into `errors`. */
+function readRamp(v: EventFormValues, errors: Errors): { lat: number; lon: number } | null {
+  if (!v.rampLat.trim() && !v.rampLon.trim()) return null;
+  const lat = readNumber(v.rampLat);
+  const lon = readNumber(v.rampLon);
+  if (lat === null || lat < -90 || lat > 90)
+    errors['ramp.lat'] = 'Latitude in decimal degrees, -90 to 90 (both or neither).';
+  if (lon === null || lon < -180 || lon > 180)
+    errors['ramp.lon'] = 'Longitude in decimal degrees, -180 to 180 (both or neither).';
+  return lat !== null && lon !== null ? { lat, lon } : null;
 }
 
 export function EventForm({
@@ -307,6 +325,17 @@ export function EventForm({
             caption="The weight that made the cut or the money."
             {...field('cutWeight', 'field.cutLb')}
           />
+        </div>
+      </fieldset>
+      <fieldset className={styles.fieldset}>
+        <legend className={styles.legend}>Launch and check-in ramp</legend>
+        <p className={styles.caption}>
+          On competition days the check-in clock works out from here when to start back. Decimal degrees, as the
+          chartplotter or the phone shows them.
+        </p>
+        <div className={styles.pair}>
+          <TextField label="Ramp latitude" inputMode="decimal" autoComplete="off" {...field('rampLat', 'ramp.lat')} />
+          <TextField label="Ramp longitude" inputMode="decimal" autoComplete="off" {...field('rampLon', 'ramp.lon')} />
         </div>
       </fieldset>
       <FormControl>

@@ -34,6 +34,8 @@ export function EventSummary({
           <dd>{event.competitionDates.map(dayLabel).join(', ') || '—'}</dd>
           <dt>Organiser</dt>
           <dd>{event.organiser || '—'}</dd>
+          <dt>Launch ramp</dt>
+          <dd>{event.ramp ? `${event.ramp.lat.toFixed(5)}, ${event.ramp.lon.toFixed(5)}` : 'Not given'}</dd>
         </dl>
       </section>
       <section aria-labelledby="event-rules">
