@@ -11,8 +11,7 @@ import {
 } from '@shoalbook/shared';
 import { IsIn, IsNumber, Max, Min, ValidateIf } from 'class-validator';
 import { EnteredNumber } from './ranges';
-
-const finite = { allowNaN: false, allowInfinity: false };
+import { FINITE } from '../common/dto/finite-number';
 
 /** A weight as typed: `{value: 1.42, unit: 'kg'}` or `{value: 3, unit: 'lb-oz', ounces: 4}`. */
 export class EnteredWeightDto {
@@ -27,7 +26,7 @@ export class EnteredWeightDto {
 
   @ApiPropertyOptional({ description: "Ounces, only with unit 'lb-oz' (0 ≤ oz < 16)" })
   @ValidateIf((o: EnteredWeightDto) => o.unit === 'lb-oz' || o.ounces !== undefined)
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(0)
   @Max(15.999999)
   ounces?: number;

@@ -11,6 +11,7 @@ import {
   parseLength,
   parseTemperature,
   parseWeight,
+  readCoordinate,
   weightInputValue,
   lengthInputValue,
   temperatureInputValue,
@@ -157,5 +158,20 @@ describe('lengths, depths and temperatures', () => {
   it('refuses a negative length but takes a water temperature below zero', () => {
     expect(parseLength('-3', 'in').ok).toBe(false);
     expect(parseTemperature('-1', 'C').ok).toBe(true);
+  });
+});
+
+// EPSG:4326 (WGS 84) axis ranges, from memory of the EPSG registry entry: latitude −90…90, longitude −180…180.
+describe('coordinates', () => {
+  it('reads decimal degrees up to the bounds and refuses past them or anything not a number', () => {
+    expect(readCoordinate('34.512', 'lat', 'en-US')).toBe(34.512);
+    expect(readCoordinate('-90', 'lat', 'en-US')).toBe(-90);
+    expect(readCoordinate('180', 'lon', 'en-US')).toBe(180);
+    expect(readCoordinate('90.0001', 'lat', 'en-US')).toBeNull();
+    expect(readCoordinate('-180.5', 'lon', 'en-US')).toBeNull();
+    expect(readCoordinate('120', 'lat', 'en-US')).toBeNull();
+    expect(readCoordinate('120', 'lon', 'en-US')).toBe(120);
+    expect(readCoordinate('north', 'lat', 'en-US')).toBeNull();
+    expect(readCoordinate('-86,204', 'lon', 'de-DE')).toBe(-86.204);
   });
 });

@@ -130,6 +130,12 @@ export function readNumber(text: string, locale: string = userLocale()): number 
   return read.ok ? read.value : null;
 }
 
+/** A latitude or longitude typed in WGS 84 decimal degrees; null when it is not a number or lies outside ±90 / ±180. */
+export function readCoordinate(text: string, axis: 'lat' | 'lon', locale: string = userLocale()): number | null {
+  const degrees = readNumber(text, locale);
+  return degrees !== null && Math.abs(degrees) <= (axis === 'lat' ? 90 : 180) ? degrees : null;
+}
+
 const WEIGHT_WORDS: Record<WeightUnit, string> = { lb: 'pounds', 'lb-oz': 'pounds and ounces', kg: 'kilograms' };
 
 /** "18.5 or 18 lb 8 oz": how to write the weight the user probably meant, in the locale's own signs. */

@@ -26,8 +26,7 @@ import { CLIENT_ID } from '../../common/dto/client-id';
 import { IsOmittable } from '../../common/dto/omittable';
 import { InRange, RANGES } from '../../measurements/ranges';
 import { NoControlCharacters } from '../../common/dto/no-control-characters';
-
-const finite = { allowNaN: false, allowInfinity: false };
+import { FINITE } from '../../common/dto/finite-number';
 
 export class LogCatchDto implements LogCatchRequest {
   @ApiPropertyOptional(CLIENT_ID) @IsOptional() @IsUUID('7') id?: string;
@@ -40,19 +39,19 @@ export class LogCatchDto implements LogCatchRequest {
   @ApiPropertyOptional({ format: 'uuid', nullable: true }) @IsOptional() @IsUUID() findId?: string | null;
   @ApiPropertyOptional({ nullable: true, minimum: -90, maximum: 90 })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(-90)
   @Max(90)
   lat?: number | null;
   @ApiPropertyOptional({ nullable: true, minimum: -180, maximum: 180 })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(-180)
   @Max(180)
   lon?: number | null;
   @ApiPropertyOptional({ default: 50, description: 'attribution radius, m' })
   @IsOmittable()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(1)
   @Max(1000)
   radiusM?: number;

@@ -31,8 +31,7 @@ import { IsOmittable } from '../../common/dto/omittable';
 import { FieldContextDto } from './field-context.dto';
 import { RampPositionDto } from './ramp-position.dto';
 import { NoControlCharacters } from '../../common/dto/no-control-characters';
-
-const finite = { allowNaN: false, allowInfinity: false };
+import { FINITE } from '../../common/dto/finite-number';
 
 @ValidatorConstraint({ name: 'calendarDates' })
 export class CalendarDatesConstraint implements ValidatorConstraintInterface {
@@ -58,15 +57,15 @@ export class EventRulesDto implements Partial<EventRules> {
   fishPerDay?: number;
   @ApiPropertyOptional({ default: 12, nullable: true, description: 'inches; null = no minimum' })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(0)
   @Max(30)
   minLengthIn?: number | null;
-  @ApiPropertyOptional({ default: 0.25 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) deadFishPenaltyLb?: number;
-  @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(finite) @Min(0) @Max(20) shortFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 0.25 }) @IsOmittable() @IsNumber(FINITE) @Min(0) @Max(20) deadFishPenaltyLb?: number;
+  @ApiPropertyOptional({ default: 1 }) @IsOmittable() @IsNumber(FINITE) @Min(0) @Max(20) shortFishPenaltyLb?: number;
   @ApiPropertyOptional({ default: 1 })
   @IsOmittable()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(0)
   @Max(20)
   latePenaltyLbPerMinute?: number;
@@ -113,9 +112,9 @@ export class CreateEventDto implements CreateEventRequest {
   @ValidateNested()
   @Type(() => EventRulesDto)
   rules?: EventRulesDto;
-  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(10_000_000) entryFee?:
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(FINITE) @Min(0) @Max(10_000_000) entryFee?:
     number | null;
-  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(finite) @Min(0) @Max(100_000_000) payout?:
+  @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsNumber(FINITE) @Min(0) @Max(100_000_000) payout?:
     number | null;
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @IsInt() @Min(1) @Max(10_000) finalPlace?: number | null;
   @ApiPropertyOptional({ type: FieldContextDto, description: 'the field from the results sheet' })

@@ -33,8 +33,8 @@ import { EnteredDepthDto, EnteredTemperatureDto } from '../../measurements/enter
 import { InRange, RANGES } from '../../measurements/ranges';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { NoControlCharacters } from '../../common/dto/no-control-characters';
+import { FINITE } from '../../common/dto/finite-number';
 
-const finite = { allowNaN: false, allowInfinity: false };
 const INSTANT = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/;
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
@@ -57,8 +57,8 @@ export class AddFindDto implements AddFindRequest {
   @IsOptional()
   @Matches(INSTANT, { message: 'Give an ISO-8601 date-time with a zone, e.g. 2024-04-12T14:03:00Z.' })
   markedAt?: string | null;
-  @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
-  @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
+  @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(FINITE) @Min(-90) @Max(90) lat: number;
+  @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(FINITE) @Min(-180) @Max(180) lon: number;
   @ApiPropertyOptional({
     nullable: true,
     description: 'feet',
@@ -101,7 +101,7 @@ export class AddFindDto implements AddFindRequest {
     description: 'Sonar frequency in kHz: a lower one gives a wider cone, a higher one a narrower cone',
   })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(FREQUENCY_KHZ.min)
   @Max(FREQUENCY_KHZ.max)
   frequencyKhz?: number | null;

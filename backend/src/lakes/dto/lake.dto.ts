@@ -15,8 +15,7 @@ import {
 } from 'class-validator';
 import { Trim } from '../../common/dto/common-transforms';
 import { NoControlCharacters } from '../../common/dto/no-control-characters';
-
-const finite = { allowNaN: false, allowInfinity: false };
+import { FINITE } from '../../common/dto/finite-number';
 
 @ValidatorConstraint({ name: 'ianaZone' })
 export class IanaZoneConstraint implements ValidatorConstraintInterface {
@@ -44,11 +43,11 @@ export class CreateLakeDto implements CreateLakeRequest {
   @MaxLength(120)
   region?: string;
   @ApiProperty({ example: 'America/Chicago' }) @IsString() @Validate(IanaZoneConstraint) timeZone: string;
-  @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(finite) @Min(-90) @Max(90) lat: number;
-  @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(finite) @Min(-180) @Max(180) lon: number;
+  @ApiProperty({ minimum: -90, maximum: 90 }) @IsNumber(FINITE) @Min(-90) @Max(90) lat: number;
+  @ApiProperty({ minimum: -180, maximum: 180 }) @IsNumber(FINITE) @Min(-180) @Max(180) lon: number;
   @ApiPropertyOptional({ nullable: true, minimum: 0 })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(0)
   @Max(10_000_000)
   areaAcres?: number | null;

@@ -6,8 +6,8 @@ import { NoControlCharacters } from '../../common/dto/no-control-characters';
 import { IsOmittable } from '../../common/dto/omittable';
 import { ListPageDto } from '../../journal/list-query.dto';
 import { InRange, RANGES } from '../../measurements/ranges';
+import { FINITE } from '../../common/dto/finite-number';
 
-const finite = { allowNaN: false, allowInfinity: false };
 const TIME = {
   description: '"HH:MM" lake-local on the competition day, or an ISO-8601 instant with a zone',
   example: '07:15',
@@ -22,13 +22,13 @@ export class LogStopDto implements LogStopRequest {
   findId?: string | null;
   @ApiPropertyOptional({ nullable: true, minimum: -90, maximum: 90 })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(-90)
   @Max(90)
   lat?: number | null;
   @ApiPropertyOptional({ nullable: true, minimum: -180, maximum: 180 })
   @IsOptional()
-  @IsNumber(finite)
+  @IsNumber(FINITE)
   @Min(-180)
   @Max(180)
   lon?: number | null;

@@ -27,7 +27,7 @@ import {
   parseOptional,
   parseTemperature,
   parseWeight,
-  readNumber,
+  readCoordinate,
   UNIT_SIGNS,
   weightHint,
 } from '../../../lib/units';
@@ -206,10 +206,10 @@ export function CatchEntryForm({
     if (!temp.ok) found.waterTemp = temp.error;
     let where: Pick<CatchInput, 'findId' | 'lat' | 'lon'> = {};
     if (byCoordinates) {
-      const lat = readNumber(values.lat);
-      const lon = readNumber(values.lon);
-      if (lat === null || lat < -90 || lat > 90) found.lat = 'Latitude in decimal degrees, -90 to 90.';
-      if (lon === null || lon < -180 || lon > 180) found.lon = 'Longitude in decimal degrees, -180 to 180.';
+      const lat = readCoordinate(values.lat, 'lat');
+      const lon = readCoordinate(values.lon, 'lon');
+      if (lat === null) found.lat = 'Latitude in decimal degrees, -90 to 90.';
+      if (lon === null) found.lon = 'Longitude in decimal degrees, -180 to 180.';
       if (lat !== null && lon !== null) where = { lat, lon };
     } else if (values.find.trim()) {
       const match = matchFind(values.find, finds, prefs);

@@ -18,6 +18,7 @@ import {
   lengthInputValue,
   parseLength,
   parseWeight,
+  readCoordinate,
   readNumber,
   UNIT_SIGNS,
   weightHint,
@@ -162,12 +163,10 @@ export function validateEvent(v: EventFormValues, prefs: UnitPreferences): { inp
 /** The ramp's two coordinates, both or neither (null clears it); a problem goes into `errors`. */
 function readRamp(v: EventFormValues, errors: Errors): { lat: number; lon: number } | null {
   if (!v.rampLat.trim() && !v.rampLon.trim()) return null;
-  const lat = readNumber(v.rampLat);
-  const lon = readNumber(v.rampLon);
-  if (lat === null || lat < -90 || lat > 90)
-    errors['ramp.lat'] = 'Latitude in decimal degrees, -90 to 90 (both or neither).';
-  if (lon === null || lon < -180 || lon > 180)
-    errors['ramp.lon'] = 'Longitude in decimal degrees, -180 to 180 (both or neither).';
+  const lat = readCoordinate(v.rampLat, 'lat');
+  const lon = readCoordinate(v.rampLon, 'lon');
+  if (lat === null) errors['ramp.lat'] = 'Latitude in decimal degrees, -90 to 90 (both or neither).';
+  if (lon === null) errors['ramp.lon'] = 'Longitude in decimal degrees, -180 to 180 (both or neither).';
   return lat !== null && lon !== null ? { lat, lon } : null;
 }
 

@@ -28,6 +28,7 @@ import {
   parseDepth,
   parseOptional,
   parseTemperature,
+  readCoordinate,
   readNumber,
   temperatureInputValue,
   UNIT_SIGNS,
@@ -98,10 +99,10 @@ export function validateFind(
   const errors: Record<string, string> = {};
   if (!v.lakeId) errors.lakeId = 'Choose the lake.';
   if (!v.name.trim()) errors.name = 'Give the find a name you will recognise on the water.';
-  const lat = readNumber(v.lat);
-  const lon = readNumber(v.lon);
-  if (lat === null || lat < -90 || lat > 90) errors.lat = 'Latitude in decimal degrees, -90 to 90.';
-  if (lon === null || lon < -180 || lon > 180) errors.lon = 'Longitude in decimal degrees, -180 to 180.';
+  const lat = readCoordinate(v.lat, 'lat');
+  const lon = readCoordinate(v.lon, 'lon');
+  if (lat === null) errors.lat = 'Latitude in decimal degrees, -90 to 90.';
+  if (lon === null) errors.lon = 'Longitude in decimal degrees, -180 to 180.';
   const depth = parseOptional(v.depth, (t) => parseDepth(t, prefs.depth));
   if (!depth.ok) errors.depth = depth.error;
   const temp = parseOptional(v.waterTemp, (t) => parseTemperature(t, prefs.temperature));

@@ -5,7 +5,7 @@ import { FormError } from '../../../components/form/form-error';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
 import { browserTimeZone } from '../../../lib/lake-time';
-import { readNumber } from '../../../lib/units';
+import { readCoordinate, readNumber } from '../../../lib/units';
 import { useSaveLake, type LakeInput } from '../api/lakes-api';
 import { TimeZoneSelect } from './time-zone-select';
 
@@ -15,11 +15,10 @@ type Errors = Partial<Record<keyof LakeInput, string>>;
 export function validateLake(values: Record<keyof LakeInput, string>): { input?: LakeInput; errors: Errors } {
   const errors: Errors = {};
   if (!values.name.trim()) errors.name = 'Give the lake a name.';
-  const lat = readNumber(values.lat);
-  const lon = readNumber(values.lon);
-  if (lat === null || lat < -90 || lat > 90) errors.lat = 'Latitude is a decimal number from -90 to 90, e.g. 34.512.';
-  if (lon === null || lon < -180 || lon > 180)
-    errors.lon = 'Longitude is a decimal number from -180 to 180, e.g. -86.204.';
+  const lat = readCoordinate(values.lat, 'lat');
+  const lon = readCoordinate(values.lon, 'lon');
+  if (lat === null) errors.lat = 'Latitude is a decimal number from -90 to 90, e.g. 34.512.';
+  if (lon === null) errors.lon = 'Longitude is a decimal number from -180 to 180, e.g. -86.204.';
   const area = values.areaAcres.trim() ? readNumber(values.areaAcres) : null;
   if (values.areaAcres.trim() && (area === null || area <= 0))
     errors.areaAcres = 'Area is a positive number of acres, or leave it empty.';

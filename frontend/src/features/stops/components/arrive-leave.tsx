@@ -6,7 +6,7 @@ import { FormError } from '../../../components/form/form-error';
 import { MovingOnCaution } from '../../../components/cautions/journal-cautions';
 import { ApiRequestError } from '../../../lib/api-client';
 import { isClockTime } from '../../../lib/lake-time';
-import { readNumber } from '../../../lib/units';
+import { readCoordinate } from '../../../lib/units';
 import { useLogStop, useUpdateStop } from '../api/stops-api';
 import { NO_FIND, STOP_SERVER_FIELDS, stopPlace } from './stop-fields';
 import styles from './stops.module.css';
@@ -96,12 +96,12 @@ export function ArriveLeave({
     const found: Record<string, string> = {};
     if (!isClockTime(time)) found.arrivedAt = 'A 24-hour time on the lake clock, like 07:15.';
     if (!find) found.find = 'Pick the find you stopped at, or "No find" and give the position.';
-    const latN = readNumber(lat);
-    const lonN = readNumber(lon);
+    const latN = readCoordinate(lat, 'lat');
+    const lonN = readCoordinate(lon, 'lon');
     const hasPos = find === NO_FIND;
     if (hasPos) {
-      if (latN === null || latN < -90 || latN > 90) found.lat = 'Latitude in decimal degrees, -90 to 90.';
-      if (lonN === null || lonN < -180 || lonN > 180) found.lon = 'Longitude in decimal degrees, -180 to 180.';
+      if (latN === null) found.lat = 'Latitude in decimal degrees, -90 to 90.';
+      if (lonN === null) found.lon = 'Longitude in decimal degrees, -180 to 180.';
     }
     setErrors(found);
     if (Object.keys(found).length) return;
