@@ -14,6 +14,7 @@ const SUITES = [
   { name: 'analytics', unit: true, dir: 'analytics', args: [] },
   { name: 'fixtures', unit: true, dir: 'fixtures', args: [] },
   { name: 'backend unit', unit: true, dir: 'backend', args: ['--config', 'vitest.unit.config.mts'] },
+  { name: 'backend layers', dir: 'backend', args: ['--config', 'vitest.layers.config.mts'] },
   { name: 'backend database', dir: 'backend', args: [] },
   { name: 'frontend components', dir: 'frontend', args: [] },
   { name: 'browser', dir: 'frontend', args: ['--config', 'vitest.e2e.config.ts'] },
@@ -21,9 +22,7 @@ const SUITES = [
 
 // `npm test -- unit` runs the unit suites; other words select suites by the start of their names.
 const only = process.argv.slice(2);
-const selected = SUITES.filter(
-  (s) => !only.length || only.some((o) => (o === 'unit' ? s.unit : s.name.startsWith(o))),
-);
+const selected = SUITES.filter((s) => !only.length || only.some((o) => (o === 'unit' ? s.unit : s.name.startsWith(o))));
 const started = Date.now();
 ensureNpmPackages();
 if (selected.some((s) => s.name === 'browser')) ensureSystemPackages({ chromium: true });

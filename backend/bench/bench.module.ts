@@ -3,7 +3,7 @@
 // report routes, so the comparison is side by side through the same HTTP stack.
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Controller, Get, HttpCode, Module, Param, Post, Query } from '@nestjs/common';
-import { CrewRoute } from '../src/common/decorators/crew.decorators';
+import { CrewRoute } from '../src/crews/access/crew.decorators';
 import { groupRates, ranks } from '../src/reports/rates';
 import { compareProportions } from '@shoalbook/analytics';
 

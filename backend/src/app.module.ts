@@ -17,7 +17,15 @@ import { buildOrmConfig } from './database/mikro-orm.config';
 import { DevOutboxModule } from './dev-outbox/dev-outbox.module';
 import { HealthModule } from './health/health.module';
 import { IdempotencyModule } from './idempotency/idempotency.module';
-import { JournalModule } from './journal/journal.module';
+import { LakesModule } from './lakes/lakes.module';
+import { EventsModule } from './events/events.module';
+import { FindsModule } from './finds/finds.module';
+import { CatchesModule } from './catches/catches.module';
+import { StopsModule } from './stops/stops.module';
+import { WeighInsModule } from './weigh-ins/weigh-ins.module';
+import { PhotosModule } from './photos/photos.module';
+import { SkyModule } from './sky/sky.module';
+import { ExportsModule } from './exports/exports.module';
 import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
 import { ProjectionsModule } from './projections/projections.module';
@@ -51,7 +59,15 @@ export class AppModule {
         AuthModule,
         CrewsModule,
         AdminModule,
-        JournalModule,
+        LakesModule,
+        EventsModule,
+        FindsModule,
+        CatchesModule,
+        StopsModule,
+        WeighInsModule,
+        PhotosModule,
+        SkyModule,
+        ExportsModule,
         IdempotencyModule,
         ProjectionsModule,
         ReportsModule,

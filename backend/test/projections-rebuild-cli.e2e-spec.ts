@@ -42,7 +42,7 @@ describe('npm run projections:rebuild', () => {
     expect(before.rm_catch_fact).toHaveLength(1);
 
     // The CLI reads DB_* from the environment (vitest's test env points at the test database).
-    const cli = spawnSync(process.execPath, [join(__dirname, '..', 'dist', 'projections', 'rebuild.js')], {
+    const cli = spawnSync(process.execPath, [join(__dirname, '..', 'dist', 'database', 'rebuild-read-models.js')], {
       env: process.env,
       encoding: 'utf8',
       timeout: 60_000,

@@ -12,7 +12,7 @@ import {
 } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { AdminUserView } from '@shoalbook/shared';
-import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { CurrentUser } from '../auth/current-user.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
 import { SiteAdminOnly } from '../common/guards/site-admin.guard';
 import type { User } from '../users/user.entity';

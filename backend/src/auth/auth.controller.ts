@@ -1,9 +1,8 @@
-import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, Req, Res } from '@nestjs/common';
 import { CommandBus } from '@nestjs/cqrs';
 import {
   ApiAcceptedResponse,
   ApiBadRequestResponse,
-  ApiConflictResponse,
   ApiCookieAuth,
   ApiNoContentResponse,
   ApiOkResponse,
@@ -14,7 +13,7 @@ import {
 import type { Request, Response } from 'express';
 import type { MeResponse } from '@shoalbook/shared';
 import { CsrfService } from '../common/csrf/csrf.service';
-import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { CurrentUser } from './current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
 import { AuthThrottle } from '../common/throttling/auth-throttling';
@@ -22,13 +21,11 @@ import { MeResponseDto } from '../users/dto/user-view.dto';
 import { UpdateMeDto } from '../users/dto/update-me.dto';
 import type { User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
-import { AccountDeletionService } from './account-deletion.service';
 import { AuthService } from './auth.service';
 import { SignUpCommand } from './commands/sign-up.command';
 import {
   ChangePasswordDto,
   CsrfResponseDto,
-  DeleteAccountDto,
   MessageResponseDto,
   PasswordResetConfirmDto,
   PasswordResetRequestDto,
@@ -51,7 +48,6 @@ export class AuthController {
     private readonly users: UsersService,
     private readonly sessions: SessionsService,
     private readonly csrf: CsrfService,
-    private readonly accounts: AccountDeletionService,
   ) {}
 
   @Public()
@@ -124,28 +120,6 @@ export class AuthController {
   async updateMe(@CurrentUser() user: User, @Body() dto: UpdateMeDto): Promise<MeResponse> {
     await this.users.updateProfile(user, dto);
     return this.users.me(user);
-  }
-
-  @Delete('me')
-  @HttpCode(HttpStatus.NO_CONTENT)
-  @ApiOperation({
-    summary: 'Delete my account (confirm with the password)',
-    description:
-      'Removes the account, its memberships, sessions and pending tokens; crews where it is the only member are deleted with their data. Refused with 409 last_owner while the account is the last owner of a crew that has other members.',
-  })
-  @ApiNoContentResponse({ description: 'The account is gone and the session cookie cleared.' })
-  @ApiUnauthorizedResponse({ type: ApiErrorDto })
-  @ApiConflictResponse({
-    type: ApiErrorDto,
-    description: 'last_owner: make another member an owner (or delete the crew) first.',
-  })
-  async deleteMe(
-    @CurrentUser() user: User,
-    @Body() dto: DeleteAccountDto,
-    @Res({ passthrough: true }) res: Response,
-  ): Promise<void> {
-    await this.accounts.deleteAccount(user, dto.password);
-    this.sessions.clearCookie(res);
   }
 
   @Post('change-password')

@@ -2,9 +2,7 @@ import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { BackgroundWork } from '../common/background-work';
 import { CsrfService } from '../common/csrf/csrf.service';
-import { CrewsModule } from '../crews/crews.module';
 import { UsersModule } from '../users/users.module';
-import { AccountDeletionService } from './account-deletion.service';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { ExpiredCredentialsCleanup } from './expired-credentials-cleanup.service';
@@ -13,13 +11,12 @@ import { SessionGuard } from './session.guard';
 import { SessionsService } from './sessions.service';
 
 @Module({
-  imports: [UsersModule, CrewsModule],
+  imports: [UsersModule],
   controllers: [AuthController],
   providers: [
     AuthService,
     BackgroundWork,
     SessionsService,
-    AccountDeletionService,
     ExpiredCredentialsCleanup,
     CsrfService,
     ...AUTH_COMMAND_HANDLERS,

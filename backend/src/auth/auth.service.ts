@@ -8,7 +8,7 @@ import { MailService } from '../mail/mail.service';
 import { passwordResetMail } from '../mail/templates/password-reset.template';
 import { decoyHash, hashPassword, verifyPassword } from '../users/passwords/password-hasher';
 import { passwordProblem } from '../users/passwords/password-policy';
-import { canonicalEmail } from '../users/canonical-email';
+import { canonicalEmail } from '../common/canonical-email';
 import { User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import { AuthToken } from './auth-token.entity';

@@ -5,7 +5,7 @@ import { AppConfig } from '../config/app-config.service';
 import { hashToken, randomToken } from '../common/tokens';
 import type { User } from '../users/user.entity';
 import { Session } from './session.entity';
-import { cookieName, SESSION_COOKIE } from './session-cookie';
+import { cookieName, SESSION_COOKIE } from '../common/session-cookie';
 
 /** Touch `lastSeenAt` at most this often, so reads do not write on every request. */
 const TOUCH_EVERY_MS = 60_000;

@@ -35,9 +35,9 @@ import type {
   CatchView,
   RecordChange,
 } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { catchCsvTemplate, checkCatchRows, CSV_LIMITS, previewOf } from '../imports/catch-csv';

@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import { CATCH_HISTORY_FIELDS, type CatchHistoryField, type CatchView, type RecordChange } from '@shoalbook/shared';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';

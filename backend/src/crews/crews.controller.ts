@@ -13,10 +13,10 @@ import {
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import type { CrewView, MemberView } from '@shoalbook/shared';
-import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
-import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { CrewRoles, CrewRoute, CurrentCrew } from './access/crew.decorators';
+import { CurrentUser } from '../auth/current-user.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from './access/request-context';
 import type { User } from '../users/user.entity';
 import { CreateCrewCommand } from './commands/create-crew.command';
 import { DeleteCrewCommand } from './commands/delete-crew.command';

@@ -2,7 +2,7 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { HttpStatus, Injectable } from '@nestjs/common';
 import type { CrewView, InvitePreview, InviteView, MemberView, UpdateCrewRequest } from '@shoalbook/shared';
 import { ApiException, ErrorCode } from '../common/errors/api-errors';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from './access/request-context';
 import { findUsableInvite, inviteInvalid } from './commands/accept-invite.handler';
 import { toCrewView, toInviteView, toMemberView } from './crew-views';
 import { Invite } from './invite.entity';

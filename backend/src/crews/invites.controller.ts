@@ -15,11 +15,11 @@ import {
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import type { InvitePreview, InviteView } from '@shoalbook/shared';
-import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
-import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { CrewRoles, CrewRoute, CurrentCrew } from './access/crew.decorators';
+import { CurrentUser } from '../auth/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from './access/request-context';
 import { AuthThrottle } from '../common/throttling/auth-throttling';
 import type { User } from '../users/user.entity';
 import { AcceptInviteCommand } from './commands/accept-invite.command';

@@ -12,9 +12,9 @@ import {
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import type { MemberView } from '@shoalbook/shared';
-import { CrewRoles, CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoles, CrewRoute, CurrentCrew } from './access/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from './access/request-context';
 import { ChangeMemberRoleCommand } from './commands/change-member-role.command';
 import { RemoveMemberCommand } from './commands/remove-member.command';
 import { CrewsService } from './crews.service';

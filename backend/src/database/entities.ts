@@ -1,9 +1,19 @@
 import { AuthToken } from '../auth/auth-token.entity';
+import { Catch } from '../catches/catch.entity';
+import { CompetitionDay } from '../events/competition-day.entity';
+import { PracticeDay } from '../events/practice-day.entity';
+import { TournamentEvent } from '../events/tournament-event.entity';
+import { Find } from '../finds/find.entity';
+import { IdempotencyKey } from '../idempotency/idempotency-key.entity';
+import { JournalEvent } from '../journal-events/journal-event.entity';
+import { Lake } from '../lakes/lake.entity';
+import { Photo } from '../photos/photo.entity';
+import { Stop } from '../stops/stop.entity';
+import { WeighIn } from '../weigh-ins/weigh-in.entity';
 import { Session } from '../auth/session.entity';
 import { Crew } from '../crews/crew.entity';
 import { Invite } from '../crews/invite.entity';
 import { Membership } from '../crews/membership.entity';
-import { JOURNAL_ENTITIES } from '../journal/journal-entities';
 import { User } from '../users/user.entity';
 import { READ_MODEL_ENTITIES } from '../read-models';
 
@@ -18,6 +28,16 @@ export const ENTITIES = [
   Crew,
   Membership,
   Invite,
-  ...JOURNAL_ENTITIES,
+  Lake,
+  TournamentEvent,
+  PracticeDay,
+  CompetitionDay,
+  Find,
+  Catch,
+  Stop,
+  WeighIn,
+  Photo,
+  JournalEvent,
+  IdempotencyKey,
   ...READ_MODEL_ENTITIES,
 ];

@@ -3,7 +3,7 @@ import { Injectable } from '@nestjs/common';
 import type { CatchView, FindView, JournalExport } from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
 import { CatchesService } from '../catches/catches.service';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { competitionDayView, eventView, practiceDayView } from '../events/event-views';
 import { PracticeDay } from '../events/practice-day.entity';

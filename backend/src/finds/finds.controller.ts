@@ -34,9 +34,9 @@ import type {
   FindImportResult,
   FindView,
 } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { previewFindImport } from '../imports/find-import';
 import { GPX_LIMITS } from '../imports/gpx-parser';

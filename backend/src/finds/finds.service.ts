@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import type { FindView } from '@shoalbook/shared';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { PracticeDay } from '../events/practice-day.entity';
 import { recordNotFound } from '../journal/journal-errors';
 import { canSeePositions } from '../journal/positions';

@@ -10,9 +10,9 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import type { LakeView } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { CreateLakeCommand, DeleteLakeCommand, UpdateLakeCommand } from './commands/lake.commands';
 import { CreateLakeDto, LakeViewDto, UpdateLakeDto } from './dto/lake.dto';

@@ -13,8 +13,8 @@ import {
 } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { PhotoView } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
-import type { CrewAccess } from '../common/request-context';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
+import type { CrewAccess } from '../crews/access/request-context';
 import { UploadInterceptor } from '../imports/upload.interceptor';
 import { recordNotFound } from '../journal/journal-errors';
 import { RecordIdPipe } from '../journal/record-id.pipe';

@@ -11,9 +11,9 @@ import type {
   ReportFilters,
   TimingView,
 } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
 import { ApiException, ErrorCode, fieldError } from '../common/errors/api-errors';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { canSeePositions } from '../journal/positions';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { SendRecapEmailCommand } from './commands/send-recap-email.command';

@@ -10,9 +10,9 @@ import {
 } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { StopDeletedView, StopView } from '@shoalbook/shared';
-import { CrewRoute, CurrentCrew } from '../common/decorators/crew.decorators';
+import { CrewRoute, CurrentCrew } from '../crews/access/crew.decorators';
 import { ApiErrorDto } from '../common/dto/api-error.dto';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { RecordIdPipe } from '../journal/record-id.pipe';
 import { DeleteStopCommand, LogStopCommand, UpdateStopCommand } from './commands/stop.commands';
 import { LogStopDto, StopListQueryDto, UpdateStopDto } from './dto/stop.dto';

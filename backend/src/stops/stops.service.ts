@@ -4,7 +4,7 @@ import { Injectable } from '@nestjs/common';
 import type { StopView } from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
 import { findsInDatabase } from '../catches/find-lookup';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { Find } from '../finds/find.entity';

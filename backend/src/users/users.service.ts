@@ -2,7 +2,7 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable } from '@nestjs/common';
 import type { MeResponse, UnitPreferences, UserView } from '@shoalbook/shared';
 import { Membership } from '../crews/membership.entity';
-import { canonicalEmail } from './canonical-email';
+import { canonicalEmail } from '../common/canonical-email';
 import { User } from './user.entity';
 
 export function toUserView(user: User): UserView {

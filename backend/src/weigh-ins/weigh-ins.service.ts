@@ -10,7 +10,7 @@ import {
 } from '@shoalbook/shared';
 import { Catch } from '../catches/catch.entity';
 import { CatchesService } from '../catches/catches.service';
-import type { CrewAccess } from '../common/request-context';
+import type { CrewAccess } from '../crews/access/request-context';
 import { CompetitionDay } from '../events/competition-day.entity';
 import { eventView } from '../events/event-views';
 import { EventsService } from '../events/events.service';

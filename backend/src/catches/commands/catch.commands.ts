@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { CatchImportResult, CatchView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { LogCatchDto, UpdateCatchDto } from '../dto/catch.dto';
 
 export class LogCatchCommand extends Command<CatchView> {

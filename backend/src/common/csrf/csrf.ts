@@ -2,7 +2,7 @@ import { ForbiddenException } from '@nestjs/common';
 import { doubleCsrf } from 'csrf-csrf';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { CSRF_HEADER } from '@shoalbook/shared';
-import { cookieName, SESSION_COOKIE } from '../../auth/session-cookie';
+import { cookieName, SESSION_COOKIE } from '../session-cookie';
 import { ErrorCode } from '../errors/api-errors';
 import { sendApiError } from '../filters/api-exception.filter';
 

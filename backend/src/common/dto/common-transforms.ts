@@ -1,5 +1,5 @@
 import { Transform } from 'class-transformer';
-import { canonicalEmail } from '../../users/canonical-email';
+import { canonicalEmail } from '../canonical-email';
 
 /** E-mail addresses in their canonical form before validation, so no spelling makes a second account. */
 export const NormaliseEmail = (): PropertyDecorator =>

@@ -4,7 +4,7 @@ import { ThrottlerGuard, type ThrottlerLimitDetail, type ThrottlerModuleOptions 
 import type { Response } from 'express';
 import type { Request } from 'express';
 import type { AppConfig } from '../../config/app-config.service';
-import { canonicalEmail } from '../../users/canonical-email';
+import { canonicalEmail } from '../canonical-email';
 import { ApiErrorDto } from '../dto/api-error.dto';
 
 /** Which account a request concerns: the e-mail in the body, else the signed-in account. */

@@ -11,9 +11,13 @@ export class Migration20261230000000 extends Migration {
     this.addSql(
       "alter table `events` add `format` varchar(10) not null default 'team', add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;",
     );
-    this.addSql('alter table `weigh_ins` add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;');
+    this.addSql(
+      'alter table `weigh_ins` add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;',
+    );
     this.addSql('alter table `catches` add `logged_by` varchar(36) null;');
-    this.addSql('alter table `rm_event` add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;');
+    this.addSql(
+      'alter table `rm_event` add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;',
+    );
     this.addSql(
       'alter table `rm_competition_day` add `field_size` int null, add `winning_lb` double null, add `cut_lb` double null;',
     );
@@ -24,7 +28,15 @@ export class Migration20261230000000 extends Migration {
     this.addSql(
       'alter table `rm_catch_fact` drop index `rm_catch_fact_event_groups_index`, add index `rm_catch_fact_event_groups_index` (`event_id`, `solunar_period`, `time_of_day`, `bag_counted`, `weight_ulb`);',
     );
-    for (const table of ['rm_group_stats', 'rm_find_outcome', 'rm_catch_fact', 'rm_find', 'rm_competition_day', 'rm_event', 'rm_lake'])
+    for (const table of [
+      'rm_group_stats',
+      'rm_find_outcome',
+      'rm_catch_fact',
+      'rm_find',
+      'rm_competition_day',
+      'rm_event',
+      'rm_lake',
+    ])
       this.addSql(`delete from \`${table}\`;`);
     this.addSql("delete from `projection_checkpoint` where `name` = 'journal';");
   }

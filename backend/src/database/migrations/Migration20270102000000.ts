@@ -1,5 +1,5 @@
 import { Migration } from '@mikro-orm/migrations';
-import { canonicalEmail } from '../../users/canonical-email';
+import { canonicalEmail } from '../../common/canonical-email';
 
 /**
  * Accounts and invites keep the canonical e-mail (NFKC, trimmed, case-folded) in a binary-collated column:

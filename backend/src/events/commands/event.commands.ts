@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { CompetitionDayView, EventView, PracticeDayView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { UpdateCompetitionDayDto, UpdatePracticeDayDto } from '../dto/day.dto';
 import type { CreateEventDto, UpdateEventDto } from '../dto/event.dto';
 

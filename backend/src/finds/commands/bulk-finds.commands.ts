@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { BulkDeleteFindsResult, BulkUpdateFindsResult } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { BulkUpdateFindsDto } from '../dto/bulk-finds.dto';
 
 /** Set the kind (and sub-kind) or the event of many finds at once: all of them or none. */

@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { FindView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { AddFindDto, UpdateFindDto } from '../dto/find.dto';
 
 export class AddFindCommand extends Command<FindView> {

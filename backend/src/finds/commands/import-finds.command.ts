@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { FindImportResult, FindKind } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 
 /** Import a GPX file's waypoints as finds: every accepted row, or (on any failure) none. */
 export class ImportFindsCommand extends Command<FindImportResult> {

@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { LakeView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { CreateLakeDto, UpdateLakeDto } from '../dto/lake.dto';
 
 export class CreateLakeCommand extends Command<LakeView> {

@@ -1,6 +1,6 @@
 import { Command } from '@nestjs/cqrs';
 import type { StopDeletedView, StopView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { LogStopDto, UpdateStopDto } from '../dto/stop.dto';
 
 export class LogStopCommand extends Command<StopView> {

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import { clockTime, type StopDeletedView, type StopView } from '@shoalbook/shared';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import { JournalEventsService } from '../../journal-events/journal-events.service';
 import { recordState } from '../../journal-events/record-state';
 import { assertVersion, FieldProblems, idTaken, recordNotFound } from '../../journal/journal-errors';

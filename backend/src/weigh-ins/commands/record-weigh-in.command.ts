@@ -1,5 +1,5 @@
 import { Command } from '@nestjs/cqrs';
-import type { CrewAccess } from '../../common/request-context';
+import type { CrewAccess } from '../../crews/access/request-context';
 import type { RecordWeighInDto } from '../weigh-in.dto';
 import type { VersionedWeighIn } from '../weigh-ins.service';
 

@@ -9,9 +9,9 @@ import {
 import { ApiForbiddenResponse, ApiNotFoundResponse, ApiParam } from '@nestjs/swagger';
 import type { Request } from 'express';
 import type { CrewRole } from '@shoalbook/shared';
-import { ApiErrorDto } from '../dto/api-error.dto';
-import { CrewMemberGuard } from '../guards/crew-member.guard';
-import type { CrewAccess } from '../request-context';
+import { ApiErrorDto } from '../../common/dto/api-error.dto';
+import { CrewMemberGuard } from './crew-member.guard';
+import type { CrewAccess } from './request-context';
 import { CREW_ACCESS_KEY, type CrewAccessRule } from './crew-access-rule';
 
 export { CREW_ACCESS_KEY, type CrewAccessRule };

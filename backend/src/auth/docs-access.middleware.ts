@@ -1,10 +1,10 @@
 import { MikroORM, RequestContext } from '@mikro-orm/mariadb';
 import { ForbiddenException, type INestApplication, UnauthorizedException } from '@nestjs/common';
 import type { NextFunction, Request, Response } from 'express';
-import { SessionsService } from '../../auth/sessions.service';
-import { AppConfig } from '../../config/app-config.service';
-import { ErrorCode } from '../errors/api-errors';
-import { sendApiError } from '../filters/api-exception.filter';
+import { SessionsService } from './sessions.service';
+import { AppConfig } from '../config/app-config.service';
+import { ErrorCode } from '../common/errors/api-errors';
+import { sendApiError } from '../common/filters/api-exception.filter';
 
 /**
  * The API docs (Swagger UI and the OpenAPI JSON) are open in the development and test profiles; in production

@@ -1,7 +1,7 @@
 import type { CrewRole } from '@shoalbook/shared';
-import type { Session } from '../auth/session.entity';
-import type { Crew } from '../crews/crew.entity';
-import type { User } from '../users/user.entity';
+import type { Session } from '../../auth/session.entity';
+import type { Crew } from '../crew.entity';
+import type { User } from '../../users/user.entity';
 
 /** What the crew guard learned about the caller's membership, for the handler to scope its queries by. */
 export interface CrewAccess {

@@ -3,9 +3,9 @@ import { type CanActivate, type ExecutionContext, HttpStatus, Injectable, Unauth
 import { Reflector } from '@nestjs/core';
 import type { Request } from 'express';
 import { roleAtLeast } from '@shoalbook/shared';
-import { Membership } from '../../crews/membership.entity';
-import { CREW_ACCESS_KEY, type CrewAccessRule } from '../decorators/crew-access-rule';
-import { ApiException, ErrorCode } from '../errors/api-errors';
+import { Membership } from '../membership.entity';
+import { CREW_ACCESS_KEY, type CrewAccessRule } from './crew-access-rule';
+import { ApiException, ErrorCode } from '../../common/errors/api-errors';
 
 const READ_METHODS = new Set(['GET', 'HEAD']);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;

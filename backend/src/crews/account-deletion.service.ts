@@ -1,8 +1,8 @@
 import { LockMode } from '@mikro-orm/core';
 import { HttpStatus, Injectable } from '@nestjs/common';
 import { ApiException, ErrorCode, fieldError } from '../common/errors/api-errors';
-import { CrewRemovalService } from '../crews/crew-removal.service';
-import { Membership } from '../crews/membership.entity';
+import { CrewRemovalService } from './crew-removal.service';
+import { Membership } from './membership.entity';
 import { verifyPassword } from '../users/passwords/password-hasher';
 import { User } from '../users/user.entity';
 

@@ -5,8 +5,8 @@ import { join } from 'node:path';
 import { MikroORM } from '@mikro-orm/mariadb';
 import { Presets, SingleBar } from 'cli-progress';
 import { DatabaseEnv, validateEnvAs } from '../config/env.validation';
-import { buildOrmConfig } from '../database/mikro-orm.config';
-import { rebuildReadModels } from './rebuild.service';
+import { buildOrmConfig } from './mikro-orm.config';
+import { rebuildReadModels } from '../projections/rebuild.service';
 
 async function databaseEnv(): Promise<Record<string, unknown>> {
   if (process.env.DB_HOST && process.env.DB_NAME) return process.env;
