@@ -228,4 +228,43 @@ describe('stops: visits on a competition day', () => {
     expect(stats).toEqual([{ finds: 3, finds_fished: 2, finds_producing: 1, seconds_fished: expect.anything() }]);
     expect(Number(stats[0]!.seconds_fished)).toBe(120 * 60);
   });
+
+  it('times the fish per hour by clock band over every stop, split at the band edges', async () => {
+    // A stop at no find, 10:30–11:30 on day 2 (half morning, half midday from 11:00), with a fish at 11:10.
+    const noFind = await crew.angler.post(`${base}/stops`, {
+      competitionDayId: day2Id,
+      findId: null,
+      lat: TEST_LAKE.lat + 0.03,
+      lon: TEST_LAKE.lon,
+      arrivedAt: '10:30',
+      leftAt: '11:30',
+    });
+    expectOk(noFind, 201);
+    expectOk(
+      await crew.angler.post(`${base}/catches`, {
+        competitionDayId: day2Id,
+        caughtAt: '11:10',
+        species: 'largemouth',
+        weightLb: 2.5,
+        fate: 'weighed',
+      }),
+      201,
+    );
+    await waitForProjection(app);
+    const view = (await crew.viewer.get(`${base}/reports/hit-rates?by=timeOfDay&eventId=${eventId}`)).body as {
+      groups: { key: string; fishCount: number; secondsFished: number; fishPerHour: number | null }[];
+      overall: { fishCount: number; secondsFished: number; fishPerHour: number | null };
+    };
+    const band = (key: string) => view.groups.find((g) => g.key === key)!;
+    // Stops: find A 07:00–08:15 (day 1), find B 08:00–08:45 (day 2), no find 10:30–11:30 (day 2).
+    // Early (before 08:00): 60 min, no fish — a row of its own, 0 fish per hour.
+    expect(band('early')).toMatchObject({ fishCount: 0, secondsFished: 3600, fishPerHour: 0 });
+    // Morning: 15 + 45 + 30 min = 90 min; the two fish of 09:20 and 09:40 on day 1.
+    expect(band('morning')).toMatchObject({ fishCount: 2, secondsFished: 5400 });
+    expect(band('morning').fishPerHour).toBeCloseTo(2 / 1.5, 10);
+    // Midday: 30 min and the fish of 11:10.
+    expect(band('midday')).toMatchObject({ fishCount: 1, secondsFished: 1800, fishPerHour: 2 });
+    // The headline is the sum of the rows.
+    expect(view.overall).toMatchObject({ fishCount: 3, secondsFished: 10_800, fishPerHour: 1 });
+  });
 });

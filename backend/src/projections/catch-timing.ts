@@ -8,6 +8,9 @@ export interface TimingPlace {
   timeZone: string;
 }
 
+/** Where timing falls back to when a lake is missing (never for a well-formed journal). */
+export const UTC_PLACE: TimingPlace = { lat: 0, lon: 0, timeZone: 'UTC' };
+
 export interface CatchTiming {
   /** Lake-local calendar date of the instant. */
   localDate: string;
@@ -25,17 +28,29 @@ interface SkyDay {
   periods: { kind: 'major' | 'minor'; startMs: number; endMs: number; centreMs: number }[];
 }
 
+/** Whole seconds of a span of time in each solunar period and each time-of-day band (keys as on catches). */
+export interface SpanSeconds {
+  solunarPeriod: Map<string, number>;
+  timeOfDay: Map<string, number>;
+}
+
 const QUARTER_HOUR_MS = 900_000;
 const DAY_MS = 86_400_000;
 const MAX_CACHED = 50_000;
+/** Longer spans are not split (the API bounds a stop to its competition day; this only guards bad journal data). */
+const MAX_SPLIT_MS = 2 * DAY_MS;
 
-/** Clock bands of TIME_OF_DAY_BANDS (our own choice): minutes after local midnight where each band ends. */
+/** Minutes after local midnight where the bands of TIME_OF_DAY_BANDS (our own choice) end. */
+const BAND_ENDS: [number, TimeOfDayBand][] = [
+  [8 * 60, 'early'],
+  [11 * 60, 'morning'],
+  [14 * 60, 'midday'],
+  [17 * 60, 'afternoon'],
+  [24 * 60, 'late'],
+];
+
 export function timeOfDayBand(localMinutes: number): TimeOfDayBand {
-  if (localMinutes < 8 * 60) return 'early';
-  if (localMinutes < 11 * 60) return 'morning';
-  if (localMinutes < 14 * 60) return 'midday';
-  if (localMinutes < 17 * 60) return 'afternoon';
-  return 'late';
+  return BAND_ENDS.find(([end]) => localMinutes < end)?.[1] ?? 'late';
 }
 
 /**
@@ -114,6 +129,57 @@ export class CatchTimingCalculator {
       timeOfDay: timeOfDayBand(localMinutes),
     };
   }
+}
+
+/**
+ * Splits the span [fromMs, toMs) at every edge of a solunar period and of a time-of-day band, and gives each piece
+ * the period and band {@link CatchTimingCalculator.timing} gives an instant inside it, so time and catches are
+ * classed by one rule. Seconds are counted on the whole-second grid a stop's duration uses, so the pieces add up to
+ * floor(toMs / 1000) - floor(fromMs / 1000).
+ */
+export function spanSeconds(
+  calc: CatchTimingCalculator,
+  fromMs: number,
+  toMs: number,
+  place: TimingPlace,
+): SpanSeconds {
+  const out: SpanSeconds = { solunarPeriod: new Map(), timeOfDay: new Map() };
+  const add = (m: Map<string, number>, key: string, seconds: number) => {
+    if (seconds > 0) m.set(key, (m.get(key) ?? 0) + seconds);
+  };
+  if (!(toMs > fromMs)) return out;
+  const whole = (ms: number) => Math.floor(ms / 1000);
+  if (toMs - fromMs > MAX_SPLIT_MS) {
+    add(out.solunarPeriod, '', whole(toMs) - whole(fromMs));
+    add(out.timeOfDay, '', whole(toMs) - whole(fromMs));
+    return out;
+  }
+  const edges = new Set<number>([fromMs, toMs]);
+  for (let day = calc.timing(fromMs, place).localDate, last = calc.timing(toMs, place).localDate; ;) {
+    for (const d of [shiftDate(day, -1), day, shiftDate(day, 1)])
+      for (const p of calc.skyDay(place, d).periods) edges.add(p.startMs).add(p.endMs);
+    if (day >= last) break;
+    day = shiftDate(day, 1);
+  }
+  // Band edges: from each piece's start, the next local-clock band end (re-read after each step, so DST holds).
+  for (let t = fromMs; t < toMs;) {
+    const local = calc.timing(t, place);
+    const localMsOfDay = (((t + calc.offsetMinutes(t, place.timeZone) * 60_000) % DAY_MS) + DAY_MS) % DAY_MS;
+    const bandEnd = BAND_ENDS.find(([end]) => local.localMinutes < end)![0] * 60_000;
+    const next = t + Math.max(1, bandEnd - localMsOfDay);
+    edges.add(next);
+    t = next;
+  }
+  const cuts = [...edges].filter((e) => e >= fromMs && e <= toMs).sort((a, b) => a - b);
+  for (let i = 0; i + 1 < cuts.length; i++) {
+    const [a, b] = [cuts[i]!, cuts[i + 1]!];
+    const seconds = whole(b) - whole(a);
+    if (seconds <= 0) continue;
+    const t = calc.timing(a + (b - a) / 2, place);
+    add(out.solunarPeriod, t.solunarPeriod, seconds);
+    add(out.timeOfDay, t.timeOfDay, seconds);
+  }
+  return out;
 }
 
 function better(p: SkyDay['periods'][number], q: SkyDay['periods'][number], ms: number): boolean {

@@ -1,4 +1,5 @@
 import { depthBand, temperatureBand } from '@shoalbook/analytics';
+import { type CatchTimingCalculator, spanSeconds, type TimingPlace } from './catch-timing';
 import type { CatchRow, EventRow, FindRow, GroupStatsRow, OutcomeRow, StopRow } from './rows';
 
 /** Find groupings stored in rm_group_stats: the unit is the find fished in an event. */
@@ -179,6 +180,37 @@ export function catchGroupSums(catches: readonly CatchForStats[]): CatchGroupSum
   return [...out.values()];
 }
 
+/** Time on the water of one catch-grouping key within an event: the stops' seconds in that period or band. */
+export interface StopGroupSeconds {
+  grouping: (typeof CATCH_GROUPINGS)[number];
+  key: string;
+  secondsFished: number;
+}
+
+/**
+ * The seconds of an event's stops (found or not, left ones only) in each solunar period and time-of-day band, split
+ * at the periods' and bands' edges by the same rule that classes a catch: fish per hour by period reads against it.
+ */
+export function stopGroupSeconds(
+  stops: Iterable<Pick<StopRow, 'arrivedAtMs' | 'leftAtMs'>>,
+  place: TimingPlace,
+  calc: CatchTimingCalculator,
+): StopGroupSeconds[] {
+  const sums = new Map<string, StopGroupSeconds>();
+  for (const stop of stops) {
+    if (stop.leftAtMs === null) continue;
+    const split = spanSeconds(calc, stop.arrivedAtMs, stop.leftAtMs, place);
+    for (const grouping of CATCH_GROUPINGS)
+      for (const [key, seconds] of split[grouping]) {
+        const id = `${grouping}\u0000${key}`;
+        const g = sums.get(id) ?? { grouping, key, secondsFished: 0 };
+        g.secondsFished += seconds;
+        sums.set(id, g);
+      }
+  }
+  return [...sums.values()];
+}
+
 function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsRow {
   return {
     eventId: event.id,
@@ -199,13 +231,15 @@ function blank(event: EventRow, grouping: string, groupKey: string): GroupStatsR
 }
 
 /**
- * An event's group statistics, recomputed from its outcome rows (find groupings) and the sums of its catch facts per
- * catch-grouping key. Sums are integer micro-pounds, so the result does not depend on the order of the inputs.
+ * An event's group statistics, recomputed from its outcome rows (find groupings), the sums of its catch facts per
+ * catch-grouping key and its stops' time per key. Sums are integer micro-pounds and whole seconds, so the result
+ * does not depend on the order of the inputs.
  */
 export function deriveGroupStats(
   event: EventRow | undefined,
   outcomes: readonly OutcomeRow[],
   catchGroups: readonly CatchGroupSums[],
+  stopTime: readonly StopGroupSeconds[] = [],
 ): GroupStatsRow[] {
   if (!event) return [];
   const groups = new Map<string, GroupStatsRow>();
@@ -238,5 +272,7 @@ export function deriveGroupStats(
     g.weightUlb += c.weightUlb;
     g.weighedWeightUlb += c.weighedWeightUlb;
   }
+  // A period fished without a bite is a row of its own: time with no fish is what makes fish per hour honest.
+  for (const t of stopTime) if (t.secondsFished > 0) row(t.grouping, t.key).secondsFished += t.secondsFished;
   return [...groups.values()].sort((a, b) => (a.grouping + a.groupKey < b.grouping + b.groupKey ? -1 : 1));
 }

@@ -1,5 +1,5 @@
 import type { EventRules, Season } from '@shoalbook/shared';
-import { catchTiming, type CatchTimingCalculator } from './catch-timing';
+import { catchTiming, type CatchTimingCalculator, UTC_PLACE } from './catch-timing';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState } from './projection-state';
 import { type CatchRow, type DayRow, type EventRow, type FindRow, type LakeRow, type StopRow, toMicroLb } from './rows';
@@ -8,10 +8,15 @@ type Payload = Record<string, unknown>;
 /** A catch as its journal event gives it, before the derived fields. */
 type CatchBase = Omit<
   CatchRow,
-  'lakeId' | 'dayDate' | 'localMinutes' | 'minutesFromSunrise' | 'solunarPeriod' | 'timeOfDay' | 'bagState' | 'bagCounted'
+  | 'lakeId'
+  | 'dayDate'
+  | 'localMinutes'
+  | 'minutesFromSunrise'
+  | 'solunarPeriod'
+  | 'timeOfDay'
+  | 'bagState'
+  | 'bagCounted'
 >;
-
-const UTC_PLACE = { lat: 0, lon: 0, timeZone: 'UTC' };
 
 const str = (v: unknown, fallback = ''): string => (typeof v === 'string' ? v : fallback);
 const strOrNull = (v: unknown): string | null => (typeof v === 'string' && v !== '' ? v : null);
@@ -151,6 +156,8 @@ export class JournalApplier {
       // Timing is computed in the lake's zone at its reference point: recompute its catches.
       for (const c of [...this.state.catches.rows.values()])
         if (c.lakeId === row.id) this.putCatchRow(this.deriveCatch(c, c));
+      // …and its events' stop time by period and band.
+      for (const ev of this.state.events.rows.values()) if (ev.lakeId === row.id) this.state.dirtyEvents.add(ev.id);
     }
   }
 
@@ -161,7 +168,8 @@ export class JournalApplier {
     this.state.dirtyEvents.add(row.id);
     // New rules recount every day of the event.
     const recount = !before || JSON.stringify(before.rules) !== JSON.stringify(row.rules);
-    if (recount) for (const d of this.state.days.rows.values()) if (d.eventId === row.id) this.state.dirtyDays.add(d.id);
+    if (recount)
+      for (const d of this.state.days.rows.values()) if (d.eventId === row.id) this.state.dirtyDays.add(d.id);
     if (!Array.isArray(p.competitionDays)) return;
     const kept = new Set<string>();
     for (const raw of p.competitionDays as Payload[]) {

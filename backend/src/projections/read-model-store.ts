@@ -6,8 +6,10 @@ import {
   type CatchSums,
   deriveGroupStats,
   outcomesFromSums,
+  stopGroupSeconds,
   type StopSums,
 } from './derive';
+import { catchTiming, UTC_PLACE } from './catch-timing';
 import type { JournalRecord } from './journal-record';
 import type { ProjectionState, StateTable } from './projection-state';
 import type { EventRow, OutcomeRow } from './rows';
@@ -205,9 +207,20 @@ export class ReadModelStore {
         (c) => c.eventId,
       );
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
-      const stats = events.flatMap((id) =>
-        deriveGroupStats(state.events.get(id), outcomesByEvent.get(id) ?? [], catchesByEvent.get(id) ?? []),
-      );
+      // The stops (already written above) and lakes of the events: their time by period and band.
+      const stopsByEvent = groupBy(await select(tx, STOP_TABLE, eventsOfCrews(present)), (s) => s.eventId);
+      const lakeIds = [...new Set(present.map((ev) => ev.lakeId))].filter((id) => !state.lakes.get(id));
+      for (const l of await select(tx, LAKE_TABLE, inList('id', lakeIds))) state.lakes.load(l.id, l);
+      const stats = events.flatMap((id) => {
+        const ev = state.events.get(id);
+        const place = (ev && state.lakes.get(ev.lakeId)) ?? UTC_PLACE;
+        return deriveGroupStats(
+          ev,
+          outcomesByEvent.get(id) ?? [],
+          catchesByEvent.get(id) ?? [],
+          stopGroupSeconds(stopsByEvent.get(id) ?? [], place, catchTiming),
+        );
+      });
       await tx.execute(`DELETE FROM rm_group_stats WHERE ${inList('event_id', events)}`);
       for (const sql of insertChunks(GROUP_STATS_TABLE, stats)) await tx.execute(sql);
     }

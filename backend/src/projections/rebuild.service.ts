@@ -3,7 +3,8 @@ import { MikroORM } from '@mikro-orm/mariadb';
 import type { EntityManager } from '@mikro-orm/mariadb';
 import { Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
 import { READ_MODEL_TABLES } from '../read-models';
-import { type CatchForStats, catchGroupSums, deriveGroupStats, deriveOutcomes } from './derive';
+import { catchTiming, UTC_PLACE } from './catch-timing';
+import { type CatchForStats, catchGroupSums, deriveGroupStats, deriveOutcomes, stopGroupSeconds } from './derive';
 import { JournalApplier } from './journal-applier';
 import { GapPolicy, readJournal, settledGaps } from './journal-reader';
 import { JournalProjector } from './journal-projector.service';
@@ -86,8 +87,14 @@ export async function rebuildReadModels(
         outcomes.push(...deriveOutcomes(find, catchesByFind.get(find.id) ?? [], stopsByFind.get(find.id) ?? []));
       const outcomesByEvent = groupBy(outcomes, (o) => o.eventId);
       const catchesByEvent = groupBy<CatchForStats>(state.catches.rows.values(), (c) => c.eventId);
+      const stopsByEvent = groupBy(state.stops.rows.values(), (s) => s.eventId);
       const stats = [...state.events.rows.values()].flatMap((ev) =>
-        deriveGroupStats(ev, outcomesByEvent.get(ev.id) ?? [], catchGroupSums(catchesByEvent.get(ev.id) ?? [])),
+        deriveGroupStats(
+          ev,
+          outcomesByEvent.get(ev.id) ?? [],
+          catchGroupSums(catchesByEvent.get(ev.id) ?? []),
+          stopGroupSeconds(stopsByEvent.get(ev.id) ?? [], state.lakes.get(ev.lakeId) ?? UTC_PLACE, catchTiming),
+        ),
       );
 
       options.onProgress?.({ seq: last, maxSeq, events, phase: 'write' });

@@ -27,7 +27,12 @@ export class HitRateGroupViewDto implements HitRateGroupView {
   producing: RateDto;
   @ApiProperty({ type: RateDto }) weighed: RateDto;
   @ApiProperty({ type: RateDto }) shareOfFish: RateDto;
-  @ApiProperty({ ...count, description: 'time on the finds over their stops, whole seconds' }) secondsFished: number;
+  @ApiProperty({
+    ...count,
+    description:
+      'whole seconds of stops: on the finds of the group (find groupings), or of every stop within the period or band (catch groupings)',
+  })
+  secondsFished: number;
   @ApiProperty({
     type: Number,
     nullable: true,

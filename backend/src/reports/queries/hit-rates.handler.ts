@@ -104,9 +104,9 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       countedCount: total(groups, 'weighedCount'),
       weightLb: fromMicroLb(total(groups, 'weightUlb')),
       producing: singleRate(total(kinds, 'findsProducing'), total(kinds, 'findsFished')),
-      // Time is on finds, so the kinds carry it (the catch groupings have none).
-      secondsFished: total(kinds, 'secondsFished'),
-      fishPerHour: fishPerHour(total(kinds, 'timedFish'), total(kinds, 'secondsFished')),
+      // Time as the table counts it: on finds for the find groupings, on every stop (found or not) for the catch ones.
+      secondsFished: total(groups, 'secondsFished'),
+      fishPerHour: fishPerHour(total(groups, 'timedFish'), total(groups, 'secondsFished')),
     };
 
     const catchUnit = CATCH_UNIT_GROUPINGS.includes(by);
@@ -134,7 +134,7 @@ export class GetHitRatesHandler implements IQueryHandler<GetHitRatesQuery, HitRa
       weighed: weighed[i]!,
       shareOfFish: share[i]!,
       secondsFished: g.secondsFished,
-      fishPerHour: catchUnit ? null : fishPerHour(g.timedFish, g.secondsFished),
+      fishPerHour: fishPerHour(g.timedFish, g.secondsFished),
       rank: rank[i]!,
     }));
 

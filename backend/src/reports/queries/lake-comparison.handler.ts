@@ -59,7 +59,7 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       cell.set(`${String(r.event_id)}|${String(r.group_key)}`, { successes, trials });
       perHour.set(
         `${String(r.event_id)}|${String(r.group_key)}`,
-        catchUnit ? null : fishPerHour(Number(r.fish_count), Number(r.seconds_fished)),
+        fishPerHour(Number(r.fish_count), Number(r.seconds_fished)),
       );
     }
     const count = (eventId: string, key: string) =>

@@ -113,10 +113,11 @@ function catchColumns(units: UnitPreferences) {
 }
 
 /**
- * Time on the finds of each group and the fish per hour fished (over the stops logged), beside the hit rates:
- * a table of its own, so the hit-rate table keeps fitting beside its chart.
+ * Time fished in each group and the fish per hour of it (over the stops logged), beside the hit rates: a table of
+ * its own, so the hit-rate table keeps fitting beside its chart. For the find groupings the time is on the group's
+ * finds; for the sun-and-moon and clock groupings it is every stop's time within the period or band.
  */
-export function HitRatesTimeTable({ groups }: { groups: HitRateGroup[] }) {
+export function HitRatesTimeTable({ groups, catchBased }: { groups: HitRateGroup[]; catchBased: boolean }) {
   return (
     <ReportTable
       data={groups}
@@ -134,7 +135,11 @@ export function HitRatesTimeTable({ groups }: { groups: HitRateGroup[] }) {
           sortUndefined: 'last',
         }),
       ]}
-      caption="Time on the finds by group, over the stops logged, and the fish caught per hour of it. A dash: no stop with a leaving time (or figures derived from catches)."
+      caption={
+        catchBased
+          ? 'Time on the water in each period, over the stops logged (a stop running across a period edge is split at it), and the fish caught per hour of it. A dash: no stop with a leaving time in it (or figures derived from catches).'
+          : 'Time on the finds by group, over the stops logged, and the fish caught per hour of it. A dash: no stop with a leaving time (or figures derived from catches).'
+      }
       getRowId={(g) => g.key ?? 'not-recorded'}
     />
   );

@@ -69,6 +69,38 @@ describe('Hit-rate report', () => {
     expect(screen.queryByText('derived from catches')).not.toBeInTheDocument();
   });
 
+  it('times the fish per hour by clock band too, over the time on the water in each band', async () => {
+    const byClock = {
+      ...hitRates(
+        [
+          ['early', 'Early', 0, 0],
+          ['morning', 'Morning', 3, 3],
+        ],
+        [],
+      ),
+      by: 'timeOfDay' as const,
+      unit: 'catch' as const,
+    };
+    // An hour early with no fish, 90 minutes in the morning with 6 fish: 4.00 per hour.
+    byClock.groups[0] = { ...byClock.groups[0]!, secondsFished: 3600, fishPerHour: 0 };
+    byClock.groups[1] = { ...byClock.groups[1]!, secondsFished: 5400, fishPerHour: 4 };
+    net = fakeNetwork({
+      'GET /api/auth/me': { status: 200, body: me },
+      'GET /api/crews/crew-1/lakes': { status: 200, body: lakes },
+      'GET /api/crews/crew-1/events': { status: 200, body: events },
+      'GET /api/crews/crew-1/reports/hit-rates': { status: 200, body: byClock },
+    }).install();
+    await renderReports('/crews/crew-1/reports/hit-rates?by=timeOfDay');
+    const table = await screen.findByRole('table', { name: /^Time on the water in each period/ });
+    const row = (label: string) =>
+      within(table)
+        .getAllByRole('row')
+        .find((r) => within(r).queryByRole('rowheader')?.textContent === label)!;
+    expect(within(row('Early')).getByText('0.00 /h')).toBeInTheDocument();
+    expect(within(row('Morning')).getByText('4.00 /h')).toBeInTheDocument();
+    expect(within(row('Morning')).getByText('1 h 30 min')).toBeInTheDocument();
+  });
+
   it('marks the figures derived from catches when an event of the selection has catches but no stops', async () => {
     net = fakeNetwork({
       'GET /api/auth/me': { status: 200, body: me },

@@ -96,7 +96,7 @@ export function Component() {
             </div>
             <div className={styles.panel}>
               <HitRatesTable groups={report.data.groups} catchBased={catchBased} units={units} />
-              {catchBased ? null : <HitRatesTimeTable groups={report.data.groups} />}
+              <HitRatesTimeTable groups={report.data.groups} catchBased={catchBased} />
             </div>
           </div>
         </div>
