@@ -146,7 +146,7 @@ describe('the reports, as the demo angler', () => {
     await table.waitFor();
     const all = await table.locator('tbody tr:not([aria-hidden])').count();
     expect(all).toBeGreaterThan(5);
-    await page.getByRole('combobox', { name: 'Outcome' }).selectOption({ label: 'Weighed fish' });
+    await page.getByRole('combobox', { name: 'Outcome' }).selectOption({ label: 'Counted fish' });
     const weighed = await table.locator('tbody tr:not([aria-hidden])').count();
     expect(weighed).toBeGreaterThan(0);
     expect(weighed).toBeLessThan(all);

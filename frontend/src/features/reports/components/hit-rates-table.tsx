@@ -86,7 +86,7 @@ function findColumns() {
     groupColumn((g) => g.findsFished, 'few finds'),
     column.accessor('findsFished', { header: 'Fished', meta: { numeric: true } }),
     column.accessor('findsProducing', { header: 'Produced', meta: { numeric: true } }),
-    column.accessor('findsWeighed', { header: 'Weighed', meta: { numeric: true } }),
+    column.accessor('findsWeighed', { header: 'With a counted fish', meta: { numeric: true } }),
     ...rateColumns((g) => g.producing, { id: 'rate', rate: 'Hit rate', range: 'Range', adjusted: 'Adjusted' }),
     rankColumn,
   ];
@@ -96,7 +96,7 @@ function catchColumns(units: UnitPreferences) {
   return [
     groupColumn((g) => g.fishCount, 'few fish'),
     column.accessor('fishCount', { header: 'Fish', meta: { numeric: true } }),
-    column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
+    column.accessor('weighedCount', { header: 'Counted', meta: { numeric: true } }),
     column.accessor('weightLb', {
       header: 'Weight',
       cell: (info) => formatWeight(info.getValue(), units.weight),

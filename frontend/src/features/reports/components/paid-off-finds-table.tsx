@@ -68,7 +68,7 @@ export function PaidOffFindsTable({
       cell: (info) => perHour(info.getValue()),
       meta: { numeric: true },
     }),
-    column.accessor('weighedCount', { header: 'Weighed', meta: { numeric: true } }),
+    column.accessor('weighedCount', { header: 'Counted', meta: { numeric: true } }),
     column.accessor('weightLb', {
       header: 'Weight',
       cell: (info) => (info.row.original.fishCount ? formatWeight(info.getValue(), units.weight) : '—'),

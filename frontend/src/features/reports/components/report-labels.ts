@@ -15,8 +15,8 @@ export const GROUPING_LABELS: Record<HitRateGrouping, string> = {
 export const CATCH_BASED_GROUPINGS: readonly HitRateGrouping[] = ['solunarPeriod', 'timeOfDay'];
 
 export const OUTCOME_LABELS: Record<FindOutcome, string> = {
-  weighed: 'Weighed fish',
-  caught: 'Fish, none weighed',
+  weighed: 'Counted fish',
+  caught: 'Fish, none counted',
   'fished-blank': 'Fished, no bite',
   'not-fished': 'Not fished',
 };

@@ -91,6 +91,9 @@ describe('Hit-rate report', () => {
       'GET /api/crews/crew-1/reports/hit-rates': { status: 200, body: byClock },
     }).install();
     await renderReports('/crews/crew-1/reports/hit-rates?by=timeOfDay');
+    expect(
+      await screen.findByText(/^6 fish caught, 3 counted, .* in all; 4\.00 \/h over 1 h 30 min on the water\./),
+    ).toBeInTheDocument();
     const table = await screen.findByRole('table', { name: /^Time on the water in each period/ });
     const row = (label: string) =>
       within(table)

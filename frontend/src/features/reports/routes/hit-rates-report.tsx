@@ -78,7 +78,7 @@ export function Component() {
         <div className={styles.stack}>
           <Text as="p" className={styles.muted}>
             {catchBased
-              ? `${report.data.overall.fishCount} fish caught, ${report.data.overall.countedCount} counted, ${formatWeight(report.data.overall.weightLb, units.weight)} in all. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
+              ? `${report.data.overall.fishCount} fish caught, ${report.data.overall.countedCount} counted, ${formatWeight(report.data.overall.weightLb, units.weight)} in all${report.data.overall.fishPerHour !== null ? `; ${perHour(report.data.overall.fishPerHour)} over ${hoursMinutes(report.data.overall.secondsFished)} on the water` : ''}. Sun-and-moon periods and times of day are counted by fish, not by find: one find’s fish fall in several periods.`
               : `Overall, ${report.data.overall.findsProducing} of ${report.data.overall.findsFished} finds fished produced a fish (${percent(report.data.overall.producing.rate)}, likely ${percentRange(report.data.overall.producing.lower, report.data.overall.producing.upper)}); ${report.data.overall.fishCount} fish caught, ${report.data.overall.countedCount} counted${report.data.overall.fishPerHour !== null ? `, ${perHour(report.data.overall.fishPerHour)} over ${hoursMinutes(report.data.overall.secondsFished)} fished` : ''}.`}
           </Text>
           <DerivedNote events={report.data.derivedEvents} />
