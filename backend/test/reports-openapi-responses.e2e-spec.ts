@@ -203,16 +203,19 @@ describe('report answers match their OpenAPI response schemas', () => {
       eventId: id,
       day: '2026-03-14',
     };
-    expect(timing({ catches: [point], byHour: [{ hour: 9, fishCount: 1, weightLb: 3.1 }] })).toEqual([]);
-    expect(timing({ catches: [{ ...point, weightLb: null }], byHour: [] }).join()).toContain(
+    expect(timing({ catches: [point], totalCatches: 1, byHour: [{ hour: 9, fishCount: 1, weightLb: 3.1 }] })).toEqual(
+      [],
+    );
+    expect(timing({ catches: [point], byHour: [] }).join()).toContain('totalCatches');
+    expect(timing({ catches: [{ ...point, weightLb: null }], totalCatches: 1, byHour: [] }).join()).toContain(
       '.catches[0].weightLb should be number',
     );
-    expect(timing({ catches: [{ ...point, lat: 32.9 }], byHour: [] }).join()).toContain('lat');
-    expect(timing({ catches: [{ ...point, solunarPeriod: 'none' }], byHour: [] }).join()).toContain(
+    expect(timing({ catches: [{ ...point, lat: 32.9 }], totalCatches: 1, byHour: [] }).join()).toContain('lat');
+    expect(timing({ catches: [{ ...point, solunarPeriod: 'none' }], totalCatches: 1, byHour: [] }).join()).toContain(
       '.catches[0].solunarPeriod should be equal to one of the allowed values',
     );
-    expect(timing({ catches: [], byHour: [{ hour: 24, fishCount: 1, weightLb: 1 }] }).join()).toContain(
-      '.byHour[0].hour should be <= 23',
-    );
+    expect(
+      timing({ catches: [], totalCatches: 1, byHour: [{ hour: 24, fishCount: 1, weightLb: 1 }] }).join(),
+    ).toContain('.byHour[0].hour should be <= 23');
   });
 });

@@ -143,6 +143,8 @@ describe('report routes', () => {
     expect(solunar.body.unit).toBe('catch');
     // The reference: analytics solunarPeriodAt for each catch, in the lake's zone at its reference point.
     const timing = await get<TimingView>(crew.owner, 'timing');
+    expect(timing.body.totalCatches).toBe(8);
+    expect(timing.body.catches).toHaveLength(8);
     const counts: Record<string, number> = {};
     for (const c of timing.body.catches) {
       const p = solunarPeriodAt(c.caughtAt, LAKE.lat, LAKE.lon, LAKE.timeZone);

@@ -346,7 +346,10 @@ export interface TimingCatch {
 }
 
 export interface TimingView {
+  /** At most 5,000 catches in time order, thinned evenly (first and last kept) when there are more. */
   catches: TimingCatch[];
+  /** Every catch the filters select; more than catches.length when the scatter was thinned. */
+  totalCatches: number;
   /** Local clock hour 0–23. */
   byHour: { hour: number; fishCount: number; weightLb: number }[];
 }

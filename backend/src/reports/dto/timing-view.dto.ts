@@ -34,6 +34,12 @@ export class HourFiguresDto implements HourFigures {
 }
 
 export class TimingViewDto implements TimingView {
-  @ApiProperty({ type: [TimingCatchDto], description: 'at most the latest 5,000 catches' }) catches: TimingCatchDto[];
+  @ApiProperty({
+    type: [TimingCatchDto],
+    description: 'at most 5,000 catches in time order, thinned evenly (first and last kept) when there are more',
+  })
+  catches: TimingCatchDto[];
+  @ApiProperty({ type: 'integer', minimum: 0, description: 'every catch the filters select, before thinning' })
+  totalCatches: number;
   @ApiProperty({ type: [HourFiguresDto], description: 'every catch, hours with a fish only' }) byHour: HourFiguresDto[];
 }

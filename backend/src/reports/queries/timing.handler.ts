@@ -2,11 +2,11 @@ import { EntityManager } from '@mikro-orm/mariadb';
 import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import type { TimingView } from '@shoalbook/shared';
 import { fromMicroLb } from '../../projections/rows';
-import { selectCatches } from '../report-catches';
+import { selectThinnedCatches } from '../report-catches';
 import { eventWhere } from '../report-events';
 import { GetTimingQuery } from './timing.query';
 
-/** The scatter plot shows at most this many catches (the latest); byHour always counts them all. */
+/** The scatter plot shows at most this many catches, thinned evenly over time; byHour always counts them all. */
 export const MAX_TIMING_POINTS = 5000;
 
 @QueryHandler(GetTimingQuery)
@@ -17,7 +17,7 @@ export class GetTimingHandler implements IQueryHandler<GetTimingQuery, TimingVie
     const where = eventWhere(crewId, filters);
     const scope = `c.crew_id = ? AND c.event_id IN (SELECT e.id FROM rm_event e WHERE ${where.sql})`;
     const params = [crewId, ...where.params];
-    const catches = await selectCatches(this.em, scope, params, MAX_TIMING_POINTS);
+    const { catches, total } = await selectThinnedCatches(this.em, scope, params, MAX_TIMING_POINTS);
     const hours: Record<string, unknown>[] = await this.em.execute(
       `SELECT FLOOR(c.local_minutes / 60) AS hour, COUNT(*) AS fish, SUM(c.weight_ulb) AS weight_ulb FROM rm_catch_fact c WHERE ${scope} GROUP BY hour ORDER BY hour`,
       params,
@@ -34,6 +34,7 @@ export class GetTimingHandler implements IQueryHandler<GetTimingQuery, TimingVie
         eventId: c.eventId,
         day: c.day,
       })),
+      totalCatches: total,
       byHour: hours.map((h) => ({
         hour: Number(h.hour),
         fishCount: Number(h.fish),

@@ -11,6 +11,8 @@ import styles from '../components/reports.module.css';
 import { CatchTimingScatter, WeightByHourChart } from '../components/timing-charts';
 import { journalHref } from '../report-paths';
 
+const countOf = (n: number) => n.toLocaleString('en-US');
+
 /** /crews/:crewId/reports/timing: when the fish bit, against sunrise and the solunar periods. */
 export function Component() {
   const { crew } = useReportsContext();
@@ -37,18 +39,26 @@ export function Component() {
       </ReportEmpty>
     );
   else {
-    const { catches } = report.data;
+    const { catches, totalCatches } = report.data;
+    const thinned = totalCatches > catches.length;
     const inPeriods = catches.filter((c) => c.solunarPeriod !== null).length;
     body = (
       <div className={styles.stack}>
         <Text as="p" className={styles.muted}>
-          {catches.length} fish; {inPeriods} of them ({Math.round((inPeriods / catches.length) * 100)} %) came during a
-          solunar period.
+          {countOf(totalCatches)} fish; {countOf(inPeriods)} of{' '}
+          {thinned ? `the ${countOf(catches.length)} shown` : 'them'} ({Math.round((inPeriods / catches.length) * 100)}{' '}
+          %) came during a solunar period.
         </Text>
         <div className={styles.panel}>
           <Heading as="h4" variant="small" className={styles.panelTitle}>
             Each fish by the clock
           </Heading>
+          {thinned ? (
+            <Text as="p" className={styles.muted}>
+              Showing {countOf(catches.length)} of {countOf(totalCatches)} fish, evenly thinned over time (the first and
+              the last kept); the weight by hour counts every fish.
+            </Text>
+          ) : null}
           <CatchTimingScatter catches={catches} unit={units.weight} />
         </div>
         <div className={styles.panel}>
