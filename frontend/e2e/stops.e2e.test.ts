@@ -259,4 +259,38 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
     await expect(seriousAxeViolations(page)).resolves.toEqual([]);
     await screenshot(page, 'stops-demo-hit-rates');
   });
+
+  it('on a phone, "use my position" takes the browser\'s fix and picks the find within 50 m, or none beyond', async () => {
+    const { page, context } = browser;
+    await page.setViewportSize(PHONE);
+    try {
+      await context.grantPermissions(['geolocation']);
+      // 0.0002° north of the shell hump: R·Δφ = 22.2 m (73 ft) on the mean sphere, inside the 50 m rule.
+      await context.setGeolocation({ latitude: 31.6902, longitude: -94.32, accuracy: 6 });
+      await page.goto(dayUrl);
+      const use = stops(page).getByRole('button', { name: 'Use my position' });
+      await use.click();
+      await stops(page)
+        .getByText('Position filled, accurate to ±20 ft; nearest find: Shell hump north, 73 ft.', { exact: true })
+        .waitFor();
+      const where = stops(page).getByRole('combobox', { name: 'Where' });
+      await expect(where.locator('option:checked').textContent()).resolves.toBe(SHELL);
+      // The button is a thumb's target and the form fits the phone's width.
+      await expect(use.boundingBox().then((b) => b?.height)).resolves.toBeGreaterThanOrEqual(44);
+      await expect(page.evaluate(() => document.documentElement.scrollWidth)).resolves.toBeLessThanOrEqual(390);
+
+      // 0.002° north: 222 m (730 ft) from the shell hump, the nearest find, so the stop is at a position of its own.
+      await context.setGeolocation({ latitude: 31.692, longitude: -94.32, accuracy: 6 });
+      await use.click();
+      await stops(page)
+        .getByText(/nearest find: Shell hump north, 730 ft, farther than 164 ft, so no find/)
+        .waitFor();
+      await expect(where.inputValue()).resolves.toBe('__none__');
+      await expect(stops(page).getByRole('textbox', { name: 'Latitude' }).inputValue()).resolves.toBe('31.692');
+      await screenshot(page, 'stops-position-phone');
+    } finally {
+      await context.clearPermissions();
+      await page.setViewportSize(DESK);
+    }
+  });
 });

@@ -5,6 +5,7 @@ import { paths, safeNextPath } from '../config/paths';
 import { api, isApiError } from './api-client';
 import { forgetKeptReads } from './offline-reads';
 import { deviceDb } from './send-queue/runtime';
+import { forgetLastFix } from './use-position';
 
 /** Who is signed in; `null` when nobody is (the API answers 401). */
 export const meQuery = queryOptions({
@@ -63,6 +64,7 @@ export function rememberSignedIn(queryClient: QueryClient, me: MeResponse): void
 
 /** After sign-out or a password reset: nobody is signed in and nothing cached may leak to the next person. */
 export function forgetSignedIn(queryClient: QueryClient): void {
+  forgetLastFix();
   queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== 'me' });
   queryClient.setQueryData(meQuery.queryKey, null);
 }

@@ -11,6 +11,8 @@ import {
   parseLength,
   parseTemperature,
   parseWeight,
+  coordinateInputValue,
+  formatShortDistance,
   readCoordinate,
   weightInputValue,
   lengthInputValue,
@@ -173,5 +175,20 @@ describe('coordinates', () => {
     expect(readCoordinate('120', 'lon', 'en-US')).toBe(120);
     expect(readCoordinate('north', 'lat', 'en-US')).toBeNull();
     expect(readCoordinate('-86,204', 'lon', 'de-DE')).toBe(-86.204);
+  });
+
+  it("writes a phone fix with six decimals in the locale's sign, and reads it back unchanged", () => {
+    expect(coordinateInputValue(34.50031234, 'en-US')).toBe('34.500312');
+    expect(coordinateInputValue(-86.2, 'de-DE')).toBe('-86,2');
+    expect(readCoordinate(coordinateInputValue(-86.2041237, 'de-DE'), 'lon', 'de-DE')).toBe(-86.204124);
+  });
+});
+
+describe('short distances (accuracy of a fix, the way to a find)', () => {
+  it('are whole metres, or whole feet at 1 ft = 0.3048 m', () => {
+    expect(formatShortDistance(4.4, 'm')).toBe('4 m');
+    // 30 m = 98.43 ft, 45 m = 147.64 ft.
+    expect(formatShortDistance(30, 'ft')).toBe('98 ft');
+    expect(formatShortDistance(45, 'ft')).toBe('148 ft');
   });
 });

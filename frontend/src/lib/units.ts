@@ -83,6 +83,11 @@ export function formatDepth(ft: number | null | undefined, unit: DepthUnit): str
   return unit === 'm' ? `${trimmed(units.ftToM(ft), 1)} m` : `${trimmed(ft, 1)} ft`;
 }
 
+/** A short distance (a GPS fix's accuracy, the way to a find) in the depth unit, whole: "38 m" or "125 ft". */
+export function formatShortDistance(m: number, unit: DepthUnit): string {
+  return unit === 'm' ? `${Math.round(m)} m` : `${Math.round(units.mToFt(m))} ft`;
+}
+
 /** A canonical water temperature (°F) in the user's unit, one decimal. */
 export function formatTemperature(f: number | null | undefined, unit: TemperatureUnit): string {
   if (f === null || f === undefined) return '—';
@@ -134,6 +139,11 @@ export function readNumber(text: string, locale: string = userLocale()): number 
 export function readCoordinate(text: string, axis: 'lat' | 'lon', locale: string = userLocale()): number | null {
   const degrees = readNumber(text, locale);
   return degrees !== null && Math.abs(degrees) <= (axis === 'lat' ? 90 : 180) ? degrees : null;
+}
+
+/** Decimal degrees for a coordinate input, six decimals (about 0.1 m), in the locale's decimal sign. */
+export function coordinateInputValue(degrees: number, locale: string = userLocale()): string {
+  return typed(degrees, 6, locale);
 }
 
 const WEIGHT_WORDS: Record<WeightUnit, string> = { lb: 'pounds', 'lb-oz': 'pounds and ounces', kg: 'kilograms' };

@@ -14,12 +14,14 @@ import { v7 as uuidv7 } from 'uuid';
 import { FishCareCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
 import { PhotoField } from '../../../components/journal-forms/photo-field';
+import { PositionFromPhone } from '../../../components/journal-forms/position-from-phone';
 import { ApiRequestError } from '../../../lib/api-client';
 import { crewApiPath } from '../../../lib/journal-keys';
 import { queueWrite, sendQueue } from '../../../lib/send-queue';
 import { clockTime, dayLabel, isClockTime } from '../../../lib/lake-time';
 import type { CatchWithSky } from '../../../lib/journal-types';
 import {
+  coordinateInputValue,
   entryToLb,
   formatWeight,
   parseDepth,
@@ -163,8 +165,8 @@ export function CatchEntryForm({
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [logged, setLogged] = useState<CatchWithSky | null>(null);
   const [photo, setPhoto] = useState<{ photoId: string | null; busy: boolean }>({ photoId: null, busy: false });
-  // A new key clears the photo field (its file input) for the next fish.
-  const [photoKey, setPhotoKey] = useState(0);
+  // A new key clears the photo field (its file input) and the position's message for the next fish.
+  const [nextFishKey, setNextFishKey] = useState(0);
   const [sending, setSending] = useState(false);
   /** The server's refusal of the catch still in the form, or a device that could not store it. */
   const [failure, setFailure] = useState<Error | null>(null);
@@ -240,7 +242,7 @@ export function CatchEntryForm({
     rememberSpecies(values.species);
     setValues((v) => fresh(v));
     setPhoto({ photoId: null, busy: false });
-    setPhotoKey((k) => k + 1);
+    setNextFishKey((k) => k + 1);
     timeRef.current?.focus();
   };
 
@@ -458,6 +460,16 @@ export function CatchEntryForm({
           </Select>,
         )}
       </div>
+      <PositionFromPhone
+        key={`position-${nextFishKey}`}
+        finds={finds}
+        unit={prefs.depth}
+        onFix={(fix) => {
+          // The server attributes a catch by coordinates to the nearest find within 50 m, as the message says.
+          setByCoordinates(true);
+          setValues((v) => ({ ...v, lat: coordinateInputValue(fix.lat), lon: coordinateInputValue(fix.lon) }));
+        }}
+      />
       <div className={styles.row}>
         {field(
           'lure',
@@ -511,7 +523,7 @@ export function CatchEntryForm({
         )}
       </div>
       <PhotoField
-        key={photoKey}
+        key={`photo-${nextFishKey}`}
         crewId={crewId}
         label="Photo (optional)"
         photoId={photo.photoId}

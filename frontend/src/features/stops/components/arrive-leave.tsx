@@ -1,12 +1,13 @@
-import type { FindView, LakeView, StopView } from '@shoalbook/shared';
+import type { DepthUnit, FindView, LakeView, StopView } from '@shoalbook/shared';
 import { clockTime, localDateOf } from '@shoalbook/shared';
 import { Button, FormControl, Select, Text, TextInput } from '@primer/react';
 import { useId, useState, type ReactNode } from 'react';
 import { FormError } from '../../../components/form/form-error';
 import { MovingOnCaution } from '../../../components/cautions/journal-cautions';
+import { PositionFromPhone } from '../../../components/journal-forms/position-from-phone';
 import { ApiRequestError } from '../../../lib/api-client';
 import { isClockTime } from '../../../lib/lake-time';
-import { readCoordinate } from '../../../lib/units';
+import { coordinateInputValue, readCoordinate } from '../../../lib/units';
 import { useLogStop, useUpdateStop } from '../api/stops-api';
 import { NO_FIND, STOP_SERVER_FIELDS, stopPlace } from './stop-fields';
 import styles from './stops.module.css';
@@ -28,6 +29,7 @@ export function ArriveLeave({
   lake,
   finds,
   open,
+  unit,
   onLogged,
   now = () => new Date(),
 }: {
@@ -37,6 +39,8 @@ export function ArriveLeave({
   finds: FindView[];
   /** The signed-in angler's stop still open on this day, if any. */
   open: StopView | null;
+  /** The user's depth unit (ft or m), for the position's accuracy and the way to the nearest find. */
+  unit: DepthUnit;
   /** What was logged, in a sentence (the panel says it: this form is replaced once the stop opens or closes). */
   onLogged: (message: string) => void;
   now?: () => Date;
@@ -80,17 +84,6 @@ export function ArriveLeave({
       validationStatus={status(open ? 'leftAt' : 'arrivedAt')}
     />,
   );
-
-  const locate = () =>
-    navigator.geolocation.getCurrentPosition(
-      (p) => {
-        setLat(p.coords.latitude.toFixed(6));
-        setLon(p.coords.longitude.toFixed(6));
-        setErrors({});
-      },
-      (e) => setErrors({ lat: `The phone gave no position (${e.message || 'refused'}): type it instead.` }),
-      { enableHighAccuracy: true, timeout: 15_000 },
-    );
 
   const arrive = async () => {
     const found: Record<string, string> = {};
@@ -207,11 +200,6 @@ export function ArriveLeave({
                     validationStatus={status('lon')}
                   />,
                 )}
-                {typeof navigator !== 'undefined' && navigator.geolocation ? (
-                  <Button type="button" onClick={locate}>
-                    Use this phone&rsquo;s position
-                  </Button>
-                ) : null}
               </>
             ) : null}
           </>
@@ -221,6 +209,19 @@ export function ArriveLeave({
           {open ? 'Left' : 'Arrived here'}
         </Button>
       </div>
+      {open ? null : (
+        <PositionFromPhone
+          finds={finds}
+          unit={unit}
+          onFix={(fix, nearest) => {
+            // Within 50 m the stop is at that find; farther out it is a stop with no find at this position.
+            setFind(nearest?.picked ? nearest.find.id : NO_FIND);
+            setLat(coordinateInputValue(fix.lat));
+            setLon(coordinateInputValue(fix.lon));
+            setErrors({});
+          }}
+        />
+      )}
       <MovingOnCaution />
     </form>
   );

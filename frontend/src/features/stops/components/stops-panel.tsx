@@ -104,6 +104,7 @@ export function StopsPanel({
             lake={lake}
             finds={finds}
             open={open}
+            unit={prefs.depth}
             onLogged={setSaid}
           />
         ) : null}
