@@ -1,7 +1,7 @@
 // `npm start`: set everything up and run Shoalbook with its demo data on http://127.0.0.1:${PORT:-3000}.
 // Reuses what is already there, so a second run is ready in seconds. Ctrl-C stops everything cleanly.
 import { profile } from './lib/profile.mjs';
-import { stopMariadb } from './lib/mariadb.mjs';
+import { ourPid, stopMariadb } from './lib/mariadb.mjs';
 import { portOpen, prepareDatabase, seed, startBackend, startFakeSmtp } from './lib/services.mjs';
 import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.mjs';
 import { fail, log } from './lib/run.mjs';
@@ -21,19 +21,34 @@ let stopping = false;
 // Only a database this run started is stopped on exit; one that was already running is left alone.
 let ownsDatabase = false;
 
+const running = (c) => c.exitCode === null && c.signalCode === null;
+
+async function stopChild(c) {
+  if (!running(c)) return;
+  const exited = new Promise((r) => c.once('exit', r));
+  c.kill('SIGTERM');
+  const stubborn = setTimeout(() => c.kill('SIGKILL'), 10_000);
+  await exited;
+  clearTimeout(stubborn);
+}
+
 async function stopAll(code = 0) {
-  if (stopping) return;
+  if (stopping) return stopNow();
   stopping = true;
   log('stopping …');
-  for (const c of children.reverse()) {
-    if (c.exitCode === null) {
-      c.kill('SIGTERM');
-      await new Promise((r) => c.once('exit', r));
-    }
-  }
+  for (const c of [...children].reverse()) await stopChild(c);
   if (p && ownsDatabase) await stopMariadb(p).catch(() => {});
-  log('stopped; your data is kept in .data/demo');
+  log(`stopped; your data is kept in .data/${p?.name ?? 'demo'}`);
   process.exit(code);
+}
+
+// A second Ctrl-C or SIGTERM while stopping: kill the children and leave MariaDB finishing its own shutdown.
+function stopNow() {
+  log('stopping at once …');
+  for (const c of children) if (running(c)) c.kill('SIGKILL');
+  const dbPid = p && ownsDatabase ? ourPid(p) : null;
+  if (dbPid) process.kill(dbPid, 'SIGTERM');
+  process.exit(1);
 }
 process.on('SIGINT', () => stopAll(0));
 process.on('SIGTERM', () => stopAll(0));
@@ -41,7 +56,8 @@ process.on('SIGTERM', () => stopAll(0));
 try {
   ensureNpmPackages();
   ensureSystemPackages();
-  p = profile('demo');
+  // SHOALBOOK_START_PROFILE lets the `npm start` test run this on its own profile (see profile.mjs).
+  p = profile(process.env.SHOALBOOK_START_PROFILE || 'demo');
   if (await portOpen(p.port)) {
     fail(
       `port ${p.port} is already in use: is Shoalbook already running? Stop it with Ctrl-C, or set PORT to a free port.`,
@@ -49,14 +65,15 @@ try {
   }
   buildAll();
   log('starting MariaDB and running migrations …');
+  ownsDatabase = !ourPid(p); // known before the start-up ends, so a Ctrl-C during it stops this database too
   ownsDatabase = !(await prepareDatabase(p)).reused;
   seed(p);
-  children.push(await startFakeSmtp(p));
-  const server = await startBackend(p);
-  children.push(server);
-  server.once('exit', (code) => {
+  const track = (c) => children.push(c);
+  await startFakeSmtp(p, { onSpawn: track });
+  const server = await startBackend(p, {}, 'inherit', track);
+  server.once('exit', (code, signal) => {
     if (!stopping) {
-      log(`the server stopped unexpectedly (code ${code})`);
+      log(`the server stopped unexpectedly (${signal ?? `code ${code}`})`);
       stopAll(1);
     }
   });

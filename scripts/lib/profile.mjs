@@ -19,10 +19,21 @@ const DEFAULTS = {
   test6: { dbPort: 3324, port: 3105, smtpPort: 2532, dbName: 'shoalbook_test6' },
 };
 
+// "<test profile>-start" (e.g. test3-start): where the `npm start` test runs scripts/start.mjs
+// (SHOALBOOK_START_PROFILE), beside the test profile's own servers: its ports + 1000, its own data.
+const startCheck = (base) =>
+  base && {
+    dbPort: base.dbPort + 1000,
+    port: base.port + 1000,
+    smtpPort: base.smtpPort + 1000,
+    dbName: `${base.dbName}_start`,
+  };
+
 /** Resolve a profile; the demo profile honours PORT and DB_PORT from the environment. */
 export function profile(requested) {
   const name = requested === 'test' ? process.env.SHOALBOOK_TEST_PROFILE || 'test' : requested;
-  const d = DEFAULTS[name];
+  const d =
+    name.endsWith('-start') && name.startsWith('test') ? startCheck(DEFAULTS[name.slice(0, -6)]) : DEFAULTS[name];
   if (!d) throw new Error(`unknown profile ${name}`);
   const dataDir = join(ROOT, '.data', name);
   const fromEnv = name === 'demo';

@@ -52,8 +52,8 @@ export function portOpen(port) {
   });
 }
 
-/** Start the fake SMTP server; resolves with the child once it listens. */
-export async function startFakeSmtp(p, { clearOutbox = false } = {}) {
+/** Start the fake SMTP server; resolves with the child once it listens (`onSpawn` gets it at once). */
+export async function startFakeSmtp(p, { clearOutbox = false, onSpawn } = {}) {
   if (clearOutbox) rmSync(p.outboxDir, { recursive: true, force: true });
   mkdirSync(p.outboxDir, { recursive: true });
   if (await portOpen(p.smtpPort))
@@ -61,12 +61,16 @@ export async function startFakeSmtp(p, { clearOutbox = false } = {}) {
   const child = spawn(process.execPath, [join(ROOT, 'scripts', 'fake-smtp.mjs'), String(p.smtpPort), p.outboxDir], {
     stdio: ['ignore', 'ignore', 'inherit'],
   });
+  onSpawn?.(child);
   await waitFor(() => portOpen(p.smtpPort), { timeoutMs: 15000, what: 'the fake SMTP server' });
   return child;
 }
 
-/** Start the built back end (serving the API and the built front end); resolves once /api/health answers. */
-export async function startBackend(p, extraEnv = {}, stdio = 'inherit') {
+/**
+ * Start the built back end (serving the API and the built front end); resolves once /api/health answers.
+ * `onSpawn` gets the child at once, so a caller stopping during the start-up can stop it too.
+ */
+export async function startBackend(p, extraEnv = {}, stdio = 'inherit', onSpawn) {
   if (await portOpen(p.port)) throw new Error(`port ${p.port} is already taken; set PORT to a free port`);
   if (!existsSync(join(BACKEND_DIST, 'main.js'))) throw new Error('the back end is not built');
   const child = spawn(process.execPath, [join(BACKEND_DIST, 'main.js')], {
@@ -74,11 +78,13 @@ export async function startBackend(p, extraEnv = {}, stdio = 'inherit') {
     env: backendEnv(p, extraEnv),
     stdio: ['ignore', stdio, stdio],
   });
+  onSpawn?.(child);
   let exited = null;
-  child.once('exit', (c) => (exited = c));
+  // A server killed by a signal exits with code null and the signal's name.
+  child.once('exit', (code, signal) => (exited = signal ?? `code ${code}`));
   await waitFor(
     async () => {
-      if (exited !== null) throw new Error(`the server exited during start-up (code ${exited})`);
+      if (exited !== null) throw new Error(`the server exited during start-up (${exited})`);
       try {
         const r = await fetch(`http://127.0.0.1:${p.port}/api/health`);
         return r.ok;
