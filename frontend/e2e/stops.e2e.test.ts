@@ -9,6 +9,8 @@ const LAKE = 'Willet Flowage (stops test)';
 const EVENT = 'Willet Stops Test Classic';
 const SHELL = 'Shell hump north';
 const GRASS = 'Grass line south';
+// The launch ramp, 0.05° due south of where the boat is put for the run back: 5,559.9 m (R·Δφ, mean sphere).
+const RAMP = { lat: 31.65, lon: -94.32 };
 const PHONE = { width: 390, height: 844 };
 const DESK = { width: 1280, height: 900 };
 
@@ -53,6 +55,7 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
       entryFee: null,
       payout: null,
       finalPlace: null,
+      ramp: RAMP,
       notes: '',
     });
     const [day] = await apiCall<{ id: string; version: number }[]>(
@@ -289,6 +292,40 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
       await expect(stops(page).getByRole('textbox', { name: 'Latitude' }).inputValue()).resolves.toBe('31.692');
       await screenshot(page, 'stops-position-phone');
     } finally {
+      await context.clearPermissions();
+      await page.setViewportSize(DESK);
+    }
+  });
+
+  // Last in the file: the browser's fixed clock cannot be undone for its context.
+  it('on the day itself, the check-in clock counts down and says when to start back, with the network off too', async () => {
+    const { page, context } = browser;
+    await page.setViewportSize(PHONE);
+    try {
+      // 12:42 on the lake clock (CDT, UTC−5) on the competition day; check-in is at 15:00.
+      await page.clock.setFixedTime(new Date('2025-06-14T17:42:00Z'));
+      await context.grantPermissions(['geolocation']);
+      await context.setGeolocation({ latitude: RAMP.lat + 0.05, longitude: RAMP.lon, accuracy: 5 });
+      await page.goto(dayUrl);
+      const clock = page.getByRole('region', { name: 'Check-in' });
+      await expect(clock.getByRole('timer').textContent()).resolves.toBe('2 h 18 min to check-in at 15:00');
+      await clock.getByRole('textbox', { name: 'Cruising speed (mph)' }).fill('30');
+      await clock.getByRole('button', { name: 'Locate for the run back' }).click();
+      // 5,559.9 m at 30 mph (13.4112 m/s) takes 414.6 s: 15:00 less that is 14:53:05.
+      await clock.getByText('Leave by 14:53', { exact: true }).waitFor();
+      await clock.getByText(/^The ramp is 3\.5 mi away in a straight line, about 7 min at 30 mph/).waitFor();
+      await clock.getByRole('complementary', { name: 'Running back to check-in' }).waitFor();
+      await expect(page.evaluate(() => document.documentElement.scrollWidth)).resolves.toBeLessThanOrEqual(390);
+      await screenshot(page, 'stops-check-in-clock-phone');
+      await expect(seriousAxeViolations(page)).resolves.toEqual([]);
+
+      // Nothing of it needs the server: offline, a new position (0.1° out, 11.1 km: 829 s) moves the time.
+      await context.setOffline(true);
+      await context.setGeolocation({ latitude: RAMP.lat + 0.1, longitude: RAMP.lon, accuracy: 5 });
+      await clock.getByRole('button', { name: 'Locate for the run back' }).click();
+      await clock.getByText('Leave by 14:46', { exact: true }).waitFor();
+    } finally {
+      await context.setOffline(false);
       await context.clearPermissions();
       await page.setViewportSize(DESK);
     }

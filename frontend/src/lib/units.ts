@@ -88,6 +88,27 @@ export function formatShortDistance(m: number, unit: DepthUnit): string {
   return unit === 'm' ? `${Math.round(m)} m` : `${Math.round(units.mToFt(m))} ft`;
 }
 
+/** Metres in a statute mile: 5,280 ft × 0.3048 m (exact, NIST SP 811 App. B). */
+export const M_PER_MILE = units.ftToM(5_280);
+
+/** A run across the lake, one decimal: "5.5 km" for metric users, "3.4 mi" (statute miles) otherwise. */
+export function formatLongDistance(m: number, unit: DepthUnit): string {
+  return unit === 'm' ? `${trimmed(m / 1000, 1)} km` : `${trimmed(m / M_PER_MILE, 1)} mi`;
+}
+
+/** A boat's speed goes with the distance unit: km/h beside kilometres, mph (statute) beside miles. */
+export const SPEED_SIGNS: Record<DepthUnit, string> = { m: 'km/h', ft: 'mph' };
+
+/** A speed in the user's unit → metres per second (1 mph = 1,609.344 m / 3,600 s, 1 km/h = 1,000 m / 3,600 s). */
+export function speedToMps(value: number, unit: DepthUnit): number {
+  return ((unit === 'm' ? 1000 : M_PER_MILE) * value) / 3600;
+}
+
+/** Metres per second → the user's speed unit. */
+export function mpsToSpeed(mps: number, unit: DepthUnit): number {
+  return (mps * 3600) / (unit === 'm' ? 1000 : M_PER_MILE);
+}
+
 /** A canonical water temperature (°F) in the user's unit, one decimal. */
 export function formatTemperature(f: number | null | undefined, unit: TemperatureUnit): string {
   if (f === null || f === undefined) return '—';

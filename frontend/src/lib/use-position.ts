@@ -1,7 +1,10 @@
 import { useCallback, useState, useSyncExternalStore } from 'react';
+import { readDeviceSetting, writeDeviceSetting } from './device-setting';
 
 /** A fix worse than this (the radius of the phone's 95 %-ish circle, in metres) is refused unless the angler widens it. */
 export const DEFAULT_FIX_LIMIT_M = 30;
+/** The angler's own limit stays on this device (metres). */
+const FIX_LIMIT_KEY = 'shoalbook.fixLimitM';
 /** How long the phone may look for a fix; a cold GPS in the open usually needs well under this (from memory). */
 export const POSITION_TIMEOUT_MS = 20_000;
 
@@ -30,6 +33,17 @@ function failureMessage(error: GeolocationPositionError): string {
   if (error.code === 3)
     return 'The phone found no fix in time: try again with a clear view of the sky, or type the position.';
   return 'The phone has no position right now: try again in a moment, or type the position.';
+}
+
+const isPositive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0;
+
+/** The coarsest fix the angler accepts on this device, in metres (30 m until changed). */
+export function savedFixLimitM(): number {
+  return readDeviceSetting(FIX_LIMIT_KEY, isPositive, DEFAULT_FIX_LIMIT_M);
+}
+
+export function saveFixLimitM(m: number): void {
+  if (isPositive(m)) writeDeviceSetting(FIX_LIMIT_KEY, m);
 }
 
 export function geolocationSupported(): boolean {

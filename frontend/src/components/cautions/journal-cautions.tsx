@@ -78,3 +78,16 @@ export function PositionsFileCaution() {
     </Caution>
   );
 }
+
+/** Beside the check-in clock: the run back is the fastest and most hurried of the day. */
+export function RunBackCaution() {
+  return (
+    <Caution icon="alert" title="Running back to check-in">
+      A leave-by time here is the latest start for a straight line at full cruising speed; the way by water is longer,
+      and wind, waves, no-wake zones and a queue at the ramp all add to it, so start earlier. Common practice: life
+      jacket on and the engine cut-off link clipped to you before the hull comes up. What late costs is for the
+      event&rsquo;s own rules to say, and local boating law comes first: no check-in is worth a run through lightning or
+      a storm.
+    </Caution>
+  );
+}

@@ -1,9 +1,10 @@
 import type { CatchView, FindView, LakeView, UnitPreferences } from '@shoalbook/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { ArriveLeave } from '../../features/stops/components/arrive-leave';
 import { CatchEntryForm } from '../../features/catches/components/catch-entry-form';
+import { fakeGeolocation, forgetFakeGeolocation } from '../../testing/fake-geolocation';
 import { fakeNetwork, type SeenRequest } from '../../testing/fake-network';
 import { renderWithApp } from '../../testing/render';
 import { forgetLastFix } from '../../lib/use-position';
@@ -81,35 +82,16 @@ function savedCatch(request: SeenRequest): { status: number; body: CatchView } {
     },
   };
 }
+
 /**
  * Metres along a meridian for a latitude difference: R·Δφ on the mean sphere (R = 6,371,008.8 m), exact for two
  * points of the same longitude, so it checks the haversine independently. 0.0003° → 33.36 m.
  */
 const alongMeridianM = (dLat: number) => (dLat * Math.PI * 6_371_008.8) / 180;
 
-type Outcome = { fix: { lat: number; lon: number; accuracy: number } } | { error: { code: number; message: string } };
-
-/** A stand-in for the phone's Geolocation API (navigator.geolocation), answering each request with the next outcome. */
-function fakeGeolocation(...outcomes: Outcome[]) {
-  const getCurrentPosition = vi.fn(
-    (ok: PositionCallback, fail?: PositionErrorCallback | null, _options?: PositionOptions) => {
-      const next = outcomes.shift();
-      if (!next) throw new Error('no more fake positions');
-      if ('fix' in next) {
-        ok({
-          coords: { latitude: next.fix.lat, longitude: next.fix.lon, accuracy: next.fix.accuracy },
-          timestamp: now().getTime(),
-        } as GeolocationPosition);
-      } else fail?.(next.error as GeolocationPositionError);
-    },
-  );
-  Object.defineProperty(navigator, 'geolocation', { configurable: true, value: { getCurrentPosition } });
-  return getCurrentPosition;
-}
-
 beforeEach(() => localStorage.clear());
 afterEach(() => {
-  delete (navigator as { geolocation?: unknown }).geolocation;
+  forgetFakeGeolocation();
   forgetLastFix();
 });
 

@@ -2,18 +2,18 @@ import { MEAN_EARTH_RADIUS_M, nearestFind, units } from '@shoalbook/analytics';
 import { DEFAULT_ATTRIBUTION_RADIUS_M, type DepthUnit, type FindView } from '@shoalbook/shared';
 import { Button, FormControl, Text, TextInput } from '@primer/react';
 import { useId, useState } from 'react';
-import { readDeviceSetting, writeDeviceSetting } from '../../lib/device-setting';
 import { formatShortDistance, readNumber, UNIT_SIGNS } from '../../lib/units';
 import {
   DEFAULT_FIX_LIMIT_M,
   NO_GEOLOCATION_MESSAGE,
+  saveFixLimitM,
+  savedFixLimitM,
   usePosition,
   type PositionFix,
   type PositionStatus,
 } from '../../lib/use-position';
 import styles from './position-from-phone.module.css';
 
-const FIX_LIMIT_KEY = 'shoalbook.fixLimitM';
 /** Half the Earth's circumference: no two positions are farther apart, so every find is a candidate. */
 const ANYWHERE_M = Math.PI * MEAN_EARTH_RADIUS_M;
 
@@ -65,7 +65,7 @@ export function PositionFromPhone({
   onFix: (fix: PositionFix, nearest: NearestFindOf | null) => void;
 }) {
   const position = usePosition();
-  const [savedM] = useState(() => readDeviceSetting(FIX_LIMIT_KEY, isPositive, DEFAULT_FIX_LIMIT_M));
+  const [savedM] = useState(savedFixLimitM);
   const [typed, setTyped] = useState(() => limitText(savedM, unit));
   const [nearest, setNearest] = useState<NearestFindOf | null>(null);
   const id = useId();
@@ -118,7 +118,7 @@ export function PositionFromPhone({
           onChange={(e) => {
             setTyped(e.target.value);
             const n = readNumber(e.target.value);
-            if (isPositive(n)) writeDeviceSetting(FIX_LIMIT_KEY, unit === 'm' ? n : units.ftToM(n));
+            if (isPositive(n)) saveFixLimitM(unit === 'm' ? n : units.ftToM(n));
           }}
           inputMode="decimal"
           autoComplete="off"

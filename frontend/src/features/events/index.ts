@@ -3,6 +3,7 @@ export { EventForm } from './components/event-form';
 export { EventSummary } from './components/event-summary';
 export { CompetitionDayForm } from './components/competition-day-form';
 export { PracticeDaysPanel } from './components/practice-days-panel';
+export { CheckInClock } from './components/check-in-clock';
 export {
   useEvent,
   useEvents,

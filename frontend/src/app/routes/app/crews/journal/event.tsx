@@ -7,6 +7,7 @@ import { DeleteRecordButton } from '../../../../../components/journal-forms/conf
 import { EVENT_SECTIONS, journalPaths, type EventSection } from '../../../../../config/journal-paths';
 import { CatchEntryForm, CatchesTable, useCatches } from '../../../../../features/catches';
 import {
+  CheckInClock,
   CompetitionDayForm,
   EventSummary,
   PracticeDaysPanel,
@@ -205,6 +206,7 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
           </SegmentedControl.Button>
         ))}
       </SegmentedControl>
+      <CheckInClock key={day.id} day={day} lake={lake} ramp={event.ramp ?? null} unit={prefs.depth} />
       {canWrite ? (
         <Details className={styles.details}>
           <Details.Summary>Start, check-in, weather and water of this day</Details.Summary>
