@@ -1,6 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { EventRecapView, EventView, WeighInsView } from '@shoalbook/shared';
+import type { EventRecapView, EventView, LakeComparisonView, WeighInsView } from '@shoalbook/shared';
 import { waitForProjection } from './reports-support';
 import { crewWithMembers, type CrewFixture } from './utils/api-client';
 import { JournalEvent } from '../src/journal-events/journal-event.entity';
@@ -230,6 +230,7 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     const o1 = await log(crew.owner, day1!.id, '08:00', 3.1, 'weighed');
     await log(crew.owner, day1!.id, '09:00', 2.4, 'dead');
     await log(crew.angler, day2!.id, '07:30', 5.05, 'weighed');
+    await log(crew.owner, day2!.id, '08:10', 1.2, 'released'); // never reaches the scale: no weight, no penalty
     expect(a1.loggedBy?.userId).toEqual(expect.any(String));
     expect(o1.loggedBy?.userId).toEqual(expect.any(String));
     expect(o1.loggedBy!.userId).not.toBe(a1.loggedBy!.userId);
@@ -266,6 +267,11 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
     expect(recap.days[0]!.standing.place).toBe('30th of 180 (top 17 %)'); // 30/180 = 16.7 %, rounded up
     expect(recap.days[0]!.standing.behindWinnerLb).toBe(8.53); // 17.9 − 9.37 official
     expect(recap.totals.standing.place).toBe('26th of 180 (top 15 %)');
+    // The lake comparison puts each event's bags and place against its field beside the rates: the recap's totals.
+    const comparison = async () =>
+      (await crew.viewer.get(`${base}/reports/lake-comparison?lakeId=${lake.id}&by=kind`)).body as LakeComparisonView;
+    expect((await comparison()).results[event.id]).toEqual(recap.totals);
+    expect(recap.totals.standing.behindWinnerLb).toBe(16.98); // 31.4 − 14.42 (day 1 official 9.37 + day 2 5.05)
 
     // Individual format: a bag per angler (the event's own rules).
     const updated = await crew.angler.patch(`${base}/events/${event.id}`, {
@@ -279,5 +285,8 @@ describe('weigh-ins: the counted bag under the event rules, and the official ove
       [false, 5.25], // owner: 3.1 + 2.4 dead − 0.25
       [true, 4.2],
     ]);
+    await waitForProjection(app);
+    const soloRecap = (await crew.viewer.get(`${base}/reports/events/${event.id}/recap`)).body as EventRecapView;
+    expect((await comparison()).results[event.id]).toEqual(soloRecap.totals);
   });
 });

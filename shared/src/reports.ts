@@ -167,6 +167,8 @@ export interface LakeComparisonView {
   by: HitRateGroupingKey;
   /** Oldest first. */
   events: ReportEventRef[];
+  /** Each event's bags and its place against its field, by event id: events of different difficulty side by side. */
+  results: Record<string, EventTotals>;
   groups: { key: string | null; label: string; perEvent: Record<string, EventRate> }[];
   /**
    * Differences of the producing rate between consecutive events, and first against last (Newcombe hybrid
@@ -220,6 +222,18 @@ export interface StandingView {
   readings: string[];
 }
 
+/**
+ * An event's bags over its days. officialLb: per day the official weight where recorded, else the computed net;
+ * differenceLb = officialLb − netLb; standing: the final place and the total against the event's field.
+ */
+export interface EventTotals {
+  netLb: number;
+  officialLb: number;
+  differenceLb: number;
+  finalPlace: number | null;
+  standing: StandingView;
+}
+
 export interface RecapDay {
   competitionDayId: string;
   date: string;
@@ -258,17 +272,7 @@ export interface EventRecapView {
     field: FieldContext;
   };
   days: RecapDay[];
-  /**
-   * officialLb: per day the official weight where recorded, else the computed net; differenceLb = officialLb −
-   * netLb; standing: the final place and the total against the event's field.
-   */
-  totals: {
-    netLb: number;
-    officialLb: number;
-    differenceLb: number;
-    finalPlace: number | null;
-    standing: StandingView;
-  };
+  totals: EventTotals;
   producingFinds: {
     findId: string;
     name: string;

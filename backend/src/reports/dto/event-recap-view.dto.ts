@@ -5,6 +5,7 @@ import {
   FIND_KINDS,
   SPECIES,
   type EventRecapView,
+  type EventTotals,
   type Fate,
   type FindKind,
   type FishState,
@@ -20,7 +21,6 @@ import { BagPenaltyItemDto, OfficialDifferenceDto } from '../../weigh-ins/weigh-
 import { RateDto } from './rate-view.dto';
 
 type Recap = EventRecapView;
-type RecapTotals = Recap['totals'];
 type ProducingFind = Recap['producingFinds'][number];
 type TimelinePoint = Recap['timeline'][number];
 const nullableNumber = { type: Number, nullable: true } as const;
@@ -105,7 +105,7 @@ export class RecapEventDto implements Omit<Recap['event'], 'rules'> {
   @ApiProperty({ type: FieldContextViewDto }) field: FieldContextViewDto;
 }
 
-export class RecapTotalsDto implements RecapTotals {
+export class RecapTotalsDto implements EventTotals {
   @ApiProperty({ description: 'lb' }) netLb: number;
   @ApiProperty({ description: 'lb: per day the official weight where recorded, else the computed net' })
   officialLb: number;

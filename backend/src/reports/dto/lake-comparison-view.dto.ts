@@ -7,6 +7,7 @@ import {
   type ReportEventRef,
   type Season,
 } from '@shoalbook/shared';
+import { RecapTotalsDto } from './event-recap-view.dto';
 import { EventRateDto } from './rate-view.dto';
 
 type Comparison = LakeComparisonView['comparisons'][number];
@@ -66,10 +67,17 @@ export class EventComparisonDto implements Comparison {
   @ApiProperty() reading: string;
 }
 
+@ApiExtraModels(RecapTotalsDto)
 export class LakeComparisonViewDto implements LakeComparisonView {
   @ApiProperty({ type: ReportLakeRefDto }) lake: ReportLakeRefDto;
   @ApiProperty({ enum: HIT_RATE_GROUPINGS }) by: HitRateGroupingKey;
   @ApiProperty({ type: [ReportEventRefDto], description: 'oldest first' }) events: ReportEventRefDto[];
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: { $ref: getSchemaPath(RecapTotalsDto) },
+    description: 'keyed by event id: each event’s bags and its place against its field',
+  })
+  results: Record<string, RecapTotalsDto>;
   @ApiProperty({ type: [ComparisonGroupDto] }) groups: ComparisonGroupDto[];
   @ApiProperty({ type: [EventComparisonDto] }) comparisons: EventComparisonDto[];
 }

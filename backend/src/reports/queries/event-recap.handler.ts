@@ -1,16 +1,15 @@
 import { EntityManager } from '@mikro-orm/mariadb';
 import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
-import type { EventRecapView, FindKind, RecapDay } from '@shoalbook/shared';
+import type { EventRecapView, FindKind } from '@shoalbook/shared';
 import { fromMicroLb } from '../../projections/rows';
-import { bagOfDay, differenceOf } from '../../weigh-ins/bag-rule';
+import { bagOfDay } from '../../weigh-ins/bag-rule';
+import { dayResult, eventTotals, selectDayRows } from '../day-results';
 import { fishPerHour, singleRate } from '../rates';
 import { percent, plural } from '../readings';
 import { reportFish, selectCatches, type ReportCatch } from '../report-catches';
-import { standingOf } from '../standing';
 import { findLake, selectEvents } from '../report-events';
 import { GetEventRecapQuery } from './event-recap.query';
 
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 const bagInput = (catches: readonly ReportCatch[]) => catches.map((c) => ({ ...c, id: c.catchId }));
 
 /** The recap from rm_event, rm_competition_day, rm_catch_fact, rm_find_outcome and rm_find. */
@@ -22,49 +21,15 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
     const [event] = await selectEvents(this.em, crewId, { eventId });
     if (!event) return null;
     const lake = await findLake(this.em, crewId, event.lakeId);
-    const dayRows: Record<string, unknown>[] = await this.em.execute(
-      'SELECT id, date, has_official, official_gross_lb, official_penalty_lb, official_lb, day_place, late_minutes, field_size, winning_lb, cut_lb FROM rm_competition_day WHERE crew_id = ? AND event_id = ? ORDER BY date',
-      [crewId, eventId],
-    );
+    const dayRows = await selectDayRows(this.em, crewId, [eventId]);
     const catches = await selectCatches(this.em, 'c.crew_id = ? AND c.event_id = ?', [crewId, eventId]);
-    const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
-
-    const days: RecapDay[] = dayRows.map((d) => {
-      const mine = catches.filter((c) => c.competitionDayId === d.id);
-      const official =
-        Number(d.has_official) === 1 || d.has_official === true
-          ? {
-              grossLb: n(d.official_gross_lb),
-              penaltyLb: n(d.official_penalty_lb),
-              officialLb: n(d.official_lb),
-              dayPlace: n(d.day_place),
-              lateMinutes: n(d.late_minutes),
-            }
-          : null;
-      const bag = bagOfDay(bagInput(mine), event.rules, official?.lateMinutes ?? null);
-      const byId = new Map(mine.map((c) => [c.catchId, c]));
-      const field = { fieldSize: n(d.field_size), winningLb: n(d.winning_lb), cutLb: n(d.cut_lb) };
-      return {
-        competitionDayId: String(d.id),
-        date: String(d.date),
-        counted: bag.counted.map((id) => reportFish(byId.get(id)!)),
-        fish: bag.fish.map((v) => ({
-          ...reportFish(byId.get(v.catchId)!),
-          state: v.state,
-          weighed: v.weighed,
-          penaltyLb: v.penaltyLb,
-        })),
-        penalties: bag.penalties,
-        grossLb: bag.grossLb,
-        penaltyLb: bag.penaltyLb,
-        netLb: bag.netLb,
-        official,
-        difference: differenceOf(official, bag),
-        dayPlace: official?.dayPlace ?? null,
-        field,
-        standing: standingOf(official?.dayPlace ?? null, official?.officialLb ?? bag.netLb, field),
-      };
-    });
+    const days = dayRows.map((d) =>
+      dayResult(
+        d,
+        catches.filter((c) => c.competitionDayId === d.id),
+        event.rules,
+      ),
+    );
 
     const timeline: EventRecapView['timeline'] = [];
     for (const d of dayRows) {
@@ -106,13 +71,12 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
       null,
     );
 
-    const netLb = clean(days.reduce((s, d) => s + d.netLb, 0));
+    const totals = eventTotals(days, event);
     const fishCounted = days.reduce((s, d) => s + d.counted.length, 0);
     const findsFished = outcomes.filter((o) => isTrue(o.fished)).length;
     const secondsFished = outcomes.reduce((s, o) => s + Number(o.seconds_fished), 0);
     // Fish from finds over the time on finds (a fish with no find was not caught in any find's time).
     const findFish = outcomes.reduce((s, o) => s + Number(o.fish_count), 0);
-    const officialLb = clean(days.reduce((s, d) => s + (d.official?.officialLb ?? d.netLb), 0));
     const readings: string[] = [];
     if (!catches.length)
       readings.push(
@@ -120,7 +84,7 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
       );
     else {
       readings.push(
-        `${plural(catches.length, 'fish', 'fish')} caught, ${fishCounted} counted over ${plural(days.length, 'day')}; the counted bags make ${netLb.toFixed(2)} lb after penalties.`,
+        `${plural(catches.length, 'fish', 'fish')} caught, ${fishCounted} counted over ${plural(days.length, 'day')}; the counted bags make ${totals.netLb.toFixed(2)} lb after penalties.`,
       );
       if (event.derivedFromCatches)
         readings.push(
@@ -152,13 +116,7 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
         field: event.field,
       },
       days,
-      totals: {
-        netLb,
-        officialLb,
-        differenceLb: clean(officialLb - netLb),
-        finalPlace: event.finalPlace,
-        standing: standingOf(event.finalPlace, officialLb, event.field),
-      },
+      totals,
       producingFinds,
       timeline,
       bigFish: big ? reportFish(big) : null,

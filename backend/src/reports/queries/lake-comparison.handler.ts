@@ -7,6 +7,7 @@ import { ApiException, ErrorCode } from '../../common/errors/api-errors';
 import { eventLabel, groupLabel } from '../labels';
 import { fishPerHour, groupRates } from '../rates';
 import { differenceText, percent, pValueText } from '../readings';
+import { eventResults } from '../day-results';
 import { findLake, placeholders, selectEvents } from '../report-events';
 import { GetLakeComparisonQuery } from './lake-comparison.query';
 
@@ -34,6 +35,7 @@ export class GetLakeComparisonHandler implements IQueryHandler<GetLakeComparison
       lake: { id: lake.id, name: lake.name },
       by,
       events: refs,
+      results: await eventResults(this.em, crewId, events),
       groups: [],
       comparisons: [],
     };

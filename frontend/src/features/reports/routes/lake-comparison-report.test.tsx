@@ -56,6 +56,29 @@ const report: LakeComparisonReport = {
     { key: 'vegetation', label: 'Vegetation', perEvent: { 'ev-1': withFished(3, 25), 'ev-2': withFished(14, 31) } },
   ],
   comparisons: [hardChange, vegetationChange],
+  // Invented figures: a hard first event against a field of 180, an easy second one with no field entered.
+  results: {
+    'ev-1': {
+      netLb: 14.5,
+      officialLb: 14.42,
+      differenceLb: -0.08,
+      finalPlace: 26,
+      standing: {
+        place: '26th of 180 (top 15 %)',
+        topPercent: 15,
+        behindWinnerLb: 16.98,
+        overCutLb: null,
+        readings: ['26th of 180 (top 15 %)', '16.98 lb behind the winner'],
+      },
+    },
+    'ev-2': {
+      netLb: 21.3,
+      officialLb: 21.3,
+      differenceLb: 0,
+      finalPlace: null,
+      standing: { place: null, topPercent: null, behindWinnerLb: null, overCutLb: null, readings: [] },
+    },
+  },
 };
 
 describe('Same-lake comparison', () => {
@@ -84,12 +107,22 @@ describe('Same-lake comparison', () => {
     expect(within(legend).getByText('Summer Test Open 2023')).toBeInTheDocument();
     expect(within(legend).getByText('Summer Test Open 2024')).toBeInTheDocument();
 
-    const table = screen.getByRole('table');
+    const table = screen.getByRole('table', { name: /^Hit rate per event/ });
     const veg = within(table).getByRole('rowheader', { name: 'Vegetation' }).closest('tr')!;
     expect(veg).toHaveTextContent('12 %');
     expect(veg).toHaveTextContent('3 of 25');
     expect(veg).toHaveTextContent('14 of 31');
     expect(net.to('GET /api/crews/crew-1/reports/lake-comparison').length).toBeGreaterThan(0);
+
+    // Each event against its own field, official weight first and our own count beside it when they differ.
+    const results = screen.getByRole('table', { name: /^Each event's counted bags/ });
+    const hard = within(results).getByRole('rowheader', { name: 'Summer Test Open 2023' }).closest('tr')!;
+    expect(hard).toHaveTextContent('14.42 lb; our count 14.50 lb');
+    expect(hard).toHaveTextContent('26th of 180 (top 15 %)');
+    expect(hard).toHaveTextContent('16.98 lb behind the winner');
+    const easy = within(results).getByRole('rowheader', { name: 'Summer Test Open 2024' }).closest('tr')!;
+    expect(easy).toHaveTextContent('21.30 lb');
+    expect(easy).not.toHaveTextContent('our count');
   });
 
   it('says what to enter when the lake has a single event', async () => {

@@ -3,6 +3,7 @@ import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { useDocumentTitle } from '../../../components/layouts/page-header';
+import { useUnitPreferences } from '../../../lib/journal-access';
 import { useReportFilters } from '../api/report-filters';
 import { HIT_RATE_GROUPINGS } from '../api/report-types';
 import { useLakeComparison } from '../api/reports-api';
@@ -10,6 +11,7 @@ import { ComparisonsList } from '../components/comparisons-list';
 import { GroupingSwitch, readGrouping } from '../components/grouping-switch';
 import { LakeComparisonChart } from '../components/lake-comparison-chart';
 import { DerivedNote } from '../components/derived-note';
+import { EventResultsTable } from '../components/event-results-table';
 import { LakeComparisonTable } from '../components/lake-comparison-table';
 import { ReportEmpty } from '../components/report-empty';
 import { ReportFilters } from '../components/report-filters';
@@ -28,6 +30,7 @@ export function Component() {
   const [params, setParams] = useSearchParams();
   const by = readGrouping(params, COMPARISON_GROUPINGS);
   const report = useLakeComparison(crew.id, by, { ...filters, eventId: undefined });
+  const units = useUnitPreferences();
   useDocumentTitle(`Same lake, across events · ${crew.name}`);
 
   // With no lake chosen, open the lake with the most events: that is where a comparison says most.
@@ -80,7 +83,7 @@ export function Component() {
       </ReportEmpty>
     );
   } else {
-    const { events: compared, groups, comparisons } = report.data;
+    const { events: compared, groups, comparisons, results } = report.data;
     body = (
       <div className={styles.stack}>
         <div className={styles.split}>
@@ -103,6 +106,7 @@ export function Component() {
         </div>
         <DerivedNote events={compared.filter((e) => e.derivedFromCatches).length} />
         <LakeComparisonTable events={compared} groups={groups} />
+        <EventResultsTable events={compared} results={results} units={units} />
       </div>
     );
   }
