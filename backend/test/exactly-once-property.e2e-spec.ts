@@ -107,9 +107,9 @@ describe('exactly once over a bad network (property)', () => {
           sent.push({ ...request, key, first });
           if (w.kind === 'log') {
             const view = first.body as CatchView;
-            known.push({ id, version: view.version, weightLb: w.weightLb, journal: ['CatchLogged'], deleted: false });
+            known.push({ id, version: view.version!, weightLb: w.weightLb, journal: ['CatchLogged'], deleted: false });
           } else if (w.kind === 'edit') {
-            Object.assign(target!, { version: (first.body as CatchView).version, weightLb: w.weightLb });
+            Object.assign(target!, { version: (first.body as CatchView).version!, weightLb: w.weightLb });
             target!.journal.push('CatchUpdated');
           } else {
             target!.deleted = true;
