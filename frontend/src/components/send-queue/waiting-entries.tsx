@@ -1,13 +1,27 @@
 import { Label, Text } from '@primer/react';
+import type { SendKind } from '../../lib/device-db';
 import { useSendEntries } from '../../lib/send-queue';
 import styles from './send-queue.module.css';
 
 /**
  * Entries of one crew (and, if given, one scope such as a competition day) still on this device: shown at once
- * beside the records the server already has, so a fish logged without signal is visibly kept.
+ * beside the records the server already has, so a fish logged without signal is visibly kept. `kinds` keeps
+ * only those kinds of entry (a list of catches shows the catches waiting).
  */
-export function WaitingEntries({ userId, crewId, scope }: { userId: string; crewId: string; scope?: string }) {
-  const entries = useSendEntries(userId).filter((e) => e.crewId === crewId && (!scope || e.scope === scope));
+export function WaitingEntries({
+  userId,
+  crewId,
+  scope,
+  kinds,
+}: {
+  userId: string;
+  crewId: string;
+  scope?: string;
+  kinds?: SendKind[];
+}) {
+  const entries = useSendEntries(userId).filter(
+    (e) => e.crewId === crewId && (!scope || e.scope === scope) && (!kinds || kinds.includes(e.kind)),
+  );
   if (entries.length === 0) return null;
   return (
     <section aria-label="Not sent yet" className={styles.waiting}>

@@ -1,12 +1,15 @@
 import type { LogStopRequest, StopDeletedView, StopView, UpdateStopRequest } from '@shoalbook/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { v7 as uuidv7 } from 'uuid';
 import { api } from '../../../lib/api-client';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
+import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
 
 /**
- * Every stop write of the front end goes through this module (one function per route), so the send queue on
- * the device can take them over in one place.
+ * Every stop write of the front end goes through this module (one function per route). "Arrived here",
+ * "Left" and the edit form go through the send queue on the device, as catches do: a stop logged without
+ * signal is kept on the phone and sent later with its Idempotency-Key.
  */
 const stopsPath = (crewId: string) => crewApiPath(crewId, '/stops');
 const stopPath = (crewId: string, stopId: string) => crewApiPath(crewId, `/stops/${encodeURIComponent(stopId)}`);
@@ -20,28 +23,83 @@ export function useDayStops(crewId: string, competitionDayId: string) {
   });
 }
 
-function useStopWrite<TInput, TAnswer>(crewId: string, send: (input: TInput) => Promise<TAnswer>) {
+/** A stop write through the send queue: the server's answer, or 'waiting' while the phone keeps it. */
+function useQueuedStopWrite<TInput>(crewId: string, send: (input: TInput) => Promise<FormSendResult<StopView>>) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: send,
-    // A stop changes which finds count as fished: the reports follow, as after every journal write.
-    onSuccess: () => refreshCrewJournal(queryClient, crewId),
+    onSuccess: (result) => {
+      // Still on the phone: the queue refreshes the lists when it sends it.
+      if (result.kind !== 'sent') return;
+      // The answer takes the place of the stop shown from the queue at once, before the list is read again.
+      const stop = result.answer;
+      queryClient.setQueryData<StopView[]>(journalKeys.stops(crewId, stop.competitionDayId), (old) =>
+        old ? [...old.filter((s) => s.id !== stop.id), stop] : old,
+      );
+      // A stop changes which finds count as fished: the reports follow, as after every journal write.
+      return refreshCrewJournal(queryClient, crewId);
+    },
   });
 }
 
-/** POST /stops: "arrived here" (leftAt usually follows with {@link useUpdateStop}). */
-export function useLogStop(crewId: string) {
-  return useStopWrite(crewId, (input: LogStopRequest) => api.post<StopView>(stopsPath(crewId), input));
+/** What the stop forms give beside the request: how the send queue names the entry. */
+interface Queued {
+  label: string;
 }
 
-/** PATCH /stops/:stopId: "left" (leftAt) or the edit form; carries the version the stop was loaded with. */
-export function useUpdateStop(crewId: string) {
-  return useStopWrite(crewId, ({ stopId, ...changes }: UpdateStopRequest & { stopId: string }) =>
-    api.patch<StopView>(stopPath(crewId, stopId), changes),
+/**
+ * POST /stops through the send queue: "arrived here" (leftAt usually follows with {@link useUpdateStop}). The
+ * stop gets its id here (UUID v7), so a "left" queued after an arrival still on the phone names the right stop.
+ */
+export function useLogStop(userId: string, crewId: string) {
+  return useQueuedStopWrite(crewId, ({ label, ...input }: LogStopRequest & Queued) => {
+    const id = input.id ?? uuidv7();
+    return sendFromForm<StopView>({
+      userId,
+      crewId,
+      kind: 'stop',
+      method: 'POST',
+      path: stopsPath(crewId),
+      body: { ...input, id },
+      recordId: id,
+      label,
+      scope: input.competitionDayId,
+    });
+  });
+}
+
+/**
+ * PATCH /stops/:stopId through the send queue: "left" (leftAt) or the edit form; carries the version the stop
+ * will have when the server gets this change (see waiting-stops.ts).
+ */
+export function useUpdateStop(userId: string, crewId: string) {
+  return useQueuedStopWrite(
+    crewId,
+    ({
+      stopId,
+      competitionDayId,
+      label,
+      ...changes
+    }: UpdateStopRequest & Queued & { stopId: string; competitionDayId: string }) =>
+      sendFromForm<StopView>({
+        userId,
+        crewId,
+        kind: 'stop',
+        method: 'PATCH',
+        path: stopPath(crewId, stopId),
+        body: changes,
+        recordId: stopId,
+        label,
+        scope: competitionDayId,
+      }),
   );
 }
 
 /** DELETE /stops/:stopId: the stop goes, its catches stay (the answer lists them and says so). */
 export function useDeleteStop(crewId: string) {
-  return useStopWrite(crewId, (stopId: string) => api.delete<StopDeletedView>(stopPath(crewId, stopId)));
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (stopId: string) => api.delete<StopDeletedView>(stopPath(crewId, stopId)),
+    onSuccess: () => refreshCrewJournal(queryClient, crewId),
+  });
 }

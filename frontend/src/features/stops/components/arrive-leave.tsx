@@ -22,8 +22,13 @@ function messagesOf(failure: unknown, local: Record<string, string>, field: stri
  * The two quick buttons of a competition day: "Arrived here" (a find, or "no find" with a position, at the
  * time shown, now on the lake clock) and, while the angler's stop is open, "Left". The running caution sits
  * beside them: leaving a stop usually means running on plane again.
+ *
+ * Both go into the send queue on the device first: without signal the stop opens (or closes) at once, marked
+ * "waiting to send", and the queue sends it when the network is back. A refusal on the first try is shown
+ * beside the fields, the values kept.
  */
 export function ArriveLeave({
+  userId,
   crewId,
   day,
   lake,
@@ -33,11 +38,12 @@ export function ArriveLeave({
   onLogged,
   now = () => new Date(),
 }: {
+  userId: string;
   crewId: string;
   day: { id: string; date: string };
   lake: LakeView;
   finds: FindView[];
-  /** The signed-in angler's stop still open on this day, if any. */
+  /** The signed-in angler's stop still open on this day, if any (one still on the phone included). */
   open: StopView | null;
   /** The user's depth unit (ft or m), for the position's accuracy and the way to the nearest find. */
   unit: DepthUnit;
@@ -45,8 +51,8 @@ export function ArriveLeave({
   onLogged: (message: string) => void;
   now?: () => Date;
 }) {
-  const logStop = useLogStop(crewId);
-  const updateStop = useUpdateStop(crewId);
+  const logStop = useLogStop(userId, crewId);
+  const updateStop = useUpdateStop(userId, crewId);
   const [find, setFind] = useState('');
   // Now on the lake clock while the day is on; a day logged afterwards has no "now" to offer.
   const nowOnDay = () => {
@@ -58,6 +64,7 @@ export function ArriveLeave({
   const [lon, setLon] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const formId = useId();
+  const findName = (id: string) => finds.find((f) => f.id === id)?.name ?? 'a find';
   const failure = open ? updateStop.error : logStop.error;
   const msgs = (field: string) => messagesOf(failure, errors, field);
   const status = (field: string) => (msgs(field).length ? ('error' as const) : undefined);
@@ -98,13 +105,19 @@ export function ArriveLeave({
     }
     setErrors(found);
     if (Object.keys(found).length) return;
-    const stop = await logStop.mutateAsync({
+    const place = find === NO_FIND ? stopPlace({ findId: null, findName: null, lat: latN, lon: lonN }) : findName(find);
+    const result = await logStop.mutateAsync({
       competitionDayId: day.id,
       arrivedAt: time.trim(),
       findId: find === NO_FIND ? null : find,
       ...(hasPos ? { lat: latN, lon: lonN } : {}),
+      label: `Stop at ${place}, arrived ${time.trim()}`,
     });
-    onLogged(`Arrived at ${stopPlace(stop)} at ${clockTime(stop.arrivedAt, lake.timeZone)}.`);
+    onLogged(
+      result.kind === 'sent'
+        ? `Arrived at ${stopPlace(result.answer)} at ${clockTime(result.answer.arrivedAt, lake.timeZone)}.`
+        : `Arrived at ${place} at ${time.trim()}: saved on this phone, waiting to send.`,
+    );
     setLat('');
     setLon('');
     setTime(nowOnDay());
@@ -117,8 +130,17 @@ export function ArriveLeave({
       return;
     }
     setErrors({});
-    const stop = await updateStop.mutateAsync({ stopId: open.id, leftAt: time.trim(), version: open.version });
-    onLogged(`Left ${stopPlace(stop)} at ${clockTime(stop.leftAt!, lake.timeZone)} after ${stop.minutes} min.`);
+    const result = await updateStop.mutateAsync({
+      stopId: open.id,
+      competitionDayId: day.id,
+      leftAt: time.trim(),
+      version: open.version,
+      label: `Left ${stopPlace(open)} at ${time.trim()}`,
+    });
+    if (result.kind === 'sent') {
+      const stop = result.answer;
+      onLogged(`Left ${stopPlace(stop)} at ${clockTime(stop.leftAt!, lake.timeZone)} after ${stop.minutes} min.`);
+    } else onLogged(`Left ${stopPlace(open)} at ${time.trim()}: saved on this phone, waiting to send.`);
     setTime(nowOnDay());
   };
 

@@ -7,7 +7,7 @@ import { ApiRequestError } from '../../../lib/api-client';
 import { isClockTime } from '../../../lib/lake-time';
 import { entryToF, parseOptional, parseTemperature, temperatureInputValue, UNIT_SIGNS } from '../../../lib/units';
 import { useUpdateStop } from '../api/stops-api';
-import { NO_FIND, STOP_SERVER_FIELDS } from './stop-fields';
+import { NO_FIND, STOP_SERVER_FIELDS, stopPlace } from './stop-fields';
 import styles from './stops.module.css';
 
 interface Values {
@@ -22,9 +22,11 @@ interface Values {
 /**
  * Change a stop: where (a find or no find; a stop with no find keeps its position), arrival and leaving on
  * the lake clock (leaving empty = still there), water temperature, and the lure and technique its catches
- * start with. Only what changed is sent, with the version the stop was loaded with.
+ * start with. Only what changed is sent, through the send queue, with the version the stop was loaded with
+ * (for a stop with changes still on the phone, the version it will have once they are sent).
  */
 export function StopEditForm({
+  userId,
   crewId,
   stop,
   lake,
@@ -32,6 +34,7 @@ export function StopEditForm({
   prefs,
   onDone,
 }: {
+  userId: string;
   crewId: string;
   stop: StopView;
   lake: LakeView;
@@ -49,7 +52,7 @@ export function StopEditForm({
   };
   const [values, setValues] = useState(initial);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const update = useUpdateStop(crewId);
+  const update = useUpdateStop(userId, crewId);
   const formId = useId();
   const msgs = (field: string) => [
     ...(errors[field] ? [errors[field]] : []),
@@ -98,7 +101,15 @@ export function StopEditForm({
     if (values.waterTemp !== initial.waterTemp) changes.waterTempF = temp.entry ? entryToF(temp.entry) : null;
     if (values.lure !== initial.lure) changes.lure = values.lure.trim();
     if (values.technique !== initial.technique) changes.technique = values.technique.trim();
-    if (Object.keys(changes).length > 1) await update.mutateAsync({ stopId: stop.id, ...changes });
+    if (Object.keys(changes).length > 1) {
+      // Kept on the phone first (as "left" is); without signal the list shows the change as waiting to send.
+      await update.mutateAsync({
+        stopId: stop.id,
+        competitionDayId: stop.competitionDayId,
+        label: `Changes to the stop at ${stopPlace(stop)}, ${initial.arrivedAt}`,
+        ...changes,
+      });
+    }
     onDone();
   };
 

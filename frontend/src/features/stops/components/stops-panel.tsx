@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { DeleteRecordButton } from '../../../components/journal-forms/confirm-delete-dialog';
 import { clockTime } from '../../../lib/lake-time';
+import { useSendEntries } from '../../../lib/send-queue';
 import { formatTemperature, formatWeight } from '../../../lib/units';
 import { useDayStops, useDeleteStop } from '../api/stops-api';
 import { ArriveLeave } from './arrive-leave';
@@ -12,16 +13,35 @@ import { DayTimeline } from './day-timeline';
 import { layoutDay } from './day-timeline-model';
 import { StopEditForm } from './stop-edit-form';
 import { stopPlace, stopSpan, toCheckText } from './stop-fields';
+import { withWaitingStops, type ShownStop } from './waiting-stops';
 import styles from './stops.module.css';
 
 /** The signed-in angler's stop still open on a day (the one "Left" closes and whose lure the catch form takes). */
-export function openStopOf(stops: StopView[] | undefined, userId: string): StopView | null {
+export function openStopOf<T extends StopView>(stops: T[] | undefined, userId: string): T | null {
   return stops?.find((s) => !s.leftAt && s.loggedBy?.userId === userId) ?? null;
 }
 
-/** The open stop of the signed-in angler on a day, from the same query as the stops panel. */
-export function useOpenStop(crewId: string, dayId: string, userId: string): StopView | null {
-  return openStopOf(useDayStops(crewId, dayId).data, userId);
+interface DayOfStops {
+  crewId: string;
+  userId: string;
+  day: Pick<CompetitionDayView, 'id' | 'date' | 'eventId'>;
+  timeZone: string;
+  finds: FindView[];
+}
+
+/** The day's stops from the server with those still in the send queue on this phone (see waiting-stops.ts). */
+export function useShownDayStops({ crewId, userId, day, timeZone, finds }: DayOfStops) {
+  const query = useDayStops(crewId, day.id);
+  const entries = useSendEntries(userId);
+  const stops = query.data
+    ? withWaitingStops(query.data, entries, { crewId, userId, day, timeZone, finds })
+    : undefined;
+  return { query, stops };
+}
+
+/** The open stop of the signed-in angler on a day, a stop still on the phone included. */
+export function useOpenStop(day: DayOfStops): ShownStop | null {
+  return openStopOf(useShownDayStops(day).stops, day.userId);
 }
 
 function timelineSummary(stops: StopView[], catches: CatchView[], loose: number): string {
@@ -59,7 +79,7 @@ export function StopsPanel({
   prefs: UnitPreferences;
   canWrite: boolean;
 }) {
-  const stops = useDayStops(crewId, day.id);
+  const { query: stops, stops: shown } = useShownDayStops({ crewId, userId, day, timeZone: lake.timeZone, finds });
   const remove = useDeleteStop(crewId);
   const [editing, setEditing] = useState<string | null>(null);
   const [said, setSaid] = useState<string | null>(null);
@@ -67,7 +87,7 @@ export function StopsPanel({
   const body = () => {
     if (stops.isPending) return <LoadingState label="Loading the stops…" />;
     if (stops.isError) return <ErrorState error={stops.error} onRetry={() => stops.refetch()} />;
-    const list = stops.data;
+    const list = shown ?? [];
     const stopOfCatch = new Map(list.flatMap((s) => s.catchIds.map((id) => [id, s.id] as const)));
     const toCheck = new Set(list.flatMap((s) => s.catchesToCheck.map((c) => c.catchId)));
     const model = layoutDay(
@@ -99,6 +119,7 @@ export function StopsPanel({
         {canWrite ? (
           <ArriveLeave
             key={open?.id ?? 'none'}
+            userId={userId}
             crewId={crewId}
             day={day}
             lake={lake}
@@ -125,7 +146,9 @@ export function StopsPanel({
                   <div className={styles.stopHead}>
                     <span>
                       <span className={styles.stopTitle}>{stopSpan(s, lake.timeZone)}</span> · {stopPlace(s)}{' '}
-                      {s.catchIds.length ? (
+                      {s.onDevice ? (
+                        <OnDeviceLabel stop={s} />
+                      ) : s.catchIds.length ? (
                         <Label variant="success">{s.catchIds.length} fish</Label>
                       ) : s.leftAt ? (
                         <Label variant="secondary">fished, no bite</Label>
@@ -143,19 +166,22 @@ export function StopsPanel({
                         >
                           Edit
                         </Button>
-                        <DeleteRecordButton
-                          compact
-                          record={`the stop at ${stopPlace(s)}, ${clockTime(s.arrivedAt, lake.timeZone)}`}
-                          consequence={
-                            s.catchIds.length
-                              ? `Its ${s.catchIds.length} catch${s.catchIds.length === 1 ? '' : 'es'} stay in the journal, unattached: they are then in no stop.`
-                              : 'It has no catches. The find then counts as fished only through its other stops.'
-                          }
-                          onDelete={async () => {
-                            const answer = await remove.mutateAsync(s.id);
-                            setSaid(answer.message);
-                          }}
-                        />
+                        {/* Not on the server yet (or changed on the phone only): there is nothing to delete there yet. */}
+                        {s.onDevice ? null : (
+                          <DeleteRecordButton
+                            compact
+                            record={`the stop at ${stopPlace(s)}, ${clockTime(s.arrivedAt, lake.timeZone)}`}
+                            consequence={
+                              s.catchIds.length
+                                ? `Its ${s.catchIds.length} catch${s.catchIds.length === 1 ? '' : 'es'} stay in the journal, unattached: they are then in no stop.`
+                                : 'It has no catches. The find then counts as fished only through its other stops.'
+                            }
+                            onDelete={async () => {
+                              const answer = await remove.mutateAsync(s.id);
+                              setSaid(answer.message);
+                            }}
+                          />
+                        )}
                       </span>
                     ) : null}
                   </div>
@@ -167,6 +193,12 @@ export function StopsPanel({
                     {s.technique ? <span>Technique {s.technique}</span> : null}
                     {s.loggedBy ? <span>Logged by {s.loggedBy.displayName}</span> : null}
                   </div>
+                  {s.onDevice?.state === 'needs-you' && s.onDevice.message ? (
+                    <Text as="p" size="small" className={styles.check}>
+                      The server refused it: {s.onDevice.message} Use “needs you” at the top of the page to send it
+                      again or discard it.
+                    </Text>
+                  ) : null}
                   {check ? (
                     <Text size="small" className={styles.check}>
                       <Label variant="attention">To check</Label> {check}
@@ -174,6 +206,7 @@ export function StopsPanel({
                   ) : null}
                   {editing === s.id ? (
                     <StopEditForm
+                      userId={userId}
                       crewId={crewId}
                       stop={s}
                       lake={lake}
@@ -204,5 +237,14 @@ export function StopsPanel({
       </Heading>
       {body()}
     </section>
+  );
+}
+
+/** A stop kept on this phone: waiting to send, or refused by the server and waiting for the angler. */
+function OnDeviceLabel({ stop }: { stop: ShownStop }) {
+  return stop.onDevice?.state === 'needs-you' ? (
+    <Label variant="danger">Needs you</Label>
+  ) : (
+    <Label variant="attention">Waiting to send</Label>
   );
 }

@@ -23,6 +23,7 @@ import { StopsPanel, useOpenStop } from '../../../../../features/stops';
 import { LiveBagPanel, WeighInsPanel } from '../../../../../features/weigh-ins';
 import { WaitingEntries } from '../../../../../components/send-queue/waiting-entries';
 import { useSignedInMe } from '../../../../../lib/auth';
+import type { SendKind } from '../../../../../lib/device-db';
 import { dayLabel } from '../../../../../lib/lake-time';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
@@ -168,6 +169,9 @@ function EventFindsTable({ crewId, event, lake, prefs, canWrite }: SectionProps)
   );
 }
 
+/** The day's catches list shows the catches still on the phone; stops waiting show in the stops panel. */
+const CATCH_KINDS: SendKind[] = ['log-catch'];
+
 function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   const [search, setSearch] = useSearchParams();
   const me = useSignedInMe();
@@ -176,7 +180,13 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
   const dayId = search.get('day');
   const day = days.data?.competition.find((d) => d.id === dayId) ?? days.data?.competition[0];
   const catches = useCatches(crewId, { competitionDayId: day?.id });
-  const openStop = useOpenStop(crewId, day?.id ?? '', me.user.id);
+  const openStop = useOpenStop({
+    crewId,
+    userId: me.user.id,
+    day: day ?? { id: '', date: '', eventId: event.id },
+    timeZone: lake.timeZone,
+    finds: finds.data ?? [],
+  });
   if (days.isPending) return <LoadingState label="Loading the days…" />;
   if (days.isError) return <ErrorState error={days.error} onRetry={() => days.refetch()} />;
   const competition = days.data.competition;
@@ -253,7 +263,7 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
       <Heading as="h3" className={styles.subheading}>
         Catches of {dayLabel(day.date)}
       </Heading>
-      <WaitingEntries userId={me.user.id} crewId={crewId} scope={day.id} />
+      <WaitingEntries userId={me.user.id} crewId={crewId} scope={day.id} kinds={CATCH_KINDS} />
       <DayCatches
         crewId={crewId}
         dayId={day.id}

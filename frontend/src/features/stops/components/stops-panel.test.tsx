@@ -1,0 +1,192 @@
+import type { CompetitionDayView, LakeView, StopView, UnitPreferences } from '@shoalbook/shared';
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { deviceDb } from '../../../lib/send-queue';
+import { sendQueue } from '../../../lib/send-queue';
+import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
+import { renderWithApp } from '../../../testing/render';
+import { StopsPanel } from './stops-panel';
+
+const lake: LakeView = {
+  id: 'l1',
+  name: 'Test Reservoir',
+  region: 'Test',
+  timeZone: 'America/Chicago',
+  lat: 34.5,
+  lon: -86.2,
+  areaAcres: null,
+  notes: '',
+  version: 1,
+};
+const day: CompetitionDayView = {
+  id: 'd1',
+  eventId: 'e1',
+  date: '2025-04-12',
+  startTime: '06:30',
+  checkInTime: '15:00',
+  weatherNotes: '',
+  waterTempF: null,
+  entered: { waterTemp: null },
+  version: 1,
+};
+const finds = [{ id: 'f1', name: 'Rock pile' }] as never[];
+const prefs: UnitPreferences = { weight: 'lb-oz', length: 'in', depth: 'ft', temperature: 'F' };
+const csrf = { status: 200, body: { csrfToken: 'tok' } };
+// Uuid v7 (RFC 9562 §5.7): version nibble 7, variant 10xx.
+const UUID_V7 = /^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/;
+
+/** A server that keeps the stops it is sent (by their client-made id) while `online`, and fails to answer otherwise. */
+function stopServer() {
+  const state = { online: false, stops: new Map<string, StopView>() };
+  // 07:15 and 09:40 on 2025-04-12 in Chicago are 12:15 and 14:40 UTC (CDT, UTC−5, IANA tz database).
+  const instant = (hhmm: string) => {
+    const [h, m] = hhmm.split(':').map(Number);
+    return new Date(Date.UTC(2025, 3, 12, h + 5, m)).toISOString();
+  };
+  const routes: Parameters<typeof fakeNetwork>[0] = {
+    'GET /api/auth/csrf': csrf,
+    'GET /api/crews/c1/stops': () => ({ status: 200, body: [...state.stops.values()] }),
+    'POST /api/crews/c1/stops': (r: SeenRequest) => {
+      if (!state.online) throw new TypeError('Failed to fetch');
+      const b = r.body as { id: string; findId: string; arrivedAt: string };
+      const stop: StopView = {
+        id: b.id,
+        eventId: 'e1',
+        competitionDayId: 'd1',
+        competitionDate: day.date,
+        findId: b.findId,
+        findName: 'Rock pile',
+        lat: null,
+        lon: null,
+        arrivedAt: instant(b.arrivedAt),
+        leftAt: null,
+        minutes: null,
+        waterTempF: null,
+        lure: '',
+        technique: '',
+        notes: '',
+        loggedBy: { userId: 'u1', displayName: 'Ann' },
+        catchIds: [],
+        catchesToCheck: [],
+        version: 1,
+      };
+      state.stops.set(stop.id, stop);
+      // From now on the stop can be changed at its own path.
+      routes[`PATCH /api/crews/c1/stops/${stop.id}`] = (p: SeenRequest) => {
+        if (!state.online) throw new TypeError('Failed to fetch');
+        const now = state.stops.get(stop.id)!;
+        const changes = p.body as { leftAt: string; version: number };
+        if (changes.version !== now.version)
+          return { status: 409, body: { statusCode: 409, error: 'Conflict', message: 'stale', code: 'stale_version' } };
+        const left = { ...now, leftAt: instant(changes.leftAt), minutes: 145, version: now.version + 1 };
+        state.stops.set(stop.id, left);
+        return { status: 200, body: left };
+      };
+      return { status: 201, body: stop };
+    },
+  };
+  const net = fakeNetwork(routes).install();
+  return { net, state };
+}
+
+// Each test starts with an empty queue on the device.
+beforeEach(() => deviceDb.sendQueue.clear());
+
+function renderPanel() {
+  return renderWithApp(
+    <StopsPanel crewId="c1" userId="u1" day={day} lake={lake} finds={finds} catches={[]} prefs={prefs} canWrite />,
+  );
+}
+
+describe('StopsPanel without signal', () => {
+  it('opens a stop kept on the phone, leaves that same stop, and sends both in order once there is signal', async () => {
+    const { net, state } = stopServer();
+    const user = userEvent.setup();
+    renderPanel();
+
+    const form = await screen.findByRole('form', { name: 'Log a stop' });
+    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
+    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
+    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '07:15');
+    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+
+    // Shown at once as the open stop, marked waiting; the form turns into "Left" for it.
+    expect(
+      await screen.findByText(/Arrived at Rock pile at 07:15: saved on this phone, waiting to send/),
+    ).toBeVisible();
+    const list = screen.getByRole('list', { name: `Stops of ${day.date}` });
+    expect(within(list).getByText('Waiting to send')).toBeVisible();
+    expect(within(list).getByText(/since 07:15, still there/)).toBeVisible();
+    const leave = await screen.findByRole('form', { name: 'Leave this stop' });
+    await user.clear(within(leave).getByRole('textbox', { name: /Left at/ }));
+    await user.type(within(leave).getByRole('textbox', { name: /Left at/ }), '09:40');
+    await user.click(within(leave).getByRole('button', { name: 'Left' }));
+    expect(await screen.findByText(/Left Rock pile at 09:40: saved on this phone, waiting to send/)).toBeVisible();
+    expect(await within(list).findByText(/07:15–09:40 \(145 min\)/)).toBeVisible();
+    expect(await screen.findByRole('form', { name: 'Log a stop' })).toBeVisible();
+
+    const queued = await sendQueue.entries('u1');
+    expect(queued.map((e) => [e.kind, e.method, e.state])).toEqual([
+      ['stop', 'POST', 'waiting'],
+      ['stop', 'PATCH', 'waiting'],
+    ]);
+    const stopId = queued[0].recordId!;
+    expect(stopId).toMatch(UUID_V7);
+    expect((queued[0].body as { id: string }).id).toBe(stopId);
+    // "Left" names the stop made on the phone, at the version it has once its arrival is in.
+    expect(queued[1].path).toBe(`/crews/c1/stops/${stopId}`);
+    expect(queued[1].body).toEqual({ leftAt: '09:40', version: 1 });
+    // The PATCH waits behind the arrival: it was never tried while the arrival could not go.
+    expect(net.to(`PATCH /api/crews/c1/stops/${stopId}`)).toHaveLength(0);
+
+    state.online = true;
+    await sendQueue.drain('u1', { now: true });
+
+    expect(await sendQueue.entries('u1')).toEqual([]);
+    // One stop on the server, with both times; every attempt of an entry carried that entry's one key.
+    expect(state.stops.size).toBe(1);
+    expect(state.stops.get(stopId)).toMatchObject({ leftAt: '2025-04-12T14:40:00.000Z', version: 2 });
+    const posts = net.to('POST /api/crews/c1/stops');
+    expect(new Set(posts.map((r) => r.headers['idempotency-key']))).toEqual(new Set([`"${queued[0].key}"`]));
+    expect(net.to(`PATCH /api/crews/c1/stops/${stopId}`).map((r) => r.headers['idempotency-key'])).toEqual([
+      `"${queued[1].key}"`,
+    ]);
+    await waitFor(() => expect(within(list).queryByText('Waiting to send')).not.toBeInTheDocument());
+  });
+});
+
+describe('StopsPanel when the server refuses a stop sent later', () => {
+  it('keeps the stop on the phone as "needs you" with the server\'s message', async () => {
+    const { state } = stopServer();
+    const user = userEvent.setup();
+    renderPanel();
+    const form = await screen.findByRole('form', { name: 'Log a stop' });
+    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
+    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
+    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '05:10');
+    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+    await screen.findByText(/saved on this phone, waiting to send/);
+
+    // Back in signal, the server refuses it (before the day's start, say): it stays, for the angler to act on.
+    const message = 'Arrival 05:10 is before the day starts (06:30).';
+    fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'GET /api/crews/c1/stops': { status: 200, body: [] },
+      'POST /api/crews/c1/stops': {
+        status: 400,
+        body: { statusCode: 400, error: 'Bad Request', message, fieldErrors: { arrivedAt: [message] } },
+      },
+    }).install();
+    await sendQueue.drain('u1', { now: true });
+
+    const list = screen.getByRole('list', { name: `Stops of ${day.date}` });
+    expect(await within(list).findByText('Needs you')).toBeVisible();
+    expect(
+      within(list).getByText(new RegExp(`The server refused it: ${message.replace(/[().]/g, '\\$&')}`)),
+    ).toBeVisible();
+    const [entry] = await sendQueue.entries('u1');
+    expect(entry).toMatchObject({ state: 'needs-you', lastError: { statusCode: 400, message } });
+    expect(state.stops.size).toBe(0);
+  });
+});
