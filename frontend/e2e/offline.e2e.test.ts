@@ -22,6 +22,22 @@ async function logCatchOffline(page: Page, c: { time: string; weight: string; le
     .waitFor({ timeout: 30_000 });
 }
 
+/** "Arrived here" at a position with no find, then "Left", both without signal: each says it waits to send. */
+async function logStopOffline(page: Page, s: { arrived: string; left: string; lat: string; lon: string }) {
+  const arrive = page.getByRole('form', { name: 'Log a stop' });
+  await arrive.getByRole('combobox', { name: 'Where' }).selectOption({ label: 'No find (give the position)' });
+  await arrive.getByRole('textbox', { name: 'Latitude' }).fill(s.lat);
+  await arrive.getByRole('textbox', { name: 'Longitude' }).fill(s.lon);
+  await arrive.getByRole('textbox', { name: /^Arrived at/ }).fill(s.arrived);
+  await arrive.getByRole('button', { name: 'Arrived here' }).click();
+  await page.getByText(`at ${s.arrived}: saved on this phone, waiting to send`).waitFor({ timeout: 30_000 });
+  // The stop made on the phone is the open one: "Left" closes it.
+  const leave = page.getByRole('form', { name: 'Leave this stop' });
+  await leave.getByRole('textbox', { name: /^Left at/ }).fill(s.left);
+  await leave.getByRole('button', { name: 'Left' }).click();
+  await page.getByText(`at ${s.left}: saved on this phone, waiting to send`).waitFor({ timeout: 30_000 });
+}
+
 describe('on the water without signal: catches kept on the phone, sent once when the network is back', () => {
   let browser: Browser;
   let crewApi = '';
@@ -85,7 +101,7 @@ describe('on the water without signal: catches kept on the phone, sent once when
   });
 
   it(
-    'logs three catches offline, keeps them through a closed tab, opens offline and sends each exactly once',
+    'logs three catches and a stop offline, keeps them through a closed tab, opens offline and sends each exactly once',
     { timeout: 240_000 },
     async () => {
       const { context, page } = browser;
@@ -103,7 +119,9 @@ describe('on the water without signal: catches kept on the phone, sent once when
       await logCatchOffline(page, { time: '07:12', weight: '3.41', length: '17' });
       await logCatchOffline(page, { time: '08:03', weight: '2.27', length: '15.5' });
       await logCatchOffline(page, { time: '09:48', weight: '4.06', length: '18.5' });
-      await page.getByRole('button', { name: /^3 waiting to send/ }).waitFor();
+      await logStopOffline(page, { arrived: '06:50', left: '10:05', lat: '32.5131', lon: '-95.1052' });
+      // Three catches, the arrival and the leaving.
+      await page.getByRole('button', { name: /^5 waiting to send/ }).waitFor();
       await screenshot(page, 'offline-three-waiting-phone');
 
       // Close the tab and open the app in a new one, still offline: the service worker serves the shell and the
@@ -115,7 +133,9 @@ describe('on the water without signal: catches kept on the phone, sent once when
       await waiting.getByText('Waiting to send').first().waitFor({ timeout: 30_000 });
       await expect(waiting.getByRole('listitem').count()).resolves.toBe(3);
       for (const time of ['07:12', '08:03', '09:48']) await waiting.getByText(`at ${time}`).waitFor();
-      await again.getByRole('button', { name: /^3 waiting to send/ }).waitFor();
+      await again.getByRole('button', { name: /^5 waiting to send/ }).waitFor();
+      const stops = again.getByRole('list', { name: 'Stops of 2025-07-19' });
+      await stops.getByRole('listitem').filter({ hasText: '06:50–10:05' }).getByText('Waiting to send').waitFor();
       const noScroll = await again.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
       expect(noScroll, 'no horizontal scroll at 390 px').toBe(true);
       await screenshot(again, 'offline-reopened-phone');
@@ -124,7 +144,8 @@ describe('on the water without signal: catches kept on the phone, sent once when
       await waiting.waitFor({ state: 'detached', timeout: 60_000 });
       const table = again.getByRole('table', { name: 'Catches of the day' });
       for (const time of ['07:12', '08:03', '09:48']) await table.getByRole('row').filter({ hasText: time }).waitFor();
-      await expect(again.getByRole('button', { name: /waiting to send/ }).count()).resolves.toBe(0);
+      // The stop's two entries go after the catches (the queue keeps the crew's order), then nothing waits.
+      await again.getByRole('button', { name: /waiting to send/ }).waitFor({ state: 'detached', timeout: 60_000 });
       await screenshot(again, 'offline-sent-phone');
 
       // Exactly three on the server, each as typed (in whatever weight unit the angler's preferences say).
@@ -135,6 +156,21 @@ describe('on the water without signal: catches kept on the phone, sent once when
       );
       expect(catches).toHaveLength(3);
       expect(catches.map((c) => c.entered?.weight.value).sort()).toEqual([2.27, 3.41, 4.06]);
+      // Exactly one stop, arrived and left at the times typed: 06:50 and 10:05 CDT (UTC−5) on 2025-07-19.
+      const [day] = await apiCall<{ id: string }[]>(again, 'GET', `${crewApi}/events/${eventId}/competition-days`);
+      const stopsOnServer = await apiCall<{ arrivedAt: string; leftAt: string; catchIds: string[] }[]>(
+        again,
+        'GET',
+        `${crewApi}/stops?competitionDayId=${day.id}`,
+      );
+      expect(stopsOnServer).toHaveLength(1);
+      const [only] = stopsOnServer;
+      expect([new Date(only.arrivedAt).toISOString(), new Date(only.leftAt).toISOString()]).toEqual([
+        '2025-07-19T11:50:00.000Z',
+        '2025-07-19T15:05:00.000Z',
+      ]);
+      expect(stopsOnServer[0].catchIds).toHaveLength(3);
+      await stops.getByRole('listitem').filter({ hasText: '06:50–10:05' }).getByText('3 fish').waitFor();
     },
   );
 });

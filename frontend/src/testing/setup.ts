@@ -36,6 +36,11 @@ if (!('ResizeObserver' in window)) {
   Object.defineProperty(globalThis, 'ResizeObserver', { writable: true, value: ResizeObserverStub });
 }
 
+// Primer's tooltips (IconButton) add the popover polyfill's styles through adoptedStyleSheets, which jsdom lacks.
+if (!('adoptedStyleSheets' in document)) {
+  Object.defineProperty(document, 'adoptedStyleSheets', { writable: true, value: [] });
+}
+
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();

@@ -192,6 +192,7 @@ describe('Use my position on the stop form', () => {
   function renderStopForm() {
     return renderWithApp(
       <ArriveLeave
+        userId="u1"
         crewId="c1"
         day={day}
         lake={lake}

@@ -1,10 +1,11 @@
 import type { LogStopRequest, StopDeletedView, StopView, UpdateStopRequest } from '@shoalbook/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import { v7 as uuidv7 } from 'uuid';
 import { api } from '../../../lib/api-client';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
-import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
+import { sendFromForm, sendQueue, type FormSendResult } from '../../../lib/send-queue';
 
 /**
  * Every stop write of the front end goes through this module (one function per route). "Arrived here",
@@ -31,15 +32,33 @@ function useQueuedStopWrite<TInput>(crewId: string, send: (input: TInput) => Pro
     onSuccess: (result) => {
       // Still on the phone: the queue refreshes the lists when it sends it.
       if (result.kind !== 'sent') return;
-      // The answer takes the place of the stop shown from the queue at once, before the list is read again.
-      const stop = result.answer;
-      queryClient.setQueryData<StopView[]>(journalKeys.stops(crewId, stop.competitionDayId), (old) =>
-        old ? [...old.filter((s) => s.id !== stop.id), stop] : old,
-      );
       // A stop changes which finds count as fished: the reports follow, as after every journal write.
       return refreshCrewJournal(queryClient, crewId);
     },
   });
+}
+
+/**
+ * Puts the server's answer to every stop write the queue sends (from a form or later, in the background) into
+ * the day's list at once: the entry leaves the queue before the list is read again, and the stop must not
+ * vanish in between (an edit form open on it would lose what was typed). The read that follows the send
+ * replaces an older read still on its way, so the list never goes back to before the answer.
+ */
+export function useSentStopsInDayLists() {
+  const queryClient = useQueryClient();
+  useEffect(
+    () =>
+      sendQueue.onSent((entry, answer) => {
+        if (entry.kind !== 'stop' || entry.method === 'DELETE') return;
+        const stop = answer as StopView;
+        queryClient.setQueryData<StopView[]>(journalKeys.stops(entry.crewId, stop.competitionDayId), (old) =>
+          old && !old.some((s) => s.id === stop.id && s.version > stop.version)
+            ? [...old.filter((s) => s.id !== stop.id), stop]
+            : old,
+        );
+      }),
+    [queryClient],
+  );
 }
 
 /** What the stop forms give beside the request: how the send queue names the entry. */

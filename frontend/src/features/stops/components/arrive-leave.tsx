@@ -18,26 +18,7 @@ function messagesOf(failure: unknown, local: Record<string, string>, field: stri
   return [...(local[field] ? [local[field]] : []), ...server];
 }
 
-/**
- * The two quick buttons of a competition day: "Arrived here" (a find, or "no find" with a position, at the
- * time shown, now on the lake clock) and, while the angler's stop is open, "Left". The running caution sits
- * beside them: leaving a stop usually means running on plane again.
- *
- * Both go into the send queue on the device first: without signal the stop opens (or closes) at once, marked
- * "waiting to send", and the queue sends it when the network is back. A refusal on the first try is shown
- * beside the fields, the values kept.
- */
-export function ArriveLeave({
-  userId,
-  crewId,
-  day,
-  lake,
-  finds,
-  open,
-  unit,
-  onLogged,
-  now = () => new Date(),
-}: {
+interface ArriveLeaveProps {
   userId: string;
   crewId: string;
   day: { id: string; date: string };
@@ -50,9 +31,54 @@ export function ArriveLeave({
   /** What was logged, in a sentence (the panel says it: this form is replaced once the stop opens or closes). */
   onLogged: (message: string) => void;
   now?: () => Date;
-}) {
+}
+
+/**
+ * The two quick buttons of a competition day: "Arrived here" (a find, or "no find" with a position, at the
+ * time shown, now on the lake clock) and, while the angler's stop is open, "Left". The running caution sits
+ * beside them: leaving a stop usually means running on plane again.
+ *
+ * Both go into the send queue on the device first: without signal the stop opens (or closes) at once, marked
+ * "waiting to send", and the queue sends it when the network is back. A refusal on the first try is shown
+ * beside the fields, the values kept: the queue shows the stop opened (or closed) from the moment it holds the
+ * entry, so while that first try is on the form stays as it was sent from, and it starts afresh only once the
+ * stop really opened or closed.
+ */
+export function ArriveLeave({ userId, crewId, ...form }: ArriveLeaveProps) {
   const logStop = useLogStop(userId, crewId);
   const updateStop = useUpdateStop(userId, crewId);
+  const [sentFrom, setSentFrom] = useState<{ open: StopView | null } | null>(null);
+  const open = sentFrom ? sentFrom.open : form.open;
+  const send = async <T,>(write: () => Promise<T>): Promise<T> => {
+    setSentFrom({ open });
+    try {
+      return await write();
+    } finally {
+      setSentFrom(null);
+    }
+  };
+  return (
+    <StopButtons key={open?.id ?? 'none'} {...form} open={open} logStop={logStop} updateStop={updateStop} send={send} />
+  );
+}
+
+function StopButtons({
+  day,
+  lake,
+  finds,
+  open,
+  unit,
+  onLogged,
+  now = () => new Date(),
+  logStop,
+  updateStop,
+  send,
+}: Omit<ArriveLeaveProps, 'userId' | 'crewId'> & {
+  logStop: ReturnType<typeof useLogStop>;
+  updateStop: ReturnType<typeof useUpdateStop>;
+  /** Runs a write with the form held as it is until the write's first try is over. */
+  send: <T>(write: () => Promise<T>) => Promise<T>;
+}) {
   const [find, setFind] = useState('');
   // Now on the lake clock while the day is on; a day logged afterwards has no "now" to offer.
   const nowOnDay = () => {
@@ -106,13 +132,15 @@ export function ArriveLeave({
     setErrors(found);
     if (Object.keys(found).length) return;
     const place = find === NO_FIND ? stopPlace({ findId: null, findName: null, lat: latN, lon: lonN }) : findName(find);
-    const result = await logStop.mutateAsync({
-      competitionDayId: day.id,
-      arrivedAt: time.trim(),
-      findId: find === NO_FIND ? null : find,
-      ...(hasPos ? { lat: latN, lon: lonN } : {}),
-      label: `Stop at ${place}, arrived ${time.trim()}`,
-    });
+    const result = await send(() =>
+      logStop.mutateAsync({
+        competitionDayId: day.id,
+        arrivedAt: time.trim(),
+        findId: find === NO_FIND ? null : find,
+        ...(hasPos ? { lat: latN, lon: lonN } : {}),
+        label: `Stop at ${place}, arrived ${time.trim()}`,
+      }),
+    );
     onLogged(
       result.kind === 'sent'
         ? `Arrived at ${stopPlace(result.answer)} at ${clockTime(result.answer.arrivedAt, lake.timeZone)}.`
@@ -130,13 +158,15 @@ export function ArriveLeave({
       return;
     }
     setErrors({});
-    const result = await updateStop.mutateAsync({
-      stopId: open.id,
-      competitionDayId: day.id,
-      leftAt: time.trim(),
-      version: open.version,
-      label: `Left ${stopPlace(open)} at ${time.trim()}`,
-    });
+    const result = await send(() =>
+      updateStop.mutateAsync({
+        stopId: open.id,
+        competitionDayId: day.id,
+        leftAt: time.trim(),
+        version: open.version,
+        label: `Left ${stopPlace(open)} at ${time.trim()}`,
+      }),
+    );
     if (result.kind === 'sent') {
       const stop = result.answer;
       onLogged(`Left ${stopPlace(stop)} at ${clockTime(stop.leftAt!, lake.timeZone)} after ${stop.minutes} min.`);

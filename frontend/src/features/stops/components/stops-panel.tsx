@@ -7,7 +7,7 @@ import { DeleteRecordButton } from '../../../components/journal-forms/confirm-de
 import { clockTime } from '../../../lib/lake-time';
 import { useSendEntries } from '../../../lib/send-queue';
 import { formatTemperature, formatWeight } from '../../../lib/units';
-import { useDayStops, useDeleteStop } from '../api/stops-api';
+import { useDayStops, useDeleteStop, useSentStopsInDayLists } from '../api/stops-api';
 import { ArriveLeave } from './arrive-leave';
 import { DayTimeline } from './day-timeline';
 import { layoutDay } from './day-timeline-model';
@@ -80,6 +80,7 @@ export function StopsPanel({
   canWrite: boolean;
 }) {
   const { query: stops, stops: shown } = useShownDayStops({ crewId, userId, day, timeZone: lake.timeZone, finds });
+  useSentStopsInDayLists();
   const remove = useDeleteStop(crewId);
   const [editing, setEditing] = useState<string | null>(null);
   const [said, setSaid] = useState<string | null>(null);
@@ -118,7 +119,6 @@ export function StopsPanel({
         <DayTimeline model={model} timeZone={lake.timeZone} summary={timelineSummary(list, catches, loose)} />
         {canWrite ? (
           <ArriveLeave
-            key={open?.id ?? 'none'}
             userId={userId}
             crewId={crewId}
             day={day}
