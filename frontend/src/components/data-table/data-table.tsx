@@ -168,10 +168,9 @@ export function DataTable<T>({
   return (
     <div className={styles.wrapper}>
       <div className={styles.toolbar}>
-        <FormControl className={styles.search}>
-          <FormControl.Label htmlFor={filterId}>Filter</FormControl.Label>
+        <FormControl className={styles.search} id={filterId}>
+          <FormControl.Label>Filter</FormControl.Label>
           <TextInput
-            id={filterId}
             leadingVisual={SearchIcon}
             placeholder={filterPlaceholder}
             value={globalFilter}
