@@ -75,11 +75,18 @@ export interface AxeViolation {
   nodes: { target: string[] }[];
 }
 
+/** Where axe looks (CSS selectors; the whole page by default) and rules it runs beyond its defaults. */
+export interface AxeScope {
+  include?: string[];
+  /** Rule ids to turn on, e.g. 'color-contrast-enhanced' (7:1, WCAG 2.2 SC 1.4.6, off in axe by default). */
+  enable?: string[];
+}
+
 /**
  * Run axe-core on the page as it is now; returns the serious and critical violations in a readable form.
  * The script is evaluated through the DevTools protocol, so the app's strict CSP stays on.
  */
-export async function seriousAxeViolations(page: Page): Promise<string[]> {
+export async function seriousAxeViolations(page: Page, scope: AxeScope = {}): Promise<string[]> {
   // Colours are judged at rest: a dialog fading in would otherwise read as low contrast.
   // Only finite animations end; a spinner's never does, and the wait is capped either way.
   await page.evaluate(() => {
@@ -88,13 +95,16 @@ export async function seriousAxeViolations(page: Page): Promise<string[]> {
     return Promise.race([settled, new Promise((resolve) => setTimeout(resolve, 2000))]);
   });
   await page.evaluate(AXE_SOURCE);
-  const violations = (await page.evaluate(async () => {
+  const violations = (await page.evaluate(async ({ include, enable }) => {
     const axe = (
-      window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: unknown[] }> } }
+      window as unknown as {
+        axe: { run: (ctx: Document | { include: string[] }, opts: object) => Promise<{ violations: unknown[] }> };
+      }
     ).axe;
-    const result = await axe.run(document, { resultTypes: ['violations'] });
+    const rules = Object.fromEntries((enable ?? []).map((id) => [id, { enabled: true }]));
+    const result = await axe.run(include ? { include } : document, { resultTypes: ['violations'], rules });
     return result.violations;
-  })) as AxeViolation[];
+  }, scope)) as AxeViolation[];
   return violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${v.impact}: ${v.id} (${v.help}) at ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);

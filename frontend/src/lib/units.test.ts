@@ -17,6 +17,7 @@ import {
   weightInputValue,
   lengthInputValue,
   temperatureInputValue,
+  stepWeight,
 } from './units';
 
 // Exact defined factors, NIST SP 811 (2008) Appendix B.8/B.9 and 16 CFR 500.19 (the 1959 international
@@ -190,5 +191,21 @@ describe('short distances (accuracy of a fix, the way to a find)', () => {
     // 30 m = 98.43 ft, 45 m = 147.64 ft.
     expect(formatShortDistance(30, 'ft')).toBe('98 ft');
     expect(formatShortDistance(45, 'ft')).toBe('148 ft');
+  });
+});
+
+describe("weight steps (the phone form's steppers)", () => {
+  it("steps in the user's unit and never below 0; an empty field is 0, text that is no weight is left alone", () => {
+    // 1.56 kg + 0.05 kg = 1.61 kg; in de-DE the decimal sign is the comma, both ways (CLDR).
+    expect(stepWeight('1.56', 'kg', 0.05, 'en-US')).toBe('1.61');
+    expect(stepWeight('1,56', 'kg', 0.05, 'de-DE')).toBe('1,61');
+    expect(stepWeight('0.3', 'kg', -0.5, 'en-US')).toBe('0');
+    // 3-15 is 63 oz; one more is 64 oz = 4 lb 0 oz (1 lb = 16 oz).
+    expect(stepWeight('3-15', 'lb-oz', 1, 'en-US')).toBe('4-0');
+    expect(stepWeight('', 'lb-oz', -16, 'en-US')).toBe('0-0');
+    expect(stepWeight('', 'lb', 0.05, 'en-US')).toBe('0.05');
+    // 2 lb typed in a kilogram form: 0.90718474 kg (× 0.45359237), up 0.05, to the gram.
+    expect(stepWeight('2 lb', 'kg', 0.05, 'en-US')).toBe('0.957');
+    expect(stepWeight('three', 'lb', 1, 'en-US')).toBeNull();
   });
 });

@@ -343,6 +343,45 @@ export function weightHint(unit: WeightUnit, locale = userLocale()): string {
   return `Pounds and hundredths, e.g. ${formatTypedNumber(3.45, locale)} (or 3 lb 7 oz)`;
 }
 
+/** The stepper buttons beside a weight input: a whole pound (half a kilo) and a fine step, in the user's unit. */
+export const WEIGHT_STEPS: Record<WeightUnit, readonly { by: number; label: string }[]> = {
+  lb: [
+    { by: 1, label: '1 lb' },
+    { by: 0.05, label: '0.05 lb' },
+  ],
+  // In ounces: 1 lb = 16 oz (NIST Handbook 44 App. C).
+  'lb-oz': [
+    { by: 16, label: '1 lb' },
+    { by: 1, label: '1 oz' },
+  ],
+  kg: [
+    { by: 0.5, label: '0.5 kg' },
+    { by: 0.05, label: '0.05 kg' },
+  ],
+};
+
+/**
+ * The typed weight moved by a step (see WEIGHT_STEPS; negative steps down), written in the user's unit as the
+ * input takes it; never below 0. An empty field counts as 0; text that is not a weight is left as it is (null).
+ */
+export function stepWeight(text: string, unit: WeightUnit, by: number, locale: string = userLocale()): string | null {
+  let lb = 0;
+  if (text.trim()) {
+    const parsed = parseWeight(text, unit, 'Weight', locale);
+    if (!parsed.ok) return null;
+    lb = entryToLb(parsed.entry);
+  }
+  if (unit === 'lb-oz') {
+    const ounces = Math.max(0, Math.round((lb * 16 + by) * 100) / 100);
+    const whole = Math.floor(ounces / 16);
+    return `${whole}-${typed(ounces - whole * 16, 2, locale)}`;
+  }
+  const current = unit === 'kg' ? units.lbToKg(lb) : lb;
+  const decimals = unit === 'kg' ? 3 : 2;
+  const factor = 10 ** decimals;
+  return typed(Math.max(0, Math.round((current + by) * factor) / factor), decimals, locale);
+}
+
 /** Optional field: blank means "not recorded" (null), otherwise parsed. */
 export function parseOptional<T>(text: string, parse: (t: string) => Parsed<T>): Parsed<T | null> {
   return text.trim() ? parse(text) : { ok: true, entry: null };

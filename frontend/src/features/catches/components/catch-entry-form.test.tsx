@@ -371,3 +371,112 @@ describe('CatchEntryForm with an open stop', () => {
     expect(screen.getByRole('textbox', { name: 'Technique' })).toHaveValue('dragging');
   });
 });
+
+describe('CatchEntryForm for one thumb', () => {
+  const speciesOrder = () =>
+    Array.from((screen.getByRole('combobox', { name: 'Species' }) as HTMLSelectElement).options, (o) => o.value);
+
+  it('lists the species last used first, remembered on this device across visits', async () => {
+    fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({ status: 201, body: savedCatch(request) }),
+    }).install();
+    const user = userEvent.setup();
+    const first = renderForm();
+    expect(speciesOrder()).toEqual(['largemouth', 'smallmouth', 'spotted', 'other']);
+
+    for (const [species, weight] of [
+      ['spotted', '2-3'],
+      ['smallmouth', '3-1'],
+    ] as const) {
+      await user.selectOptions(screen.getByRole('combobox', { name: 'Species' }), species);
+      await user.type(screen.getByRole('textbox', { name: /weight/i }), `${weight}{Enter}`);
+      await screen.findByText(new RegExp(`Logged .* ${species} at`));
+    }
+    // The latest first, the one before next, then the rest in the usual order; the latest stays chosen.
+    expect(speciesOrder()).toEqual(['smallmouth', 'spotted', 'largemouth', 'other']);
+    expect(screen.getByRole('combobox', { name: 'Species' })).toHaveValue('smallmouth');
+
+    // A new visit on the same device (the form opened again) starts from the same list.
+    first.unmount();
+    renderForm();
+    expect(speciesOrder()).toEqual(['smallmouth', 'spotted', 'largemouth', 'other']);
+    expect(screen.getByRole('combobox', { name: 'Species' })).toHaveValue('smallmouth');
+  });
+
+  it('steps the weight by a pound or an ounce, never below 0, and the stepped weight is what is logged', async () => {
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({ status: 201, body: savedCatch(request) }),
+    }).install();
+    const user = userEvent.setup();
+    renderForm(); // pounds–ounces
+    const weight = screen.getByRole('textbox', { name: /weight/i });
+    const step = (name: string) => user.click(screen.getByRole('button', { name }));
+
+    await step('Weight up 1 oz');
+    expect(weight).toHaveValue('0-1');
+    await step('Weight up 1 lb');
+    expect(weight).toHaveValue('1-1');
+    await step('Weight down 1 lb');
+    await step('Weight down 1 lb');
+    expect(weight).toHaveValue('0-0');
+    await step('Weight down 1 oz');
+    expect(weight).toHaveValue('0-0');
+
+    // A typed weight steps from what it reads; 15 oz and one more make the next pound (16 oz = 1 lb).
+    await user.clear(weight);
+    await user.type(weight, '3-15');
+    await step('Weight up 1 oz');
+    expect(weight).toHaveValue('4-0');
+    await step('Weight down 1 oz');
+    await step('Weight down 1 oz');
+    expect(weight).toHaveValue('3-14');
+    // Text that is not a weight is left for the angler to fix, not replaced.
+    await user.clear(weight);
+    await user.type(weight, '3-x');
+    await step('Weight up 1 oz');
+    expect(weight).toHaveValue('3-x');
+
+    await user.clear(weight);
+    await user.type(weight, '3-7');
+    await step('Weight up 1 oz');
+    await user.click(screen.getByRole('button', { name: 'Log catch' }));
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
+    expect(net.to('POST /api/crews/c1/catches')[0].body).toMatchObject({
+      weight: { value: 3, unit: 'lb-oz', ounces: 8 },
+    });
+  });
+
+  it('steps decimal pounds by 1 lb and 0.05 lb, and typed weights still read as before', async () => {
+    const net = fakeNetwork({
+      'GET /api/auth/csrf': csrf,
+      'POST /api/crews/c1/catches': (request) => ({ status: 201, body: savedCatch(request) }),
+    }).install();
+    const user = userEvent.setup();
+    renderForm({ ...prefs, weight: 'lb' });
+    const weight = screen.getByRole('textbox', { name: /weight/i });
+    const step = (name: string) => user.click(screen.getByRole('button', { name }));
+
+    await user.type(weight, '3.45');
+    await step('Weight up 0.05 lb');
+    expect(weight).toHaveValue('3.5');
+    await step('Weight down 1 lb');
+    await step('Weight down 1 lb');
+    await step('Weight down 1 lb');
+    await step('Weight down 1 lb');
+    expect(weight).toHaveValue('0');
+
+    // Written out in pounds and ounces: still logged as typed (3 lb 7 oz), as without the steppers.
+    await user.clear(weight);
+    await user.type(weight, '3 lb 7 oz{Enter}');
+    await waitFor(() => expect(net.to('POST /api/crews/c1/catches')).toHaveLength(1));
+    expect(net.to('POST /api/crews/c1/catches')[0].body).toMatchObject({
+      weight: { value: 3, unit: 'lb-oz', ounces: 7 },
+    });
+    // Stepped from the written-out form: 3 lb 7 oz = 3.4375 lb, up 0.05 is 3.4875, shown to the hundredth.
+    await user.type(weight, '3 lb 7 oz');
+    await step('Weight up 0.05 lb');
+    expect(weight).toHaveValue('3.49');
+  });
+});

@@ -1,6 +1,5 @@
 import {
   FATES,
-  SPECIES,
   SPECIES_LABELS,
   type Fate,
   type FindView,
@@ -30,33 +29,17 @@ import {
   parseTemperature,
   parseWeight,
   readCoordinate,
+  stepWeight,
   UNIT_SIGNS,
+  WEIGHT_STEPS,
   weightHint,
 } from '../../../lib/units';
 import type { CatchInput } from '../api/catches-api';
 import { FATE_LABELS } from './catch-labels';
 import { findOptionLabel, matchFind } from './catch-values';
+import { recentSpecies, rememberSpecies, speciesByRecentUse } from './recent-species';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 import styles from './catch-entry-form.module.css';
-
-const LAST_SPECIES_KEY = 'shoalbook.lastSpecies';
-
-function lastSpecies(): Species {
-  try {
-    const stored = localStorage.getItem(LAST_SPECIES_KEY);
-    if (stored && (SPECIES as readonly string[]).includes(stored)) return stored as Species;
-  } catch {
-    // Storage can be off (private mode); the default is fine.
-  }
-  return 'largemouth';
-}
-
-function rememberSpecies(species: Species) {
-  try {
-    localStorage.setItem(LAST_SPECIES_KEY, species);
-  } catch {
-    // Not remembering is harmless.
-  }
-}
 
 interface Values {
   caughtAt: string;
@@ -128,7 +111,7 @@ export function CatchEntryForm({
   };
   const fresh = (keep?: Values): Values => ({
     caughtAt: clockTime(now(), lake.timeZone),
-    species: keep?.species ?? lastSpecies(),
+    species: keep?.species ?? recentSpecies()[0] ?? 'largemouth',
     weight: '',
     length: '',
     find: stopFind(),
@@ -141,6 +124,8 @@ export function CatchEntryForm({
     waterTemp: keep?.waterTemp ?? '',
   });
   const [values, setValues] = useState<Values>(() => fresh());
+  // Read when the form opens and after each fish, so the list does not reorder under the angler's thumb.
+  const [speciesOrder, setSpeciesOrder] = useState(() => speciesByRecentUse(recentSpecies()));
   // A newly opened (or edited) stop brings its defaults (state adjusted while rendering, as React advises, not in an effect).
   const defaultsKey = stopDefaults
     ? [stopDefaults.stopId, stopDefaults.findId, stopDefaults.lure, stopDefaults.technique].join('\n')
@@ -240,6 +225,7 @@ export function CatchEntryForm({
 
   const clearForNext = () => {
     rememberSpecies(values.species);
+    setSpeciesOrder(speciesByRecentUse(recentSpecies()));
     setValues((v) => fresh(v));
     setPhoto({ photoId: null, busy: false });
     setNextFishKey((k) => k + 1);
@@ -298,15 +284,24 @@ export function CatchEntryForm({
     }
   };
 
-  const field = (key: keyof Values, label: string, input: ReactNode, caption?: ReactNode) => {
+  /** One labelled field; `after` sits below it (outside the FormControl, which wires only its own input). */
+  const field = (key: keyof Values, label: string, input: ReactNode, caption?: ReactNode, after?: ReactNode) => {
     const msgs = messages(key);
-    return (
+    const control = (
       <FormControl key={key} id={`${formId}-${key}`}>
         <FormControl.Label>{label}</FormControl.Label>
         {input}
         {caption ? <FormControl.Caption>{caption}</FormControl.Caption> : null}
         {msgs.length ? <FormControl.Validation variant="error">{msgs.join(' ')}</FormControl.Validation> : null}
       </FormControl>
+    );
+    return after ? (
+      <div key={key} className={styles.withAfter}>
+        {control}
+        {after}
+      </div>
+    ) : (
+      control
     );
   };
   const status = (key: string) => (messages(key).length ? ('error' as const) : undefined);
@@ -318,7 +313,7 @@ export function CatchEntryForm({
 
   return (
     <form
-      className={styles.form}
+      className={`${styles.form} ${thumb.thumb}`}
       aria-label={`Log a catch on ${dayLabel(day.date)}`}
       noValidate
       onKeyDown={onKeyDown}
@@ -356,7 +351,7 @@ export function CatchEntryForm({
             onChange={(e) => setValues((v) => ({ ...v, species: e.target.value as Species }))}
             validationStatus={status('species')}
           >
-            {SPECIES.map((s) => (
+            {speciesOrder.map((s) => (
               <Select.Option key={s} value={s}>
                 {SPECIES_LABELS[s]}
               </Select.Option>
@@ -376,6 +371,10 @@ export function CatchEntryForm({
             validationStatus={status('weight')}
           />,
           weightEcho ?? weightHint(prefs.weight),
+          <WeightSteppers
+            steps={WEIGHT_STEPS[prefs.weight]}
+            onStep={(by) => setValues((v) => ({ ...v, weight: stepWeight(v.weight, prefs.weight, by) ?? v.weight }))}
+          />,
         )}
         {field(
           'length',
@@ -535,7 +534,7 @@ export function CatchEntryForm({
           <option key={f.id} value={findOptionLabel(f, prefs)} />
         ))}
       </datalist>
-      <div className={styles.actions}>
+      <div className={`${styles.actions} ${thumb.saveBar}`}>
         <Button type="submit" variant="primary" loading={sending} disabled={photo.busy}>
           Log catch
         </Button>
@@ -570,5 +569,31 @@ export function CatchEntryForm({
         ) : null}
       </div>
     </form>
+  );
+}
+
+/**
+ * Big minus and plus buttons for a wet thumb: a coarse and a fine step each way. Out of the tab order, since
+ * the keyboard types the weight; a step from a weight that does not read leaves it for the angler to fix.
+ */
+function WeightSteppers({
+  steps,
+  onStep,
+}: {
+  steps: readonly { by: number; label: string }[];
+  onStep: (by: number) => void;
+}) {
+  const buttons = [
+    ...steps.map((s) => ({ by: -s.by, text: `−${s.label}`, name: `Weight down ${s.label}` })),
+    ...[...steps].reverse().map((s) => ({ by: s.by, text: `+${s.label}`, name: `Weight up ${s.label}` })),
+  ];
+  return (
+    <div className={styles.steppers} role="group" aria-label="Weight steps">
+      {buttons.map((b) => (
+        <Button key={b.name} type="button" size="large" tabIndex={-1} aria-label={b.name} onClick={() => onStep(b.by)}>
+          {b.text}
+        </Button>
+      ))}
+    </div>
   );
 }

@@ -16,6 +16,7 @@ import {
 import { savedFixLimitM, usePosition, type PositionStatus } from '../../../lib/use-position';
 import { checkInAt, durationText, runBack, runMinutes } from './check-in-clock-model';
 import styles from './check-in-clock.module.css';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 
 /** The boat's cruising speed belongs to this phone's angler and boat, not the account (metres per second). */
 const CRUISE_KEY = 'shoalbook.cruiseMps';
@@ -161,7 +162,7 @@ export function CheckInClock({
   };
 
   return (
-    <section aria-labelledby={headingId} className={styles.panel}>
+    <section aria-labelledby={headingId} className={`${styles.panel} ${thumb.thumb}`}>
       <Heading as="h3" id={headingId} className={styles.heading}>
         Check-in
       </Heading>

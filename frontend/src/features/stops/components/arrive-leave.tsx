@@ -11,6 +11,7 @@ import { coordinateInputValue, readCoordinate } from '../../../lib/units';
 import { useLogStop, useUpdateStop } from '../api/stops-api';
 import { NO_FIND, STOP_SERVER_FIELDS, stopPlace } from './stop-fields';
 import styles from './stops.module.css';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 
 function messagesOf(failure: unknown, local: Record<string, string>, field: string): string[] {
   const server =
@@ -187,7 +188,7 @@ function StopButtons({
         e.preventDefault();
         submit();
       }}
-      className={styles.editForm}
+      className={`${styles.editForm} ${thumb.thumb}`}
     >
       <FormError error={failure} title={open ? 'Leaving was not logged' : 'That stop was not logged'} />
       {open ? (

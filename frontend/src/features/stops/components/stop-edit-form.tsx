@@ -9,6 +9,7 @@ import { entryToF, parseOptional, parseTemperature, temperatureInputValue, UNIT_
 import { useUpdateStop } from '../api/stops-api';
 import { NO_FIND, STOP_SERVER_FIELDS, stopPlace } from './stop-fields';
 import styles from './stops.module.css';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 
 interface Values {
   find: string;
@@ -117,7 +118,7 @@ export function StopEditForm({
     <form
       aria-label={`Edit the stop at ${clockTime(stop.arrivedAt, lake.timeZone)}`}
       noValidate
-      className={styles.editForm}
+      className={`${styles.editForm} ${thumb.thumb}`}
       onSubmit={(e) => {
         e.preventDefault();
         save().catch(() => undefined);

@@ -27,6 +27,7 @@ import type { SendKind } from '../../../../../lib/device-db';
 import { dayLabel } from '../../../../../lib/lake-time';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
+import { SunlightTheme } from '../../../../../components/journal-forms/sunlight-theme';
 
 const SECTION_LABELS: Record<EventSection, string> = {
   overview: 'Overview',
@@ -198,81 +199,88 @@ function EventDays({ crewId, event, lake, prefs, canWrite }: SectionProps) {
     );
   }
   return (
-    <div className={styles.stack}>
-      <SegmentedControl aria-label="Competition day">
-        {competition.map((d) => (
-          <SegmentedControl.Button
-            key={d.id}
-            selected={d.id === day.id}
-            onClick={() =>
-              setSearch((s) => {
-                const next = new URLSearchParams(s);
-                next.set('day', d.id);
-                return next;
-              })
-            }
-          >
-            {dayLabel(d.date)}
-          </SegmentedControl.Button>
-        ))}
-      </SegmentedControl>
-      <CheckInClock key={day.id} day={day} lake={lake} ramp={event.ramp ?? null} unit={prefs.depth} />
-      {canWrite ? (
-        <Details className={styles.details}>
-          <Details.Summary>Start, check-in, weather and water of this day</Details.Summary>
-          <CompetitionDayForm key={day.id} crewId={crewId} day={day} prefs={prefs} />
-        </Details>
-      ) : null}
-      <StopsPanel
-        crewId={crewId}
-        userId={me.user.id}
-        day={day}
-        lake={lake}
-        finds={finds.data ?? []}
-        catches={catches.data ?? []}
-        prefs={prefs}
-        canWrite={canWrite}
-      />
-      {canWrite ? (
-        finds.isPending ? (
-          <LoadingState label="Loading finds for the list…" />
-        ) : (
-          <CatchEntryForm
-            key={day.id}
-            userId={me.user.id}
-            crewId={crewId}
-            day={day}
-            lake={lake}
-            finds={finds.data ?? []}
-            prefs={prefs}
-            stopDefaults={
-              openStop
-                ? {
-                    stopId: openStop.id,
-                    findId: openStop.findId,
-                    place: openStop.findName ?? 'no find',
-                    lure: openStop.lure,
-                    technique: openStop.technique,
-                  }
-                : null
-            }
-          />
-        )
-      ) : null}
-      <LiveBagPanel crewId={crewId} eventId={event.id} dayId={day.id} rules={event.rules} prefs={prefs} />
-      <Heading as="h3" className={styles.subheading}>
-        Catches of {dayLabel(day.date)}
-      </Heading>
-      <WaitingEntries userId={me.user.id} crewId={crewId} scope={day.id} kinds={CATCH_KINDS} />
-      <DayCatches
-        crewId={crewId}
-        dayId={day.id}
-        lake={lake}
-        prefs={prefs}
-        canWrite={canWrite}
-        finds={finds.data ?? []}
-      />
-    </div>
+    <SunlightTheme>
+      <div className={styles.stack}>
+        <SegmentedControl aria-label="Competition day">
+          {competition.map((d) => (
+            <SegmentedControl.Button
+              key={d.id}
+              selected={d.id === day.id}
+              onClick={() =>
+                setSearch((s) => {
+                  const next = new URLSearchParams(s);
+                  next.set('day', d.id);
+                  return next;
+                })
+              }
+            >
+              {dayLabel(d.date)}
+            </SegmentedControl.Button>
+          ))}
+        </SegmentedControl>
+        <CheckInClock key={day.id} day={day} lake={lake} ramp={event.ramp ?? null} unit={prefs.depth} />
+        {canWrite ? (
+          <Details className={styles.details}>
+            <Details.Summary>Start, check-in, weather and water of this day</Details.Summary>
+            <CompetitionDayForm key={day.id} crewId={crewId} day={day} prefs={prefs} />
+          </Details>
+        ) : null}
+        <StopsPanel
+          crewId={crewId}
+          userId={me.user.id}
+          day={day}
+          lake={lake}
+          finds={finds.data ?? []}
+          catches={catches.data ?? []}
+          prefs={prefs}
+          canWrite={canWrite}
+        />
+        {/* On a phone the live bag sits above the catch form, in sight while the next fish is entered. */}
+        <div className={styles.bagAndForm}>
+          {canWrite ? (
+            finds.isPending ? (
+              <LoadingState label="Loading finds for the list…" />
+            ) : (
+              <CatchEntryForm
+                key={day.id}
+                userId={me.user.id}
+                crewId={crewId}
+                day={day}
+                lake={lake}
+                finds={finds.data ?? []}
+                prefs={prefs}
+                stopDefaults={
+                  openStop
+                    ? {
+                        stopId: openStop.id,
+                        findId: openStop.findId,
+                        place: openStop.findName ?? 'no find',
+                        lure: openStop.lure,
+                        technique: openStop.technique,
+                      }
+                    : null
+                }
+              />
+            )
+          ) : null}
+          <div className={styles.bagFirst}>
+            <LiveBagPanel crewId={crewId} eventId={event.id} dayId={day.id} rules={event.rules} prefs={prefs} />
+          </div>
+        </div>
+        <Heading as="h3" className={styles.subheading}>
+          Catches of {dayLabel(day.date)}
+        </Heading>
+        <WaitingEntries userId={me.user.id} crewId={crewId} scope={day.id} kinds={CATCH_KINDS} />
+        <DayCatches
+          crewId={crewId}
+          dayId={day.id}
+          lake={lake}
+          prefs={prefs}
+          canWrite={canWrite}
+          finds={finds.data ?? []}
+        />
+      </div>
+    </SunlightTheme>
   );
 }
 
