@@ -28,15 +28,18 @@ export interface Browser {
   close(): Promise<void>;
 }
 
-/** A fresh chromium profile (its own cookies) in a new temporary directory, removed on close. */
-export async function openBrowser(viewport = { width: 1280, height: 900 }): Promise<Browser> {
+/**
+ * A fresh chromium profile (its own cookies) in a new temporary directory, removed on close. `baseURL` is the
+ * test server of global-setup.ts unless a test runs its own.
+ */
+export async function openBrowser(viewport = { width: 1280, height: 900 }, baseURL = BASE_URL): Promise<Browser> {
   const userDataDir = mkdtempSync(join(tmpdir(), 'shoalbook-e2e-'));
   const context = await chromium.launchPersistentContext(userDataDir, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     args: CHROMIUM_ARGS,
     viewport,
-    baseURL: BASE_URL,
+    baseURL,
   });
   context.setDefaultTimeout(15_000);
   const page = context.pages()[0] ?? (await context.newPage());
