@@ -134,6 +134,7 @@ describe('competition day on a phone (390 px): one screen, thumb-sized targets, 
       'log a stop': page.getByRole('form', { name: 'Log a stop' }),
       'log a catch': catchForm(page),
       'check-in': page.getByRole('region', { name: 'Check-in' }),
+      'live bag': page.getByRole('region', { name: 'Live bag' }),
     };
     for (const [name, form] of Object.entries(forms)) {
       expect(await targetCount(form), name).toBeGreaterThan(0);
@@ -156,6 +157,8 @@ describe('competition day on a phone (390 px): one screen, thumb-sized targets, 
     await leave.waitFor();
     expect(await targetCount(leave)).toBeGreaterThan(0);
     expect(await smallTargets(leave)).toEqual([]);
+    // The whole stops panel too: the stop's edit and delete buttons in its list.
+    expect(await smallTargets(stops(page))).toEqual([]);
     await stops(page).getByRole('button', { name: 'Edit the stop at 07:10' }).click();
     const edit = page.getByRole('form', { name: 'Edit the stop at 07:10' });
     await edit.waitFor();

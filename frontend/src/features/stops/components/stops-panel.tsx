@@ -14,6 +14,7 @@ import { layoutDay } from './day-timeline-model';
 import { StopEditForm } from './stop-edit-form';
 import { stopPlace, stopSpan, toCheckText } from './stop-fields';
 import { withWaitingStops, type ShownStop } from './waiting-stops';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 import styles from './stops.module.css';
 
 /** The signed-in angler's stop still open on a day (the one "Left" closes and whose lure the catch form takes). */
@@ -231,7 +232,7 @@ export function StopsPanel({
   };
 
   return (
-    <section aria-labelledby={`stops-${day.id}`} className={styles.panel}>
+    <section aria-labelledby={`stops-${day.id}`} className={`${styles.panel} ${thumb.thumb}`}>
       <Heading as="h3" id={`stops-${day.id}`} className={styles.heading}>
         Stops and the day
       </Heading>

@@ -5,6 +5,7 @@ import { LiveBagCaution } from '../../../components/cautions/journal-cautions';
 import { ErrorState, LoadingState } from '../../../components/feedback/query-states';
 import { entryToIn, formatLength, formatWeight, parseLength, UNIT_SIGNS } from '../../../lib/units';
 import { useWeighIns } from '../api/weigh-ins-api';
+import thumb from '../../../components/journal-forms/thumb.module.css';
 import styles from './weigh-ins.module.css';
 
 /** What a new fish must be to improve one bag, in words. */
@@ -160,7 +161,7 @@ export function LiveBagPanel({
     );
   };
   return (
-    <section aria-labelledby={`live-bag-${dayId}`} className={styles.live}>
+    <section aria-labelledby={`live-bag-${dayId}`} className={`${styles.live} ${thumb.thumb}`}>
       <Heading as="h3" id={`live-bag-${dayId}`} className={styles.heading}>
         Live bag
       </Heading>
