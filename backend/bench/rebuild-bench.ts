@@ -49,6 +49,9 @@ async function main(): Promise<void> {
           minutesFromSunrise: 35,
           solunarPeriod: 'none',
           timeOfDay: 'early',
+          loggedBy: null,
+          bagState: 'counted',
+          bagCounted: true,
         });
       }
       await em.transactional(async (tx) => {
