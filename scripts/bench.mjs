@@ -12,6 +12,7 @@ import mariadb from 'mariadb';
 import { ourPid, sqlAsRoot, stopMariadb } from './lib/mariadb.mjs';
 import { backendEnv, profile, ROOT } from './lib/profile.mjs';
 import { log, waitFor } from './lib/run.mjs';
+import { enumerationRows, enumerationTimes } from './lib/enumeration-bench.mjs';
 import { sendQueueRows } from './lib/send-queue-bench.mjs';
 import { buildBackend, prepareDatabase, startFakeSmtp } from './lib/services.mjs';
 
@@ -154,7 +155,12 @@ async function main() {
     // The bench profile's own server: a buffer pool that holds the million-row tables (this machine has the memory).
     sqlAsRoot(p, 'SET GLOBAL innodb_buffer_pool_size = 3221225472');
     smtp = await startFakeSmtp(p, { clearOutbox: true });
-    const env = backendEnv(p, { NODE_ENV: 'development' });
+    // The auth throttle raised: the enumeration rows send 120 sign-up, reset and sign-in requests in a minute.
+    const env = backendEnv(p, {
+      NODE_ENV: 'development',
+      THROTTLE_AUTH_LIMIT: '100000',
+      THROTTLE_ACCOUNT_LIMIT: '100000',
+    });
     server = spawn(process.execPath, [join(BENCH_DIST, 'bench', 'bench-server.js')], {
       cwd: join(ROOT, 'backend'),
       env,
@@ -269,6 +275,10 @@ async function main() {
       log(`  projection caught up ${results.projectionLagMs} ms after the load`);
       results.bare = await load(`${base}/api/crews/${crew.id}/bench/bare-write`, owner, {});
       log(`  bare route: ${results.bare.requests.average} req/s, p99 ${results.bare.latency.p99} ms`);
+      log('account enumeration: sign-up, reset and sign-in pairs, 20 interleaved tries each');
+      results.enumeration = await enumerationTimes(base, (email) =>
+        db.query('UPDATE users SET disabled = 1 WHERE email = ?', [email]),
+      );
     }
     log('send queue: 500 queued catches drained vs posted directly; replayed Idempotency-Key vs first request');
     results.sendQueue = await sendQueueRows({
@@ -311,7 +321,10 @@ function sendQueueReport({ drain, replay }) {
 }
 
 function report(r) {
-  const rows = [...(ALL ? readModelReport(r) : []), ...sendQueueReport(r.sendQueue)];
+  const rows = [
+    ...(ALL ? [...readModelReport(r), ...enumerationRows(r.enumeration)] : []),
+    ...sendQueueReport(r.sendQueue),
+  ];
   const head = ['measure', 'Shoalbook', 'side by side', 'ratio', 'target'];
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
   const line = (cells) => `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
