@@ -11,7 +11,8 @@ import autocannon from 'autocannon';
 import mariadb from 'mariadb';
 import { ourPid, sqlAsRoot, stopMariadb } from './lib/mariadb.mjs';
 import { backendEnv, profile, ROOT } from './lib/profile.mjs';
-import { log, waitFor } from './lib/run.mjs';
+import { log, stopChild, waitFor } from './lib/run.mjs';
+import { mark, msSince, percentile } from './lib/timing.mjs';
 import { enumerationRows, enumerationTimes } from './lib/enumeration-bench.mjs';
 import { sendQueueRows } from './lib/send-queue-bench.mjs';
 import { buildBackend, prepareDatabase, startFakeSmtp } from './lib/services.mjs';
@@ -80,19 +81,15 @@ class Session {
   }
 }
 
-function percentile(sorted, q) {
-  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
-}
-
 /** p50/p95 of sequential GETs (after a short warm-up), bounded in count and time. */
 async function latency(session, path, count, warmUp = 3) {
   for (let i = 0; i < warmUp; i++) await session.request('GET', path);
   const times = [];
   const started = Date.now();
   while (times.length < count && Date.now() - started < SERIES_TIME_LIMIT_MS) {
-    const t = process.hrtime.bigint();
+    const t = mark();
     await session.request('GET', path);
-    times.push(Number(process.hrtime.bigint() - t) / 1e6);
+    times.push(msSince(t));
   }
   times.sort((a, b) => a - b);
   const result = { n: times.length, p50: percentile(times, 0.5), p95: percentile(times, 0.95) };
@@ -115,19 +112,6 @@ function load(url, session, body) {
       },
       (err, result) => (err ? reject(err) : resolve(result)),
     );
-  });
-}
-
-/** SIGTERM, then SIGKILL after 10 s; resolves once the child has exited. */
-function stopChild(child) {
-  if (!child || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
-  return new Promise((resolve) => {
-    const timer = setTimeout(() => child.kill('SIGKILL'), 10_000);
-    child.once('exit', () => {
-      clearTimeout(timer);
-      resolve();
-    });
-    child.kill('SIGTERM');
   });
 }
 

@@ -4,7 +4,7 @@ import { profile } from './lib/profile.mjs';
 import { ourPid, stopMariadb } from './lib/mariadb.mjs';
 import { portOpen, prepareDatabase, seed, startBackend, startFakeSmtp } from './lib/services.mjs';
 import { buildAll, ensureNpmPackages, ensureSystemPackages } from './lib/setup.mjs';
-import { fail, log } from './lib/run.mjs';
+import { fail, isRunning, log, stopChild } from './lib/run.mjs';
 
 const DEMO_ACCOUNTS = [
   ['owner@demo.test', 'crew owner'],
@@ -21,17 +21,6 @@ let stopping = false;
 // Only a database this run started is stopped on exit; one that was already running is left alone.
 let ownsDatabase = false;
 
-const running = (c) => c.exitCode === null && c.signalCode === null;
-
-async function stopChild(c) {
-  if (!running(c)) return;
-  const exited = new Promise((r) => c.once('exit', r));
-  c.kill('SIGTERM');
-  const stubborn = setTimeout(() => c.kill('SIGKILL'), 10_000);
-  await exited;
-  clearTimeout(stubborn);
-}
-
 async function stopAll(code = 0) {
   if (stopping) return stopNow();
   stopping = true;
@@ -45,7 +34,7 @@ async function stopAll(code = 0) {
 // A second Ctrl-C or SIGTERM while stopping: kill the children and leave MariaDB finishing its own shutdown.
 function stopNow() {
   log('stopping at once …');
-  for (const c of children) if (running(c)) c.kill('SIGKILL');
+  for (const c of children) if (isRunning(c)) c.kill('SIGKILL');
   const dbPid = p && ownsDatabase ? ourPid(p) : null;
   if (dbPid) process.kill(dbPid, 'SIGTERM');
   process.exit(1);

@@ -47,7 +47,7 @@ export {
   type LoggedFate,
 } from './weigh-in/day-bag.js';
 export { fieldStanding, ordinal, type FieldStanding } from './weigh-in/field-standing.js';
-export { units, KG_PER_LB, MM_PER_IN, M_PER_FT, OZ_PER_LB, type PoundsOunces } from './weigh-in/units.js';
+export { units, cleanLb, KG_PER_LB, MM_PER_IN, M_PER_FT, OZ_PER_LB, type PoundsOunces } from './weigh-in/units.js';
 
 // Fish condition
 export {

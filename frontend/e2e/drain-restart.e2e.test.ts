@@ -5,6 +5,7 @@ import { profile } from '../../scripts/lib/profile.mjs';
 import { startBackend } from '../../scripts/lib/services.mjs';
 import { apiCall, openBrowser, screenshot, signIn, type Browser } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+import { createTestEvent, logCatchOffline } from './support/journal-setup';
 
 // A second back end on the browser tests' database, on a port of its own, so this test may kill it at will
 // (global-setup.ts owns the main one, which the other browser tests share).
@@ -30,20 +31,6 @@ const CATCHES = [
  * the rest still waiting, however fast the machine is.
  */
 const SLOW_SIGNAL_LATENCY_MS = 400;
-
-/** Fill the catch form by its labels and log it; without signal the form says "waiting to send" for it. */
-async function logCatchOffline(page: Page, c: { time: string; weight: string; length: string }) {
-  const form = page.getByRole('form', { name: /Log a catch/ });
-  await form.getByRole('textbox', { name: /^Time/ }).fill(c.time);
-  await form.getByRole('textbox', { name: /^Weight/ }).fill(c.weight);
-  await form.getByRole('textbox', { name: /^Length/ }).fill(c.length);
-  await form.getByRole('button', { name: 'Log catch' }).click();
-  await form
-    .getByRole('status')
-    .filter({ hasText: 'Waiting to send' })
-    .filter({ hasText: `at ${c.time}` })
-    .waitFor({ timeout: 30_000 });
-}
 
 /** The client-made record ids of the catches waiting in the page's send queue (IndexedDB), in order. */
 function waitingCatchIds(page: Page): Promise<string[]> {
@@ -88,44 +75,11 @@ describe('the server killed in the middle of draining the send queue and started
     await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
     await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
     crewApi = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
-    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/lakes`, {
-      name: LAKE,
-      region: 'Test county',
-      timeZone: 'America/Chicago',
-      lat: 31.874,
-      lon: -94.962,
-      areaAcres: null,
-      notes: '',
-    });
-    const event = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/events`, {
-      lakeId: lake.id,
-      name: EVENT,
-      organiser: 'Test trail',
-      practiceDates: [],
-      competitionDates: ['2025-07-19'],
-      rules: {
-        fishPerDay: 5,
-        minLengthIn: 12,
-        deadFishPenaltyLb: 0.25,
-        shortFishPenaltyLb: 0.25,
-        latePenaltyLbPerMinute: 1,
-      },
-      entryFee: null,
-      payout: null,
-      finalPlace: null,
-      notes: '',
-    });
-    eventId = event.id;
-    const [day] = await apiCall<{ id: string; version: number }[]>(
-      page,
-      'GET',
-      `${crewApi}/events/${eventId}/competition-days`,
-    );
-    await apiCall(page, 'PATCH', `${crewApi}/competition-days/${day.id}`, {
-      version: day.version,
-      startTime: '06:30',
-      checkInTime: '15:00',
-    });
+    ({ eventId } = await createTestEvent(page, crewApi, {
+      lake: { name: LAKE, lat: 31.874, lon: -94.962 },
+      event: EVENT,
+      competitionDate: '2025-07-19',
+    }));
     dayUrl = `${crewApi}/events/${eventId}?section=days`;
   });
   afterAll(async () => {

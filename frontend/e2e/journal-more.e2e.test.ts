@@ -14,6 +14,7 @@ import {
   apiCall,
 } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+import { createTestEvent } from './support/journal-setup';
 
 // Invented for this test. The lake sits at the point the fixtures' sample files assume (fixtures/README.md):
 // practice on 2025-06-11/12, one competition day on 2025-06-14 from 06:30 to 15:00 (America/Chicago).
@@ -42,45 +43,12 @@ describe('the journal, more: CSV import, catch editing, deletes, practice notes,
     await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
     crewPath = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
     crewApi = crewPath;
-    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/lakes`, {
-      name: LAKE,
-      region: 'Test county',
-      timeZone: 'America/Chicago',
-      lat: 31.684,
-      lon: -94.318,
-      areaAcres: null,
-      notes: '',
-    });
-    lakeId = lake.id;
-    const event = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/events`, {
-      lakeId,
-      name: EVENT,
-      organiser: 'Test trail',
+    ({ lakeId, eventId } = await createTestEvent(page, crewApi, {
+      lake: { name: LAKE, lat: 31.684, lon: -94.318 },
+      event: EVENT,
+      competitionDate: '2025-06-14',
       practiceDates: ['2025-06-11', '2025-06-12'],
-      competitionDates: ['2025-06-14'],
-      rules: {
-        fishPerDay: 5,
-        minLengthIn: 12,
-        deadFishPenaltyLb: 0.25,
-        shortFishPenaltyLb: 0.25,
-        latePenaltyLbPerMinute: 1,
-      },
-      entryFee: null,
-      payout: null,
-      finalPlace: null,
-      notes: '',
-    });
-    eventId = event.id;
-    const [day] = await apiCall<{ id: string; version: number }[]>(
-      page,
-      'GET',
-      `${crewApi}/events/${eventId}/competition-days`,
-    );
-    await apiCall(page, 'PATCH', `${crewApi}/competition-days/${day.id}`, {
-      version: day.version,
-      startTime: '06:30',
-      checkInTime: '15:00',
-    });
+    }));
 
     // The finds the sample CSV names ("Shell 01", "Rock 03", …), through the GPX import screen.
     await page.goto(`${crewPath}/import?kind=gpx&lakeId=${lakeId}&eventId=${eventId}`);

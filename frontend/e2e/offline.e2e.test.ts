@@ -2,25 +2,12 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
 import { openBrowser, screenshot, signIn, type Browser, apiCall } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+import { createTestEvent, logCatchOffline } from './support/journal-setup';
 
 // Invented for this test: a lake and an event with one competition day from 06:30 to 15:00 (America/Chicago).
 const LAKE = 'Cattail Narrows (offline test)';
 const EVENT = 'Cattail Offline Test Open';
 const PHONE = { width: 390, height: 844 };
-
-/** Fill the catch form by its labels and log it; without signal the form says "waiting to send" for it. */
-async function logCatchOffline(page: Page, c: { time: string; weight: string; length: string }) {
-  const form = page.getByRole('form', { name: /Log a catch/ });
-  await form.getByRole('textbox', { name: /^Time/ }).fill(c.time);
-  await form.getByRole('textbox', { name: /^Weight/ }).fill(c.weight);
-  await form.getByRole('textbox', { name: /^Length/ }).fill(c.length);
-  await form.getByRole('button', { name: 'Log catch' }).click();
-  await form
-    .getByRole('status')
-    .filter({ hasText: 'Waiting to send' })
-    .filter({ hasText: `at ${c.time}` })
-    .waitFor({ timeout: 30_000 });
-}
 
 /** "Arrived here" at a position with no find, then "Left", both without signal: each says it waits to send. */
 async function logStopOffline(page: Page, s: { arrived: string; left: string; lat: string; lon: string }) {
@@ -50,44 +37,11 @@ describe('on the water without signal: catches kept on the phone, sent once when
     await signIn(page, 'angler@demo.test', DEMO_PASSWORD);
     await page.getByRole('heading', { level: 1, name: DEMO_CREW }).waitFor();
     crewApi = new URL(page.url()).pathname.match(/^\/crews\/[^/]+/)![0];
-    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/lakes`, {
-      name: LAKE,
-      region: 'Test county',
-      timeZone: 'America/Chicago',
-      lat: 32.512,
-      lon: -95.104,
-      areaAcres: null,
-      notes: '',
-    });
-    const event = await apiCall<{ id: string }>(page, 'POST', `${crewApi}/events`, {
-      lakeId: lake.id,
-      name: EVENT,
-      organiser: 'Test trail',
-      practiceDates: [],
-      competitionDates: ['2025-07-19'],
-      rules: {
-        fishPerDay: 5,
-        minLengthIn: 12,
-        deadFishPenaltyLb: 0.25,
-        shortFishPenaltyLb: 0.25,
-        latePenaltyLbPerMinute: 1,
-      },
-      entryFee: null,
-      payout: null,
-      finalPlace: null,
-      notes: '',
-    });
-    eventId = event.id;
-    const [day] = await apiCall<{ id: string; version: number }[]>(
-      page,
-      'GET',
-      `${crewApi}/events/${eventId}/competition-days`,
-    );
-    await apiCall(page, 'PATCH', `${crewApi}/competition-days/${day.id}`, {
-      version: day.version,
-      startTime: '06:30',
-      checkInTime: '15:00',
-    });
+    ({ eventId } = await createTestEvent(page, crewApi, {
+      lake: { name: LAKE, lat: 32.512, lon: -95.104 },
+      event: EVENT,
+      competitionDate: '2025-07-19',
+    }));
     dayUrl = `${crewApi}/events/${eventId}?section=days`;
   });
   afterAll(async () => {

@@ -2,6 +2,7 @@ import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
 import { apiCall, openBrowser, screenshot, seriousAxeViolations, signIn, type Browser } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+import { createTestEvent } from './support/journal-setup';
 
 // Invented for this test: one competition day on 2025-07-19 from 06:00 to 15:00 (America/Chicago), one find.
 // Named to sort after the demo's lakes, so the reports' default lake stays the demo's main one.
@@ -60,54 +61,24 @@ describe('competition day on a phone (390 px): one screen, thumb-sized targets, 
     await apiCall(page, 'PATCH', '/auth/me', {
       units: { weight: 'lb-oz', length: 'in', depth: 'ft', temperature: 'F' },
     });
-    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/lakes`, {
-      name: LAKE,
-      region: 'Test county',
-      timeZone: 'America/Chicago',
-      lat: 35.21,
-      lon: -92.44,
-      areaAcres: null,
-      notes: '',
-    });
-    const event = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/events`, {
-      lakeId: lake.id,
-      name: EVENT,
-      organiser: 'Test trail',
+    const { lakeId, eventId } = await createTestEvent(page, crewPath, {
+      lake: { name: LAKE, lat: 35.21, lon: -92.44 },
+      event: EVENT,
+      competitionDate: '2025-07-19',
       practiceDates: ['2025-07-17'],
-      competitionDates: ['2025-07-19'],
-      rules: {
-        fishPerDay: 5,
-        minLengthIn: 12,
-        deadFishPenaltyLb: 0.25,
-        shortFishPenaltyLb: 0.25,
-        latePenaltyLbPerMinute: 1,
-      },
-      entryFee: null,
-      payout: null,
-      finalPlace: null,
       ramp: { lat: 35.2, lon: -92.44 },
-      notes: '',
-    });
-    const [day] = await apiCall<{ id: string; version: number }[]>(
-      page,
-      'GET',
-      `${crewPath}/events/${event.id}/competition-days`,
-    );
-    await apiCall(page, 'PATCH', `${crewPath}/competition-days/${day.id}`, {
-      version: day.version,
-      startTime: '06:00',
-      checkInTime: '15:00',
+      hours: { startTime: '06:00', checkInTime: '15:00' },
     });
     await apiCall(page, 'POST', `${crewPath}/finds`, {
-      lakeId: lake.id,
-      eventId: event.id,
+      lakeId,
+      eventId,
       practiceDate: '2025-07-17',
       name: LEDGE,
       lat: 35.215,
       lon: -92.44,
       kind: 'hard-bottom',
     });
-    dayUrl = `${crewPath}/events/${event.id}?section=days`;
+    dayUrl = `${crewPath}/events/${eventId}?section=days`;
     await page.setViewportSize(PHONE);
     // 12:42 on the lake clock (CDT, UTC−5) on the competition day, so the check-in clock shows its fields.
     // The browser's fixed clock cannot be undone for its context: this file's own browser.

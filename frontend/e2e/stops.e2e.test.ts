@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from 'vitest';
 import { openBrowser, screenshot, seriousAxeViolations, signIn, type Browser, apiCall } from './support/browser';
 import { DEMO_CREW, DEMO_PASSWORD } from './support/stack';
+import { createTestEvent } from './support/journal-setup';
 
 // Invented for this test: one competition day on 2025-06-14 from 06:30 to 15:00 (America/Chicago), two finds.
 // Named to sort after the demo's lakes, so the reports' default lake stays the demo's main one.
@@ -30,58 +31,27 @@ describe('stops on a competition day: arrive, catch, leave, the timeline and the
     const me = await apiCall<{ user: { units: unknown } }>(page, 'GET', '/auth/me');
     unitsBefore = me.user.units;
     await apiCall(page, 'PATCH', '/auth/me', { units: { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' } });
-    const lake = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/lakes`, {
-      name: LAKE,
-      region: 'Test county',
-      timeZone: 'America/Chicago',
-      lat: 31.684,
-      lon: -94.318,
-      areaAcres: null,
-      notes: '',
-    });
-    const event = await apiCall<{ id: string }>(page, 'POST', `${crewPath}/events`, {
-      lakeId: lake.id,
-      name: EVENT,
-      organiser: 'Test trail',
+    const { lakeId, eventId } = await createTestEvent(page, crewPath, {
+      lake: { name: LAKE, lat: 31.684, lon: -94.318 },
+      event: EVENT,
+      competitionDate: '2025-06-14',
       practiceDates: ['2025-06-12'],
-      competitionDates: ['2025-06-14'],
-      rules: {
-        fishPerDay: 5,
-        minLengthIn: 12,
-        deadFishPenaltyLb: 0.25,
-        shortFishPenaltyLb: 0.25,
-        latePenaltyLbPerMinute: 1,
-      },
-      entryFee: null,
-      payout: null,
-      finalPlace: null,
       ramp: RAMP,
-      notes: '',
-    });
-    const [day] = await apiCall<{ id: string; version: number }[]>(
-      page,
-      'GET',
-      `${crewPath}/events/${event.id}/competition-days`,
-    );
-    await apiCall(page, 'PATCH', `${crewPath}/competition-days/${day.id}`, {
-      version: day.version,
-      startTime: '06:30',
-      checkInTime: '15:00',
     });
     for (const [name, lat, kind] of [
       [SHELL, 31.69, 'hard-bottom'],
       [GRASS, 31.675, 'vegetation'],
     ] as const)
       await apiCall(page, 'POST', `${crewPath}/finds`, {
-        lakeId: lake.id,
-        eventId: event.id,
+        lakeId,
+        eventId,
         practiceDate: '2025-06-12',
         name,
         lat,
         lon: -94.32,
         kind,
       });
-    dayUrl = `${crewPath}/events/${event.id}?section=days`;
+    dayUrl = `${crewPath}/events/${eventId}?section=days`;
   });
   afterAll(async () => {
     if (unitsBefore) await apiCall(browser.page, 'PATCH', '/auth/me', { units: unitsBefore });

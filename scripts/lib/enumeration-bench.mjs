@@ -2,6 +2,8 @@
 // times must not tell an existing account from a missing or disabled one (OWASP ASVS 4.0.3 2.2.x and the OWASP
 // Authentication cheat sheet, "account enumeration" by time). Their answers are compared request by request in
 // backend/test/account-enumeration.e2e-spec.ts; the times are a speed figure, so they are measured here.
+import { mark, median, msSince } from './timing.mjs';
+
 const TRIES = 20;
 const PASSWORD = 'a bench pass phrase for timing';
 
@@ -18,13 +20,11 @@ async function timedPost(base, path, body) {
     headers: { cookie, 'x-csrf-token': csrfToken, 'content-type': 'application/json' },
     body: JSON.stringify(body),
   };
-  const t = process.hrtime.bigint();
+  const t = mark();
   const res = await fetch(base + path, init);
   await res.text();
-  return { ms: Number(process.hrtime.bigint() - t) / 1e6, status: res.status };
+  return { ms: msSince(t), status: res.status };
 }
-
-const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** `TRIES` interleaved requests of each side; the median times and the statuses each side answered. */
 async function pair(base, path, a, b) {

@@ -39,6 +39,22 @@ export function startChild(name, cmd, args, opts = {}) {
   return child;
 }
 
+/** Still running: a child killed by a signal has no exit code, only its signal. */
+export const isRunning = (child) => child.exitCode === null && child.signalCode === null;
+
+/** SIGTERM, then SIGKILL after 10 s; resolves once the child has exited (at once if it is not running). */
+export function stopChild(child) {
+  if (!child || !isRunning(child)) return Promise.resolve();
+  return new Promise((resolve) => {
+    const stubborn = setTimeout(() => child.kill('SIGKILL'), 10_000);
+    child.once('exit', () => {
+      clearTimeout(stubborn);
+      resolve();
+    });
+    child.kill('SIGTERM');
+  });
+}
+
 export const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
 /** Poll `check` until it returns truthy or the time runs out. */

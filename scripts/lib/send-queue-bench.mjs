@@ -7,6 +7,7 @@ import { pathToFileURL } from 'node:url';
 import ts from 'typescript';
 import { v7 as uuidv7 } from 'uuid';
 import { ROOT } from './profile.mjs';
+import { mark, median, msSince } from './timing.mjs';
 
 const QUEUE_SOURCES = ['send-queue/send-queue.ts', 'send-queue/backoff.ts', 'device-db.ts'];
 const OUT = join(ROOT, 'backend', 'bench', 'dist', 'send-queue');
@@ -29,12 +30,6 @@ async function loadSendQueue() {
   const { DeviceDb } = await import(pathToFileURL(join(OUT, 'device-db.mjs')).href);
   return { SendQueue, DeviceDb };
 }
-
-const median = (xs) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-};
-const ms = (t) => Number(process.hrtime.bigint() - t) / 1e6;
 
 /**
  * `session` is the bench's signed-in Session (cookies, CSRF token). Every request, queued or direct, carries an
@@ -65,9 +60,9 @@ export async function sendQueueRows({ base, session, crewId, catchBody, count = 
   for (const body of bodies(20)) await post(body, uuidv7());
   await settle();
 
-  let t = process.hrtime.bigint();
+  let t = mark();
   for (const body of bodies(count)) await post(body, uuidv7());
-  const directMs = ms(t);
+  const directMs = msSince(t);
   await settle();
 
   const db = new DeviceDb(`bench-send-queue-${Date.now()}`);
@@ -86,9 +81,9 @@ export async function sendQueueRows({ base, session, crewId, catchBody, count = 
   }
   let sent = 0;
   queue.onSent(() => (sent += 1));
-  t = process.hrtime.bigint();
+  t = mark();
   await queue.drain('bench', { now: true });
-  const queueMs = ms(t);
+  const queueMs = msSince(t);
   queue.stop();
   const left = (await queue.entries('bench')).length;
   db.close();
@@ -101,12 +96,12 @@ export async function sendQueueRows({ base, session, crewId, catchBody, count = 
   const again = [];
   for (const body of bodies(replays)) {
     const key = uuidv7();
-    t = process.hrtime.bigint();
+    t = mark();
     const first = await post(body, key);
-    firsts.push(ms(t));
-    t = process.hrtime.bigint();
+    firsts.push(msSince(t));
+    t = mark();
     const replay = await post(body, key);
-    again.push(ms(t));
+    again.push(msSince(t));
     if (first.replayed || !replay.replayed || replay.answer.id !== first.answer.id)
       throw new Error('a replay with a stored Idempotency-Key was not answered from the store');
   }

@@ -1,4 +1,5 @@
 import { assertFinite, assertNonNegative } from '../stats/validate.js';
+import { cleanLb } from './units.js';
 
 /** What the angler logged of a fish: kept for the scale, culled (replaced, released on the water), released at once, or dead. */
 export type LoggedFate = 'weighed' | 'culled' | 'released' | 'dead';
@@ -77,9 +78,6 @@ export interface DayBag {
   /** A new legal live fish improves the bag when it weighs more than this (0 while the limit is not filled). */
   mustBeatLb: number;
 }
-
-/** Keeps 1e-6 lb: sums of decimal pounds carry binary floating-point noise. */
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 
 /** True when the fish is measured and under the event's minimum length. */
 export function isShortFish(lengthIn: number | null | undefined, rules: Pick<DayRules, 'minLengthIn'>): boolean {
@@ -166,7 +164,7 @@ export function dayBag(
     return { id: f.id, state: dead ? 'dead' : 'counted', counted: true, weighed: true, penaltyLb: cost };
   });
   const late = lateMinutes * (rules.latePenaltyLbPerMinute ?? 0);
-  if (late > 0) penalties.push({ kind: 'late', fishId: null, lb: clean(late), minutes: lateMinutes });
+  if (late > 0) penalties.push({ kind: 'late', fishId: null, lb: cleanLb(late), minutes: lateMinutes });
 
   const grossLb = chosen.reduce((sum, c) => sum + c.f.weightLb, 0);
   const penaltyLb = penalties.reduce((sum, p) => sum + p.lb, 0);
@@ -178,11 +176,11 @@ export function dayBag(
     counted: chosen.map((c) => c.f.id),
     fish: verdicts,
     penalties,
-    grossLb: clean(grossLb),
-    penaltyLb: clean(penaltyLb),
-    netLb: clean(Math.max(0, grossLb - penaltyLb)),
+    grossLb: cleanLb(grossLb),
+    penaltyLb: cleanLb(penaltyLb),
+    netLb: cleanLb(Math.max(0, grossLb - penaltyLb)),
     nextToCull: full && last ? last.f.id : null,
-    mustBeatLb: full && last ? clean(last.v) : 0,
+    mustBeatLb: full && last ? cleanLb(last.v) : 0,
   };
 }
 
@@ -236,7 +234,7 @@ export function daySummary(
 ): DaySummary {
   const bags = dayBags(fish, rules, options);
   const verdicts = verdictsById(bags);
-  const sum = (pick: (b: DayBag) => number) => clean(bags.reduce((s, b) => s + pick(b), 0));
+  const sum = (pick: (b: DayBag) => number) => cleanLb(bags.reduce((s, b) => s + pick(b), 0));
   return {
     format: rules.format ?? 'team',
     bags,

@@ -1,4 +1,5 @@
 import { assertFinite } from '../stats/validate.js';
+import { cleanLb } from './units.js';
 
 /** English ordinal: 1st, 2nd, 3rd, 4th, 11th, 12th, 13th, 21st, 22nd, 101st, 111th. */
 export function ordinal(n: number): string {
@@ -23,8 +24,6 @@ export interface FieldStanding {
   readings: string[];
 }
 
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
-
 /**
  * Where a place and a weight stand in the field the angler entered from the results sheet. A place beyond the
  * field size is refused (the figures disagree); missing figures just leave their part out.
@@ -47,8 +46,8 @@ export function fieldStanding(input: {
   const topPercent = place !== null && fieldSize !== null ? Math.ceil((place / fieldSize) * 100 - 1e-9) : null;
   const placeText =
     place === null ? null : fieldSize === null ? ordinal(place) : `${ordinal(place)} of ${fieldSize} (top ${topPercent} %)`;
-  const behindWinnerLb = weightLb !== null && winningLb !== null ? clean(Math.max(0, winningLb - weightLb)) : null;
-  const overCutLb = weightLb !== null && cutLb !== null ? clean(weightLb - cutLb) : null;
+  const behindWinnerLb = weightLb !== null && winningLb !== null ? cleanLb(Math.max(0, winningLb - weightLb)) : null;
+  const overCutLb = weightLb !== null && cutLb !== null ? cleanLb(weightLb - cutLb) : null;
   const readings: string[] = [];
   if (placeText) readings.push(placeText);
   if (behindWinnerLb !== null)

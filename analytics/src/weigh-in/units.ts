@@ -10,6 +10,9 @@ export const MM_PER_IN = 25.4;
 export const M_PER_FT = 0.3048;
 export const OZ_PER_LB = 16;
 
+/** Pounds kept to 1e-6 lb: sums of decimal pounds carry binary floating-point noise. */
+export const cleanLb = (lb: number): number => Math.round(lb * 1e6) / 1e6;
+
 /** Pounds and ounces, e.g. 3 lb 4.8 oz. */
 export interface PoundsOunces {
   lb: number;

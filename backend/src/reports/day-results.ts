@@ -1,13 +1,10 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import type { EventRules, EventTotals, FieldContext, RecapDay } from '@shoalbook/shared';
-import { bagOfDay, differenceOf } from '../weigh-ins/bag-rule';
+import { bagOfDay, differenceOf, eventWeight } from '../weigh-ins/bag-rule';
 import { reportFish, selectCatches, type ReportCatch } from './report-catches';
 import { placeholders } from './report-events';
 import { standingOf } from './standing';
-
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
-const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
-const isTrue = (v: unknown) => v === true || Number(v) === 1;
+import { isTrue, numberOrNull } from './row-values';
 
 /** The rm_competition_day rows of some events, by date. */
 export async function selectDayRows(
@@ -30,11 +27,11 @@ export async function selectDayRows(
 export function dayResult(row: Record<string, unknown>, catches: readonly ReportCatch[], rules: EventRules): RecapDay {
   const official = isTrue(row.has_official)
     ? {
-        grossLb: n(row.official_gross_lb),
-        penaltyLb: n(row.official_penalty_lb),
-        officialLb: n(row.official_lb),
-        dayPlace: n(row.day_place),
-        lateMinutes: n(row.late_minutes),
+        grossLb: numberOrNull(row.official_gross_lb),
+        penaltyLb: numberOrNull(row.official_penalty_lb),
+        officialLb: numberOrNull(row.official_lb),
+        dayPlace: numberOrNull(row.day_place),
+        lateMinutes: numberOrNull(row.late_minutes),
       }
     : null;
   const bag = bagOfDay(
@@ -43,7 +40,11 @@ export function dayResult(row: Record<string, unknown>, catches: readonly Report
     official?.lateMinutes ?? null,
   );
   const byId = new Map(catches.map((c) => [c.catchId, c]));
-  const field = { fieldSize: n(row.field_size), winningLb: n(row.winning_lb), cutLb: n(row.cut_lb) };
+  const field = {
+    fieldSize: numberOrNull(row.field_size),
+    winningLb: numberOrNull(row.winning_lb),
+    cutLb: numberOrNull(row.cut_lb),
+  };
   return {
     competitionDayId: String(row.id),
     date: String(row.date),
@@ -74,14 +75,13 @@ export function eventTotals(
   days: readonly RecapDay[],
   event: { finalPlace: number | null; field: FieldContext },
 ): EventTotals {
-  const netLb = clean(days.reduce((s, d) => s + d.netLb, 0));
-  const officialLb = clean(days.reduce((s, d) => s + (d.official?.officialLb ?? d.netLb), 0));
+  const weight = eventWeight(days.map((d) => ({ computedNetLb: d.netLb, officialLb: d.official?.officialLb })));
   return {
-    netLb,
-    officialLb,
-    differenceLb: clean(officialLb - netLb),
+    netLb: weight.computedNetLb,
+    officialLb: weight.officialLb,
+    differenceLb: weight.differenceLb,
     finalPlace: event.finalPlace,
-    standing: standingOf(event.finalPlace, officialLb, event.field),
+    standing: standingOf(event.finalPlace, weight.officialLb, event.field),
   };
 }
 

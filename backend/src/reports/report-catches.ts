@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import type { Fate, ReportFish, Species } from '@shoalbook/shared';
+import { numberOrNull } from './row-values';
 
 /** A catch as the recap and timing reports read it from rm_catch_fact (+ the find's name from rm_find). */
 export interface ReportCatch extends ReportFish {
@@ -67,15 +68,15 @@ function reportCatchOf(r: Record<string, unknown>): ReportCatch {
     caughtAtMs: ms,
     caughtAt: new Date(ms).toISOString(),
     weightLb: Number(r.weight_lb),
-    lengthIn: r.length_in === null ? null : Number(r.length_in),
+    lengthIn: numberOrNull(r.length_in),
     species: String(r.species) as Species,
     fate: String(r.fate) as Fate,
     lure: String(r.lure ?? ''),
-    lat: r.lat === null ? null : Number(r.lat),
-    lon: r.lon === null ? null : Number(r.lon),
+    lat: numberOrNull(r.lat),
+    lon: numberOrNull(r.lon),
     loggedBy: (r.logged_by as string | null) ?? null,
     localMinutes: Number(r.local_minutes),
-    minutesFromSunrise: r.minutes_from_sunrise === null ? null : Number(r.minutes_from_sunrise),
+    minutesFromSunrise: numberOrNull(r.minutes_from_sunrise),
     solunarPeriod: String(r.solunar_period),
   };
 }

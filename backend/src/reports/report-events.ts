@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/mariadb';
 import type { ReportEventRef, ReportFilters, Season } from '@shoalbook/shared';
 import type { EventRules, FieldContext } from '@shoalbook/shared';
+import { isTrue, numberOrNull } from './row-values';
 
 /** An event as the report queries read it from rm_event. */
 export interface ReportEvent extends ReportEventRef {
@@ -30,8 +31,6 @@ const FILTER_CONDITIONS: readonly [keyof ReportFilters, string][] = [
 
 /** SQL (on rm_event alias e): the event has at least one stop (rm_stop). */
 export const STOPS_RECORDED = 'EXISTS (SELECT 1 FROM rm_stop st WHERE st.crew_id = e.crew_id AND st.event_id = e.id)';
-
-const isTrue = (v: unknown) => v === true || Number(v) === 1;
 
 /** `WHERE …` on rm_event (alias e) for the crew and the filters, with its parameters. */
 export function eventWhere(crewId: string, f: ReportFilters): { sql: string; params: unknown[] } {
@@ -68,15 +67,15 @@ export async function selectEvents(
     name: String(r.name),
     firstDate: (r.first_date as string | null) ?? null,
     season: (r.season as Season | null) ?? null,
-    year: r.year === null ? null : Number(r.year),
+    year: numberOrNull(r.year),
     practiceDates: json<string[]>(r.practice_dates),
     competitionDates: json<string[]>(r.competition_dates),
     rules: withFormat(json<EventRules>(r.rules)),
-    finalPlace: r.final_place === null ? null : Number(r.final_place),
+    finalPlace: numberOrNull(r.final_place),
     field: {
-      fieldSize: r.field_size === null ? null : Number(r.field_size),
-      winningLb: r.winning_lb === null ? null : Number(r.winning_lb),
-      cutLb: r.cut_lb === null ? null : Number(r.cut_lb),
+      fieldSize: numberOrNull(r.field_size),
+      winningLb: numberOrNull(r.winning_lb),
+      cutLb: numberOrNull(r.cut_lb),
     },
     stopsRecorded: isTrue(r.stops_recorded),
     // Logged before stops existed: catches, and not one stop.

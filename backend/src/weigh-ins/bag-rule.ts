@@ -1,4 +1,4 @@
-import { daySummary, type DayBag, type FishVerdict } from '@shoalbook/analytics';
+import { cleanLb, daySummary, type DayBag, type FishVerdict } from '@shoalbook/analytics';
 import type {
   BagFishVerdict,
   BagView,
@@ -76,9 +76,8 @@ export function bagOfDay(catches: readonly BagCatch[], rules: EventRules, lateMi
   };
 }
 
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 const minus = (official: number | null | undefined, computed: number) =>
-  official === null || official === undefined ? null : clean(official - computed);
+  official === null || official === undefined ? null : cleanLb(official - computed);
 
 /** Official minus computed, for each figure the angler entered from the scale slip (never overwriting either). */
 export function differenceOf(official: OfficialWeighIn | null, computed: ComputedBag): OfficialDifference {
@@ -87,4 +86,18 @@ export function differenceOf(official: OfficialWeighIn | null, computed: Compute
     penaltyLb: minus(official?.penaltyLb, computed.penaltyLb),
     netLb: minus(official?.officialLb, computed.netLb),
   };
+}
+
+/**
+ * An event's weight over its days, official figures first: each day's official weight where recorded, else the
+ * net the bag rule computed; the computed net beside it and their difference (official − computed).
+ */
+export function eventWeight(days: readonly { computedNetLb: number; officialLb: number | null | undefined }[]): {
+  computedNetLb: number;
+  officialLb: number;
+  differenceLb: number;
+} {
+  const computedNetLb = cleanLb(days.reduce((sum, d) => sum + d.computedNetLb, 0));
+  const officialLb = cleanLb(days.reduce((sum, d) => sum + (d.officialLb ?? d.computedNetLb), 0));
+  return { computedNetLb, officialLb, differenceLb: cleanLb(officialLb - computedNetLb) };
 }

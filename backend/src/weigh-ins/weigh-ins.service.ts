@@ -17,7 +17,7 @@ import { EventsService } from '../events/events.service';
 import { TournamentEvent } from '../events/tournament-event.entity';
 import { recordNotFound } from '../journal/journal-errors';
 import { RecordHistoryService } from '../journal-events/record-history.service';
-import { bagOfDay, differenceOf } from './bag-rule';
+import { bagOfDay, differenceOf, eventWeight } from './bag-rule';
 import { WeighIn } from './weigh-in.entity';
 
 /** The official figures with the version a client sends back on its next PUT. */
@@ -38,8 +38,6 @@ export function officialOf(w: WeighIn | undefined): VersionedWeighIn | null {
       }
     : null;
 }
-
-const clean = (lb: number) => Math.round(lb * 1e6) / 1e6;
 
 /** Map.groupBy, which Node 20 lacks. */
 function groupBy<T>(items: readonly T[], key: (item: T) => string): Map<string, T[]> {
@@ -99,16 +97,16 @@ export class WeighInsService {
       const tally: EventTally = { eventId: event.id, fishCaught: 0, fishCounted: 0, totalLb: 0, allOfficial: true };
       const eventDays = daysOfEvent.get(event.id) ?? [];
       if (!eventDays.length) tally.allOfficial = false;
-      for (const day of eventDays) {
+      const weights = eventDays.map((day) => {
         const dayCatches = catchesOfDay.get(day.id) ?? [];
         const official = officialOf(weighIns.get(day.id));
         const bag = bagOfDay(dayCatches, rules, official?.lateMinutes ?? null);
         tally.fishCaught += dayCatches.length;
         tally.fishCounted += bag.counted.length;
-        tally.totalLb += official?.officialLb ?? bag.netLb;
         if (official?.officialLb == null) tally.allOfficial = false;
-      }
-      tally.totalLb = clean(tally.totalLb);
+        return { computedNetLb: bag.netLb, officialLb: official?.officialLb };
+      });
+      tally.totalLb = eventWeight(weights).officialLb;
       return tally;
     });
   }
@@ -132,14 +130,10 @@ export class WeighInsService {
     );
     const views = new Map((await this.catches.views(access, catches)).map((v) => [v.id, v]));
     const rules = eventView(event).rules;
-    let computedNetLb = 0;
-    let officialLb = 0;
     const out = days.map((day) => {
       const dayCatches = catches.filter((c) => c.competitionDayId === day.id);
       const official = officialOf(weighIns.get(day.id));
       const computed = bagOfDay(dayCatches, rules, official?.lateMinutes ?? null);
-      computedNetLb += computed.netLb;
-      officialLb += official?.officialLb ?? computed.netLb;
       return {
         competitionDayId: day.id,
         date: day.date,
@@ -152,9 +146,7 @@ export class WeighInsService {
     return {
       days: out,
       totals: {
-        computedNetLb: clean(computedNetLb),
-        officialLb: clean(officialLb),
-        differenceLb: clean(officialLb - computedNetLb),
+        ...eventWeight(out.map((d) => ({ computedNetLb: d.computed.netLb, officialLb: d.official?.officialLb }))),
         finalPlace: event.finalPlace,
         field: { fieldSize: event.fieldSize, winningLb: event.winningLb, cutLb: event.cutLb },
       },

@@ -1,4 +1,4 @@
-import type { FindView, LakeView, PaidOffFindView, UnitPreferences } from '@shoalbook/shared';
+import type { FindView, PaidOffFindView, UnitPreferences } from '@shoalbook/shared';
 import { render, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -12,40 +12,10 @@ import { fakeNetwork, type SeenRequest } from '../testing/fake-network';
 import { deviceDb, useSendQueueDrain } from './send-queue';
 import { journalKeys } from './journal-keys';
 import { createQueryClient } from './query-client';
+import { testLake, testFind } from '../testing/journal-fixtures';
 
-const lake: LakeView = {
-  id: 'l1',
-  name: 'Test Reservoir',
-  region: 'Test',
-  timeZone: 'America/Chicago',
-  lat: 34.5,
-  lon: -86.2,
-  areaAcres: null,
-  notes: '',
-  version: 1,
-};
-const find: FindView = {
-  id: 'f1',
-  lakeId: 'l1',
-  eventId: 'e1',
-  practiceDate: null,
-  name: 'North shell bar',
-  markedAt: null,
-  lat: 34.5,
-  lon: -86.2,
-  depthFt: 14,
-  kind: 'hard-bottom',
-  subKind: 'shell',
-  hardness: 4,
-  vegetationDensity: null,
-  baitSeen: false,
-  fishMarked: null,
-  frequencyKhz: null,
-  foundHow: null,
-  waterTempF: null,
-  notes: '',
-  photoId: null,
-};
+const lake = testLake;
+const find: FindView = testFind({ id: 'f1', name: 'North shell bar', eventId: 'e1' });
 const prefs: UnitPreferences = { weight: 'lb', length: 'in', depth: 'ft', temperature: 'F' };
 const day = { id: 'd1', date: '2025-04-12' };
 // 12:42 UTC is 07:42 in Chicago (CDT, UTC−5, IANA tz database).

@@ -1,5 +1,5 @@
 import { useCallback, useState, useSyncExternalStore } from 'react';
-import { readDeviceSetting, writeDeviceSetting } from './device-setting';
+import { isPositiveNumber, readDeviceSetting, writeDeviceSetting } from './device-setting';
 
 /** A fix worse than this (the radius of the phone's 95 %-ish circle, in metres) is refused unless the angler widens it. */
 export const DEFAULT_FIX_LIMIT_M = 30;
@@ -35,15 +35,13 @@ function failureMessage(error: GeolocationPositionError): string {
   return 'The phone has no position right now: try again in a moment, or type the position.';
 }
 
-const isPositive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0;
-
 /** The coarsest fix the angler accepts on this device, in metres (30 m until changed). */
 export function savedFixLimitM(): number {
-  return readDeviceSetting(FIX_LIMIT_KEY, isPositive, DEFAULT_FIX_LIMIT_M);
+  return readDeviceSetting(FIX_LIMIT_KEY, isPositiveNumber, DEFAULT_FIX_LIMIT_M);
 }
 
 export function saveFixLimitM(m: number): void {
-  if (isPositive(m)) writeDeviceSetting(FIX_LIMIT_KEY, m);
+  if (isPositiveNumber(m)) writeDeviceSetting(FIX_LIMIT_KEY, m);
 }
 
 export function geolocationSupported(): boolean {

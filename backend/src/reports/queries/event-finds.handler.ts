@@ -6,8 +6,8 @@ import { outcomeOf } from '../outcome';
 import { fishPerHour, singleRate } from '../rates';
 import { selectEvents } from '../report-events';
 import { GetEventFindsQuery } from './event-finds.query';
+import { isTrue } from '../row-values';
 
-const isTrue = (v: unknown) => v === true || Number(v) === 1;
 const numOrNull = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
 /** rm_find_outcome joined with rm_find for one event. */

@@ -9,6 +9,7 @@ import { percent, plural } from '../readings';
 import { reportFish, selectCatches, type ReportCatch } from '../report-catches';
 import { findLake, selectEvents } from '../report-events';
 import { GetEventRecapQuery } from './event-recap.query';
+import { isTrue } from '../row-values';
 
 const bagInput = (catches: readonly ReportCatch[]) => catches.map((c) => ({ ...c, id: c.catchId }));
 
@@ -52,7 +53,6 @@ export class GetEventRecapHandler implements IQueryHandler<GetEventRecapQuery, E
         WHERE o.crew_id = ? AND o.event_id = ?`,
       [crewId, eventId],
     );
-    const isTrue = (v: unknown) => v === true || Number(v) === 1;
     const practiced = outcomes.filter((o) => isTrue(o.practiced));
     const producingFinds = outcomes
       .filter((o) => Number(o.fish_count) > 0)

@@ -1,4 +1,4 @@
-import type { CatchView, FindView, LakeView, UnitPreferences } from '@shoalbook/shared';
+import type { CatchView, FindView, UnitPreferences } from '@shoalbook/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
@@ -8,40 +8,11 @@ import { fakeGeolocation, forgetFakeGeolocation } from '../../testing/fake-geolo
 import { fakeNetwork, type SeenRequest } from '../../testing/fake-network';
 import { renderWithApp } from '../../testing/render';
 import { forgetLastFix } from '../../lib/use-position';
+import { testLake, testFind } from '../../testing/journal-fixtures';
 
-const lake: LakeView = {
-  id: 'l1',
-  name: 'Test Reservoir',
-  region: 'Test',
-  timeZone: 'America/Chicago',
-  lat: 34.5,
-  lon: -86.2,
-  areaAcres: null,
-  notes: '',
-  version: 1,
-};
-const find = (id: string, name: string, lat: number | null, lon: number | null): FindView => ({
-  id,
-  lakeId: 'l1',
-  eventId: null,
-  practiceDate: null,
-  name,
-  markedAt: null,
-  lat,
-  lon,
-  depthFt: 14,
-  kind: 'hard-bottom',
-  subKind: 'rock',
-  hardness: 4,
-  vegetationDensity: null,
-  baitSeen: false,
-  fishMarked: null,
-  frequencyKhz: null,
-  foundHow: null,
-  waterTempF: null,
-  notes: '',
-  photoId: null,
-});
+const lake = testLake;
+const find = (id: string, name: string, lat: number | null, lon: number | null): FindView =>
+  testFind({ id, name, lat, lon, subKind: 'rock' });
 // Invented finds: one due south of the fixes below, one 0.01° farther north, one whose position is hidden.
 const finds = [
   find('f1', 'Rock point', 34.5, -86.2),

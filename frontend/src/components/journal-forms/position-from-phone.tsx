@@ -2,7 +2,8 @@ import { MEAN_EARTH_RADIUS_M, nearestFind, units } from '@shoalbook/analytics';
 import { DEFAULT_ATTRIBUTION_RADIUS_M, type DepthUnit, type FindView } from '@shoalbook/shared';
 import { Button, FormControl, Text, TextInput } from '@primer/react';
 import { useId, useState } from 'react';
-import { formatShortDistance, readNumber, UNIT_SIGNS } from '../../lib/units';
+import { useSavedNumberField } from '../../lib/device-setting';
+import { formatShortDistance, UNIT_SIGNS } from '../../lib/units';
 import {
   DEFAULT_FIX_LIMIT_M,
   NO_GEOLOCATION_MESSAGE,
@@ -31,15 +32,22 @@ export function nearestFindTo(fix: Pick<PositionFix, 'lat' | 'lon'>, finds: Find
   return hit ? { ...hit, picked: hit.distanceM <= DEFAULT_ATTRIBUTION_RADIUS_M } : null;
 }
 
-const isPositive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0;
 const limitText = (m: number, unit: DepthUnit) => String(Math.round(unit === 'm' ? m : units.mToFt(m)));
+
+export const LOCATING_TEXT = 'Asking the phone for its position…';
+
+/** A fix coarser than the angler's limit, in words (the screen adds what to do about it). */
+export function fixRefusedText(status: Extract<PositionStatus, { kind: 'too-coarse' }>, unit: DepthUnit): string {
+  const d = (m: number) => formatShortDistance(m, unit);
+  return `Fix refused: the phone is only sure to ±${d(status.accuracyM)}, worse than the ±${d(status.limitM)} you accept`;
+}
 
 function said(status: PositionStatus, nearest: NearestFindOf | null, unit: DepthUnit): string | null {
   const d = (m: number) => formatShortDistance(m, unit);
-  if (status.kind === 'locating') return 'Asking the phone for its position…';
+  if (status.kind === 'locating') return LOCATING_TEXT;
   if (status.kind === 'failed') return `${status.message} The form works without it.`;
   if (status.kind === 'too-coarse')
-    return `Fix refused: the phone is only sure to ±${d(status.accuracyM)}, worse than the ±${d(status.limitM)} you accept. Try again in the open, or widen the limit.`;
+    return `${fixRefusedText(status, unit)}. Try again in the open, or widen the limit.`;
   if (status.kind !== 'fix') return null;
   const where = `Position filled, accurate to ±${d(status.fix.accuracyM)}`;
   if (!nearest) return `${where}; no find of this lake has a position.`;
@@ -65,20 +73,15 @@ export function PositionFromPhone({
   onFix: (fix: PositionFix, nearest: NearestFindOf | null) => void;
 }) {
   const position = usePosition();
-  const [savedM] = useState(savedFixLimitM);
-  const [typed, setTyped] = useState(() => limitText(savedM, unit));
+  const limit = useSavedNumberField({
+    saved: savedFixLimitM,
+    show: (m) => limitText(m, unit),
+    toStored: (typed) => (unit === 'm' ? typed : units.ftToM(typed)),
+    save: saveFixLimitM,
+  });
+  const limitM = limit.value;
   const [nearest, setNearest] = useState<NearestFindOf | null>(null);
   const id = useId();
-  // The untouched field means the saved limit exactly (30 m shows as 98 ft but stays 30 m).
-  const typedNumber = readNumber(typed);
-  const limitM =
-    typed === limitText(savedM, unit)
-      ? savedM
-      : isPositive(typedNumber)
-        ? unit === 'm'
-          ? typedNumber
-          : units.ftToM(typedNumber)
-        : null;
 
   if (!position.supported) {
     return (
@@ -114,12 +117,8 @@ export function PositionFromPhone({
         <FormControl.Label>Accept fixes within ({UNIT_SIGNS[unit]})</FormControl.Label>
         <TextInput
           name="fixLimit"
-          value={typed}
-          onChange={(e) => {
-            setTyped(e.target.value);
-            const n = readNumber(e.target.value);
-            if (isPositive(n)) saveFixLimitM(unit === 'm' ? n : units.ftToM(n));
-          }}
+          value={limit.text}
+          onChange={(e) => limit.change(e.target.value)}
           inputMode="decimal"
           autoComplete="off"
           className={styles.limit}

@@ -5,29 +5,9 @@ import { describe, expect, it, vi } from 'vitest';
 import { fakeNetwork } from '../../../testing/fake-network';
 import { renderWithApp } from '../../../testing/render';
 import { CatchEditForm } from './catch-edit-form';
+import { testFind } from '../../../testing/journal-fixtures';
 
-const find = (id: string, name: string): FindView => ({
-  id,
-  lakeId: 'l1',
-  eventId: 'e1',
-  practiceDate: null,
-  name,
-  markedAt: null,
-  lat: 34.5,
-  lon: -86.2,
-  depthFt: 14,
-  kind: 'hard-bottom',
-  subKind: 'shell',
-  hardness: 4,
-  vegetationDensity: null,
-  baitSeen: false,
-  fishMarked: null,
-  frequencyKhz: null,
-  foundHow: null,
-  waterTempF: null,
-  notes: '',
-  photoId: null,
-});
+const find = (id: string, name: string): FindView => testFind({ id, name, eventId: 'e1' });
 const finds = [find('f1', 'North shell bar'), find('f2', 'Rock pile')];
 const prefs: UnitPreferences = { weight: 'lb-oz', length: 'in', depth: 'ft', temperature: 'F' };
 const csrf = { status: 200, body: { csrfToken: 'tok' } };

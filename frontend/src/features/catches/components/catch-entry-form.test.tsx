@@ -1,4 +1,4 @@
-import type { CatchView, FindView, LakeView, UnitPreferences } from '@shoalbook/shared';
+import type { CatchView, FindView, UnitPreferences } from '@shoalbook/shared';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { useState } from 'react';
@@ -6,40 +6,10 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
 import { renderWithApp } from '../../../testing/render';
 import { CatchEntryForm } from './catch-entry-form';
+import { testLake, testFind } from '../../../testing/journal-fixtures';
 
-const lake: LakeView = {
-  id: 'l1',
-  name: 'Test Reservoir',
-  region: 'Test',
-  timeZone: 'America/Chicago',
-  lat: 34.5,
-  lon: -86.2,
-  areaAcres: null,
-  notes: '',
-  version: 1,
-};
-const find = (id: string, name: string): FindView => ({
-  id,
-  lakeId: 'l1',
-  eventId: null,
-  practiceDate: null,
-  name,
-  markedAt: null,
-  lat: 34.5,
-  lon: -86.2,
-  depthFt: 14,
-  kind: 'hard-bottom',
-  subKind: 'shell',
-  hardness: 4,
-  vegetationDensity: null,
-  baitSeen: false,
-  fishMarked: null,
-  frequencyKhz: null,
-  foundHow: null,
-  waterTempF: null,
-  notes: '',
-  photoId: null,
-});
+const lake = testLake;
+const find = (id: string, name: string): FindView => testFind({ id, name });
 const finds = [find('f1', 'North shell bar'), find('f2', 'Rock pile')];
 const prefs: UnitPreferences = { weight: 'lb-oz', length: 'in', depth: 'ft', temperature: 'F' };
 const day = { id: 'd1', date: '2025-04-12' };

@@ -1,4 +1,5 @@
 import { SPECIES, type Species } from '@shoalbook/shared';
+import { readDeviceSetting, writeDeviceSetting } from '../../../lib/device-setting';
 
 // A choice of this device (the boat's phone), not of the account: most recently logged first.
 const RECENT_KEY = 'shoalbook.recentSpecies';
@@ -10,26 +11,24 @@ const isSpecies = (value: unknown): value is Species =>
 
 /** The species logged on this device, most recent first (empty when none, or storage is off). */
 export function recentSpecies(): Species[] {
+  const list = readDeviceSetting<unknown[] | null>(RECENT_KEY, Array.isArray, null);
+  if (list) return [...new Set(list.filter(isSpecies))];
+  return lastSpeciesBeforeTheList();
+}
+
+/** The single species as it was kept before the list: a bare string, not JSON. */
+function lastSpeciesBeforeTheList(): Species[] {
   try {
-    const stored = localStorage.getItem(RECENT_KEY);
-    if (stored) {
-      const list: unknown = JSON.parse(stored);
-      return Array.isArray(list) ? [...new Set(list.filter(isSpecies))] : [];
-    }
     const last = localStorage.getItem(LAST_KEY);
     return isSpecies(last) ? [last] : [];
   } catch {
-    return []; // storage off (private mode) or unreadable: the usual order is fine
+    return []; // storage off (private mode): the usual order is fine
   }
 }
 
 /** Put the species just logged at the front of the device's list. */
 export function rememberSpecies(species: Species): void {
-  try {
-    localStorage.setItem(RECENT_KEY, JSON.stringify([species, ...recentSpecies().filter((s) => s !== species)]));
-  } catch {
-    // Not remembering is harmless.
-  }
+  writeDeviceSetting(RECENT_KEY, [species, ...recentSpecies().filter((s) => s !== species)]);
 }
 
 /** Every species once: the recently logged first, then the rest in the usual order. */

@@ -3,16 +3,15 @@ import { localDateOf } from '@shoalbook/shared';
 import { Button, FormControl, Heading, Text, TextInput } from '@primer/react';
 import { useEffect, useId, useState } from 'react';
 import { RunBackCaution } from '../../../components/cautions/journal-cautions';
-import { readDeviceSetting, writeDeviceSetting } from '../../../lib/device-setting';
-import { clockTime } from '../../../lib/lake-time';
+import { fixRefusedText, LOCATING_TEXT } from '../../../components/journal-forms/position-from-phone';
 import {
-  formatLongDistance,
-  formatShortDistance,
-  mpsToSpeed,
-  readNumber,
-  SPEED_SIGNS,
-  speedToMps,
-} from '../../../lib/units';
+  isPositiveNumber,
+  readDeviceSetting,
+  useSavedNumberField,
+  writeDeviceSetting,
+} from '../../../lib/device-setting';
+import { clockTime } from '../../../lib/lake-time';
+import { formatLongDistance, formatShortDistance, mpsToSpeed, SPEED_SIGNS, speedToMps } from '../../../lib/units';
 import { savedFixLimitM, usePosition, type PositionStatus } from '../../../lib/use-position';
 import { checkInAt, durationText, runBack, runMinutes } from './check-in-clock-model';
 import styles from './check-in-clock.module.css';
@@ -23,15 +22,14 @@ const CRUISE_KEY = 'shoalbook.cruiseMps';
 /** Often enough for a count in whole minutes. */
 const TICK_MS = 15_000;
 
-const isPositive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0;
 const speedText = (mps: number, unit: DepthUnit) => String(Math.round(mpsToSpeed(mps, unit) * 10) / 10);
 const systemNow = () => new Date();
 
 function locatingSaid(status: PositionStatus, unit: DepthUnit): string | null {
-  if (status.kind === 'locating') return 'Asking the phone for its position…';
+  if (status.kind === 'locating') return LOCATING_TEXT;
   if (status.kind === 'failed') return status.message;
   if (status.kind === 'too-coarse')
-    return `Fix refused: the phone is only sure to ±${formatShortDistance(status.accuracyM, unit)}, worse than the ±${formatShortDistance(status.limitM, unit)} you accept (the limit is set in the catch and stop forms).`;
+    return `${fixRefusedText(status, unit)} (the limit is set in the catch and stop forms).`;
   return null;
 }
 
@@ -60,18 +58,19 @@ export function CheckInClock({
     return () => clearInterval(timer);
   }, [now]);
   const position = usePosition();
-  const [savedMps] = useState(() => readDeviceSetting<number | null>(CRUISE_KEY, isPositive, null));
-  const savedText = savedMps === null ? '' : speedText(savedMps, unit);
-  const [typed, setTyped] = useState(savedText);
+  const speed = useSavedNumberField({
+    saved: () => readDeviceSetting<number | null>(CRUISE_KEY, isPositiveNumber, null),
+    show: (mps) => speedText(mps, unit),
+    toStored: (typed) => speedToMps(typed, unit),
+    save: (mps) => writeDeviceSetting(CRUISE_KEY, mps),
+  });
   const headingId = useId();
 
   if (localDateOf(at, lake.timeZone) !== day.date) return null;
   const checkIn = checkInAt(day, lake.timeZone);
 
-  const typedNumber = readNumber(typed);
-  // The untouched field means the saved speed exactly, not its rounded display.
-  const speedMps = typed === savedText ? savedMps : isPositive(typedNumber) ? speedToMps(typedNumber, unit) : null;
-  const speedError = typed.trim() !== '' && speedMps === null;
+  const speedMps = speed.value;
+  const speedError = speed.text.trim() !== '' && speedMps === null;
 
   const body = () => {
     if (!checkIn)
@@ -123,12 +122,8 @@ export function CheckInClock({
             <FormControl.Label>Cruising speed ({SPEED_SIGNS[unit]})</FormControl.Label>
             <TextInput
               name="cruisingSpeed"
-              value={typed}
-              onChange={(e) => {
-                setTyped(e.target.value);
-                const n = readNumber(e.target.value);
-                if (isPositive(n)) writeDeviceSetting(CRUISE_KEY, speedToMps(n, unit));
-              }}
+              value={speed.text}
+              onChange={(e) => speed.change(e.target.value)}
               inputMode="decimal"
               autoComplete="off"
               className={styles.speed}

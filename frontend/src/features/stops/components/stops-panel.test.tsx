@@ -1,4 +1,4 @@
-import type { CompetitionDayView, LakeView, StopView, UnitPreferences } from '@shoalbook/shared';
+import type { CompetitionDayView, StopView, UnitPreferences } from '@shoalbook/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
@@ -6,18 +6,9 @@ import { deviceDb, sendQueue, useSendQueueDrain } from '../../../lib/send-queue'
 import { fakeNetwork, type SeenRequest } from '../../../testing/fake-network';
 import { renderWithApp } from '../../../testing/render';
 import { StopsPanel } from './stops-panel';
+import { testLake } from '../../../testing/journal-fixtures';
 
-const lake: LakeView = {
-  id: 'l1',
-  name: 'Test Reservoir',
-  region: 'Test',
-  timeZone: 'America/Chicago',
-  lat: 34.5,
-  lon: -86.2,
-  areaAcres: null,
-  notes: '',
-  version: 1,
-};
+const lake = testLake;
 const day: CompetitionDayView = {
   id: 'd1',
   eventId: 'e1',
@@ -113,6 +104,14 @@ function PanelInShell() {
   return <Panel />;
 }
 
+/** "Arrived here" at the find Rock pile at `time` on the lake clock, through the stop form. */
+async function arriveAtRockPile(user: ReturnType<typeof userEvent.setup>, form: HTMLElement, time: string) {
+  await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
+  await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
+  await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), time);
+  await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+}
+
 function renderPanel({ inShell = false } = {}) {
   return renderWithApp(inShell ? <PanelInShell /> : <Panel />);
 }
@@ -124,10 +123,7 @@ describe('StopsPanel without signal', () => {
     renderPanel();
 
     const form = await screen.findByRole('form', { name: 'Log a stop' });
-    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
-    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
-    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '07:15');
-    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+    await arriveAtRockPile(user, form, '07:15');
 
     // Shown at once as the open stop, marked waiting; the form turns into "Left" for it.
     expect(
@@ -180,10 +176,7 @@ describe('StopsPanel when the server refuses a stop sent later', () => {
     const user = userEvent.setup();
     renderPanel();
     const form = await screen.findByRole('form', { name: 'Log a stop' });
-    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
-    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
-    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '05:10');
-    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+    await arriveAtRockPile(user, form, '05:10');
     await screen.findByText(/saved on this phone, waiting to send/);
 
     // Back in signal, the server refuses it (before the day's start, say): it stays, for the angler to act on.
@@ -215,10 +208,7 @@ describe('StopsPanel when the queue sends a stop before the day is read again', 
     const user = userEvent.setup();
     const { queryClient } = renderPanel({ inShell: true });
     const form = await screen.findByRole('form', { name: 'Log a stop' });
-    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
-    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
-    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '07:15');
-    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+    await arriveAtRockPile(user, form, '07:15');
     await screen.findByText(/saved on this phone, waiting to send/);
 
     const list = screen.getByRole('list', { name: `Stops of ${day.date}` });
@@ -263,10 +253,7 @@ describe('StopsPanel when the server refuses an arrival on its first try', () =>
     const user = userEvent.setup();
     renderPanel();
     const form = await screen.findByRole('form', { name: 'Log a stop' });
-    await user.selectOptions(within(form).getByRole('combobox', { name: 'Where' }), 'Rock pile');
-    await user.clear(within(form).getByRole('textbox', { name: /Arrived at/ }));
-    await user.type(within(form).getByRole('textbox', { name: /Arrived at/ }), '05:10');
-    await user.click(within(form).getByRole('button', { name: 'Arrived here' }));
+    await arriveAtRockPile(user, form, '05:10');
 
     expect(await within(form).findAllByText(message)).not.toHaveLength(0);
     expect(net.to('POST /api/crews/c1/stops')).toHaveLength(1);
