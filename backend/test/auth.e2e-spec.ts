@@ -2,10 +2,12 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CSRF_HEADER } from '@shoalbook/shared';
+import { ACCOUNT_EXISTS_MAIL_INTERVAL_MS } from '../src/auth/commands/sign-up.handler';
 import { Session } from '../src/auth/session.entity';
+import { BackgroundWork } from '../src/common/background-work';
 import { User } from '../src/users/user.entity';
 import { ApiClient, GOOD_PASSWORD, newUser, uniqueEmail } from './utils/api-client';
-import { waitForMail } from './utils/outbox';
+import { messagesTo, waitForMail } from './utils/outbox';
 import { createTestApp, testEm } from './utils/test-app';
 
 function expectApiError(body: unknown, statusCode: number) {
@@ -102,6 +104,42 @@ describe('accounts and sessions', () => {
       const notice = await waitForMail(first.email, 2);
       expect(notice.subject).toMatch(/tried to sign up/);
       expect(notice.text).toMatch(/already has one/);
+    });
+
+    // OWASP ASVS 4.0.3 2.2.x / the OWASP Authentication cheat sheet ("Account enumeration"): a taken address
+    // writes its row (the attempt's time) as a free one writes a new row, and answers alike. Not flooding the
+    // owner's inbox: OWASP ASVS 4.0.3 V11.1.4, anti-automation (recalled from memory).
+    it('records each attempt on a taken address and mails its owner once an hour, answering 202 each time', async () => {
+      const owner = await newUser(app, 'probed');
+      const attempt = () =>
+        new ApiClient(app).post('/api/auth/sign-up', {
+          email: owner.email,
+          password: 'another pass phrase here',
+          displayName: 'Probe',
+        });
+      const accountExists = () => messagesTo(owner.email, /tried to sign up/);
+      const first = await attempt();
+      await app.get(BackgroundWork).settled();
+      const afterFirst = await testEm(app).findOneOrFail(User, { email: owner.email });
+      expect(afterFirst.signUpAttemptedAt).toBeInstanceOf(Date);
+      const second = await attempt();
+      // Every mail the two requests started has been handed to the fake SMTP server (which stores before it answers).
+      await app.get(BackgroundWork).settled();
+      expect([first.status, second.status]).toEqual([202, 202]);
+      expect(second.body).toEqual(first.body);
+      expect(accountExists()).toHaveLength(1);
+      const afterSecond = await testEm(app).findOneOrFail(User, { email: owner.email });
+      expect(afterSecond.signUpAttemptedAt!.getTime()).toBeGreaterThan(afterFirst.signUpAttemptedAt!.getTime());
+
+      // The last attempt over an hour ago: the owner is told again.
+      await testEm(app).nativeUpdate(
+        User,
+        { email: owner.email },
+        { signUpAttemptedAt: new Date(Date.now() - ACCOUNT_EXISTS_MAIL_INTERVAL_MS - 60_000) },
+      );
+      expect((await attempt()).status).toBe(202);
+      await app.get(BackgroundWork).settled();
+      expect(accountExists()).toHaveLength(2);
     });
 
     const badBodies: Array<[string, unknown, string]> = [

@@ -21,7 +21,12 @@ export class BackgroundWork implements OnApplicationShutdown {
     this.running.add(job);
   }
 
-  async onApplicationShutdown(): Promise<void> {
+  /** Resolves once the work started so far has ended (shutdown; tests that must know no more mail is coming). */
+  async settled(): Promise<void> {
     await Promise.all([...this.running]);
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    await this.settled();
   }
 }

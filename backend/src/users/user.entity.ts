@@ -8,7 +8,7 @@ import { DEFAULT_UNITS, SITE_ROLES, type SiteRole, type UnitPreferences } from '
  */
 @Entity({ tableName: 'users' })
 export class User {
-  [OptionalProps]?: 'siteRole' | 'disabled' | 'units' | 'createdAt' | 'updatedAt';
+  [OptionalProps]?: 'siteRole' | 'disabled' | 'units' | 'createdAt' | 'updatedAt' | 'signUpAttemptedAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -38,4 +38,11 @@ export class User {
 
   @Property({ type: 'datetime', length: 3, onUpdate: () => new Date() })
   updatedAt: Date = new Date();
+
+  /**
+   * When someone last tried to sign up with this (taken) address. It paces the "account exists" e-mail to
+   * one an hour, and writing it gives a taken address the same kind of database work as a free one's INSERT.
+   */
+  @Property({ type: 'datetime', length: 3, nullable: true })
+  signUpAttemptedAt: Date | null = null;
 }
