@@ -28,7 +28,8 @@ export interface SendEntry {
   createdAt: number;
 }
 
-export type SendKind = 'log-catch' | 'edit-catch' | 'add-find' | 'weigh-in' | 'stop';
+/** What a queued write does: 'find' marks a find or changes one, 'weigh-in' records a day's official figures. */
+export type SendKind = 'log-catch' | 'edit-catch' | 'find' | 'weigh-in' | 'stop';
 
 /** One GET answer kept for reading offline. */
 export interface KeptRead {

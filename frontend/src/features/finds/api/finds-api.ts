@@ -7,9 +7,11 @@ import type {
   VegetationDensity,
 } from '@shoalbook/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { v7 as uuidv7 } from 'uuid';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
+import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
 import type { FindWithSky } from '../../../lib/journal-types';
 import type { DepthEntry, TemperatureEntry } from '../../../lib/units';
 
@@ -56,17 +58,33 @@ export function useFind(crewId: string, findId: string | undefined) {
   });
 }
 
-export function useSaveFind(crewId: string, findId?: string) {
+/**
+ * Mark a find or save changes to one through the send queue (marking happens on the water, often without
+ * signal): the server's answer when it has it at once, else 'waiting' while the phone keeps the write. A new
+ * find gets its id here (UUID v7). The queue refreshes the lists again when a waiting write is sent.
+ */
+export function useSaveFind(userId: string, crewId: string, findId?: string) {
   const queryClient = useQueryClient();
   return useMutation({
     // The lake of a find is fixed once recorded; a PATCH carries the version it was based on (409 when stale).
-    mutationFn: ({ version, ...input }: FindInput & { version?: number }) => {
-      if (!findId) return api.post<FindWithSky>(crewApiPath(crewId, '/finds'), input);
+    mutationFn: ({ version, ...input }: FindInput & { version?: number }): Promise<FormSendResult<FindWithSky>> => {
+      const id = findId ?? uuidv7();
       const { lakeId: _fixed, ...changes } = input;
-      return api.patch<FindWithSky>(findPath(crewId, findId), { ...changes, version });
+      return sendFromForm<FindWithSky>({
+        userId,
+        crewId,
+        kind: 'find',
+        method: findId ? 'PATCH' : 'POST',
+        path: findId ? findPath(crewId, findId) : crewApiPath(crewId, '/finds'),
+        body: findId ? { ...changes, version } : { ...input, id },
+        recordId: id,
+        label: findId ? `Changes to the find ${input.name}` : `New find ${input.name}`,
+        scope: input.lakeId,
+      });
     },
-    onSuccess: (find) => {
-      queryClient.setQueryData(journalKeys.find(crewId, find.id), find);
+    onSuccess: (result) => {
+      if (result.kind !== 'sent') return;
+      queryClient.setQueryData(journalKeys.find(crewId, result.answer.id), result.answer);
       return refreshCrewJournal(queryClient, crewId);
     },
   });

@@ -15,7 +15,7 @@ import {
   type UnitPreferences,
   type VegetationDensity,
 } from '@shoalbook/shared';
-import { Button, Checkbox, FormControl, Select, Text, Textarea } from '@primer/react';
+import { Button, Checkbox, FormControl, Label, Select, Text, Textarea } from '@primer/react';
 import { useId, useState, type ReactNode } from 'react';
 import { OnPlaneCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
@@ -23,6 +23,7 @@ import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
 import { clockTime, localTimeOn, localDate, isClockTime } from '../../../lib/lake-time';
 import type { FindWithSky } from '../../../lib/journal-types';
+import { useSendEntries, versionOnceSent } from '../../../lib/send-queue';
 import {
   depthInputValue,
   parseDepth,
@@ -188,6 +189,7 @@ function SelectField({
 
 /** Record a practice find: where, how deep, what kind of place, what the sonar showed, and a photo. */
 export function FindForm({
+  userId,
   crewId,
   lakes,
   events,
@@ -197,6 +199,7 @@ export function FindForm({
   onSaved,
   onCancel,
 }: {
+  userId: string;
   crewId: string;
   lakes: LakeView[];
   events: EventView[];
@@ -214,12 +217,18 @@ export function FindForm({
     error: null,
     name: null,
   });
-  const save = useSaveFind(crewId, find?.id);
+  const save = useSaveFind(userId, crewId, find?.id);
+  // The name of the last find kept on this phone for want of signal ("waiting to send"), until the next edit.
+  const [waiting, setWaiting] = useState<string | null>(null);
+  const entries = useSendEntries(userId);
   const photoInputId = useId();
   const lake = lakes.find((l) => l.id === v.lakeId);
   const lakeEvents = events.filter((e) => e.lakeId === v.lakeId);
   const event = lakeEvents.find((e) => e.id === v.eventId);
-  const set = (key: keyof Values) => (value: string) => setValues((s) => ({ ...s, [key]: value }));
+  const set = (key: keyof Values) => (value: string) => {
+    setWaiting(null);
+    setValues((s) => ({ ...s, [key]: value }));
+  };
   const text = (key: keyof Values, name: string = key) => ({
     name,
     value: v[key] as string,
@@ -256,7 +265,23 @@ export function FindForm({
   const submit = () => {
     const { input, errors: found } = validateFind(v, lake, prefs);
     setErrors(found);
-    if (input) save.mutate(find ? { ...input, version: find.version } : input, { onSuccess: onSaved });
+    if (!input) return;
+    // Changes to a find whose earlier changes still wait on this phone are based on those.
+    const version = find
+      ? versionOnceSent(
+          find.version,
+          entries.filter((e) => e.kind === 'find' && e.recordId === find.id),
+        )
+      : undefined;
+    save.mutateAsync(find ? { ...input, version } : input).then(
+      (result) => {
+        if (result.kind === 'sent') return onSaved(result.answer);
+        setWaiting(input.name);
+        // A new find kept on the phone: the form clears for the next one, on the same lake, event and day.
+        if (!find) setValues((s) => ({ ...initialValues(undefined, lake, s, prefs), practiceDate: s.practiceDate }));
+      },
+      () => undefined,
+    );
   };
 
   return (
@@ -461,6 +486,17 @@ export function FindForm({
           {find ? 'Save find' : 'Add find'}
         </Button>
         {onCancel ? <Button onClick={onCancel}>Cancel</Button> : null}
+        <div role="status" aria-live="polite">
+          {waiting ? (
+            <>
+              <Label variant="attention">Waiting to send</Label>{' '}
+              <Text size="small">
+                {find ? 'The changes are' : `${waiting} is`} saved on this phone and go to the server by themselves once
+                there is signal.
+              </Text>
+            </>
+          ) : null}
+        </div>
       </FormActions>
     </FormStack>
   );

@@ -2,6 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, LIVE_DAY_REFETCH_MS } from '../../../lib/journal-keys';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
+import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
 import type { RecordChange, WeighInHistoryField } from '@shoalbook/shared';
 import type { RecordWeighInRequest, WeighInsView } from '../../../lib/journal-types';
 
@@ -25,14 +26,31 @@ export function useWeighInHistory(crewId: string, eventId: string, dayId: string
   });
 }
 
-/** PUT /competition-days/:dayId/weigh-in: the official figures, which override the computed ones. Weights in lb; `version` of the recorded figures once there are any. */
-export function useRecordWeighIn(crewId: string) {
+/**
+ * PUT /competition-days/:dayId/weigh-in through the send queue (figures are often typed at the scales, where
+ * signal is poor): the official figures, which override the computed ones. Weights in lb; `version` of the
+ * recorded figures once there are any. 'waiting' while the phone keeps them; the queue refreshes the lists when
+ * it sends them.
+ */
+export function useRecordWeighIn(userId: string, crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ dayId, ...body }: { dayId: string } & RecordWeighInRequest) =>
-      api.request<unknown>('PUT', crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`), {
+    mutationFn: ({
+      dayId,
+      label,
+      ...body
+    }: { dayId: string; label: string } & RecordWeighInRequest): Promise<FormSendResult<unknown>> =>
+      sendFromForm({
+        userId,
+        crewId,
+        kind: 'weigh-in',
+        method: 'PUT',
+        path: crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`),
         body,
+        recordId: dayId,
+        label,
+        scope: dayId,
       }),
-    onSuccess: () => refreshCrewJournal(queryClient, crewId),
+    onSuccess: (result) => (result.kind === 'sent' ? refreshCrewJournal(queryClient, crewId) : undefined),
   });
 }

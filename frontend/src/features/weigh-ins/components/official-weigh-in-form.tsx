@@ -1,10 +1,12 @@
 import type { UnitPreferences } from '@shoalbook/shared';
-import { Button, Text } from '@primer/react';
+import { Button, Label, Text } from '@primer/react';
 import { useState } from 'react';
 import { FormError } from '../../../components/form/form-error';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField } from '../../../components/form/text-field';
 import type { OfficialWeighIn } from '../../../lib/journal-types';
+import { dayLabel } from '../../../lib/lake-time';
+import { useSendEntries, versionOnceSent } from '../../../lib/send-queue';
 import { entryToLb, parseOptional, parseWeight, readNumber, weightHint, weightInputValue } from '../../../lib/units';
 import { useRecordWeighIn } from '../api/weigh-ins-api';
 import styles from './weigh-ins.module.css';
@@ -13,13 +15,18 @@ const WEIGHT_LABELS = { grossLb: 'Gross on the scale', penaltyLb: 'Penalties', o
 
 /** The scale's own figures for a day; once saved they count instead of Shoalbook's computed bag. */
 export function OfficialWeighInForm({
+  userId,
   crewId,
   dayId,
+  date,
   official,
   prefs,
 }: {
+  userId: string;
   crewId: string;
   dayId: string;
+  /** The competition day's date, for how the send queue names the entry. */
+  date: string;
   official: OfficialWeighIn | null;
   prefs: UnitPreferences;
 }) {
@@ -31,13 +38,14 @@ export function OfficialWeighInForm({
     lateMinutes: official?.lateMinutes != null ? String(official.lateMinutes) : '',
   });
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [saved, setSaved] = useState(false);
-  const record = useRecordWeighIn(crewId);
+  const [saved, setSaved] = useState<'sent' | 'waiting' | null>(null);
+  const record = useRecordWeighIn(userId, crewId);
+  const entries = useSendEntries(userId);
   const f = (key: keyof typeof v) => ({
     name: key,
     value: v[key],
     onChange: (e: { target: { value: string } }) => {
-      setSaved(false);
+      setSaved(null);
       setV((s) => ({ ...s, [key]: e.target.value }));
     },
     serverError: record.error,
@@ -65,12 +73,24 @@ export function OfficialWeighInForm({
       officialLb: weight('officialLb'),
       dayPlace: whole('dayPlace', 1),
       lateMinutes: whole('lateMinutes', 0),
-      // The figures this correction is based on; the server refuses it if someone saved in between.
-      ...(official?.version !== undefined ? { version: official.version } : {}),
     };
+    // The figures this correction is based on (those still waiting on this phone included); the server refuses
+    // it if someone saved in between.
+    const version = versionOnceSent(
+      official?.version,
+      entries.filter((e) => e.kind === 'weigh-in' && e.crewId === crewId && e.recordId === dayId),
+    );
     setErrors(found);
     if (Object.keys(found).length) return;
-    record.mutate({ dayId, ...body }, { onSuccess: () => setSaved(true) });
+    record.mutate(
+      {
+        dayId,
+        label: `Official figures for ${dayLabel(date)}`,
+        ...body,
+        ...(version !== undefined ? { version } : {}),
+      },
+      { onSuccess: (result) => setSaved(result.kind) },
+    );
   };
   return (
     <FormStack onSubmit={submit} label="Official weigh-in">
@@ -86,11 +106,18 @@ export function OfficialWeighInForm({
         <Button type="submit" loading={record.isPending}>
           Save official figures
         </Button>
-        {saved ? (
-          <Text size="small" role="status">
-            Saved; the official figures now count.
-          </Text>
-        ) : null}
+        <div role="status" aria-live="polite">
+          {saved === 'sent' ? <Text size="small">Saved; the official figures now count.</Text> : null}
+          {saved === 'waiting' ? (
+            <>
+              <Label variant="attention">Waiting to send</Label>{' '}
+              <Text size="small">
+                Saved on this phone. The figures go to the server by themselves once there is signal, and count from
+                then.
+              </Text>
+            </>
+          ) : null}
+        </div>
       </FormActions>
     </FormStack>
   );

@@ -1,6 +1,8 @@
 import { SPECIES_LABELS, type EventRules, type UnitPreferences } from '@shoalbook/shared';
 import { Details, Heading, Text } from '@primer/react';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/feedback/query-states';
+import { WaitingEntries } from '../../../components/send-queue/waiting-entries';
+import type { SendKind } from '../../../lib/device-db';
 import { clockTime, dayLabel } from '../../../lib/lake-time';
 import { formatLength, formatWeight } from '../../../lib/units';
 import { penaltyItems } from '../../reports/components/bag-by-day';
@@ -11,12 +13,15 @@ import { OfficialWeighInForm } from './official-weigh-in-form';
 import { WeighInHistory } from './weigh-in-history';
 import styles from './weigh-ins.module.css';
 
+const WEIGH_IN_WRITES: SendKind[] = ['weigh-in'];
+
 /**
  * Each competition day's bag by the one bag rule (computed on the server): every fish with its state, the
  * penalties itemised, gross, penalties and net; the official figures, once entered, beside Shoalbook's own with
  * the difference (neither overwrites the other), and the event totals.
  */
 export function WeighInsPanel({
+  userId,
   crewId,
   eventId,
   rules,
@@ -24,6 +29,7 @@ export function WeighInsPanel({
   timeZone,
   canWrite,
 }: {
+  userId: string;
   crewId: string;
   eventId: string;
   rules: EventRules;
@@ -173,10 +179,18 @@ export function WeighInsPanel({
               />
             </Details>
           ) : null}
+          <WaitingEntries userId={userId} crewId={crewId} scope={day.competitionDayId} kinds={WEIGH_IN_WRITES} />
           {canWrite ? (
             <Details className={styles.details}>
               <Details.Summary>Enter the official figures</Details.Summary>
-              <OfficialWeighInForm crewId={crewId} dayId={day.competitionDayId} official={day.official} prefs={prefs} />
+              <OfficialWeighInForm
+                userId={userId}
+                crewId={crewId}
+                dayId={day.competitionDayId}
+                date={day.date}
+                official={day.official}
+                prefs={prefs}
+              />
             </Details>
           ) : null}
         </section>

@@ -6,6 +6,8 @@ import { Link as RouterLink, Outlet, useLocation, useOutletContext, useParams } 
 import { ErrorState, LoadingState } from '../../../../components/feedback/query-states';
 import { paths } from '../../../../config/paths';
 import { crewQuery } from '../../../../features/crews/api/crews-api';
+import { eventsQuery } from '../../../../features/events';
+import { lakesQuery } from '../../../../features/lakes';
 import { isApiError } from '../../../../lib/api-client';
 import { forgetCrew } from '../../../../lib/crew-cache';
 import { ROLE_LABELS } from '../../../../lib/authorization';
@@ -33,6 +35,14 @@ export function Component() {
   useEffect(() => {
     if (notAMember) void forgetCrew(queryClient, crewId);
   }, [notAMember, queryClient, crewId]);
+  // Opened with signal (at the ramp, say): the crew's lakes and events are read and kept on the phone, so the
+  // find and catch forms open later without signal even on a screen not opened before.
+  const opened = crew.isSuccess;
+  useEffect(() => {
+    if (!opened) return;
+    void queryClient.prefetchQuery(lakesQuery(crewId));
+    void queryClient.prefetchQuery(eventsQuery(crewId));
+  }, [opened, queryClient, crewId]);
 
   if (crew.isPending) return <LoadingState label="Opening the crew…" />;
   if (crew.isError) {

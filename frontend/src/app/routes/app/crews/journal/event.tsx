@@ -40,6 +40,7 @@ const SECTION_LABELS: Record<EventSection, string> = {
 /** /crews/:crewId/events/:eventId?section=…: the event with its practice finds, competition days and weigh-ins. */
 export function Component() {
   const { crewId, canWrite, canExport, prefs } = useJournalPage();
+  const me = useSignedInMe();
   const eventId = useParam('eventId');
   const [search] = useSearchParams();
   const requested = search.get('section') as EventSection | null;
@@ -101,6 +102,7 @@ export function Component() {
       ) : null}
       {section === 'weigh-ins' && lake.data ? (
         <WeighInsPanel
+          userId={me.user.id}
           crewId={crewId}
           eventId={e.id}
           rules={e.rules}

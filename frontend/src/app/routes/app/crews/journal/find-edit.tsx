@@ -5,12 +5,14 @@ import { useEvents } from '../../../../../features/events';
 import { FindForm, useFind } from '../../../../../features/finds';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLakes } from '../../../../../features/lakes';
+import { useSignedInMe } from '../../../../../lib/auth';
 import { JournalHeader, useJournalPage, useParam } from './journal-page';
 import styles from './journal.module.css';
 
 /** /crews/:crewId/finds/:findId/edit */
 export function Component() {
   const { crewId, canWrite, prefs } = useJournalPage();
+  const me = useSignedInMe();
   const findId = useParam('findId');
   const find = useFind(crewId, findId);
   const lakes = useLakes(crewId);
@@ -25,6 +27,7 @@ export function Component() {
     <div className={styles.narrow}>
       <JournalHeader title={`Edit ${find.data!.name}`} lead={<UnitsNote prefs={prefs} />} />
       <FindForm
+        userId={me.user.id}
         crewId={crewId}
         lakes={lakes.data!}
         events={events.data!}

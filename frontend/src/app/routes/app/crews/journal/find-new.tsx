@@ -5,12 +5,14 @@ import { useEvents } from '../../../../../features/events';
 import { FindForm } from '../../../../../features/finds';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLakes } from '../../../../../features/lakes';
+import { useSignedInMe } from '../../../../../lib/auth';
 import { JournalHeader, useJournalPage } from './journal-page';
 import styles from './journal.module.css';
 
 /** /crews/:crewId/finds/new?lakeId=&eventId= */
 export function Component() {
   const { crewId, canWrite, prefs } = useJournalPage();
+  const me = useSignedInMe();
   const [search] = useSearchParams();
   const lakes = useLakes(crewId);
   const events = useEvents(crewId);
@@ -24,6 +26,7 @@ export function Component() {
     <div className={styles.narrow}>
       <JournalHeader title="New find" lead={<UnitsNote prefs={prefs} />} />
       <FindForm
+        userId={me.user.id}
         crewId={crewId}
         lakes={lakes.data}
         events={events.data}

@@ -8,12 +8,18 @@ import { useEvents } from '../../../../../features/events';
 import { FindsBulkBar, FindsTable, useFinds } from '../../../../../features/finds';
 import { UnitsNote } from '../../../../../features/journal-units';
 import { useLakes } from '../../../../../features/lakes';
+import { WaitingEntries } from '../../../../../components/send-queue/waiting-entries';
+import { useSignedInMe } from '../../../../../lib/auth';
+import type { SendKind } from '../../../../../lib/device-db';
 import { JournalHeader, useJournalPage } from './journal-page';
 import styles from './journal.module.css';
+
+const FIND_WRITES: SendKind[] = ['find'];
 
 /** /crews/:crewId/finds?lakeId=: the practice finds of one lake, in a table made for thousands of rows. */
 export function Component() {
   const { crewId, canWrite, prefs } = useJournalPage();
+  const me = useSignedInMe();
   const [search, setSearch] = useSearchParams();
   const lakes = useLakes(crewId);
   const lakeId = search.get('lakeId') ?? lakes.data?.[0]?.id ?? '';
@@ -66,6 +72,7 @@ export function Component() {
           </FormControl>
         </div>
       ) : null}
+      {lake ? <WaitingEntries userId={me.user.id} crewId={crewId} scope={lake.id} kinds={FIND_WRITES} /> : null}
       {lake && finds.isPending ? <LoadingState label="Loading finds…" /> : null}
       {lake && finds.isError ? <ErrorState error={finds.error} onRetry={() => finds.refetch()} /> : null}
       {lake && finds.data?.length === 0 ? (
