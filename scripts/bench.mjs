@@ -26,7 +26,8 @@ if (ONLY && !SELECTORS.includes(ONLY))
   throw new Error(`BENCH_ONLY: ${SELECTORS.map((x) => `'${x}'`).join(', ')} or nothing, not '${ONLY}'`);
 const ALL = ONLY === '';
 const ENUMERATION = ALL || ONLY === 'enumeration';
-const SEND_QUEUE = ALL || ONLY === 'send-queue';
+// The rows that need the generated bench crew: the read models and the load (all), the send queue (all or alone).
+const NEEDS_CREW = ALL || ONLY === 'send-queue';
 const LATENCY_REQUESTS = 100;
 const AD_HOC_REQUESTS = 20;
 const SERIES_TIME_LIMIT_MS = 30_000;
@@ -178,8 +179,7 @@ async function main() {
     };
     // BENCH_ONLY=enumeration needs no crew; the whole bench times these pairs after the load, as before.
     if (ONLY === 'enumeration') await enumeration();
-    // The crew's rows: the read models and the load (all rows), the send queue (all, or BENCH_ONLY=send-queue).
-    if (SEND_QUEUE) {
+    if (NEEDS_CREW) {
       const [{ n: existing }] = await db.query(
         "SELECT COUNT(*) AS n FROM users WHERE email = 'bench-owner@example.test'",
       );
@@ -321,7 +321,7 @@ function report(r) {
   const rows = [
     ...(ALL ? readModelReport(r) : []),
     ...(ENUMERATION ? enumerationRows(r.enumeration) : []),
-    ...(SEND_QUEUE ? sendQueueReport(r.sendQueue) : []),
+    ...(NEEDS_CREW ? sendQueueReport(r.sendQueue) : []),
   ];
   const head = ['measure', 'Shoalbook', 'side by side', 'ratio', 'target'];
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));

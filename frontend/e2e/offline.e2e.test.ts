@@ -132,4 +132,60 @@ describe('on the water without signal: catches kept on the phone, sent once when
       await stops.getByRole('listitem').filter({ hasText: '06:50–10:05' }).getByText('3 fish').waitFor();
     },
   );
+
+  it(
+    'marks a find and enters the official figures offline, keeps both through a closed tab and sends each once',
+    { timeout: 240_000 },
+    async () => {
+      const { context } = browser;
+      const page = browser.context.pages().at(-1) ?? (await context.newPage());
+      const findsUrl = `${crewApi}/finds?lakeId=${lakeId}`;
+      const weighInsUrl = `${crewApi}/events/${eventId}?section=weigh-ins`;
+      // Read once with signal: the lists the screens need offline are kept on the phone.
+      await page.goto(findsUrl);
+      await page.getByRole('heading', { name: 'Finds' }).waitFor();
+      await untilServiceWorkerControls(page);
+      await page.goto(weighInsUrl);
+      await page.getByText('Enter the official figures').first().waitFor();
+      const findsBefore = await apiCall<unknown[]>(page, 'GET', `${crewApi}/finds?lakeId=${lakeId}`);
+
+      await context.setOffline(true);
+      await page.getByText('Enter the official figures').first().click();
+      const figures = page.getByRole('form', { name: 'Official weigh-in' });
+      // Spelled out with its units: the angler's weight unit, which another browser test may change, does not matter.
+      await figures.getByRole('textbox', { name: 'Official weight' }).fill('9 lb 12 oz');
+      await figures.getByRole('button', { name: 'Save official figures' }).click();
+      await figures.getByText('Waiting to send').waitFor({ timeout: 30_000 });
+
+      await page.goto(`${crewApi}/finds/new?lakeId=${lakeId}&eventId=${eventId}`);
+      const form = page.getByRole('form', { name: 'New find' });
+      await form.getByRole('textbox', { name: /^Name/ }).fill('Channel swing rock (offline)');
+      await form.getByRole('textbox', { name: /^Latitude/ }).fill('32.5142');
+      await form.getByRole('textbox', { name: /^Longitude/ }).fill('-95.1061');
+      await form.getByRole('button', { name: 'Add find' }).click();
+      await form.getByText(/Channel swing rock \(offline\) is saved on this phone/).waitFor({ timeout: 30_000 });
+      await page.getByRole('button', { name: /^2 waiting to send/ }).waitFor();
+      await screenshot(page, 'offline-find-waiting-phone');
+
+      await page.close();
+      const again = await context.newPage();
+      await again.goto(findsUrl);
+      const waiting = again.getByRole('region', { name: 'Not sent yet' });
+      await waiting.getByText('New find Channel swing rock (offline)').waitFor({ timeout: 30_000 });
+      await again.getByRole('button', { name: /^2 waiting to send/ }).waitFor();
+
+      await context.setOffline(false);
+      await again.getByRole('button', { name: /waiting to send/ }).waitFor({ state: 'detached', timeout: 60_000 });
+      await again.getByRole('link', { name: 'Channel swing rock (offline)' }).waitFor({ timeout: 30_000 });
+      const finds = await apiCall<{ name: string }[]>(again, 'GET', `${crewApi}/finds?lakeId=${lakeId}`);
+      expect(finds).toHaveLength(findsBefore.length + 1);
+      expect(finds.filter((f) => f.name === 'Channel swing rock (offline)')).toHaveLength(1);
+      const weighIns = await apiCall<{ days: { official: { officialLb: number | null } | null }[] }>(
+        again,
+        'GET',
+        `${crewApi}/events/${eventId}/weigh-ins`,
+      );
+      expect(weighIns.days.map((d) => d.official?.officialLb)).toEqual([9.75]);
+    },
+  );
 });

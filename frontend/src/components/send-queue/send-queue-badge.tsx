@@ -1,8 +1,9 @@
 import { UploadIcon } from '@primer/octicons-react';
-import { Button, Dialog, Label, Text } from '@primer/react';
+import { Button, Dialog, Text } from '@primer/react';
 import { useState } from 'react';
 import type { SendEntry } from '../../lib/device-db';
 import { sendQueue, useSendEntries } from '../../lib/send-queue';
+import { EntryStateLabel } from './entry-state';
 import { badgeText } from './waiting-entries';
 import styles from './send-queue.module.css';
 
@@ -63,12 +64,7 @@ function SendQueueItem({ entry }: { entry: SendEntry }) {
   const [confirming, setConfirming] = useState(false);
   return (
     <li className={styles.entry}>
-      {entry.state === 'waiting' ? (
-        <Label variant="attention">Waiting to send</Label>
-      ) : (
-        <Label variant="danger">Needs you</Label>
-      )}{' '}
-      <Text weight="semibold">{entry.label}</Text>
+      <EntryStateLabel state={entry.state} /> <Text weight="semibold">{entry.label}</Text>
       {entry.lastError ? (
         <Text as="p" size="small" className={styles.message}>
           {entry.state === 'needs-you' ? 'The server refused it: ' : 'Last try: '}

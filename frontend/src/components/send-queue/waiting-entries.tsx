@@ -1,6 +1,7 @@
-import { Label, Text } from '@primer/react';
+import { Text } from '@primer/react';
 import type { SendKind } from '../../lib/device-db';
 import { useSendEntries } from '../../lib/send-queue';
+import { EntryStateLabel } from './entry-state';
 import styles from './send-queue.module.css';
 
 /**
@@ -28,12 +29,7 @@ export function WaitingEntries({
       <ul className={styles.list}>
         {entries.map((e) => (
           <li key={e.seq} className={styles.item}>
-            {e.state === 'waiting' ? (
-              <Label variant="attention">Waiting to send</Label>
-            ) : (
-              <Label variant="danger">Needs you</Label>
-            )}{' '}
-            <Text>{e.label}</Text>
+            <EntryStateLabel state={e.state} /> <Text>{e.label}</Text>
             {e.state === 'needs-you' && e.lastError ? (
               <Text as="p" size="small" className={styles.message}>
                 The server refused it: {e.lastError.message} Use “needs you” at the top of the page to send it again or

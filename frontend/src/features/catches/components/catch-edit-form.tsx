@@ -14,6 +14,7 @@ import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField } from '../../../components/form/text-field';
 import { PhotoField } from '../../../components/journal-forms/photo-field';
 import { isStaleVersion, StaleVersionBanner } from '../../../components/journal-forms/stale-version-banner';
+import { WaitingToSendNote } from '../../../components/send-queue/entry-state';
 import { ApiRequestError } from '../../../lib/api-client';
 import { clockTime, dayLabel, isClockTime } from '../../../lib/lake-time';
 import type { CatchWithSky } from '../../../lib/journal-types';
@@ -341,12 +342,9 @@ export function CatchEditForm({
         <div role="status" aria-live="polite">
           {unchanged ? <Text size="small">Nothing has changed yet, so there is nothing to save.</Text> : null}
           {waiting ? (
-            <>
-              <Label variant="attention">Waiting to send</Label>{' '}
-              <Text size="small">
-                Saved on this phone. The changes go to the server by themselves once there is signal.
-              </Text>
-            </>
+            <WaitingToSendNote>
+              Saved on this phone. The changes go to the server by themselves once there is signal.
+            </WaitingToSendNote>
           ) : null}
         </div>
       </FormActions>

@@ -39,6 +39,7 @@ import { FATE_LABELS } from './catch-labels';
 import { findOptionLabel, matchFind } from './catch-values';
 import { recentSpecies, rememberSpecies, speciesByRecentUse } from './recent-species';
 import thumb from '../../../components/journal-forms/thumb.module.css';
+import { WaitingToSendNote } from '../../../components/send-queue/entry-state';
 import styles from './catch-entry-form.module.css';
 
 interface Values {
@@ -544,10 +545,9 @@ export function CatchEntryForm({
       </div>
       <div role="status" aria-live="polite" className={styles.logged}>
         {waiting ? (
-          <>
-            <Label variant="attention">Waiting to send</Label>{' '}
-            <Text>Saved on this phone: {waiting.label}. It goes to the server by itself once there is signal.</Text>
-          </>
+          <WaitingToSendNote size="medium">
+            Saved on this phone: {waiting.label}. It goes to the server by itself once there is signal.
+          </WaitingToSendNote>
         ) : logged ? (
           <>
             <Text>

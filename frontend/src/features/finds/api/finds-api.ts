@@ -11,7 +11,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, queryString } from '../../../lib/journal-keys';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
-import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
+import { sendFromForm, versionOnceSent, type FormSendResult } from '../../../lib/send-queue';
 import type { FindWithSky } from '../../../lib/journal-types';
 import type { DepthEntry, TemperatureEntry } from '../../../lib/units';
 
@@ -66,17 +66,22 @@ export function useFind(crewId: string, findId: string | undefined) {
 export function useSaveFind(userId: string, crewId: string, findId?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    // The lake of a find is fixed once recorded; a PATCH carries the version it was based on (409 when stale).
-    mutationFn: ({ version, ...input }: FindInput & { version?: number }): Promise<FormSendResult<FindWithSky>> => {
+    // The lake of a find is fixed once recorded; a PATCH carries the version it is based on (409 when stale),
+    // counting the changes to it still waiting on this phone.
+    mutationFn: async ({
+      version,
+      ...input
+    }: FindInput & { version?: number }): Promise<FormSendResult<FindWithSky>> => {
       const id = findId ?? uuidv7();
       const { lakeId: _fixed, ...changes } = input;
+      const basedOn = findId ? await versionOnceSent({ userId, kind: 'find', recordId: findId }, version) : undefined;
       return sendFromForm<FindWithSky>({
         userId,
         crewId,
         kind: 'find',
         method: findId ? 'PATCH' : 'POST',
         path: findId ? findPath(crewId, findId) : crewApiPath(crewId, '/finds'),
-        body: findId ? { ...changes, version } : { ...input, id },
+        body: findId ? { ...changes, version: basedOn } : { ...input, id },
         recordId: id,
         label: findId ? `Changes to the find ${input.name}` : `New find ${input.name}`,
         scope: input.lakeId,

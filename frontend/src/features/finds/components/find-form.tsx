@@ -15,15 +15,15 @@ import {
   type UnitPreferences,
   type VegetationDensity,
 } from '@shoalbook/shared';
-import { Button, Checkbox, FormControl, Label, Select, Text, Textarea } from '@primer/react';
+import { Button, Checkbox, FormControl, Select, Text, Textarea } from '@primer/react';
 import { useId, useState, type ReactNode } from 'react';
 import { OnPlaneCaution } from '../../../components/cautions/journal-cautions';
 import { FormError } from '../../../components/form/form-error';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField, fieldMessages } from '../../../components/form/text-field';
+import { WaitingToSendNote } from '../../../components/send-queue/entry-state';
 import { clockTime, localTimeOn, localDate, isClockTime } from '../../../lib/lake-time';
 import type { FindWithSky } from '../../../lib/journal-types';
-import { useSendEntries, versionOnceSent } from '../../../lib/send-queue';
 import {
   depthInputValue,
   parseDepth,
@@ -220,7 +220,6 @@ export function FindForm({
   const save = useSaveFind(userId, crewId, find?.id);
   // The name of the last find kept on this phone for want of signal ("waiting to send"), until the next edit.
   const [waiting, setWaiting] = useState<string | null>(null);
-  const entries = useSendEntries(userId);
   const photoInputId = useId();
   const lake = lakes.find((l) => l.id === v.lakeId);
   const lakeEvents = events.filter((e) => e.lakeId === v.lakeId);
@@ -266,19 +265,16 @@ export function FindForm({
     const { input, errors: found } = validateFind(v, lake, prefs);
     setErrors(found);
     if (!input) return;
-    // Changes to a find whose earlier changes still wait on this phone are based on those.
-    const version = find
-      ? versionOnceSent(
-          find.version,
-          entries.filter((e) => e.kind === 'find' && e.recordId === find.id),
-        )
-      : undefined;
-    save.mutateAsync(find ? { ...input, version } : input).then(
+    save.mutateAsync(find ? { ...input, version: find.version } : input).then(
       (result) => {
         if (result.kind === 'sent') return onSaved(result.answer);
         setWaiting(input.name);
         // A new find kept on the phone: the form clears for the next one, on the same lake, event and day.
-        if (!find) setValues((s) => ({ ...initialValues(undefined, lake, s, prefs), practiceDate: s.practiceDate }));
+        if (!find)
+          setValues((s) => ({
+            ...initialValues(undefined, lake, { lakeId: s.lakeId, eventId: s.eventId }, prefs),
+            practiceDate: s.practiceDate,
+          }));
       },
       () => undefined,
     );
@@ -488,13 +484,10 @@ export function FindForm({
         {onCancel ? <Button onClick={onCancel}>Cancel</Button> : null}
         <div role="status" aria-live="polite">
           {waiting ? (
-            <>
-              <Label variant="attention">Waiting to send</Label>{' '}
-              <Text size="small">
-                {find ? 'The changes are' : `${waiting} is`} saved on this phone and go to the server by themselves once
-                there is signal.
-              </Text>
-            </>
+            <WaitingToSendNote>
+              {find ? 'The changes are' : `${waiting} is`} saved on this phone and go to the server by themselves once
+              there is signal.
+            </WaitingToSendNote>
           ) : null}
         </div>
       </FormActions>

@@ -15,6 +15,7 @@ import { StopEditForm } from './stop-edit-form';
 import { stopPlace, stopSpan, toCheckText } from './stop-fields';
 import { withWaitingStops, type ShownStop } from './waiting-stops';
 import thumb from '../../../components/journal-forms/thumb.module.css';
+import { EntryStateLabel } from '../../../components/send-queue/entry-state';
 import styles from './stops.module.css';
 
 /** The signed-in angler's stop still open on a day (the one "Left" closes and whose lure the catch form takes). */
@@ -148,7 +149,7 @@ export function StopsPanel({
                     <span>
                       <span className={styles.stopTitle}>{stopSpan(s, lake.timeZone)}</span> · {stopPlace(s)}{' '}
                       {s.onDevice ? (
-                        <OnDeviceLabel stop={s} />
+                        <EntryStateLabel state={s.onDevice.state} />
                       ) : s.catchIds.length ? (
                         <Label variant="success">{s.catchIds.length} fish</Label>
                       ) : s.leftAt ? (
@@ -238,14 +239,5 @@ export function StopsPanel({
       </Heading>
       {body()}
     </section>
-  );
-}
-
-/** A stop kept on this phone: waiting to send, or refused by the server and waiting for the angler. */
-function OnDeviceLabel({ stop }: { stop: ShownStop }) {
-  return stop.onDevice?.state === 'needs-you' ? (
-    <Label variant="danger">Needs you</Label>
-  ) : (
-    <Label variant="attention">Waiting to send</Label>
   );
 }

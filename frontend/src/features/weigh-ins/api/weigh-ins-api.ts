@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { crewApiPath, journalKeys, LIVE_DAY_REFETCH_MS } from '../../../lib/journal-keys';
 import { refreshCrewJournal } from '../../../lib/crew-cache';
-import { sendFromForm, type FormSendResult } from '../../../lib/send-queue';
+import { sendFromForm, versionOnceSent, type FormSendResult } from '../../../lib/send-queue';
 import type { RecordChange, WeighInHistoryField } from '@shoalbook/shared';
 import type { RecordWeighInRequest, WeighInsView } from '../../../lib/journal-types';
 
@@ -35,22 +35,26 @@ export function useWeighInHistory(crewId: string, eventId: string, dayId: string
 export function useRecordWeighIn(userId: string, crewId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({
+    mutationFn: async ({
       dayId,
       label,
-      ...body
-    }: { dayId: string; label: string } & RecordWeighInRequest): Promise<FormSendResult<unknown>> =>
-      sendFromForm({
+      version,
+      ...figures
+    }: { dayId: string; label: string } & RecordWeighInRequest): Promise<FormSendResult<unknown>> => {
+      // The figures this correction is based on, those still waiting on this phone included.
+      const basedOn = await versionOnceSent({ userId, kind: 'weigh-in', recordId: dayId }, version);
+      return sendFromForm({
         userId,
         crewId,
         kind: 'weigh-in',
         method: 'PUT',
         path: crewApiPath(crewId, `/competition-days/${encodeURIComponent(dayId)}/weigh-in`),
-        body,
+        body: { ...figures, ...(basedOn !== undefined ? { version: basedOn } : {}) },
         recordId: dayId,
         label,
         scope: dayId,
-      }),
+      });
+    },
     onSuccess: (result) => (result.kind === 'sent' ? refreshCrewJournal(queryClient, crewId) : undefined),
   });
 }

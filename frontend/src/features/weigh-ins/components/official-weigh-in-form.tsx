@@ -1,12 +1,12 @@
 import type { UnitPreferences } from '@shoalbook/shared';
-import { Button, Label, Text } from '@primer/react';
+import { Button, Text } from '@primer/react';
 import { useState } from 'react';
 import { FormError } from '../../../components/form/form-error';
 import { FormActions, FormStack } from '../../../components/form/form-stack';
 import { TextField } from '../../../components/form/text-field';
+import { WaitingToSendNote } from '../../../components/send-queue/entry-state';
 import type { OfficialWeighIn } from '../../../lib/journal-types';
 import { dayLabel } from '../../../lib/lake-time';
-import { useSendEntries, versionOnceSent } from '../../../lib/send-queue';
 import { entryToLb, parseOptional, parseWeight, readNumber, weightHint, weightInputValue } from '../../../lib/units';
 import { useRecordWeighIn } from '../api/weigh-ins-api';
 import styles from './weigh-ins.module.css';
@@ -40,7 +40,6 @@ export function OfficialWeighInForm({
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [saved, setSaved] = useState<'sent' | 'waiting' | null>(null);
   const record = useRecordWeighIn(userId, crewId);
-  const entries = useSendEntries(userId);
   const f = (key: keyof typeof v) => ({
     name: key,
     value: v[key],
@@ -73,22 +72,13 @@ export function OfficialWeighInForm({
       officialLb: weight('officialLb'),
       dayPlace: whole('dayPlace', 1),
       lateMinutes: whole('lateMinutes', 0),
+      // The figures this correction is based on; the server refuses it if someone saved in between.
+      ...(official?.version !== undefined ? { version: official.version } : {}),
     };
-    // The figures this correction is based on (those still waiting on this phone included); the server refuses
-    // it if someone saved in between.
-    const version = versionOnceSent(
-      official?.version,
-      entries.filter((e) => e.kind === 'weigh-in' && e.crewId === crewId && e.recordId === dayId),
-    );
     setErrors(found);
     if (Object.keys(found).length) return;
     record.mutate(
-      {
-        dayId,
-        label: `Official figures for ${dayLabel(date)}`,
-        ...body,
-        ...(version !== undefined ? { version } : {}),
-      },
+      { dayId, label: `Official figures for ${dayLabel(date)}`, ...body },
       { onSuccess: (result) => setSaved(result.kind) },
     );
   };
@@ -109,13 +99,9 @@ export function OfficialWeighInForm({
         <div role="status" aria-live="polite">
           {saved === 'sent' ? <Text size="small">Saved; the official figures now count.</Text> : null}
           {saved === 'waiting' ? (
-            <>
-              <Label variant="attention">Waiting to send</Label>{' '}
-              <Text size="small">
-                Saved on this phone. The figures go to the server by themselves once there is signal, and count from
-                then.
-              </Text>
-            </>
+            <WaitingToSendNote>
+              Saved on this phone. The figures go to the server by themselves once there is signal, and count from then.
+            </WaitingToSendNote>
           ) : null}
         </div>
       </FormActions>
